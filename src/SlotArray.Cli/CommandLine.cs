@@ -1,0 +1,55 @@
+using System.CommandLine;
+using SlotArray.Cli.Commands;
+using SlotArray.Core;
+
+namespace SlotArray.Cli;
+
+/// <summary>The command tree. Each command lives in its own file under Commands/ and only delegates.</summary>
+public static class CommandLine
+{
+    /// <summary>Shows the stack trace of an internal error.</summary>
+    public static readonly Option<bool> Verbose = new("--verbose") { Description = "Show the stack trace of an internal error", Recursive = true };
+
+    /// <summary>Builds the root command with every sub-command, writing to the given writers.</summary>
+    public static RootCommand Build(TextWriter output, TextWriter error)
+    {
+        var root = new RootCommand("SlotArray: design slotted-waveguide antenna arrays from a YAML spec to a cut list.")
+        {
+            Verbose,
+            GuidesCommand.Build(output, error),
+        };
+        return root;
+    }
+
+    /// <summary>Parses and runs; maps exceptions to the architecture's exit codes.</summary>
+    public static int Run(string[] args, TextWriter output, TextWriter error)
+    {
+        var root = Build(output, error);
+        var parse = root.Parse(args);
+        try
+        {
+            int code = parse.Invoke(new InvocationConfiguration { Output = output, Error = error, EnableDefaultExceptionHandler = false });
+            // System.CommandLine reports a parse error as 1; our contract says bad input is 2.
+            return parse.Errors.Count > 0 ? ExitCodes.BadInput : code;
+        }
+        catch (InfeasibleDesignException e)
+        {
+            error.WriteLine($"infeasible: {e.Message}");
+            return ExitCodes.Infeasible;
+        }
+        catch (UserInputException e)
+        {
+            error.WriteLine(e.Message);
+            return ExitCodes.BadInput;
+        }
+        catch (Exception e)
+        {
+            error.WriteLine($"internal error: {e.GetType().Name}: {e.Message}. This is a bug: please report it with the spec you ran.");
+            if (parse.GetValue(Verbose)) error.WriteLine(e.ToString());
+            return ExitCodes.InternalError;
+        }
+    }
+}
+
+/// <summary>Bad input found by a command (not by the parser): printed as one line, exit code 2.</summary>
+public sealed class UserInputException(string message) : Exception(message);

@@ -1,0 +1,14 @@
+namespace SlotArray.Cli;
+
+/// <summary>Process exit codes, fixed by the architecture.</summary>
+public static class ExitCodes
+{
+    /// <summary>Success.</summary>
+    public const int Ok = 0;
+    /// <summary>The design is infeasible (the reason is printed).</summary>
+    public const int Infeasible = 1;
+    /// <summary>Bad input: a spec error, a bad option.</summary>
+    public const int BadInput = 2;
+    /// <summary>An internal error (a bug): one line, and the stack trace with --verbose.</summary>
+    public const int InternalError = 3;
+}
