@@ -28,7 +28,7 @@ public sealed record SlotDesign(int Index, Length Position, double Coupling, Len
 /// <list type="bullet">
 /// <item>End feed: near termination at z = 0, slots 1..N, feed reference plane at <see cref="FeedPlane"/> (≥ z_N).</item>
 /// <item>Centre feed: near termination at z = 0, slots 1..N/2, an ideal series junction at <see cref="FeedPlane"/>
-/// (midway between slots N/2 and N/2 + 1), slots N/2 + 1..N, and the far termination
+/// (midway between slots N/2 and N/2 + 1) with impedance ratio <see cref="JunctionRatio"/>, slots N/2 + 1..N, and the far termination
 /// <see cref="FarTermination"/> beyond slot N.</item>
 /// </list>
 /// </remarks>
@@ -44,6 +44,7 @@ public sealed record SlotDesign(int Index, Length Position, double Coupling, Len
 /// <param name="NearTermination">Termination at the datum end; its plane is z = 0, <see cref="Termination.Distance"/> before slot 1.</param>
 /// <param name="FarTermination">Centre feed only: the termination beyond slot N; null for an end-fed array.</param>
 /// <param name="FeedPlane">z of the feed reference plane: S11 is referred to it.</param>
+/// <param name="JunctionRatio">Centre feed: impedance ratio n² of the ideal series junction, z_feed = (z_left + z_right)/n²; 1 for an end feed.</param>
 /// <param name="Warnings">Validity limits and cautions met while designing (deterministic order).</param>
 public sealed record ArrayDesign(
     string Name,
@@ -58,11 +59,12 @@ public sealed record ArrayDesign(
     Termination NearTermination,
     Termination? FarTermination,
     Length FeedPlane,
+    double JunctionRatio,
     IReadOnlyList<DesignWarning> Warnings)
 {
     /// <summary>Number of slots.</summary>
     public int Count => Slots.Count;
 
-    /// <summary>Sum of the designed conductances (1 for a matched standing-wave design).</summary>
+    /// <summary>Sum of the designed conductances (1 for a matched end-fed design, 2 for a centre-fed one: 1 per half).</summary>
     public double TotalConductance => Slots.Sum(s => s.Conductance);
 }

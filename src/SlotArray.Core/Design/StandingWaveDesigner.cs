@@ -6,7 +6,7 @@ namespace SlotArray.Core.Design;
 
 /// <summary>
 /// Isolated-slot design of a resonant (standing-wave) array of shunt slots: N resonant slots at λg/2 spacing,
-/// alternating coupling sign, conductances g_n ∝ a_n² with Σ g_n = 1, the short λg/4 (or 3λg/4) beyond the last slot.
+/// alternating coupling sign, conductances g_n ∝ a_n² with Σ g_n = 1 (end feed; 1 per half for the centre feed), the short λg/4 (or 3λg/4) beyond the last slot.
 /// </summary>
 /// <remarks>
 /// <para>Design rules: physics-reference §5.1 [M: R. S. Elliott, <i>Antenna Theory and Design</i>, Prentice-Hall 1981,
@@ -18,19 +18,26 @@ namespace SlotArray.Core.Design;
 /// A negative amplitude a_n flips the offset side of slot n.</para>
 /// <para>Centre feed: the array is split into two halves of N/2 slots, each ended by its own short, joined by an ideal
 /// series junction midway between slots N/2 and N/2 + 1 (a quarter guide wavelength from each). Model: the two halves
-/// are in series at the junction, z_in = z_left + z_right (the circuit of an E-plane series tee or of a centred series
-/// coupling slot fed from a guide below: C. G. Montgomery, R. H. Dicke and E. M. Purcell, <i>Principles of Microwave
-/// Circuits</i>, MIT Rad. Lab. Ser. vol. 8, 1948, E-plane T-junction; from memory — the unit turns ratio is an
-/// idealisation, common practice). The quarter-wave line inverts each half's input admittance G_half = Σ_half g_n into
-/// the impedance z_half = G_half, so z_in = Σ_all g_n = 1: matched with the same normalisation as the end feed, and
-/// the series current makes the mode voltage at every slot of both halves equal in magnitude. The series junction
-/// reverses E_y across it (symmetric excitation of an E-plane tee gives antiphase collinear arms), so the offset
-/// alternation continues unbroken across the junction.</para>
+/// are in series at the junction, z_s = z_left + z_right, behind an ideal transformer to the feed guide,
+/// z_feed = z_s/n² with n² = <see cref="CentreJunctionRatio"/> = 2 (the circuit of an E-plane series tee or of a centred
+/// series coupling slot fed from a guide below, whose coupling sets n: C. G. Montgomery, R. H. Dicke and E. M. Purcell,
+/// <i>Principles of Microwave Circuits</i>, MIT Rad. Lab. Ser. vol. 8, 1948, E-plane T-junction, from memory; choosing
+/// n² = 2 is common practice, no source). The quarter-wave line inverts each half's input admittance
+/// G_half = Σ_half g_n into the impedance z_half = G_half, so each half is matched to the junction (z_half = 1) when
+/// Σ_half g_n = 1, i.e. g_n = 2 a_n²/Σ a_m² (Σ_all g_n = 2), and z_feed = (G_left + G_right)/2 = 1. The series current
+/// makes the mode-voltage magnitude equal at every slot of both halves, so g_n ∝ a_n² holds across the junction.
+/// Each half is then a resonant array of N/2 slots with its own Σ g = 1: half the stored energy per radiated watt of an
+/// end-fed array of N slots, hence about twice its bandwidth (physics-reference §5.1 [C]; measured in the tests).
+/// The series junction reverses E_y across it (symmetric excitation of an E-plane tee gives antiphase collinear
+/// arms), so the offset alternation continues unbroken across the junction.</para>
 /// <para>Isolated slots only: external mutual coupling and wall loss are not compensated (the network analysis
 /// shows their effect).</para>
 /// </remarks>
 public static class StandingWaveDesigner
 {
+    /// <summary>Impedance ratio n² of the centre-feed series junction, z_feed = (z_left + z_right)/n² (see remarks).</summary>
+    public const double CentreJunctionRatio = 2;
+
     /// <summary>
     /// Designs the array. <paramref name="amplitudes"/>[i] is the aperture amplitude of slot i + 1 (slot 1 nearest the
     /// datum short); any signs, not all zero. Throws <see cref="InfeasibleDesignException"/> when the slot model
@@ -62,7 +69,8 @@ public static class StandingWaveDesigner
             throw new InfeasibleDesignException($"the short distance {shortDistance} is not a positive length: give a positive short distance");
 
         double sumSquares = amplitudes.Sum(a => a * a);
-        var g = amplitudes.Select(a => a * a / sumSquares).ToArray();
+        double halves = centre ? CentreJunctionRatio : 1;   // Σ g = 1 per matched line (see remarks)
+        var g = amplitudes.Select(a => halves * a * a / sumSquares).ToArray();
         CheckConductances(g, slot, f0);
 
         var warnings = new List<DesignWarning>();
@@ -88,7 +96,7 @@ public static class StandingWaveDesigner
             ? slots[n / 2 - 1].Position + 0.5 * spacing
             : slots[n - 1].Position;
         return new ArrayDesign(request.Name, f0, request.Guide, lambdaG, spacing, request.Feed.Position,
-            slot.CouplingKind, slot.Name, Array.AsReadOnly(slots), near, far, feedPlane, warnings.AsReadOnly());
+            slot.CouplingKind, slot.Name, Array.AsReadOnly(slots), near, far, feedPlane, centre ? CentreJunctionRatio : 1, warnings.AsReadOnly());
     }
 
     private static void CheckTaper(ArrayRequest request, IReadOnlyList<double> amplitudes, int n, bool centre)

@@ -126,7 +126,7 @@ public static class ArrayNetwork
             line = new LineNetwork(design.Guide, design.Slots.Select(s => s.Position.Meters).ToArray(),
                 design.NearTermination, design.Feed == FeedPosition.Centre ? design.FarTermination
                     ?? throw new ArgumentException("a centre-fed design needs a far termination", nameof(design)) : null,
-                design.FeedPlane.Meters);
+                design.FeedPlane.Meters, design.JunctionRatio);
             signs = design.Slots.Select(s => (double)Math.Sign(s.Coupling)).ToArray();
         }
 

@@ -20,7 +20,7 @@ namespace SlotArray.Core.Network;
 /// integral derived here).</para>
 /// <para>Shunt element y at a plane: V continuous, the current toward the feed gains yV; it absorbs ½ Re(y)|V|².</para>
 /// <para>Centre feed: an ideal series junction (see <see cref="StandingWaveDesigner"/>): both halves carry the
-/// junction current, z_in = z_left + z_right; the mode voltage of the far half is reported with its sign reversed so
+/// junction current, z_s = z_left + z_right, and an ideal transformer gives z_feed = z_s/n² (n² the design's junction ratio); the mode voltage of the far half is reported with its sign reversed so
 /// that all voltages share one E_y polarity (the series junction reverses E_y across it).</para>
 /// </remarks>
 internal sealed class LineNetwork
@@ -31,10 +31,14 @@ internal sealed class LineNetwork
     private readonly Termination? far;
     private readonly double feedPlane;
     private readonly int leftCount;
+    private readonly double junctionRatio;
 
     /// <summary>A line with slots at the given positions (ascending), the near termination at z = position[0] − near.Distance.</summary>
-    public LineNetwork(RectangularWaveguide guide, IReadOnlyList<double> positions, Termination near, Termination? far, double feedPlane)
+    public LineNetwork(RectangularWaveguide guide, IReadOnlyList<double> positions, Termination near, Termination? far, double feedPlane,
+        double junctionRatio = 1)
     {
+        if (!(junctionRatio > 0)) throw new ArgumentOutOfRangeException(nameof(junctionRatio), junctionRatio, "the junction ratio must be positive");
+        this.junctionRatio = junctionRatio;
         this.guide = guide;
         position = positions.ToArray();
         this.near = near;
@@ -75,8 +79,11 @@ internal sealed class LineNetwork
             Complex kl = 1 / left.I, kr = 1 / right.I;
             for (int i = 0; i < leftCount; i++) v[i] *= kl;
             for (int i = leftCount; i < v.Length; i++) v[i] *= -kr;   // one E_y polarity (see remarks)
-            Complex zin = left.V * kl + right.V * kr;
-            Complex vPlus = (zin + 1) / 2;
+            // Ideal transformer n² to the feed: V_feed = z_s/n, I_feed = n (junction current 1).
+            Complex zs = left.V * kl + right.V * kr;
+            double nRatio = Math.Sqrt(junctionRatio);
+            Complex vPlus = (zs / nRatio + nRatio) / 2;
+            Complex zin = zs / junctionRatio;
             Complex s11 = (zin - 1) / (zin + 1);
             var wall = left.WallLoss * Sq(kl) + right.WallLoss * Sq(kr);
             var load = left.LoadPower * Sq(kl) + right.LoadPower * Sq(kr);

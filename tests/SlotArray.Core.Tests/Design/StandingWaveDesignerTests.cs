@@ -81,7 +81,9 @@ public class StandingWaveDesignerTests
         Assert.NotNull(d.FarTermination);
         Check.Absolute(11.1857e-3, d.FarTermination!.Distance.Meters, 0.5e-7, Ref51 + ": λg/4 short at each end");
         Check.Absolute((d.Slots[4].Position.Meters + d.Slots[5].Position.Meters) / 2, d.FeedPlane.Meters, 1e-15, "junction midway");
-        Check.Absolute(1.0, d.TotalConductance, 1e-12, "series junction: z_in = Σ g_n (StandingWaveDesigner remarks)");
+        Check.Absolute(1.0, d.Slots.Take(5).Sum(s => s.Conductance), 1e-12, "each half matched to the junction: Σ_half g = 1 (StandingWaveDesigner remarks)");
+        Check.Absolute(1.0, d.Slots.Skip(5).Sum(s => s.Conductance), 1e-12, "each half matched to the junction: Σ_half g = 1 (StandingWaveDesigner remarks)");
+        Assert.Equal(2.0, d.JunctionRatio);
         for (int i = 0; i < 10; i++) Assert.Equal(i % 2 == 0 ? 1 : -1, Math.Sign(d.Slots[i].Coupling));
     }
 
