@@ -69,7 +69,9 @@ internal sealed class LineNetwork
             // Feed: incident V+ = (V + I)/2 at the feed plane; scale the arm to V+ = 1.
             Complex vPlus = (arm.V + arm.I) / 2;
             Complex s11 = (arm.V - arm.I) / (arm.V + arm.I);
-            return Finish(f, s11, y, v, couplingSigns, 1 / vPlus, arm.WallLoss, arm.LoadPower);
+            double zTerm = position[0] - near.Distance.Meters;
+            var peak = new Peak(arm.PeakVoltage, zTerm + arm.PeakDistance);
+            return Finish(f, s11, y, v, couplingSigns, 1 / vPlus, arm.WallLoss, arm.LoadPower, peak);
         }
         else
         {
@@ -87,7 +89,11 @@ internal sealed class LineNetwork
             Complex s11 = (zin - 1) / (zin + 1);
             var wall = left.WallLoss * Sq(kl) + right.WallLoss * Sq(kr);
             var load = left.LoadPower * Sq(kl) + right.LoadPower * Sq(kr);
-            return Finish(f, s11, y, v, couplingSigns, 1 / vPlus, wall, load);
+            double pl = left.PeakVoltage * kl.Magnitude, pr = right.PeakVoltage * kr.Magnitude;
+            var peak = pl >= pr
+                ? new Peak(pl, position[0] - near.Distance.Meters + left.PeakDistance)
+                : new Peak(pr, position[^1] + far.Distance.Meters - right.PeakDistance);
+            return Finish(f, s11, y, v, couplingSigns, 1 / vPlus, wall, load, peak);
         }
     }
 
@@ -110,7 +116,9 @@ internal sealed class LineNetwork
         return d;
     }
 
-    private readonly record struct ArmResult(Complex V, Complex I, double WallLoss, double LoadPower);
+    private readonly record struct ArmResult(Complex V, Complex I, double WallLoss, double LoadPower, double PeakVoltage, double PeakDistance);
+
+    private readonly record struct Peak(double Voltage, double Position);
 
     /// <summary>
     /// One arm from its termination to its input plane at distance <paramref name="inputDistance"/>; element k of the
@@ -130,11 +138,12 @@ internal sealed class LineNetwork
             case TerminationKind.MatchedLoad: vv = 1; ii = 1; load = 0.5; break;
             default: vv = 1; ii = t.LoadAdmittance; load = 0.5 * t.LoadAdmittance.Real; break;
         }
-        double wall = 0, at = 0;
+        double wall = 0, at = 0, peak = vv.Magnitude, peakAt = 0;
         for (int step = 0; step <= n; step++)
         {
             int k = reversed ? n - 1 - step : step;              // element index within the arm, nearest the termination first
             double next = step < n ? distances[k] : inputDistance;
+            SectionPeak(gamma, vv, ii, next - at, at, ref peak, ref peakAt);
             Propagate(gamma, next - at, ref vv, ref ii, ref wall);
             at = next;
             if (step == n) break;
@@ -142,7 +151,32 @@ internal sealed class LineNetwork
             v[j] = vv;
             ii += y[j] * vv;
         }
-        return new ArmResult(vv, ii, wall, load);
+        return new ArmResult(vv, ii, wall, load, peak, peakAt);
+    }
+
+    /// <summary>
+    /// Largest |V| on a section of length L starting (at distance <paramref name="start"/> from the termination) with
+    /// (V, I): |V(ℓ)|² = |A|²e^{2αℓ} + |B|²e^{−2αℓ} + 2 Re(A B* e^{2jβℓ}) peaks where 2βℓ + arg(A B*) ≡ 0 (mod 2π) to first
+    /// order in α; the candidates are those points and the section's ends.
+    /// </summary>
+    private static void SectionPeak(Complex gamma, Complex vv, Complex ii, double length, double start, ref double peak, ref double peakAt)
+    {
+        if (length <= 0) return;
+        Complex a = (vv + ii) / 2, b = (vv - ii) / 2;
+        double beta = gamma.Imaginary;
+        double phi = (a * Complex.Conjugate(b)).Phase;
+        double first = -phi / (2 * beta);
+        double period = Math.PI / beta;
+        first -= Math.Floor(first / period) * period;             // smallest non-negative candidate
+        for (double l = first; ; l += period)
+        {
+            bool last = l >= length;
+            if (last) l = length;
+            Complex e = Complex.Exp(gamma * l);
+            double m = (a * e + b / e).Magnitude;
+            if (m > peak) { peak = m; peakAt = start + l; }
+            if (last) break;
+        }
     }
 
     private static void Propagate(Complex gamma, double length, ref Complex vv, ref Complex ii, ref double wall)
@@ -160,7 +194,7 @@ internal sealed class LineNetwork
     }
 
     private static NetworkSolution Finish(Frequency f, Complex s11, Complex[] y, Complex[] v, double[] signs, Complex scale,
-        double wallUnscaled, double loadUnscaled)
+        double wallUnscaled, double loadUnscaled, Peak peak)
     {
         double p2 = Sq(scale);
         var p = new double[y.Length];
@@ -176,6 +210,6 @@ internal sealed class LineNetwork
         }
         // Wall and load powers were accumulated as ½|·|² of unscaled amplitudes: × |scale|² / P_inc.
         return new NetworkSolution(f, s11, Array.AsReadOnly(y), Array.AsReadOnly(v), Array.AsReadOnly(p), Array.AsReadOnly(e),
-            2 * wallUnscaled * p2, 2 * loadUnscaled * p2);
+            2 * wallUnscaled * p2, 2 * loadUnscaled * p2, peak.Voltage * scale.Magnitude, Length.FromMeters(peak.Position));
     }
 }

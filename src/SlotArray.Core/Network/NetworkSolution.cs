@@ -20,6 +20,12 @@ namespace SlotArray.Core.Network;
 /// </param>
 /// <param name="WallLoss">Ohmic loss in the guide walls between the feed and the terminations.</param>
 /// <param name="LoadPower">Power delivered into the terminations (0 for shorts).</param>
+/// <param name="PeakModeVoltage">
+/// Largest |V(z)| anywhere on the line between the terminations and the feed plane, in units of the incident wave's
+/// voltage: the peak E field inside the guide is this factor times the peak field of the incident wave alone (a matched
+/// line carrying the same incident power), the standing-wave factor for power-handling checks (physics-reference §1.1).
+/// </param>
+/// <param name="PeakPosition">z (from the datum) where that peak occurs.</param>
 public sealed record NetworkSolution(
     Frequency Frequency,
     Complex S11,
@@ -28,7 +34,9 @@ public sealed record NetworkSolution(
     IReadOnlyList<double> RadiatedPowers,
     IReadOnlyList<Complex> Excitations,
     double WallLoss,
-    double LoadPower)
+    double LoadPower,
+    double PeakModeVoltage,
+    Length PeakPosition)
 {
     /// <summary>Reflected power |S11|².</summary>
     public double ReflectedPower => S11.Magnitude * S11.Magnitude;

@@ -51,6 +51,8 @@ public class ArrayNetworkTests
         var s = ArrayNetwork.Solve(d, slot, F0);
         Check.Absolute(0, s.S11.Magnitude, 1e-9, "physics-reference §5.1: resonant array matched at f0");
         Check.Absolute(1, s.RadiatedPower, 1e-9, "lossless: all power radiated");
+        if (feed == FeedPosition.End)   // derived: each section looks into a real y ≤ 1, so its voltage maximum is at a slot, where |V| = 1
+            Check.Absolute(1, s.PeakModeVoltage, 1e-9, "matched resonant line: peak |V| equals the incident wave's");
         // Aluminium walls: the loss unbalances the mode voltages slightly; the match stays better than 40 dB return loss.
         var lossy = StandingWaveDesigner.Design(Request(16, feed), new StevensonTestSlot(Wr90, Width), Uniform(16));
         Assert.True(ArrayNetwork.Solve(lossy, new StevensonTestSlot(Wr90, Width), F0).ReturnLossDb > 40);

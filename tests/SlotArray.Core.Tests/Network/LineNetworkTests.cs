@@ -66,4 +66,18 @@ public class LineNetworkTests
         Assert.True((half.S11 - Gamma(yl)).Magnitude < 1e-12, $"half wave: {half.S11} vs {Gamma(yl)}");
         Check.Absolute(1 - half.ReflectedPower, half.LoadPower, 1e-12, "lossless line: accepted power reaches the load");
     }
+
+    [Fact]
+    public void The_standing_wave_peak_on_the_feed_section_is_one_plus_the_reflection_magnitude()
+    {
+        // |V|max = |V+|(1 + |Γ|) on a lossless line (Pozar 2012 Sec. 2.3, from memory). g = 3 behind a shorted λg/4 stub:
+        // Γ = (1 − 3)/(1 + 3) = −0.5; the feed plane 0.6 λg beyond the slot so the section holds a full standing-wave period.
+        var lg = Wr90.GuideWavelength(F0);
+        var t = Termination.ShortAt(0.25 * lg);
+        var s = new LineNetwork(Wr90Lossless, [t.Distance.Meters], t, null, t.Distance.Meters + 0.6 * lg.Meters).Solve(F0, [3.0], [1.0]);
+        Check.Absolute(0.5, s.S11.Magnitude, 1e-12, "Γ = (1 − y)/(1 + y)");
+        Check.Absolute(1.5, s.PeakModeVoltage, 1e-12, "Pozar 2012 Sec. 2.3: |V|max = 1 + |Γ|");
+        // The voltage minimum 1 − |Γ| sits at the slot (y real > 1), so the maximum is λg/4 beyond it.
+        Check.Absolute(t.Distance.Meters + 0.25 * lg.Meters, s.PeakPosition.Meters, 1e-9, "maximum a quarter guide wavelength from the minimum");
+    }
 }
