@@ -42,7 +42,7 @@ public static class StandingWaveDesigner
     /// Designs the array. <paramref name="amplitudes"/>[i] is the aperture amplitude of slot i + 1 (slot 1 nearest the
     /// datum short); any signs, not all zero. Throws <see cref="InfeasibleDesignException"/> when the slot model
     /// cannot give a needed conductance or the taper does not fit the slot count, and
-    /// <see cref="ArgumentException"/> for a request that is not a standing-wave array.
+    /// <see cref="ArgumentException"/> for a request that is not a standing-wave array or a slot model for another guide.
     /// </summary>
     /// <param name="request">The validated request (design frequency, guide, slots, feed).</param>
     /// <param name="slot">The slot model; its guide and width are used as they are.</param>
@@ -55,6 +55,10 @@ public static class StandingWaveDesigner
         if (request.Feed.Type != FeedType.StandingWave)
             throw new ArgumentException($"the standing-wave designer was given a {request.Feed.Type} feed", nameof(request));
 
+        if (slot.Guide != request.Guide)
+            throw new ArgumentException(
+                $"the slot model is for the guide {slot.Guide.Designation} ({slot.Guide.BroadWall} × {slot.Guide.NarrowWall}, wall {slot.Guide.WallThickness}), not the request's {request.Guide.Designation} ({request.Guide.BroadWall} × {request.Guide.NarrowWall}, wall {request.Guide.WallThickness})",
+                nameof(slot));
         int n = request.Slots.Count;
         bool centre = request.Feed.Position == FeedPosition.Centre;
         CheckTaper(request, amplitudes, n, centre);

@@ -127,4 +127,11 @@ public class StandingWaveDesignerTests
         var r = Request(4) with { Feed = Request(4).Feed with { Type = FeedType.TravellingWave } };
         Assert.Throws<ArgumentException>(() => StandingWaveDesigner.Design(r, Slot, Uniform(4)));
     }
+
+    [Fact]
+    public void A_slot_model_for_another_guide_is_not_accepted()
+    {
+        var e = Assert.Throws<ArgumentException>(() => StandingWaveDesigner.Design(Request(4), new StevensonTestSlot(Wr90Lossless, Width), Uniform(4)));
+        Assert.Contains("slot model is for the guide", e.Message);
+    }
 }
