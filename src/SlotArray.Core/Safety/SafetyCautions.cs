@@ -34,7 +34,9 @@ public static class SafetyCautions
             string avg = e.RotationFactor < 1 ? rotating + SafetyText.Metres(d.TimeAveraged) + ")" : "";
             yield return new DesignWarning($"exposure-{tier}-{extent}",
                 $"{tier} {extent} reference level ({d.Level.Guideline}, {SafetyText.Sig3(d.Level.PowerDensity)} W/m²) "
-                + $"reached within {SafetyText.Metres(d.Stationary)} on the beam axis{avg}.");
+                + $"reached within {SafetyText.Metres(d.Stationary)} on the beam axis{avg}"
+                + (d.NearFieldBoundBelowLevel ? $"; the near-field bound 4P/A = {SafetyText.Sig3(e.NearFieldBound)} W/m² stays below this level" : "")
+                + ".");
         }
         if (e.Distances.Any(d => d.InsideFarFieldDistance))
             yield return new DesignWarning("exposure-near-field",
