@@ -70,7 +70,7 @@ public sealed record ExposureAssessment(
 
     /// <summary>
     /// Builds the assessment. Formulas: <see cref="PowerDensity"/> (physics-reference §8.1, §8.4); levels:
-    /// <see cref="Icnirp2020"/> (§8.2).
+    /// <see cref="Icnirp2020"/> (§8.2). The larger of the two aperture dimensions is taken as D.
     /// </summary>
     /// <param name="averagePower">Time-averaged power accepted by the antenna, W; ≥ 0.</param>
     /// <param name="gainDbi">Gain on the beam axis, dBi.</param>

@@ -64,3 +64,21 @@ public class Icnirp2020Tests
         Assert.Contains("2–300 GHz", e.Message, StringComparison.Ordinal);
     }
 }
+
+/// <summary>The comparison levels of physics-reference §8.3 ([M]; tags carried with the values).</summary>
+public class ComparisonLevelsTests
+{
+    [Fact]
+    public void Ieee_and_fcc_levels_as_the_sheet_lists_them()
+    {
+        var f = Frequency.FromGigahertz(9.41);
+        Check.Absolute(36.99, IeeeC95_1_2019.Local(f, ExposureTier.GeneralPublic).PowerDensity, 0.005, "physics-reference §8.3 [M, Medium]: 55 f_G^−0.177");
+        Check.Relative(50, IeeeC95_1_2019.WholeBody(f, ExposureTier.Occupational).PowerDensity, 1e-12, "physics-reference §8.3 [M, Medium]");
+        Assert.Contains("verify", IeeeC95_1_2019.WholeBody(f, ExposureTier.Occupational).Provenance, StringComparison.Ordinal);
+        var fcc = Fcc47Cfr1310.MaximumPermissibleExposure(f, ExposureTier.GeneralPublic);
+        Check.Relative(10, fcc.PowerDensity, 1e-12, "physics-reference §8.3 [M, High]: 1 mW/cm²");
+        Assert.Equal(1800, fcc.AveragingTimeSeconds);
+        Assert.Throws<ArgumentOutOfRangeException>(() => IeeeC95_1_2019.Local(Frequency.FromGigahertz(5), ExposureTier.GeneralPublic));
+        Assert.Throws<ArgumentOutOfRangeException>(() => Fcc47Cfr1310.MaximumPermissibleExposure(Frequency.FromGigahertz(120), ExposureTier.Occupational));
+    }
+}
