@@ -31,7 +31,7 @@ namespace SlotArray.Core.Slots;
 /// branch in shunt (Im y &gt; 0 below resonance, &lt; 0 above; sign convention of physics-reference §3.3 item 7).
 /// Q_s = <see cref="SeriesResonanceQ"/> was fitted (least squares on the complex y) to the five moment-method values of
 /// physics-reference §3.3 item 7 (broad-wall longitudinal slot, WR-90, 9.375 GHz, x = 2 mm, thin wall,
-/// L_r = 0.45654 λ, g_r = 0.09183): rms complex residual 0.0038 (4 % of g_r), largest 0.0061 at L/λ = 0.50. The edge
+/// L_r = 0.45654 λ, g_r = 0.09183): minimiser 6.1087, kept to four digits; rms complex residual 0.0038 (4 % of g_r), largest 0.0061 at L/λ = 0.50. The edge
 /// slot's own Q is not known here; borrowing the broad-wall slot's value is an assumption.
 /// </para>
 /// <para>

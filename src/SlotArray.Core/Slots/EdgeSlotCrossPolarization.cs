@@ -31,7 +31,8 @@ public static class EdgeSlotCrossPolarization
 
     /// <summary>
     /// Peak level of the cross-polarised lobes relative to the co-polar main beam, 20 log10|tan θ| dB, before
-    /// element-pattern and taper weighting. For a tapered array use the amplitude-weighted mean of tan|θ_n|.
+    /// element-pattern and taper weighting. For a tapered array the same array-factor sum gives the amplitude-weighted
+    /// mean Σ aₙ tan|θₙ| / Σ aₙ in place of tan θ (derived here, not from a source).
     /// </summary>
     /// <param name="tilt">Slot tilt θ; 0 &lt; |θ| &lt; 90°.</param>
     public static double LobeLevelDecibels(Angle tilt)

@@ -50,14 +50,18 @@ public static class InclinedSeriesSlot
         return StevensonFactor * lam * lam * lam / (a * b * lg) * bracket * bracket;
     }
 
-    /// <summary>The largest resistance a centred series slot gives: the transverse slot, r(90°).</summary>
+    /// <summary>
+    /// The largest resistance a centred series slot gives over 0 ≤ θ ≤ 90°. Over the recommended band of a guide r(θ)
+    /// rises monotonically and the maximum is the transverse slot, r(90°) (checked for WR-90, WR-42 and WR-284); close
+    /// to cutoff it peaks at an intermediate rotation, found on a 0.5° grid and refined by golden-section search.
+    /// </summary>
     /// <param name="guide">The guide.</param>
     /// <param name="f">Frequency; above the TE10 cutoff.</param>
-    public static double MaximumResistance(RectangularWaveguide guide, Frequency f) => Resistance(guide, Angle.FromDegrees(90), f);
+    public static double MaximumResistance(RectangularWaveguide guide, Frequency f) => Resistance(guide, MaximumRotation(guide, f), f);
 
     /// <summary>
-    /// Inverse of <see cref="Resistance"/>: the rotation 0 &lt; θ ≤ 90° that gives the resonant resistance r
-    /// (r(θ) rises monotonically from 0 to r(90°) for guides in their single-mode band; solved by Brent's method to 1e-13 rad).
+    /// Inverse of <see cref="Resistance"/>: the smallest rotation 0 &lt; θ ≤ 90° that gives the resonant resistance r
+    /// (first sign change on a 0.5° grid, then Brent's method to 1e-13 rad).
     /// Throws <see cref="InfeasibleDesignException"/> when r exceeds <see cref="MaximumResistance"/>.
     /// </summary>
     /// <param name="guide">The guide.</param>
@@ -67,13 +71,39 @@ public static class InclinedSeriesSlot
     {
         if (!double.IsFinite(resistance) || resistance <= 0)
             throw new ArgumentOutOfRangeException(nameof(resistance), resistance, "the series-slot resistance r must be a positive number");
-        double max = MaximumResistance(guide, f);
+        var peak = MaximumRotation(guide, f);
+        double max = Resistance(guide, peak, f);
         if (resistance > max)
             throw new InfeasibleDesignException(FormattableString.Invariant(
-                $"a centred inclined series slot needs r = {resistance:0.#####}, above the maximum {max:0.#####} (transverse slot, 90°) this {guide.Designation} guide gives at {f}: use more slots or a gentler taper"));
-        if (resistance == max) return Angle.FromDegrees(90);
-        double th = Brent.FindRoot(t => Resistance(guide, Angle.FromRadians(t), f) - resistance, 0, Math.PI / 2, 1e-13, 200);
-        return Angle.FromRadians(th);
+                $"a centred inclined series slot needs r = {resistance:0.#####}, above the maximum {max:0.#####} (at {peak.Degrees:0.#} deg) this {guide.Designation} guide gives at {f}: use more slots or a gentler taper"));
+        if (resistance == max) return peak;
+        double F(double t) => Resistance(guide, Angle.FromRadians(t), f) - resistance;
+        double lo = 0;
+        for (int i = 1; i <= GridSteps; i++)
+        {
+            double hi = Math.Min(i * GridStep, peak.Radians);
+            if (F(hi) >= 0) return Angle.FromRadians(Brent.FindRoot(F, lo, hi, 1e-13, 200));
+            lo = hi;
+        }
+        return peak; // unreachable: F(peak) ≥ 0
+    }
+
+    private const int GridSteps = 180;
+    private const double GridStep = Math.PI / 2 / GridSteps;
+
+    private static Angle MaximumRotation(RectangularWaveguide guide, Frequency f)
+    {
+        double R(double t) => Resistance(guide, Angle.FromRadians(t), f);
+        int best = GridSteps;
+        for (int i = GridSteps - 1; i >= 1; i--) if (R(i * GridStep) > R(best * GridStep)) best = i;
+        if (best == GridSteps) return Angle.FromDegrees(90);
+        double a = (best - 1) * GridStep, b = Math.Min(best + 1, GridSteps) * GridStep, phi = (Math.Sqrt(5) - 1) / 2;
+        while (b - a > 1e-12)
+        {
+            double m1 = b - phi * (b - a), m2 = a + phi * (b - a);
+            if (R(m1) < R(m2)) a = m1; else b = m2;
+        }
+        return Angle.FromRadians(0.5 * (a + b));
     }
 
     /// <summary>

@@ -45,7 +45,7 @@ public class EdgeSlotModelTests
             if (FitResidual(m1) < FitResidual(m2)) hi = m2; else lo = m1;
         }
         double qFit = 0.5 * (lo + hi);
-        Check.Absolute(qFit, EdgeSlot.SeriesResonanceQ, 1e-3, "least-squares fit to physics-reference §3.3 item 7 [N]");
+        Check.Absolute(qFit, EdgeSlot.SeriesResonanceQ, 5e-4, "least-squares fit to physics-reference §3.3 item 7 [N]");
         double rms = Math.Sqrt(FitResidual(EdgeSlot.SeriesResonanceQ) / MomValues.Length);
         Assert.True(rms < 0.0039, $"rms complex residual {rms:G4} should be the 0.0038 stated in the doc comment");
         Assert.True(rms > 0.0037, $"rms complex residual {rms:G4} should be the 0.0038 stated in the doc comment");

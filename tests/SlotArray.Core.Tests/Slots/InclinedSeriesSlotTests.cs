@@ -83,4 +83,24 @@ public class InclinedSeriesSlotTests
         Assert.Contains(w, x => x.Code == "series-slot-thin-wall-formula");
         Assert.Empty(InclinedSeriesSlot.Warnings(Wr90(), Angle.FromDegrees(15), Length.FromMillimeters(1.5875), F));
     }
+
+    [Fact]
+    public void Near_cutoff_the_peak_is_below_90_degrees_and_the_inverse_takes_the_smallest_rotation()
+    {
+        // WR-90 at 7 GHz (below the 8.2 GHz recommended band): r(θ) peaks before 90° (checked with an independent
+        // python evaluation of the §2.2 formula). Properties: the maximum bounds every grid value, the inverse has zero
+        // residual and no smaller rotation reaches r.
+        var g = Wr90();
+        var f = Frequency.FromGigahertz(7);
+        double max = InclinedSeriesSlot.MaximumResistance(g, f);
+        Assert.True(max > InclinedSeriesSlot.Resistance(g, Angle.FromDegrees(90), f), "peak should lie below 90° near cutoff");
+        for (double d = 0; d <= 90; d += 0.1)
+            Assert.True(InclinedSeriesSlot.Resistance(g, Angle.FromDegrees(d), f) <= max * (1 + 1e-12), $"r({d}°) above the maximum");
+        double target = InclinedSeriesSlot.Resistance(g, Angle.FromDegrees(90), f);
+        var th = InclinedSeriesSlot.TiltForResistance(g, target, f);
+        Check.Relative(target, InclinedSeriesSlot.Resistance(g, th, f), 1e-10, "residual of the inverse");
+        Assert.True(th.Degrees < 90, $"smallest rotation expected, got {th}");
+        for (double d = 0; d < th.Degrees - 1e-6; d += 0.05)
+            Assert.True(InclinedSeriesSlot.Resistance(g, Angle.FromDegrees(d), f) < target, $"r({d}°) already reaches the target");
+    }
 }
