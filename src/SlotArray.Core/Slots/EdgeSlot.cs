@@ -17,14 +17,17 @@ namespace SlotArray.Core.Slots;
 /// </para>
 /// <para>
 /// Geometry (tube of uniform wall thickness t = <see cref="RectangularWaveguide.WallThickness"/>): the cut crosses the
-/// whole outer narrow-wall face, of outer height b + 2t, at tilt θ, a run of (b + 2t)/cos θ, and wraps into each
-/// broad wall to a depth D measured from the outer narrow-wall face (physics-reference §9.3, the cut-list datum).
-/// The developed length along the slot's path on the outer surface is
-/// L = (b + 2t)/cos θ + 2D. The slot is taken as resonant when L equals L_r = κ λ/2 with κ = <see cref="ResonanceFraction"/>:
+/// narrow wall at tilt θ and wraps into each broad wall to a depth D measured from the outer narrow-wall face
+/// (physics-reference §9.3, the cut-list datum). The slot couples to the guide through its INNER aperture, so the
+/// developed length is taken along the inside of the guide: across the inside height b at tilt θ, a run of b/cos θ,
+/// plus D − t into each broad wall beyond the inner narrow-wall face:
+/// L = b/cos θ + 2(D − t) (the convention of <see cref="Fabrication.Datums.EdgeSlotDepthOfCut"/>). The path on the
+/// outer surface, (b + 2t)/cos θ + 2D, was rejected: with a 1.27 mm WR-90 wall it leaves a resonant cut shallower
+/// than the wall itself, which cannot open the guide. The slot is taken as resonant when L equals L_r = κ λ/2 with κ = <see cref="ResonanceFraction"/>:
 /// thin narrow slots resonate a few per cent below λ/2 (physics-reference §2 assumptions; the thin-wall moment-method
 /// values of physics-reference §3.2 give 0.452–0.480 λ for a broad-wall slot). κ = 0.95 is an approximate mid value
 /// (common practice, no source); wall thickness, the corner bends and the slot width, none modelled here, shift it.
-/// Hence D = (κλ/2 − (b + 2t)/cos θ)/2; the cut opens into the guide only when D &gt; t.
+/// Hence D = t + (κλ/2 − b/cos θ)/2; the slot is realisable only when κλ/2 &gt; b/cos θ (it must span the inside height).
 /// </para>
 /// <para>
 /// Length response: y(L) = g_r(θ) h(L/L_r), h(ρ) = 1/(1 + j Q_s (ρ − 1/ρ)), the single-pole shape of a series-resonant
@@ -98,20 +101,20 @@ public sealed record EdgeSlot : IShuntSlotModel
     /// <param name="f">Frequency; &gt; 0.</param>
     public Length ResonantLength(Frequency f) => ResonanceFraction / 2 * f.FreeSpaceWavelength;
 
-    /// <summary>Developed length L = (b + 2t)/cos θ + 2D of a cut of depth D at tilt θ (first-order geometry, see remarks).</summary>
+    /// <summary>Developed length L = b/cos θ + 2(D − t) of a cut of depth D at tilt θ (inner aperture, first-order geometry, see remarks).</summary>
     /// <param name="tilt">Signed tilt; |θ| ≤ <see cref="MaximumTilt"/>.</param>
-    /// <param name="cutDepth">Depth D of cut into each broad wall from the outer narrow-wall face; ≥ 0.</param>
+    /// <param name="cutDepth">Depth D of cut into each broad wall from the outer narrow-wall face; ≥ t (the wall).</param>
     public Length DevelopedLength(Angle tilt, Length cutDepth)
     {
         RequireTilt(tilt.Radians);
-        if (!(cutDepth.Meters >= 0) || !double.IsFinite(cutDepth.Meters))
-            throw new ArgumentOutOfRangeException(nameof(cutDepth), cutDepth.ToString(), "the cut depth must be zero or a positive length");
-        return Length.FromMeters(OuterHeight.Meters / Math.Cos(tilt.Radians) + 2 * cutDepth.Meters);
+        if (!(cutDepth.Meters >= Guide.WallThickness.Meters) || !double.IsFinite(cutDepth.Meters))
+            throw new ArgumentOutOfRangeException(nameof(cutDepth), cutDepth.ToString(), "the cut depth must be at least the wall thickness, else the cut does not open the guide");
+        return Length.FromMeters(Guide.NarrowWall.Meters / Math.Cos(tilt.Radians) + 2 * (cutDepth.Meters - Guide.WallThickness.Meters));
     }
 
     /// <summary>
-    /// Depth of cut D = (L − (b + 2t)/cos θ)/2 into each broad wall, from the outer narrow-wall face, that gives the
-    /// developed length L. Throws <see cref="InfeasibleDesignException"/> when D ≤ t (the cut would not open the guide).
+    /// Depth of cut D = t + (L − b/cos θ)/2 into each broad wall, from the outer narrow-wall face, that gives the
+    /// developed length L. Throws <see cref="InfeasibleDesignException"/> when L ≤ b/cos θ (the slot cannot span the inside height).
     /// </summary>
     /// <param name="tilt">Signed tilt; |θ| ≤ <see cref="MaximumTilt"/>.</param>
     /// <param name="developedLength">Developed slot length L; &gt; 0.</param>
@@ -120,7 +123,7 @@ public sealed record EdgeSlot : IShuntSlotModel
         double d = RawCutDepth(tilt.Radians, developedLength.Meters);
         if (!(d > Guide.WallThickness.Meters))
             throw new InfeasibleDesignException(FormattableString.Invariant(
-                $"an edge slot of developed length {developedLength.Millimeters:0.###} mm at tilt {tilt} needs a cut depth of {d * 1e3:0.###} mm, not deeper than the {Guide.WallThickness.Millimeters:0.###} mm wall, so the cut would not open the guide: the narrow wall's outer height {OuterHeight.Millimeters:0.###} mm is too tall for this first-order model; use a thinner wall, a longer slot or measured cut-depth data"));
+                $"an edge slot of developed length {developedLength.Millimeters:0.###} mm at tilt {tilt} is shorter than the {Guide.NarrowWall.Millimeters / Math.Cos(tilt.Radians):0.###} mm it takes to cross the inside height of the narrow wall: the guide's narrow wall is too tall for a resonant edge slot at this frequency; use a lower-height guide or measured cut-depth data"));
         return Length.FromMeters(d);
     }
 
@@ -187,7 +190,7 @@ public sealed record EdgeSlot : IShuntSlotModel
         double d = RawCutDepth(coupling, ResonantLength(f).Meters), t = Guide.WallThickness.Meters;
         if (!(d > t))
             list.Add(new DesignWarning("edge-slot-cut-too-shallow", FormattableString.Invariant(
-                $"at tilt {coupling * 180 / Math.PI:0.###} deg the resonant cut depth {d * 1e3:0.###} mm is not deeper than the {t * 1e3:0.###} mm wall: the first-order model gives no cut that opens the guide; use measured cut-depth data")));
+                $"at tilt {coupling * 180 / Math.PI:0.###} deg the resonant slot is too short to cross the {Guide.NarrowWall.Millimeters:0.###} mm inside height of the narrow wall: the first-order model gives no resonant cut; use measured cut-depth data")));
         else if (d - t > Guide.BroadWall.Meters / 4)
             list.Add(new DesignWarning("edge-slot-cut-too-deep", FormattableString.Invariant(
                 $"the resonant cut reaches {(d - t) * 1e3:0.###} mm into each broad wall inside the guide, more than a/4 = {Guide.BroadWall.Millimeters / 4:0.###} mm: the narrow-wall conductance formula no longer describes the slot")));
@@ -199,7 +202,7 @@ public sealed record EdgeSlot : IShuntSlotModel
         RequireTilt(tilt);
         if (!(developedLength > 0) || !double.IsFinite(developedLength))
             throw new ArgumentOutOfRangeException(nameof(developedLength), developedLength, "the developed length must be a positive length in metres");
-        return (developedLength - OuterHeight.Meters / Math.Cos(tilt)) / 2;
+        return Guide.WallThickness.Meters + (developedLength - Guide.NarrowWall.Meters / Math.Cos(tilt)) / 2;
     }
 
     private static void RequireTilt(double tilt)

@@ -95,20 +95,33 @@ public class EdgeSlotModelTests
         var developed = m.DevelopedLength(tilt, depth);
         Check.Relative(m.ResonantLength(F).Meters, developed.Meters, 1e-14, "depth → developed length gives the resonant length");
         Check.Relative(depth.Meters, m.CutDepth(tilt, developed).Meters, 1e-12, "developed length → depth");
-        // Hand value: (b + 2t)/cos θ + 2D = 0.95 λ/2 with λ = 31.97786 mm (physics-reference §0.2).
-        double expected = (0.95 * 31.97786 / 2 - (10.16 + 2 * wallMm) / Math.Cos(tilt.Radians)) / 2;
+        // Hand value, inner-aperture path: b/cos θ + 2(D − t) = 0.95 λ/2 with λ = 31.97786 mm (physics-reference §0.2).
+        double expected = wallMm + (0.95 * 31.97786 / 2 - 10.16 / Math.Cos(tilt.Radians)) / 2;
         Check.Absolute(expected, depth.Millimeters, 1e-5, "first-order geometry by hand, λ from physics-reference §0.2");
     }
 
     [Fact]
-    public void A_thick_wall_leaves_no_cut_that_opens_the_guide_and_says_so()
+    public void A_standard_wall_gives_a_cut_deeper_than_the_wall()
     {
-        // WR-90 with 1.27 mm walls at 15°: (10.16 + 2.54)/cos 15° = 13.148 mm, so D = 1.021 mm < t = 1.27 mm.
+        // WR-90, 1.27 mm walls, 15°: 10.16/cos 15° = 10.518 mm across the inside height, so
+        // D = 1.27 + (15.190 − 10.518)/2 = 3.606 mm from the outer narrow-wall face (hand computation, inner-aperture path).
         var m = Model(1.27);
-        double th = Angle.FromDegrees(15).Radians;
-        Assert.Contains(m.Warnings(th, F), w => w.Code == "edge-slot-cut-too-shallow");
-        var e = Assert.Throws<InfeasibleDesignException>(() => m.ResonantCutDepth(Angle.FromRadians(th), F));
-        Assert.Contains("1.021", e.Message);
+        var depth = m.ResonantCutDepth(Angle.FromDegrees(15), F);
+        Check.Absolute(1.27 + (0.95 * 31.97786 / 2 - 10.16 / Math.Cos(15 * Math.PI / 180)) / 2, depth.Millimeters, 1e-6, "first-order geometry by hand");
+        Assert.True(depth.Millimeters > 1.27);
+        Assert.DoesNotContain(m.Warnings(Angle.FromDegrees(15).Radians, F), w => w.Code == "edge-slot-cut-too-shallow");
+    }
+
+    [Fact]
+    public void A_slot_too_short_to_cross_the_inside_height_is_infeasible_and_says_so()
+    {
+        // A tall custom guide
+        // (b = 20 mm) at 9.375 GHz: 15.19 mm < 20 mm, so no resonant cut exists.
+        var tall = RectangularWaveguide.Create(Length.FromMillimeters(40), Length.FromMillimeters(20), Length.FromMillimeters(1.27), Metal.Aluminium);
+        var m = EdgeSlot.Create(tall, Length.FromMillimeters(1.6));
+        Assert.Contains(m.Warnings(Angle.FromDegrees(15).Radians, F), w => w.Code == "edge-slot-cut-too-shallow");
+        var e = Assert.Throws<InfeasibleDesignException>(() => m.ResonantCutDepth(Angle.FromDegrees(15), F));
+        Assert.Contains("inside height", e.Message);
     }
 
     [Fact]
