@@ -48,7 +48,7 @@ public static class LayoutSvg
         double faceTop = dimTop + DimPitch * slots.Length + 6;
         double cl = faceTop + faceHeight / 2;
         double faceBottom = faceTop + faceHeight;
-        double tableTop = faceBottom + 22;
+        double tableTop = faceBottom + (tilt ? 25 : 22);
         double tableBottom = tableTop + RowHeight * (rowsPerBlock + 1);
         double titleTop = tableBottom + 10;
         const int titleLines = 8;
@@ -84,11 +84,12 @@ public static class LayoutSvg
         Line(left - 4, cl, left + faceLength + 6, cl, "centre");
         TextAt(left + faceLength + 7, cl + Text / 3, "CL", "start");
         Line(left, dimTop - 4, left, faceBottom + 12, "datum");
-        TextAt(left + 1, faceBottom + 6, "DATUM A: " + report.Inputs.DatumDescription, "start", 3);
-        TextAt(left + 1, faceBottom + 10.5, tilt
+        double note = faceBottom + (tilt ? 9 : 6);
+        TextAt(left + 1, note, "DATUM A: " + report.Inputs.DatumDescription, "start", 3);
+        TextAt(left + 1, note + 4.5, tilt
             ? "narrow face shown; z along the guide from datum A"
             : "+x side at top; DATUM B: outside face of the -x side wall (bottom edge)", "start", Text);
-        TextAt(left + faceLength - 1, faceTop - 1.5, "feed side: guide continues", "end", Text);
+        TextAt(left + faceLength - 1, faceTop - 1.5, "to feed", "end", Text);
 
         // slots, centre marks, numbers
         foreach (var s in slots)
@@ -100,8 +101,9 @@ public static class LayoutSvg
             Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Index)}\" x=\"{X(z - len / 2)}\" y=\"{F(yc - w / 2)}\" width=\"{F(len)}\" height=\"{F(w)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"{rot}/>");
             Line(left + z - 1.2, yc, left + z + 1.2, yc, "thin");
             Line(left + z, yc - 1.2, left + z, yc + 1.2, "thin");
-            double side = tilt || s.Offset!.Value >= 0 ? 1 : -1; // number on the far side of the centreline
-            double yn = cl + side * (faceHeight / 2 - 1.2) + (side > 0 ? 0 : Text);
+            // broad face: number on the far side of the centreline; narrow face: below the face, clear of the tilted slot
+            double side = tilt || s.Offset!.Value >= 0 ? 1 : -1;
+            double yn = tilt ? faceBottom + 3.5 : cl + side * (faceHeight / 2 - 1.2) + (side > 0 ? 0 : Text);
             TextAt(left + z, yn, Invariant.Int(s.Index), "middle", Text, " font-weight=\"bold\"");
         }
 
@@ -115,7 +117,9 @@ public static class LayoutSvg
             Line(left, y, left + z, y, "thin");
             Arrow(left, y, -1);
             Arrow(left + z, y, 1);
-            TextAt(left + z - 1.5, y - 0.8, $"{Invariant.Mm(s.Position)} (slot {Invariant.Int(s.Index)})", "end");
+            string label = $"{Invariant.Mm(s.Position)} (slot {Invariant.Int(s.Index)})";
+            bool fits = TextWidth(label, Text) + 4 < z; // else put it beyond the extension line, clear of the arrows
+            TextAt(left + z + (fits ? -1.5 : 1.5), y - 0.8, label, fits ? "end" : "start");
         }
         TextAt(left, dimTop - 5, "slot centres from DATUM A (baseline), mm", "start", Text);
 
@@ -170,6 +174,9 @@ public static class LayoutSvg
         Ln("</svg>");
         return sb.ToString();
     }
+
+    /// <summary>Generous estimate of a DejaVu Sans text width, mm (0.62 em per character).</summary>
+    private static double TextWidth(string text, double size) => 0.62 * size * text.Length;
 
     /// <summary>XML text escape.</summary>
     private static string Xml(string s) => s.Replace("&", "&amp;").Replace("<", "&lt;").Replace(">", "&gt;").Replace("\"", "&quot;");
