@@ -44,7 +44,9 @@ public static class SpecLoader
         }
         catch (YamlException e)
         {
-            string reason = e.InnerException?.Message ?? e.Message;
+            string reason = e.InnerException is YamlException inner ? inner.Message : e.Message;
+            int cut = reason.IndexOf("): ", StringComparison.Ordinal);   // drop YamlDotNet's "(Line: .., Col: ..) - (..): " prefix
+            if (reason.StartsWith("(Line:", StringComparison.Ordinal) && cut > 0) reason = reason[(cut + 3)..];
             d.Error(e.Start.Line, e.Start.Column, $"YAML syntax: {Trim(reason)}; check indentation, colons and quotes on this line");
             return new SpecResult(null, d.Errors, d.Warnings);
         }

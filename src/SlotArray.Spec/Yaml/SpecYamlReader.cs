@@ -13,10 +13,39 @@ internal static class SpecYamlReader
     /// <summary>Deeper nesting than any spec needs; a guard against runaway input.</summary>
     private const int MaxDepth = 32;
 
-    /// <summary>Reads one YAML document; null when the text holds no document.</summary>
+    /// <summary>
+    /// Reads one YAML document; null when the text holds no document. Any failure of the parser (which on some
+    /// malformed input throws other exceptions than <see cref="YamlException"/>) becomes a YamlException at the
+    /// last position reached.
+    /// </summary>
     public static SpecNode? Read(string text)
     {
         var parser = new Parser(new StringReader(text));
+        try
+        {
+            return ReadDocument(parser);
+        }
+        catch (Exception e) when (e is not YamlException)
+        {
+            var at = Position(parser);
+            throw new YamlException(at, at, "the text cannot be read as YAML here", e);
+        }
+    }
+
+    private static Mark Position(Parser parser)
+    {
+        try
+        {
+            return parser.Current?.Start ?? Mark.Empty;
+        }
+        catch (InvalidOperationException)
+        {
+            return Mark.Empty;
+        }
+    }
+
+    private static SpecNode? ReadDocument(Parser parser)
+    {
         parser.Consume<StreamStart>();
         if (parser.TryConsume<StreamEnd>(out _)) return null;
         parser.Consume<DocumentStart>();
