@@ -139,6 +139,12 @@ public class SpecErrorTests
     public void Key_that_does_not_apply_to_the_taper() => At(Single(With((17, "  sidelobes: -26 dB\n  edge: -20 dB"))), 18, 9, "does not apply to a taylor taper");
 
     [Fact]
+    public void Unknown_spec_version() => At(Single(With((1, "spec: 2"))), 1, 7, "write 'spec: 1'");
+
+    [Fact]
+    public void Key_at_the_wrong_level_names_its_section() => At(Single(With((2, "name: t\ncutter: 1.6 mm"))), 3, 1, "it belongs in 'slots'");
+
+    [Fact]
     public void Empty_document() => At(Single(""), 1, 1, "the spec is empty");
 
     [Fact]

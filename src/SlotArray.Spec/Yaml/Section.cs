@@ -38,7 +38,9 @@ internal sealed class Section
     /// <summary>Where a missing key is reported: the section's own key in its parent (or the document start).</summary>
     public SpecNode Anchor { get; }
 
-    public Section(Diagnostics d, MappingNode map, string path, SpecNode anchor, IReadOnlyList<string> known)
+    /// <summary>Reads the keys of <paramref name="map"/>; <paramref name="homes"/> maps a key of another section to that section, for a hint.</summary>
+    public Section(Diagnostics d, MappingNode map, string path, SpecNode anchor, IReadOnlyList<string> known,
+        IReadOnlyDictionary<string, string>? homes = null)
     {
         Path = path; Anchor = anchor;
         foreach (var (keyNode, value) in map.Entries)
@@ -56,7 +58,9 @@ internal sealed class Section
             if (!known.Contains(key.Value))
             {
                 string? near = Nearest(key.Value, known);
-                d.Error(key, near is not null
+                if (homes is not null && homes.TryGetValue(key.Value, out string? home))
+                    d.Error(key, $"unknown key '{key.Value}' {Where}; it belongs in '{home}' (indent it under '{home}:')");
+                else d.Error(key, near is not null
                     ? $"unknown key '{key.Value}' {Where}; did you mean '{near}'?"
                     : $"unknown key '{key.Value}' {Where}; known keys: {string.Join(", ", known)}");
                 continue;

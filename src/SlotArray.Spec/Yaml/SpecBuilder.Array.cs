@@ -83,6 +83,8 @@ internal sealed partial class SpecBuilder
             if (standing) ok &= Require(s, "load", false, "'load' applies to travelling-wave feeds only (a standing-wave array ends in a short); remove it");
             else if (load is not null && !Require(s, "load", load > 0 && load < 1, $"'load' must be between 0 % and 100 % (exclusive), got {Num(load.Value * 100)} %")) load = null;
         }
+        else if (travelling)
+            D.Warn(s.Anchor, $"no 'load' given: leaving {Num(DefaultLoadFraction * 100)} % of the input power for the load; write e.g. 'load: 5 %'");
         ok &= load is not null;
 
         GuideDistance? shortDistance = GuideDistance.InGuideWavelengths(0.25);

@@ -8,6 +8,19 @@ internal sealed partial class SpecBuilder
     private static readonly string[] RootKeys =
         ["spec", "name", "frequency", "band", "guide", "slots", "feed", "taper", "coupling", "tolerance", "requirements", "transmitter"];
 
+    /// <summary>Section of each key that lives in one section only, for the hint on a key written at the top level.</summary>
+    /// <remarks>Built on first use: static initialisers in different parts of a partial class run in no defined order.</remarks>
+    private static Dictionary<string, string> Homes => s_homes ??= new[]
+        {
+            ("guide", GuideKeys), ("slots", SlotKeys), ("feed", FeedKeys), ("taper", TaperKeys), ("tolerance", ToleranceKeys),
+            ("requirements", RequirementKeys), ("transmitter", TransmitterKeys),
+        }
+        .SelectMany(p => p.Item2.Select(k => (Key: k, Section: p.Item1)))
+        .GroupBy(p => p.Key).Where(g => g.Count() == 1 && !RootKeys.Contains(g.Key))
+        .ToDictionary(g => g.Key, g => g.Single().Section, StringComparer.Ordinal);
+
+    private static Dictionary<string, string>? s_homes;
+
     /// <summary>Default analysis band when none is given: the design frequency ± this fraction (2 %).</summary>
     internal const double DefaultBandFraction = 0.02;
 
@@ -27,10 +40,10 @@ internal sealed partial class SpecBuilder
             D.Error(root, "the spec must be a block of 'key: value' lines starting with 'spec: 1'");
             return null;
         }
-        var s = new Section(D, map, "", map, RootKeys);
+        var s = new Section(D, map, "", map, RootKeys, Homes);
 
-        int? version = Integer(s, "spec", true, 1, int.MaxValue, "1");
-        if (version is > 1) D.Error(s["spec"]!, $"spec version {version} is not known to this program; write 'spec: 1'");
+        int? version = Integer(s, "spec", true, int.MinValue, int.MaxValue, "1");
+        if (version is not null and not 1) D.Error(s["spec"]!, $"spec version {version} is not known to this program; write 'spec: 1'");
         string? name = Name(s);
         Frequency? f = DesignFrequency(s);
         (Frequency Low, Frequency High)? band = Band(s, f);
