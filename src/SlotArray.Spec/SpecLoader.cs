@@ -47,7 +47,10 @@ public static class SpecLoader
             string reason = e.InnerException is YamlException inner ? inner.Message : e.Message;
             int cut = reason.IndexOf("): ", StringComparison.Ordinal);   // drop YamlDotNet's "(Line: .., Col: ..) - (..): " prefix
             if (reason.StartsWith("(Line:", StringComparison.Ordinal) && cut > 0) reason = reason[(cut + 3)..];
-            d.Error(e.Start.Line, e.Start.Column, $"YAML syntax: {Trim(reason)}; check indentation, colons and quotes on this line");
+            var (line, column) = (e.Start.Line, e.Start.Column);
+            if (reason.Contains("tab", StringComparison.OrdinalIgnoreCase) && FirstIndentingTab(yamlText) is { } tab)
+                (line, column) = tab;   // the parser reports the enclosing block; the tab itself is more useful
+            d.Error(line, column, $"YAML syntax: {Trim(reason)}; check indentation (spaces, never tabs), colons and quotes on this line");
             return new SpecResult(null, d.Errors, d.Warnings);
         }
         var builder = new SpecBuilder(d);
@@ -62,6 +65,19 @@ public static class SpecLoader
             d.Error(at?.Line ?? 1, at?.Column ?? 1, $"could not read this value ({e.GetType().Name}: {e.Message}); please report it with the spec");
             return new SpecResult(null, d.Errors, d.Warnings);
         }
+    }
+
+    /// <summary>Line and column (1-based) of the first tab used in a line's indentation, or null.</summary>
+    private static (long, long)? FirstIndentingTab(string text)
+    {
+        string[] lines = text.Split('\n');
+        for (int i = 0; i < lines.Length; i++)
+        {
+            string indent = new(lines[i].TakeWhile(c => c is ' ' or '\t').ToArray());
+            int t = indent.IndexOf('\t');
+            if (t >= 0) return (i + 1, t + 1);
+        }
+        return null;
     }
 
     private static string Trim(string m) => m.TrimEnd('.', ' ');

@@ -71,6 +71,9 @@ public class SpecErrorTests
     public void Yaml_syntax_error() => At(Single(With((7, "  wall: \"1.27 mm"))), 7, 9, "YAML syntax");
 
     [Fact]
+    public void Tab_indentation_is_reported_at_the_tab() => At(Single(With((7, "\twall: 1.27 mm"))), 7, 1, "never tabs");
+
+    [Fact]
     public void Unknown_key_suggests_the_nearest() => At(Single(With((8, "  metl: aluminium"))), 8, 3, "did you mean 'metal'?");
 
     [Fact]
@@ -143,6 +146,10 @@ public class SpecErrorTests
 
     [Fact]
     public void Key_at_the_wrong_level_names_its_section() => At(Single(With((2, "name: t\ncutter: 1.6 mm"))), 3, 1, "it belongs in 'slots'");
+
+    [Fact]
+    public void Key_of_two_sections_at_the_wrong_level_names_both()
+        => At(Single(With((2, "name: t\nwall: 1 mm"))), 3, 1, "it belongs in 'guide' or 'tolerance'");
 
     [Fact]
     public void Empty_document() => At(Single(""), 1, 1, "the spec is empty");

@@ -59,7 +59,7 @@ internal sealed class Section
             {
                 string? near = Nearest(key.Value, known);
                 if (homes is not null && homes.TryGetValue(key.Value, out string? home))
-                    d.Error(key, $"unknown key '{key.Value}' {Where}; it belongs in '{home}' (indent it under '{home}:')");
+                    d.Error(key, $"unknown key '{key.Value}' {Where}; it belongs in '{home}' (indent it under that block)");
                 else d.Error(key, near is not null
                     ? $"unknown key '{key.Value}' {Where}; did you mean '{near}'?"
                     : $"unknown key '{key.Value}' {Where}; known keys: {string.Join(", ", known)}");

@@ -8,7 +8,7 @@ internal sealed partial class SpecBuilder
     private static readonly string[] RootKeys =
         ["spec", "name", "frequency", "band", "guide", "slots", "feed", "taper", "coupling", "tolerance", "requirements", "transmitter"];
 
-    /// <summary>Section of each key that lives in one section only, for the hint on a key written at the top level.</summary>
+    /// <summary>Section (or sections) of each key that is not a top-level key, for the hint on a key written at the top level.</summary>
     /// <remarks>Built on first use: static initialisers in different parts of a partial class run in no defined order.</remarks>
     private static Dictionary<string, string> Homes => s_homes ??= new[]
         {
@@ -16,8 +16,8 @@ internal sealed partial class SpecBuilder
             ("requirements", RequirementKeys), ("transmitter", TransmitterKeys),
         }
         .SelectMany(p => p.Item2.Select(k => (Key: k, Section: p.Item1)))
-        .GroupBy(p => p.Key).Where(g => g.Count() == 1 && !RootKeys.Contains(g.Key))
-        .ToDictionary(g => g.Key, g => g.Single().Section, StringComparer.Ordinal);
+        .GroupBy(p => p.Key).Where(g => !RootKeys.Contains(g.Key))
+        .ToDictionary(g => g.Key, g => string.Join("' or '", g.Select(p => p.Section)), StringComparer.Ordinal);
 
     private static Dictionary<string, string>? s_homes;
 
