@@ -61,7 +61,7 @@ public static class ElliottDesignEquations
         double l = RequireHalfLength(halfLength);
         double k = frequency.FreeSpaceWavenumber, beta = guide.PhaseConstant(frequency);
         double kl = k * l, b = beta / k;
-        if (!(kl < Math.PI))
+        if (!(kl < Math.PI * (1 - 1e-9)))
             throw new ArgumentOutOfRangeException(nameof(halfLength), halfLength.ToString(),
                 $"the dipole-form coupling function needs kl < π (half length below λ/2 = {frequency.FreeSpaceWavelength.Millimeters / 2:0.###} mm)");
         return (Math.Cos(beta * l) - Math.Cos(kl)) / ((1 - b * b) * Math.Sin(kl)) * OffsetFactor(guide, offset);
