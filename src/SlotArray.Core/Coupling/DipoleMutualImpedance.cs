@@ -118,7 +118,9 @@ public static class DipoleMutualImpedance
         Complex fmb = -SineCosineIntegrals.E1OfImaginary(mb), fpb = -SineCosineIntegrals.E1OfImaginary(pb);
         // P(u0,u1) = ∫ e^(−j(R−u))/R du = F(m0) − F(m1);  M(u0,u1) = ∫ e^(−j(R+u))/R du = F(p1) − F(p0).
         Complex pLow = fma - fms, mLow = fps - fpa, mHigh = fpb - fps, pHigh = fms - fmb;
-        Complex eLow = Complex.FromPolarCoordinates(1, za - a), eHigh = Complex.FromPolarCoordinates(1, b - za);
+        var (sinLow, cosLow) = Math.SinCos(za - a);
+        var (sinHigh, cosHigh) = Math.SinCos(b - za);
+        Complex eLow = new(cosLow, sinLow), eHigh = new(cosHigh, sinHigh);
         return weight * (eLow * pLow - Complex.Conjugate(eLow) * mLow + eHigh * mHigh - Complex.Conjugate(eHigh) * pHigh);
     }
 

@@ -107,7 +107,7 @@ public static class SineCosineIntegrals
             return new Complex(CinSeries(x) - EulerGamma - Math.Log(x), SiSeries(x) - Math.PI / 2);
         if (x < AsymptoticLimit) return FromTable(x);
         var (f, g) = AuxiliaryAsymptotic(x);
-        double s = Math.Sin(x), c = Math.Cos(x);
+        var (s, c) = Math.SinCos(x);
         // e^(−ix) (g − i f) = (c − i s)(g − i f)
         return new Complex(c * g - s * f, -(c * f + s * g));
     }
