@@ -26,7 +26,8 @@ namespace SlotArray.Core.Coupling;
 /// and the tables of physics-reference §4.3.</para>
 /// <para>Validity: thin dipoles (radius ≪ λ and ≪ length) with the assumed sinusoidal currents; parallel axes.
 /// Collinear dipoles (d = 0) must not overlap; d is floored at 1e-12/k, which changes nothing measurable.
-/// The impedance is reciprocal, Z21 = Z12, also for h1 ≠ h2.</para>
+/// The impedance is reciprocal, Z21 = Z12, also for h1 ≠ h2. Referred to the centre (terminal) currents instead,
+/// Z21 becomes Z21/(sin kh1 sin kh2).</para>
 /// </remarks>
 public static class DipoleMutualImpedance
 {

@@ -88,7 +88,13 @@ public static class ElliottDesignEquations
     /// <param name="selfAdmittances">Isolated-slot admittances y_n = Y_n/G0 at the current offsets and lengths.</param>
     /// <param name="couplingFunctions">f_n = f(x_n, l_n) (<see cref="CouplingFunction"/>); must not be zero.</param>
     /// <param name="slotVoltages">Slot voltages V_n^s (any common scale and phase); must not be zero.</param>
-    /// <param name="mutualImpedances">Z_mn (Ω) of the equivalent dipoles, loop currents; the diagonal is not used.</param>
+    /// <param name="mutualImpedances">
+    /// Z_mn (Ω) of the equivalent dipoles referred to the loop currents, as physics-reference §4.2–§4.3 specify
+    /// (<see cref="SlotMutualCoupling.EquivalentDipoleImpedances"/>); the diagonal is not used. Note for the designer:
+    /// V^s is the slot voltage at the slot centre, where a sinusoidal distribution of half-length l has
+    /// sin(kl) times its loop value; referred to centre values Z_mn would be Z_mn/(sin kl_m sin kl_n), about 2 %
+    /// larger for resonant slots (2l ≈ 0.46 λ). Which reference the published constants pair with must be checked.
+    /// </param>
     /// <param name="gamma0">Γ0 of the guide (<see cref="Gamma0"/>).</param>
     /// <returns>Y_n^a/G0 for every slot.</returns>
     public static Complex[] ActiveAdmittances(IReadOnlyList<Complex> selfAdmittances, IReadOnlyList<double> couplingFunctions,

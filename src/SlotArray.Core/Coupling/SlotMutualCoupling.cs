@@ -53,7 +53,7 @@ public static class SlotMutualCoupling
     /// <paramref name="maxDegreeOfParallelism"/> threads, with identical results for any thread count.
     /// Cost ∝ N(N − 1)/2 closed-form pair evaluations.
     /// </summary>
-    /// <param name="slots">The slots; no two may overlap (collinear slots closer than l_m + l_n).</param>
+    /// <param name="slots">The slots; no two may overlap in the wall (offsets closer than w and centres closer than l_m + l_n).</param>
     /// <param name="width">Slot width w (the same for all slots); sets the equivalent radius w/4 of the diagonal.</param>
     /// <param name="frequency">Frequency; the exterior is free space.</param>
     /// <param name="maxDegreeOfParallelism">Threads to use, ≥ 1. Default 2.</param>
@@ -77,7 +77,7 @@ public static class SlotMutualCoupling
             x[i] = k * p.Offset.Meters;
             h[i] = k * p.HalfLength.Meters;
         }
-        CheckNoOverlap(slots, x, z, h);
+        CheckNoOverlap(slots, x, z, h, k * width.Meters);
 
         double kr = k * EquivalentRadius(width).Meters;
         var values = new Complex[n * n];
@@ -110,9 +110,10 @@ public static class SlotMutualCoupling
         }
     }
 
-    private static void CheckNoOverlap(IReadOnlyList<LongitudinalSlotPlacement> slots, double[] x, double[] z, double[] h)
+    /// <summary>Slots whose rectangles (length 2l, width w) intersect in the wall are rejected, naming both.</summary>
+    private static void CheckNoOverlap(IReadOnlyList<LongitudinalSlotPlacement> slots, double[] x, double[] z, double[] h, double kw)
     {
-        // Only slots on (nearly) the same line can overlap; sorting by position keeps this O(N log N).
+        // Sorting by position and stopping at the longest possible reach keeps this near O(N log N).
         var order = Enumerable.Range(0, slots.Count).OrderBy(i => z[i]).ToArray();
         double hMax = h.Length == 0 ? 0 : h.Max();
         for (int a = 0; a + 1 < order.Length; a++)
@@ -121,10 +122,11 @@ public static class SlotMutualCoupling
             for (int b = a + 1; b < order.Length && z[order[b]] - z[i] < h[i] + hMax; b++)
             {
                 int j = order[b];
-                if (Math.Abs(x[i] - x[j]) < 1e-9 && z[j] - z[i] < h[i] + h[j] - 1e-12 * (h[i] + h[j]))
+                if (Math.Abs(x[i] - x[j]) < kw * (1 - 1e-12) && z[j] - z[i] < h[i] + h[j] - 1e-12 * (h[i] + h[j]))
                     throw new ArgumentException(
-                        $"slots {i + 1} and {j + 1} overlap: both at offset {slots[i].Offset}, centres {slots[i].Position} and " +
-                        $"{slots[j].Position} are closer than the sum of their half lengths; move them apart or change an offset",
+                        $"slots {i + 1} and {j + 1} overlap in the wall: offsets {slots[i].Offset} and {slots[j].Offset} are closer " +
+                        $"than the slot width, and centres {slots[i].Position} and {slots[j].Position} are closer than the sum of " +
+                        "their half lengths; move them apart along the guide or change an offset",
                         nameof(slots));
             }
         }

@@ -96,4 +96,19 @@ public class SlotMutualCouplingTests
         var e = Assert.Throws<ArgumentException>(() => SlotMutualCoupling.EquivalentDipoleImpedances(slots, Width, F0));
         Assert.Contains("slots 1 and 3", e.Message);
     }
+
+    [Fact]
+    public void Side_by_side_slots_that_do_not_touch_are_accepted()
+    {
+        // Offsets ±2 mm at the same z: 4 mm apart laterally, more than the 1.5875 mm width, so the slots do not intersect.
+        var slots = new[]
+        {
+            new LongitudinalSlotPlacement(Length.Zero, Length.FromMillimeters(2), Length.FromMillimeters(7.3)),
+            new LongitudinalSlotPlacement(Length.Zero, Length.FromMillimeters(-2), Length.FromMillimeters(7.3)),
+        };
+        var z = SlotMutualCoupling.EquivalentDipoleImpedances(slots, Width, F0);
+        var expected = DipoleMutualImpedance.Mutual(Length.FromMillimeters(4), Length.Zero, Length.FromMillimeters(7.3), Length.FromMillimeters(7.3), F0);
+        Check.Absolute(expected.Real, z[0, 1].Real, 1e-12, "d = 2|x| for opposite offsets (physics-reference §4.3)");
+        Check.Absolute(expected.Imaginary, z[0, 1].Imaginary, 1e-12, "d = 2|x| for opposite offsets (physics-reference §4.3)");
+    }
 }
