@@ -22,8 +22,8 @@ public class CosineCurrentMutualImpedanceTests
         Check.Absolute(r, z.Real, 0.006, "physics-reference §4.3 [N] tables");
         Check.Absolute(x, z.Imaginary, 0.006, "physics-reference §4.3 [N] tables");
         var closed = DipoleMutualImpedance.MutualElectrical(K * d, K * s, K * 0.25, K * 0.25);
-        Check.Absolute(closed.Real, z.Real, 1e-7 * closed.Magnitude, "induced-EMF closed form (cos(πz/2h) = sin(k(h − |z|)) at kh = π/2)");
-        Check.Absolute(closed.Imaginary, z.Imaginary, 1e-7 * closed.Magnitude, "induced-EMF closed form");
+        Check.Absolute(closed.Real, z.Real, 1e-12 * closed.Magnitude, "induced-EMF closed form (cos(πz/2h) = sin(k(h − |z|)) at kh = π/2)");
+        Check.Absolute(closed.Imaginary, z.Imaginary, 1e-12 * closed.Magnitude, "induced-EMF closed form");
     }
 
     [Fact]
