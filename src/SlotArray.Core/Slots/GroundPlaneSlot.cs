@@ -1,3 +1,4 @@
+using SlotArray.Core.Coupling;
 using System.Numerics;
 using MathNet.Numerics.RootFinding;
 using SlotArray.Core.Quantities;
@@ -51,14 +52,14 @@ public static class GroundPlaneSlot
     /// <summary>Z_m of Balanis (8-60a/b) for kL and kρ²/L, η = η0 (Ω).</summary>
     private static Complex DipoleImpedanceAtMaximum(double kl, double kRho2OverL)
     {
-        double g = GroundPlaneSlotMath.EulerGamma, s = Math.Sin(kl), c = Math.Cos(kl);
-        double si1 = GroundPlaneSlotMath.Si(kl), si2 = GroundPlaneSlotMath.Si(2 * kl);
-        double ci1 = GroundPlaneSlotMath.Ci(kl), ci2 = GroundPlaneSlotMath.Ci(2 * kl);
+        double g = SineCosineIntegrals.EulerGamma, s = Math.Sin(kl), c = Math.Cos(kl);
+        double si1 = SineCosineIntegrals.Si(kl), si2 = SineCosineIntegrals.Si(2 * kl);
+        double ci1 = SineCosineIntegrals.Ci(kl), ci2 = SineCosineIntegrals.Ci(2 * kl);
         double eta = PhysicalConstants.Eta0;
         double r = eta / (2 * Math.PI) * (g + Math.Log(kl) - ci1 + 0.5 * s * (si2 - 2 * si1)
             + 0.5 * c * (g + Math.Log(kl / 2) + ci2 - 2 * ci1));
         double x = eta / (4 * Math.PI) * (2 * si1 + c * (2 * si1 - si2)
-            - s * (2 * ci1 - ci2 - GroundPlaneSlotMath.Ci(2 * kRho2OverL)));
+            - s * (2 * ci1 - ci2 - SineCosineIntegrals.Ci(2 * kRho2OverL)));
         return new Complex(r, x);
     }
 
