@@ -17,6 +17,7 @@ public static class CommandLine
         {
             Verbose,
             GuidesCommand.Build(output, error),
+            SlotCommand.Build(output, error),
         };
         return root;
     }

@@ -139,13 +139,18 @@ public sealed class LongitudinalSlotMomentMethod
                 for (int p = 0; p < nb; p++) { m[q, p] = yin[q, p]; m[nb + q, nb + p] = yex[q, p]; }
                 double al = (q + 1) * Math.PI / length, g2 = al * al - k * k;
                 Complex g = g2 >= 0 ? new Complex(Math.Sqrt(g2), 0) : new Complex(0, Math.Sqrt(-g2));
-                Complex kap = new Complex(0, l / omegaMu0) * g;
-                Complex e1 = Complex.Exp(-g * t), e2 = e1 * e1;
-                Complex coth = (1 + e2) / (1 - e2), csch = 2 * e1 / (1 - e2);
-                m[q, q] += kap * coth;
-                m[nb + q, nb + q] += kap * coth;
-                m[q, nb + q] -= kap * csch;
-                m[nb + q, q] -= kap * csch;
+                Complex kap = new Complex(0, l / omegaMu0), self, mutual;
+                if ((g * t).Magnitude < 1e-8) self = mutual = kap / t; // γ coth(γt), γ csch(γt) → 1/t at the cavity cutoff
+                else
+                {
+                    Complex e1 = Complex.Exp(-g * t), e2 = e1 * e1;
+                    self = kap * g * (1 + e2) / (1 - e2);
+                    mutual = kap * g * 2 * e1 / (1 - e2);
+                }
+                m[q, q] += self;
+                m[nb + q, nb + q] += self;
+                m[q, nb + q] -= mutual;
+                m[nb + q, q] -= mutual;
             }
             v1 = ComplexSolve(m, r)[..nb];
         }

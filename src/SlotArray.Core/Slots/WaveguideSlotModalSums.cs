@@ -209,7 +209,7 @@ internal sealed class WaveguideSlotModalSums
         double z = d2 * b * b;
         if (Math.Abs(z) < 1e-2) full = b * b * (1.0 / 3 - z / 45 + 2 * z * z / 945 - z * z * z / 4725);
         else if (d2 > 0) { double d = Math.Sqrt(d2); full = b / (d * Math.Tanh(d * b)) - 1 / d2; }
-        else { double d = Math.Sqrt(-d2); full = b / (d * Math.Tan(d * b)) + 1 / -d2; }
+        else { double d = Math.Sqrt(-d2); full = -b / (d * Math.Tan(d * b)) + 1 / -d2; } // d = jκ: (b/d) coth(db) = −(b/κ) cot(κb)
         double partial = 0;
         for (int n = 1; n <= _nA; n++) { double kn = n * Math.PI / b; partial += 1 / (d2 + kn * kn); }
         double tail2 = (full - 2 * partial) / b;

@@ -48,10 +48,11 @@ public class LongitudinalSlotMomentMethodTests
         Check.Absolute(b, y.Imaginary, 1.5e-2 * mag, Reg);
     }
 
-    [Fact]
-    public void Accelerated_sum_equals_the_extrapolated_brute_force_sum()
+    [Theory]
+    [InlineData(0.42)] // the slowest-converging of the reference lengths
+    [InlineData(0.55)] // above λ/2: the n = 0 terms of the closed-form sums take their trigonometric branch
+    public void Accelerated_sum_equals_the_extrapolated_brute_force_sum(double lOverLambda)
     {
-        const double lOverLambda = 0.42; // the slowest-converging of the reference lengths
         // The brute-force tail falls as 1/M (M = N), so y∞ ≈ 2 y(2M) − y(M) (Richardson). Reference: the brute-force
         // sum of physics-reference §3.3 item 4, evaluated here; agreement to 4e-4 |y|.
         double len = lOverLambda * Lambda;
@@ -156,6 +157,20 @@ public class LongitudinalSlotMomentMethodTests
                 Check.Absolute(0, (yp.Admittance - ym.Admittance).Magnitude, 1e-12 * yp.Admittance.Magnitude, "symmetry of the guide about its centre line");
                 Assert.True(yp.Admittance.Real >= 0, $"Re y = {yp.Admittance.Real} at x = {x}, L = {r}λ (passivity)");
             }
+    }
+
+    [Theory]
+    [InlineData(0.0)]
+    [InlineData(1.27)]
+    public void Admittance_is_continuous_through_half_a_free_space_wavelength(double wallMm)
+    {
+        // At L = λ/2 the first slot-cavity mode and the n = 0 closed-form terms pass their cutoff; y must not jump.
+        var s = wallMm == 0 ? Thin : Thick;
+        var y1 = s.Solve(2e-3, 0.4999 * Lambda, F.Hertz, null).Admittance;
+        var y2 = s.Solve(2e-3, 0.5 * Lambda, F.Hertz, null).Admittance;
+        var y3 = s.Solve(2e-3, 0.5001 * Lambda, F.Hertz, null).Admittance;
+        Check.Absolute(0, (y3 - y1).Magnitude, 1e-2 * y1.Magnitude, "continuity: the slope alone gives ~0.6 % over 2e-4 λ; the bug this guards against jumped by ~100 %");
+        Check.Absolute(0, (y2 - (y1 + y3) / 2).Magnitude, 1e-5 * y1.Magnitude, "continuity at the cutoff itself");
     }
 
     [Fact]
