@@ -74,6 +74,10 @@ public sealed class ResonantCharacterisation
             $"v{ResonantCharacterisationTable.CurrentFormatVersion};a={g.BroadWall.Meters:R};b={g.NarrowWall.Meters:R};t={g.WallThickness.Meters:R};er={g.RelativePermittivity:R};w={solver.Width.Meters:R};f={f.Hertz:R};n={offsetCount};P={o.BasisFunctions};cut={o.ModeCutFactor:R};nA={o.ClosedFormTerms};q={o.QuadraturePanels}x{o.QuadratureOrder};re={o.EquivalentRadiusFactor:R}");
     }
 
+    /// <summary>Builds the table without the cache (benchmarks).</summary>
+    internal static ResonantCharacterisation ComputeUncached(LongitudinalSlotMomentMethod solver, Frequency f, int n)
+        => Compute(solver, f, n, KeyOf(solver, f, n));
+
     private static ResonantCharacterisation Compute(LongitudinalSlotMomentMethod solver, Frequency f, int n, string key)
     {
         double a = solver.Guide.BroadWall.Meters, xMax = StevensonLongitudinalSlot.MaximumOffset(solver.Guide);
