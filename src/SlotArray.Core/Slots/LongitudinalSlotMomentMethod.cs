@@ -12,13 +12,20 @@ namespace SlotArray.Core.Slots;
 /// <param name="QuadraturePanels">Panels of the exterior τ quadrature. Default 6.</param>
 /// <param name="QuadratureOrder">Gauss–Legendre points per panel. Default 12.</param>
 /// <param name="EquivalentRadiusFactor">r_e/w of the reduced exterior kernel; Butler's 0.25 by default.</param>
+/// <param name="ExtrapolationBasisFunctions">
+/// P2 &gt; P for Richardson extrapolation in the basis count, X∞ = (P2 X(P2) − P X(P))/(P2 − P) applied to the scattered
+/// amplitudes B and C; 0 turns it off. Default 15. It assumes the 1/P convergence found for finite walls (checked to P = 41
+/// at t = 1.27 mm: the (9, 15) and (31, 41) extrapolations agree to 1e-3 |y|, while P = 9 alone is 2–4 % off near resonance).
+/// Thin walls converge more slowly (about P^(−1/2)), which the extrapolation only partly corrects.
+/// </param>
 public sealed record MomentMethodOptions(
     int BasisFunctions = 9,
     double ModeCutFactor = 4,
     int ClosedFormTerms = 24,
     int QuadraturePanels = 6,
     int QuadratureOrder = 12,
-    double EquivalentRadiusFactor = 0.25)
+    double EquivalentRadiusFactor = 0.25,
+    int ExtrapolationBasisFunctions = 15)
 {
     /// <summary>The default, converged options.</summary>
     public static MomentMethodOptions Default { get; } = new();
@@ -57,7 +64,7 @@ public readonly record struct SlotScattering(Complex Admittance, Complex Backwar
 public sealed class LongitudinalSlotMomentMethod
 {
     private const int CacheLimit = 512;
-    private readonly ConcurrentDictionary<(double Offset, double Frequency), WaveguideSlotModalSums> _sums = new();
+    private readonly ConcurrentDictionary<(double Offset, double Frequency, int Basis), WaveguideSlotModalSums> _sums = new();
 
     /// <summary>A solver for slots of the given width in the given guide (its wall thickness is used).</summary>
     public LongitudinalSlotMomentMethod(RectangularWaveguide guide, Length width, MomentMethodOptions? options = null)
@@ -89,6 +96,16 @@ public sealed class LongitudinalSlotMomentMethod
     /// </summary>
     internal SlotScattering Solve(double offset, double length, double frequency, (int M, int N)? bruteForceModes)
     {
+        int p1 = Options.BasisFunctions, p2 = Options.ExtrapolationBasisFunctions;
+        if (p2 <= p1 || bruteForceModes is not null) return SolveAt(offset, length, frequency, p1, bruteForceModes);
+        var s1 = SolveAt(offset, length, frequency, p1, null);
+        var s2 = SolveAt(offset, length, frequency, p2, null);
+        Complex bw = (p2 * s2.Backward - p1 * s1.Backward) / (p2 - p1), fw = (p2 * s2.Forward - p1 * s1.Forward) / (p2 - p1);
+        return new SlotScattering(-2 * bw / (1 + bw), bw, fw);
+    }
+
+    private SlotScattering SolveAt(double offset, double length, double frequency, int nb, (int M, int N)? bruteForceModes)
+    {
         double a = Guide.BroadWall.Meters, b = Guide.NarrowWall.Meters, w = Width.Meters, t = Guide.WallThickness.Meters;
         if (Math.Abs(offset) + w / 2 >= a / 2)
             throw new ArgumentOutOfRangeException(nameof(offset), offset, $"offset {offset * 1e3:0.###} mm puts the slot edge beyond the side wall (a/2 = {a / 2 * 1e3:0.###} mm)");
@@ -96,9 +113,8 @@ public sealed class LongitudinalSlotMomentMethod
             throw new ArgumentOutOfRangeException(nameof(length), length, $"slot length {length * 1e3:0.###} mm must exceed twice the width for the narrow-slot model");
         var f = Frequency.FromHertz(frequency);
         double k = Guide.MediumWavenumber(f), beta = Guide.PhaseConstant(f), omegaMu0 = f.AngularFrequency * PhysicalConstants.Mu0;
-        int nb = Options.BasisFunctions;
         double l = length / 2;
-        var sums = GetSums(offset, frequency, k);
+        var sums = GetSums(offset, frequency, k, nb);
         Complex[,] yin = bruteForceModes is { } bf
             ? sums.BruteForceBlock(l, nb, omegaMu0, bf.M, bf.N)
             : sums.Block(l, nb, omegaMu0);
@@ -161,12 +177,12 @@ public sealed class LongitudinalSlotMomentMethod
         return new SlotScattering(-2 * bw / (1 + bw), bw, fw);
     }
 
-    private WaveguideSlotModalSums GetSums(double offset, double frequency, double k)
+    private WaveguideSlotModalSums GetSums(double offset, double frequency, double k, int basis)
     {
-        var key = (offset, frequency);
+        var key = (offset, frequency, basis);
         if (_sums.TryGetValue(key, out var s)) return s;
         if (_sums.Count > CacheLimit) _sums.Clear();
-        double gammaCut = Options.ModeCutFactor * Options.BasisFunctions * k;
+        double gammaCut = Options.ModeCutFactor * basis * k;
         return _sums.GetOrAdd(key, _ => new WaveguideSlotModalSums(Guide.BroadWall.Meters, Guide.NarrowWall.Meters, k,
             Width.Meters, offset, gammaCut, Options.ClosedFormTerms));
     }

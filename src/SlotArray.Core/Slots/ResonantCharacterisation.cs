@@ -71,7 +71,7 @@ public sealed class ResonantCharacterisation
         var g = solver.Guide;
         var o = solver.Options;
         return string.Create(CultureInfo.InvariantCulture,
-            $"v{ResonantCharacterisationTable.CurrentFormatVersion};a={g.BroadWall.Meters:R};b={g.NarrowWall.Meters:R};t={g.WallThickness.Meters:R};er={g.RelativePermittivity:R};w={solver.Width.Meters:R};f={f.Hertz:R};n={offsetCount};P={o.BasisFunctions};cut={o.ModeCutFactor:R};nA={o.ClosedFormTerms};q={o.QuadraturePanels}x{o.QuadratureOrder};re={o.EquivalentRadiusFactor:R}");
+            $"v{ResonantCharacterisationTable.CurrentFormatVersion};a={g.BroadWall.Meters:R};b={g.NarrowWall.Meters:R};t={g.WallThickness.Meters:R};er={g.RelativePermittivity:R};w={solver.Width.Meters:R};f={f.Hertz:R};n={offsetCount};P={o.BasisFunctions};cut={o.ModeCutFactor:R};nA={o.ClosedFormTerms};q={o.QuadraturePanels}x{o.QuadratureOrder};re={o.EquivalentRadiusFactor:R};P2={o.ExtrapolationBasisFunctions}");
     }
 
     /// <summary>Builds the table without the cache (benchmarks).</summary>

@@ -82,7 +82,7 @@ public class LongitudinalSlotMomentMethodTests
     [InlineData(9, 14.5053)]
     public void Thin_wall_resonant_length_at_higher_basis_counts_matches_the_regression_values(int p, double lengthMm)
     {
-        var s = new LongitudinalSlotMomentMethod(Wr90(0), SlotTestGuides.Width, new MomentMethodOptions(BasisFunctions: p));
+        var s = new LongitudinalSlotMomentMethod(Wr90(0), SlotTestGuides.Width, new MomentMethodOptions(BasisFunctions: p, ExtrapolationBasisFunctions: 0));
         Check.Relative(lengthMm, Resonance(s, 2, out _) * 1e3, 1e-3, "physics-reference §3.2 convergence line [N]");
     }
 
@@ -109,9 +109,22 @@ public class LongitudinalSlotMomentMethodTests
     {
         // Successive changes of L_r shrink (they fall roughly as 1/P for the finite wall); P = 9 is within 0.3 % of P = 15.
         double[] l = [.. new[] { 5, 7, 9, 15 }.Select(p =>
-            Resonance(new LongitudinalSlotMomentMethod(Wr90(1.27), SlotTestGuides.Width, new MomentMethodOptions(BasisFunctions: p)), 2, out _))];
+            Resonance(new LongitudinalSlotMomentMethod(Wr90(1.27), SlotTestGuides.Width, new MomentMethodOptions(BasisFunctions: p, ExtrapolationBasisFunctions: 0)), 2, out _))];
         Assert.True(Math.Abs(l[2] - l[1]) < Math.Abs(l[1] - l[0]), $"L_r(P) = {string.Join(", ", l)}");
         Check.Relative(l[3], l[2], 3e-3, "the same model at P = 15");
+    }
+
+    [Fact]
+    public void Default_basis_extrapolation_agrees_with_the_extrapolation_from_far_larger_basis_counts()
+    {
+        // Richardson in P from (9, 15) (the default) against the same from (31, 41): the same model, 4× the basis.
+        LongitudinalSlotMomentMethod S(int p1, int p2, int panels) => new(Wr90(1.27), SlotTestGuides.Width,
+            new MomentMethodOptions(BasisFunctions: p1, ExtrapolationBasisFunctions: p2, QuadraturePanels: panels));
+        var fine = S(31, 41, 16).Solve(5e-3, 15.2e-3, F.Hertz, null).Admittance;
+        var y = Thick.Solve(5e-3, 15.2e-3, F.Hertz, null).Admittance;
+        var p9 = S(9, 0, 6).Solve(5e-3, 15.2e-3, F.Hertz, null).Admittance;
+        Check.Absolute(0, (y - fine).Magnitude, 1.5e-3 * fine.Magnitude, "(31, 41)-extrapolated moment method");
+        Assert.True((p9 - fine).Magnitude > 10 * (y - fine).Magnitude, "the extrapolation must improve on P = 9 alone");
     }
 
     [Theory]
@@ -130,7 +143,7 @@ public class LongitudinalSlotMomentMethodTests
     [Fact]
     public void Single_basis_function_gives_close_to_stevenson()
     {
-        var s = new LongitudinalSlotMomentMethod(Wr90(0), SlotTestGuides.Width, new MomentMethodOptions(BasisFunctions: 1));
+        var s = new LongitudinalSlotMomentMethod(Wr90(0), SlotTestGuides.Width, new MomentMethodOptions(BasisFunctions: 1, ExtrapolationBasisFunctions: 0));
         Resonance(s, 2, out var y);
         Check.Relative(0.09112, y.Real, 0.03, "physics-reference §3.3 item 7(i): P = 1 reduces to Stevenson's derivation");
     }

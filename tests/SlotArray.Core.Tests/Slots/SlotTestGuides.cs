@@ -15,7 +15,7 @@ internal static class SlotTestGuides
         RectangularWaveguide.FromStandard(WaveguideCatalogue.Find("WR-90")!, Length.FromMillimeters(wallMillimeters), Metal.Copper);
 
     /// <summary>Thin-wall solver at the truncation of physics-reference §3.2 (P = 5).</summary>
-    public static readonly LongitudinalSlotMomentMethod ThinP5 = new(Wr90(0), Width, new MomentMethodOptions(BasisFunctions: 5));
+    public static readonly LongitudinalSlotMomentMethod ThinP5 = new(Wr90(0), Width, new MomentMethodOptions(BasisFunctions: 5, ExtrapolationBasisFunctions: 0));
 
     /// <summary>Thin-wall solver at the default (converged) truncation.</summary>
     public static readonly LongitudinalSlotMomentMethod Thin = new(Wr90(0), Width);
