@@ -6,7 +6,7 @@ using SlotArray.Core.Waveguides;
 namespace SlotArray.Benchmarks;
 
 /// <summary>
-/// Longitudinal-slot moment method (WR-90, 1.27 mm wall, 1.5875 mm slot, 9.375 GHz, default converged truncation P = 9).
+/// Longitudinal-slot moment method (WR-90, 1.27 mm wall, 1.5875 mm slot, 9.375 GHz, default truncation: P = 9 and 15 with Richardson extrapolation).
 /// Targets (issue 4): one finite-wall y(L, x, f) ≤ 2 ms on one core; a 30-offset characterisation with its resonant
 /// searches ≤ 1 s on 2 cores.
 /// </summary>

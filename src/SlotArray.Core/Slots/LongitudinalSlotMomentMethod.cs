@@ -63,7 +63,7 @@ public readonly record struct SlotScattering(Complex Admittance, Complex Backwar
 /// </remarks>
 public sealed class LongitudinalSlotMomentMethod
 {
-    private const int CacheLimit = 512;
+    private const int CacheLimit = 128;
     private readonly ConcurrentDictionary<(double Offset, double Frequency, int Basis), WaveguideSlotModalSums> _sums = new();
 
     /// <summary>A solver for slots of the given width in the given guide (its wall thickness is used).</summary>
