@@ -60,6 +60,12 @@ public readonly record struct SlotScattering(Complex Admittance, Complex Backwar
 /// Y11 − Y12 → 0, which restores (Y^int + Y^ext) V = I. t = 0 uses the thin-wall system directly.</para>
 /// <para>Scattered amplitudes from V1 (physics-reference §3.3 item 5): B = −j (π/(a² b β)) cos(πx_c/a) sinc_1
 /// Σ V_p ∫ f_p e^(−jβz) dz, C the same with e^(+jβz); y = −2B/(1 + B).</para>
+/// <para>Convergence (measured here, WR-90, 9.375 GHz, w = 1.5875 mm, x = 2 mm): the interior sums are converged to
+/// ~3e-5 |y| at Γ = 4Pk and the exterior quadrature to 1e-7 at 6 × 12 points. In the basis count, the 1.27 mm wall's
+/// resonant length falls as ≈ 0.3 mm/P (15.179 mm at P = 9, 15.152 mm at P = 41, limit ≈ 15.145 mm), hence the default
+/// Richardson extrapolation (15.145 mm). With a zero-thickness wall it falls more slowly, about as P^(−1/2): the
+/// thin-wall model with the reduced exterior kernel is not converged in P, and its resonant length carries an
+/// uncertainty of order 1 %.</para>
 /// </remarks>
 public sealed class LongitudinalSlotMomentMethod
 {
