@@ -18,6 +18,7 @@ public static class CommandLine
             Verbose,
             GuidesCommand.Build(output, error),
             CheckCommand.Build(output, error),
+            SlotCommand.Build(output, error),
         };
         return root;
     }
