@@ -61,21 +61,32 @@ internal static class LobeSearch
 
     /// <summary>
     /// Walking from the peak index in direction dir, the angle where the power first falls below
-    /// <paramref name="level"/>, interpolated linearly in dB; NaN if it stays above to the grid end.
+    /// <paramref name="level"/>: the root of the quadratic through the two samples either side of the crossing and
+    /// the one before them (local error O(h³)), or of the chord when no third sample exists; NaN if the power stays
+    /// above the level to the grid end.
     /// </summary>
     public static double Crossing(IReadOnlyList<double> theta, IReadOnlyList<double> p, int peak, int dir, double level)
     {
         int i = peak;
         while (i + dir >= 0 && i + dir < p.Count)
         {
-            int j = i + dir;
+            int j = i + dir, a = i - dir;
             if (p[j] < level)
             {
-                if (p[j] <= 0) // a sample exactly on a null: interpolate in power instead of dB
-                    return theta[i] + (p[i] - level) / (p[i] - p[j]) * (theta[j] - theta[i]);
-                double yi = Db(p[i]), yj = Db(p[j]), yl = Db(level);
-                double t = (yi - yl) / (yi - yj);
-                return theta[i] + t * (theta[j] - theta[i]);
+                double xi = theta[i], xj = theta[j];
+                if (a < 0 || a >= p.Count) return xi + (p[i] - level) / (p[i] - p[j]) * (xj - xi);
+                double xa = theta[a];
+                double Q(double x) =>
+                    p[a] * (x - xi) * (x - xj) / ((xa - xi) * (xa - xj)) +
+                    p[i] * (x - xa) * (x - xj) / ((xi - xa) * (xi - xj)) +
+                    p[j] * (x - xa) * (x - xi) / ((xj - xa) * (xj - xi)) - level;
+                double lo = xi, hi = xj, qlo = Q(lo);
+                for (int it = 0; it < 60; it++)
+                {
+                    double mid = 0.5 * (lo + hi), qm = Q(mid);
+                    if (Math.Sign(qm) == Math.Sign(qlo)) { lo = mid; qlo = qm; } else hi = mid;
+                }
+                return 0.5 * (lo + hi);
             }
             i = j;
         }
