@@ -17,6 +17,7 @@ public static class CommandLine
         {
             Verbose,
             GuidesCommand.Build(output, error),
+            TaperCommand.Build(output, error),
         };
         return root;
     }
