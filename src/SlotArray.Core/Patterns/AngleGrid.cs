@@ -34,10 +34,10 @@ public sealed class AngleGrid
     public static AngleGrid UniformInTheta(double minimum, double maximum, int count)
     {
         Validate(minimum, maximum, count, Math.PI / 2, "θ");
-        var t = new double[count];
-        for (int i = 0; i < count; i++) t[i] = minimum + (maximum - minimum) * i / (count - 1);
-        t[count - 1] = maximum;
-        return new AngleGrid(ImmutableArray.Create(t), ImmutableArray.CreateRange(t.Select(Math.Sin)), false);
+        var t = Spaced(minimum, maximum, count);
+        var u = t.Select(Math.Sin).ToArray();
+        if (minimum == -maximum) for (int i = 0; i < count / 2; i++) u[count - 1 - i] = -u[i];
+        return new AngleGrid(ImmutableArray.Create(t), ImmutableArray.Create(u), false);
     }
 
     /// <summary>The whole front half-space, −90° … +90°, equally spaced in θ.</summary>
@@ -51,15 +51,29 @@ public sealed class AngleGrid
     public static AngleGrid UniformInSine(double minimum, double maximum, int count)
     {
         Validate(minimum, maximum, count, 1, "sin θ");
-        var u = new double[count];
-        for (int i = 0; i < count; i++) u[i] = minimum + (maximum - minimum) * i / (count - 1);
-        u[count - 1] = maximum;
-        return new AngleGrid(ImmutableArray.CreateRange(u.Select(Math.Asin)), ImmutableArray.Create(u), true);
+        var u = Spaced(minimum, maximum, count);
+        var t = u.Select(Math.Asin).ToArray();
+        if (minimum == -maximum) for (int i = 0; i < count / 2; i++) t[count - 1 - i] = -t[i];
+        return new AngleGrid(ImmutableArray.Create(t), ImmutableArray.Create(u), true);
     }
 
     /// <summary>The visible region −1 ≤ sin θ ≤ 1, equally spaced in sin θ.</summary>
     /// <param name="count">Number of points, ≥ 3.</param>
     public static AngleGrid VisibleInSine(int count) => UniformInSine(-1, 1, count);
+
+    /// <summary>Equally spaced values, both ends exact, and exactly mirrored (x[N−1−i] = −x[i]) when minimum = −maximum.</summary>
+    private static double[] Spaced(double minimum, double maximum, int count)
+    {
+        var x = new double[count];
+        for (int i = 0; i < count; i++) x[i] = minimum + (maximum - minimum) * i / (count - 1);
+        x[count - 1] = maximum;
+        if (minimum == -maximum)
+        {
+            for (int i = 0; i < count / 2; i++) x[count - 1 - i] = -x[i];
+            if (count % 2 == 1) x[count / 2] = 0;
+        }
+        return x;
+    }
 
     private static void Validate(double minimum, double maximum, int count, double limit, string what)
     {

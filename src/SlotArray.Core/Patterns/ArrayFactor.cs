@@ -152,7 +152,11 @@ public static class ArrayFactor
         return f;
     }
 
-    /// <summary>Σ a_n exp(j k z_n u) directly; four elements per 256-bit vector with the vector sine/cosine.</summary>
+    /// <summary>
+    /// Σ a_n exp(j k z_n u) directly: four elements per 256-bit vector, two vectors per pass, with the vector
+    /// sine/cosine of <see cref="VectorTrig"/>. Where the grid holds −u as well as u (symmetric grids), both come
+    /// from the same sines and cosines: exp(−jx) = cos x − j sin x.
+    /// </summary>
     private static Complex[] DirectSum(IReadOnlyList<double> z, IReadOnlyList<Complex> a, double k, ReadOnlySpan<double> u)
     {
         int n = a.Count, m = u.Length;
@@ -161,28 +165,34 @@ public static class ArrayFactor
         var ai = new double[n];
         for (int i = 0; i < n; i++) { zr[i] = z[i]; ar[i] = a[i].Real; ai[i] = a[i].Imaginary; }
         var f = new Complex[m];
-        int lanes = Vector256<double>.Count;
-        int nv = Vector256.IsHardwareAccelerated ? n - n % lanes : 0;
-        for (int j = 0; j < m; j++)
+        bool symmetric = true;
+        for (int j = 0; j < m / 2 && symmetric; j++) symmetric = u[j] == -u[m - 1 - j];
+        int upper = symmetric ? (m + 1) / 2 : m;
+        int lanes = Vector256<double>.Count, step = 2 * lanes;
+        int nv = Vector256.IsHardwareAccelerated ? n - n % step : 0;
+        for (int j = m - upper; j < m; j++)
         {
-            double ku = k * u[j];
-            var kv = Vector256.Create(ku);
-            Vector256<double> sr = Vector256<double>.Zero, si = sr;
-            for (int e = 0; e < nv; e += lanes)
+            // Accumulate Σ a·cos and Σ a·sin separately (complex a): AF(±u) = C ± jS with C = Σ a cos, S = Σ a sin.
+            var kv = Vector256.Create(k * u[j]);
+            Vector256<double> cr0 = Vector256<double>.Zero, ci0 = cr0, sr0 = cr0, si0 = cr0, cr1 = cr0, ci1 = cr0, sr1 = cr0, si1 = cr0;
+            for (int e = 0; e < nv; e += step)
             {
-                var (s, c) = Vector256.SinCos(Vector256.Create(zr, e) * kv);
-                var br = Vector256.Create(ar, e); var bi = Vector256.Create(ai, e);
-                sr += br * c - bi * s;
-                si += br * s + bi * c;
+                var (s0, c0) = VectorTrig.SinCos(Vector256.Create(zr, e) * kv);
+                var (s1, c1) = VectorTrig.SinCos(Vector256.Create(zr, e + lanes) * kv);
+                var br0 = Vector256.Create(ar, e); var bi0 = Vector256.Create(ai, e);
+                var br1 = Vector256.Create(ar, e + lanes); var bi1 = Vector256.Create(ai, e + lanes);
+                cr0 += br0 * c0; ci0 += bi0 * c0; sr0 += br0 * s0; si0 += bi0 * s0;
+                cr1 += br1 * c1; ci1 += bi1 * c1; sr1 += br1 * s1; si1 += bi1 * s1;
             }
-            double re = Vector256.Sum(sr), im = Vector256.Sum(si);
+            double cRe = Vector256.Sum(cr0 + cr1), cIm = Vector256.Sum(ci0 + ci1), sRe = Vector256.Sum(sr0 + sr1), sIm = Vector256.Sum(si0 + si1);
             for (int e = nv; e < n; e++)
             {
-                var (s, c) = Math.SinCos(zr[e] * ku);
-                re += ar[e] * c - ai[e] * s;
-                im += ar[e] * s + ai[e] * c;
+                var (s, c) = Math.SinCos(zr[e] * k * u[j]);
+                cRe += ar[e] * c; cIm += ai[e] * c; sRe += ar[e] * s; sIm += ai[e] * s;
             }
-            f[j] = new Complex(re, im);
+            // C + jS with C = cRe + j cIm, S = sRe + j sIm
+            f[j] = new Complex(cRe - sIm, cIm + sRe);
+            if (symmetric) f[m - 1 - j] = new Complex(cRe + sIm, cIm - sRe);
         }
         return f;
     }
