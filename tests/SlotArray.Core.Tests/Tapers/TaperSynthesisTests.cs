@@ -72,6 +72,24 @@ public class TaperSynthesisTests
     }
 
     [Fact]
+    public void Sampled_Taylor_at_small_N_is_warned_when_it_misses_the_level()
+    {
+        // N = 10, 30 dB, n̄ = 4: the sampled taper reaches only about −29.24 dB (measured in NbarGridTests: +0.76 dB).
+        var r = TaperSynthesis.Synthesize(new TaperRequest(TaperType.Taylor, -30, 4, -20, 2, null), 10);
+        var w = Assert.Single(r.Warnings);
+        Assert.Equal("nbar-too-small", w.Code);
+        Assert.Contains("Villeneuve", w.Message);
+    }
+
+    [Fact]
+    public void Villeneuve_with_large_nbar_warns_of_the_edge_rise()
+    {
+        // 20 dB: 4A² = 3.6 (physics-reference §6.2); n̄ = 8 makes the distribution rise toward the ends.
+        var r = TaperSynthesis.Synthesize(new TaperRequest(TaperType.Villeneuve, -20, 8, -20, 2, null), 40);
+        Assert.Contains(r.Warnings, x => x.Code == "nbar-edge-rise");
+    }
+
+    [Fact]
     public void Element_count_is_validated()
     {
         var e = Assert.Throws<ArgumentOutOfRangeException>(() => TaperSynthesis.Synthesize(TaperRequest.Uniform, 1));
