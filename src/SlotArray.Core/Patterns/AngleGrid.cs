@@ -40,6 +40,13 @@ public sealed class AngleGrid
         return new AngleGrid(ImmutableArray.Create(t), ImmutableArray.Create(u), false);
     }
 
+    /// <summary><paramref name="count"/> angles equally spaced in θ from <paramref name="minimum"/> to <paramref name="maximum"/> (inclusive).</summary>
+    /// <param name="minimum">First angle, ≥ −90°.</param>
+    /// <param name="maximum">Last angle, ≤ 90°, &gt; minimum.</param>
+    /// <param name="count">Number of angles, ≥ 3.</param>
+    public static AngleGrid UniformInTheta(Quantities.Angle minimum, Quantities.Angle maximum, int count)
+        => UniformInTheta(minimum.Radians, maximum.Radians, count);
+
     /// <summary>The whole front half-space, −90° … +90°, equally spaced in θ.</summary>
     /// <param name="count">Number of angles, ≥ 3.</param>
     public static AngleGrid HalfSpaceInTheta(int count) => UniformInTheta(-Math.PI / 2, Math.PI / 2, count);

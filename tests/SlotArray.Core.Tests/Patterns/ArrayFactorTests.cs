@@ -81,5 +81,10 @@ public class ArrayFactorTests
         Assert.Contains("one excitation per element", e.Message);
         Assert.Throws<ArgumentOutOfRangeException>(() => ArrayFactor.Compute([0.0], new double[] { 1 }, -1, AngleGrid.VisibleInSine(11)));
         Assert.Throws<ArgumentOutOfRangeException>(() => AngleGrid.UniformInSine(-1.5, 1, 11));
+        Assert.Throws<ArgumentOutOfRangeException>(() => AngleGrid.UniformInTheta(Quantities.Angle.FromDegrees(-30), Quantities.Angle.FromDegrees(95), 11));
+        var g = AngleGrid.UniformInTheta(Quantities.Angle.FromDegrees(-30), Quantities.Angle.FromDegrees(30), 7);
+        Check.Absolute(-Math.PI / 6, g.Theta[0], 1e-15, "degrees → radians");
+        Check.Absolute(0, g.Theta[3], 0, "mirrored grid has an exact zero");
+        Check.Absolute(-g.Sines[1], g.Sines[5], 0, "mirrored grid");
     }
 }
