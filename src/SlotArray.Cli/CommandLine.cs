@@ -19,6 +19,7 @@ public static class CommandLine
             GuidesCommand.Build(output, error),
             CheckCommand.Build(output, error),
             SlotCommand.Build(output, error),
+            TaperCommand.Build(output, error),
         };
         return root;
     }
