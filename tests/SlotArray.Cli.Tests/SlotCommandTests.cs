@@ -77,4 +77,29 @@ public class SlotCommandTests
     [InlineData("1e-3m", 1e-3)]
     public void Length_parser_reads_the_units(string text, double meters)
         => Check.Relative(meters, SlotCommand.ParseLength(text, "--wall").Meters, 1e-12, "unit definitions");
+
+    [Fact]
+    public void Tilt_gives_the_edge_slot_conductance_of_the_closed_form()
+    {
+        var (code, output, _) = Run("slot", "--guide", "WR-90", "--frequency", "9.375GHz", "--tilt", "15deg", "--wall", "1.27mm", "--json");
+        Assert.Equal(ExitCodes.Ok, code);
+        var r = JsonDocument.Parse(output).RootElement;
+        // physics-reference §2.3 [N]: g(15°) = 0.10395 in WR-90 at 9.375 GHz.
+        Check.Relative(0.10395, r.GetProperty("resonant_conductance").GetDouble(), 1e-4, "physics-reference §2.3");
+        Check.Relative(15, r.GetProperty("tilt_deg").GetDouble(), 1e-12, "the input");
+        Assert.True(r.GetProperty("cut_depth_mm").GetDouble() > 1.27, "the cut must go deeper than the wall to open the guide");
+    }
+
+    [Fact]
+    public void Plane_gives_the_babinet_impedance_and_a_feed_offset()
+    {
+        var (code, output, err) = Run("slot", "--plane", "--length", "15mm", "--width", "1.5875mm", "--frequency", "9.375GHz", "--target", "50ohm");
+        Assert.Equal(ExitCodes.Ok, code);
+        Assert.Contains("ohm", output + err, StringComparison.OrdinalIgnoreCase);
+        Assert.Equal(ExitCodes.BadInput, Run("slot", "--plane", "--width", "1.5875mm", "--frequency", "9.375GHz").Code);
+    }
+
+    [Fact]
+    public void Offset_and_tilt_together_are_bad_input()
+        => Assert.Equal(ExitCodes.BadInput, Run("slot", "--guide", "WR-90", "--frequency", "9.375GHz", "--offset", "2mm", "--tilt", "10deg").Code);
 }

@@ -5,16 +5,18 @@ using SlotArray.Core;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
 using SlotArray.Core.Waveguides;
+using SlotArray.Spec;
 
 namespace SlotArray.Cli.Commands;
 
 /// <summary>
-/// <c>slotarray slot --guide G --frequency F --offset X [--wall t] [--width w] [--table] [--json]</c>: one longitudinal
-/// broad-wall slot — moment-method resonant length and conductance beside Stevenson's, and y = Y/G0 against length.
+/// <c>slotarray slot --guide G --frequency F (--offset X | --tilt A) [--wall t] [--width w] [--table] [--json]</c> and
+/// <c>slotarray slot --plane --length L --width W --frequency F [--target 50ohm]</c>: one slot — resonant length and
+/// conductance (moment method beside Stevenson for a broad-wall slot), and y = Y/G0 against length.
 /// </summary>
 /// <remarks>
-/// The action picks the slot kind from the coupling option given (today only <c>--offset</c>); further kinds
-/// (<c>--tilt</c>, <c>--plane</c>) add an option in <see cref="Build"/> and a branch in <c>Run</c>.
+/// The action picks the slot kind from the coupling option given: <c>--offset</c> (longitudinal broad-wall slot),
+/// <c>--tilt</c> (edge slot, <see cref="SlotEdgeReport"/>) or <c>--plane</c> (slot in a ground plane, <see cref="SlotPlaneReport"/>).
 /// Quantities take units, with or without a space: <c>9.375GHz</c>, <c>9.375 GHz</c>, <c>2mm</c>, <c>0.05 in</c>.
 /// </remarks>
 public static class SlotCommand
@@ -29,22 +31,36 @@ public static class SlotCommand
         var b = new Option<string?>("--b") { Description = "Inside narrow-wall height b, with unit" };
         var freq = new Option<string>("--frequency") { Description = "Frequency, with unit (e.g. 9.375GHz)", Required = true };
         var offset = new Option<string?>("--offset") { Description = "Longitudinal slot: offset of the slot centre line from the guide centre line, with unit" };
-        var wall = new Option<string>("--wall") { Description = "Wall thickness where the slot is cut", DefaultValueFactory = _ => "1.27mm" };
+        var tilt = new Option<string?>("--tilt") { Description = "Edge slot in the narrow wall: tilt from the perpendicular to the guide axis, with unit (e.g. 15deg)" };
+        var plane = new Option<bool>("--plane") { Description = "A single slot in an infinite ground plane (Babinet), with --length, --width and --frequency" };
+        var length = new Option<string?>("--length") { Description = "--plane: slot length, with unit" };
+        var target = new Option<string>("--target") { Description = "--plane: input resistance to feed at, e.g. 50ohm", DefaultValueFactory = _ => "50ohm" };
+        var wall = new Option<string>("--wall") { Description = "Wall thickness where the slot is cut (0 = thin-wall model)", DefaultValueFactory = _ => "0mm" };
         var width = new Option<string>("--width") { Description = "Slot width", DefaultValueFactory = _ => "1.5875mm" };
         var table = new Option<bool>("--table") { Description = "Also tabulate g_r and L_r over the usable offsets (0 < x <= a/4)" };
         var json = new Option<bool>("--json") { Description = "Print one JSON document on stdout" };
         var cmd = new Command("slot", "One slot: resonant length and conductance (moment method beside Stevenson) and y = Y/G0 against length")
         {
-            guide, a, b, freq, offset, wall, width, table, json,
+            guide, a, b, freq, offset, tilt, plane, length, target, wall, width, table, json,
         };
         cmd.SetAction(pr =>
         {
+            if (pr.GetValue(plane))
+            {
+                if (pr.GetValue(length) is not { } len) throw new UserInputException("slot --plane needs --length L (e.g. 15mm)");
+                return SlotPlaneReport.Run(ParseLength(len, "--length"), ParseLength(pr.GetValue(width)!, "--width"),
+                    ParseFrequency(pr.GetValue(freq)!, "--frequency"), ParseResistance(pr.GetValue(target)!), pr.GetValue(json), output, error);
+            }
             var g = ResolveGuide(pr.GetValue(guide), pr.GetValue(a), pr.GetValue(b), ParseLength(pr.GetValue(wall)!, "--wall"));
             var f = ParseFrequency(pr.GetValue(freq)!, "--frequency");
             var w = ParseLength(pr.GetValue(width)!, "--width");
+            if (pr.GetValue(offset) is not null && pr.GetValue(tilt) is not null)
+                throw new UserInputException("slot: give --offset (broad-wall slot) or --tilt (edge slot), not both");
             if (pr.GetValue(offset) is { } x)
                 return Longitudinal(g, f, ParseLength(x, "--offset"), w, pr.GetValue(table), pr.GetValue(json), output, error);
-            throw new UserInputException("slot: give the coupling of the slot: --offset X for a longitudinal broad-wall slot");
+            if (pr.GetValue(tilt) is { } th)
+                return SlotEdgeReport.Run(g, f, ParseAngle(th, "--tilt"), null, w, pr.GetValue(json), output, error);
+            throw new UserInputException("slot: give the coupling of the slot: --offset X (longitudinal broad-wall slot), --tilt A (edge slot) or --plane");
         });
         return cmd;
     }
@@ -78,6 +94,8 @@ public static class SlotCommand
         var (lr, atRes) = ResonantCharacterisation.FindResonance(model.Solver, x, f);
         double gr = atRes.Admittance.Real, gs = StevensonLongitudinalSlot.Conductance(g, x, f);
         var warnings = new List<DesignWarning>(StevensonLongitudinalSlot.Warnings(g, x, f).Where(w => w.Code != "stevenson-thin-wall"));
+        if (g.WallThickness.Meters == 0)
+            warnings.Add(new DesignWarning("slot-thin-wall", "wall thickness 0 (thin-wall model, about 1 % uncertain in resonant length): give --wall for the tube's real wall, which lengthens the resonant slot"));
         if (Math.Abs(x) > model.MaximumCoupling)
             warnings.Add(new DesignWarning("slot-offset-range", FormattableString.Invariant($"offset {Math.Abs(x) * 1e3:0.###} mm is beyond the usable a/4 = {model.MaximumCoupling * 1e3:0.###} mm")));
         if (atRes.ShuntAsymmetry > MomentMethodSlotModel.ShuntAsymmetryLimit)
@@ -148,43 +166,23 @@ public static class SlotCommand
 
     /// <summary>A length with its unit (m, cm, mm, um, in, mil), space optional. Bad input throws <see cref="UserInputException"/>.</summary>
     internal static Length ParseLength(string text, string option)
-    {
-        var (v, unit) = Split(text, option);
-        double scale = unit switch
-        {
-            "m" => 1, "cm" => 1e-2, "mm" => 1e-3, "um" or "µm" => 1e-6, "in" => Length.MetersPerInch, "mil" => Length.MetersPerInch * 1e-3,
-            _ => throw new UserInputException($"{option}: unknown length unit '{unit}' in '{text}' (use m, cm, mm, um, in or mil)"),
-        };
-        return Length.FromMeters(v * scale);
-    }
+        => QuantityParser.TryParseLength(text, out var v, out string e) ? v : throw new UserInputException($"{option}: {e}");
 
     /// <summary>A frequency with its unit (Hz, kHz, MHz, GHz), space optional.</summary>
     internal static Frequency ParseFrequency(string text, string option)
-    {
-        var (v, unit) = Split(text, option);
-        double scale = unit.ToLowerInvariant() switch
-        {
-            "hz" => 1, "khz" => 1e3, "mhz" => 1e6, "ghz" => 1e9,
-            _ => throw new UserInputException($"{option}: unknown frequency unit '{unit}' in '{text}' (use Hz, kHz, MHz or GHz)"),
-        };
-        if (!(v > 0)) throw new UserInputException($"{option}: the frequency must be positive, got '{text}'");
-        return Frequency.FromHertz(v * scale);
-    }
+        => QuantityParser.TryParseFrequency(text, out var v, out string e) ? v : throw new UserInputException($"{option}: {e}");
 
-    private static (double Value, string Unit) Split(string text, string option)
+    /// <summary>An angle with its unit (deg, rad), space optional.</summary>
+    internal static Angle ParseAngle(string text, string option)
+        => QuantityParser.TryParseAngle(text, out var v, out string e) ? v : throw new UserInputException($"{option}: {e}");
+
+    /// <summary>A resistance such as 50ohm, 50 ohm or 50 Ω.</summary>
+    internal static double ParseResistance(string text)
     {
         string s = text.Trim();
-        int i = 0;
-        while (i < s.Length && (char.IsDigit(s[i]) || s[i] is '.' or '-' or '+' or 'e' or 'E'))
-        {
-            // an 'e' starts an exponent only when a digit or sign follows
-            if (s[i] is 'e' or 'E' && !(i + 1 < s.Length && (char.IsDigit(s[i + 1]) || s[i + 1] is '-' or '+'))) break;
-            i++;
-        }
-        string num = s[..i], unit = s[i..].Trim();
-        if (unit.Length == 0) throw new UserInputException($"{option}: '{text}' needs a unit (e.g. 2mm, 9.375GHz)");
-        if (!double.TryParse(num, NumberStyles.Float, Ci, out double v) || !double.IsFinite(v))
-            throw new UserInputException($"{option}: '{text}' is not a number with a unit");
-        return (v, unit);
+        foreach (var unit in new[] { "ohms", "ohm", "Ω" })
+            if (s.EndsWith(unit, StringComparison.OrdinalIgnoreCase)) { s = s[..^unit.Length].Trim(); break; }
+        return double.TryParse(s, NumberStyles.Float, Ci, out double r) && double.IsFinite(r) && r > 0
+            ? r : throw new UserInputException($"--target: '{text}' needs a positive resistance such as '50ohm'");
     }
 }
