@@ -17,6 +17,9 @@ public static class CommandLine
         {
             Verbose,
             GuidesCommand.Build(output, error),
+            CheckCommand.Build(output, error),
+            SlotCommand.Build(output, error),
+            TaperCommand.Build(output, error),
         };
         return root;
     }

@@ -32,6 +32,23 @@ public static class PlotExport
             "svg" => new SkiaSvg { Width = width, Height = height },
             _ => throw new ArgumentException($"unsupported plot format '{format}': use png or svg", nameof(format)),
         };
+        if (exporter is SkiaSvg)
+        {
+            // The Skia SVG canvas numbers its clip paths (cl_ plus a hex number) from a process-wide counter, so the same plot written twice
+            // in one process differed; renumber them in order of appearance to make the file deterministic.
+            using var buffer = new MemoryStream();
+            exporter.Export(model, buffer);
+            string svg = System.Text.Encoding.UTF8.GetString(buffer.ToArray());
+            var ids = new Dictionary<string, string>(StringComparer.Ordinal);
+            svg = System.Text.RegularExpressions.Regex.Replace(svg, @"\bcl_[0-9a-fA-F]+\b", m =>
+            {
+                if (!ids.TryGetValue(m.Value, out string? id)) ids[m.Value] = id = "cl_" + (ids.Count + 1).ToString(System.Globalization.CultureInfo.InvariantCulture);
+                return id;
+            });
+            byte[] bytes = new System.Text.UTF8Encoding(false).GetBytes(svg);
+            stream.Write(bytes, 0, bytes.Length);
+            return;
+        }
         exporter.Export(model, stream);
     }
 

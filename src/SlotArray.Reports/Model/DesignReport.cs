@@ -1,0 +1,250 @@
+namespace SlotArray.Reports.Model;
+
+/// <summary>
+/// Everything the output writers print about one designed array: a plain, immutable mirror of
+/// <c>design.json</c> in SI units (m, Hz; angles in degrees and levels in dB where the name says so).
+/// Conductances are normalised to the TE10 characteristic admittance G0 of the guide (g = G/G0).
+/// Built from the Core results by an adapter; the writers read nothing else.
+/// </summary>
+public sealed record DesignReport
+{
+    /// <summary>Array name, used in titles and file names.</summary>
+    public required string Name { get; init; }
+
+    /// <summary>Design frequency, Hz; &gt; 0.</summary>
+    public required double FrequencyHz { get; init; }
+
+    /// <summary>Lower edge of the analysis band, Hz; ≤ <see cref="FrequencyHz"/>.</summary>
+    public required double BandLowHz { get; init; }
+
+    /// <summary>Upper edge of the analysis band, Hz; ≥ <see cref="FrequencyHz"/>.</summary>
+    public required double BandHighHz { get; init; }
+
+    /// <summary>The guide the slots are cut in.</summary>
+    public required GuideReport Guide { get; init; }
+
+    /// <summary>The slots, in index order (index 1 first).</summary>
+    public required IReadOnlyList<SlotReport> Slots { get; init; }
+
+    /// <summary>How the array is terminated beyond the last slot.</summary>
+    public required TerminationReport Termination { get; init; }
+
+    /// <summary>Far-field figures and the pattern cut at the design frequency.</summary>
+    public required PatternReport Pattern { get; init; }
+
+    /// <summary>Input match at the design frequency and the matched bandwidths.</summary>
+    public required MatchReport Match { get; init; }
+
+    /// <summary>Figures at each frequency of the band, in increasing frequency.</summary>
+    public required IReadOnlyList<SweepPoint> Sweep { get; init; }
+
+    /// <summary>What the user asked for, in words, for the report's inputs section.</summary>
+    public required InputsSummary Inputs { get; init; }
+
+    /// <summary>Validity limits and other warnings, one sentence each; may be empty.</summary>
+    public IReadOnlyList<string> Warnings { get; init; } = [];
+
+    /// <summary>Safety cautions, one paragraph each; when empty the summary prints the standard caution.</summary>
+    public IReadOnlyList<string> Cautions { get; init; } = [];
+
+    /// <summary>One pass/fail result per requirement of the spec; may be empty.</summary>
+    public IReadOnlyList<RequirementResult> Requirements { get; init; } = [];
+
+    /// <summary>Optional summary lines of a tolerance (Monte Carlo) study; empty when none was run.</summary>
+    public IReadOnlyList<string> Tolerance { get; init; } = [];
+}
+
+/// <summary>The waveguide: inside dimensions, wall, metal and the TE10 figures at the design frequency.</summary>
+public sealed record GuideReport
+{
+    /// <summary>Standard designation (e.g. "WR-90") or a description of a custom tube.</summary>
+    public required string Designation { get; init; }
+
+    /// <summary>Broad-wall inside width a, m; &gt; 0.</summary>
+    public required double A { get; init; }
+
+    /// <summary>Narrow-wall inside height b, m; &gt; 0.</summary>
+    public required double B { get; init; }
+
+    /// <summary>Wall thickness where the slots are cut, m; &gt; 0.</summary>
+    public required double Wall { get; init; }
+
+    /// <summary>Metal name (e.g. "aluminium") or its conductivity in words.</summary>
+    public required string Metal { get; init; }
+
+    /// <summary>TE10 guide wavelength at the design frequency, m.</summary>
+    public required double GuideWavelength { get; init; }
+
+    /// <summary>TE10 wave impedance at the design frequency, Ω (the Touchstone reference resistance).</summary>
+    public required double WaveImpedanceOhm { get; init; }
+}
+
+/// <summary>End form of a milled slot.</summary>
+public enum SlotEndForm
+{
+    /// <summary>Semicircular ends of radius width/2, as an end mill of diameter = width cuts them.</summary>
+    Round,
+
+    /// <summary>Square (rectangular) ends: needs EDM, broaching or a punch.</summary>
+    Square,
+}
+
+/// <summary>
+/// One slot. A broad-wall slot has <see cref="Offset"/>; an edge (narrow-wall) slot has <see cref="TiltDeg"/>
+/// and <see cref="CutDepth"/> instead. Exactly one of Offset and TiltDeg is set.
+/// </summary>
+public sealed record SlotReport
+{
+    /// <summary>Slot number, 1-based, in order of increasing distance from the datum or as the designer numbers them.</summary>
+    public required int Index { get; init; }
+
+    /// <summary>Slot centre measured along the guide from the datum, m.</summary>
+    public required double Position { get; init; }
+
+    /// <summary>Signed offset of the slot centre from the broad-wall centreline, m; positive toward the +x side wall; null for edge slots.</summary>
+    public double? Offset { get; init; }
+
+    /// <summary>Signed tilt of an edge slot from the transverse direction, degrees; null for broad-wall slots.</summary>
+    public double? TiltDeg { get; init; }
+
+    /// <summary>Depth of cut of an edge slot into each broad wall, from the outer narrow-wall face, m; null for broad-wall slots.</summary>
+    public double? CutDepth { get; init; }
+
+    /// <summary>Equivalent rectangular (electrical) length, m.</summary>
+    public required double Length { get; init; }
+
+    /// <summary>Overall tip-to-tip length as cut, m (equals <see cref="Length"/> for square ends).</summary>
+    public required double OverallLength { get; init; }
+
+    /// <summary>Slot width (= cutter diameter for round ends), m.</summary>
+    public required double Width { get; init; }
+
+    /// <summary>End form.</summary>
+    public required SlotEndForm EndForm { get; init; }
+
+    /// <summary>Normalised resonant conductance g = G/G0 (series slots: normalised resistance).</summary>
+    public required double Conductance { get; init; }
+
+    /// <summary>Designed (taper) aperture amplitude, linear, any common scale.</summary>
+    public required double TargetAmplitude { get; init; }
+
+    /// <summary>Achieved aperture amplitude from the network analysis, linear, on the same scale as the target.</summary>
+    public required double AchievedAmplitude { get; init; }
+
+    /// <summary>Achieved phase of the slot excitation, degrees.</summary>
+    public required double AchievedPhaseDeg { get; init; }
+}
+
+/// <summary>The termination beyond the last slot.</summary>
+public sealed record TerminationReport
+{
+    /// <summary>Kind, e.g. "short" or "matched-load".</summary>
+    public required string Type { get; init; }
+
+    /// <summary>Distance from the last slot centre to the short's inner face (or to the load), m.</summary>
+    public required double Distance { get; init; }
+}
+
+/// <summary>Pattern figures at the design frequency in the plane containing the guide axis, and the cut itself.</summary>
+public sealed record PatternReport
+{
+    /// <summary>Beam direction from broadside, degrees (positive toward the short/load end).</summary>
+    public required double BeamDeg { get; init; }
+
+    /// <summary>Half-power beamwidth, degrees.</summary>
+    public required double HpbwDeg { get; init; }
+
+    /// <summary>Peak sidelobe relative to the beam peak, dB (negative).</summary>
+    public required double PeakSidelobeDb { get; init; }
+
+    /// <summary>First sidelobe relative to the beam peak, dB (negative).</summary>
+    public required double FirstSidelobeDb { get; init; }
+
+    /// <summary>Directivity, dBi.</summary>
+    public required double DirectivityDbi { get; init; }
+
+    /// <summary>Gain (directivity × radiation efficiency × (1 − |S11|²)), dBi.</summary>
+    public required double GainDbi { get; init; }
+
+    /// <summary>The taper's design sidelobe level, dB (negative); drawn on the pattern plot.</summary>
+    public required double DesignSidelobeDb { get; init; }
+
+    /// <summary>Angles of the pattern cut from broadside, degrees, increasing.</summary>
+    public required IReadOnlyList<double> CutAngleDeg { get; init; }
+
+    /// <summary>Pattern level at each angle of <see cref="CutAngleDeg"/>, dB relative to the beam peak.</summary>
+    public required IReadOnlyList<double> CutLevelDb { get; init; }
+}
+
+/// <summary>Input match.</summary>
+public sealed record MatchReport
+{
+    /// <summary>|S11| at the design frequency, dB.</summary>
+    public required double S11DbAtDesign { get; init; }
+
+    /// <summary>VSWR at the design frequency.</summary>
+    public required double VswrAtDesign { get; init; }
+
+    /// <summary>Width of the band around the design frequency where VSWR ≤ 1.5, Hz (0 if none).</summary>
+    public required double BandwidthVswr15Hz { get; init; }
+
+    /// <summary>Width of the band around the design frequency where VSWR ≤ 2.0, Hz (0 if none).</summary>
+    public required double BandwidthVswr2Hz { get; init; }
+}
+
+/// <summary>Figures at one frequency of the sweep.</summary>
+public sealed record SweepPoint
+{
+    /// <summary>Frequency, Hz.</summary>
+    public required double FrequencyHz { get; init; }
+
+    /// <summary>Input reflection coefficient at the feed port, normalised to the guide's TE10 wave impedance.</summary>
+    public required System.Numerics.Complex S11 { get; init; }
+
+    /// <summary>Beam direction from broadside, degrees.</summary>
+    public required double BeamDeg { get; init; }
+
+    /// <summary>Peak sidelobe relative to the beam peak, dB.</summary>
+    public required double PeakSidelobeDb { get; init; }
+
+    /// <summary>Gain, dBi.</summary>
+    public required double GainDbi { get; init; }
+}
+
+/// <summary>The outcome of one requirement of the spec.</summary>
+public sealed record RequirementResult
+{
+    /// <summary>What is required, e.g. "peak sidelobe over the band".</summary>
+    public required string Description { get; init; }
+
+    /// <summary>The required value in words with unit, e.g. "≤ -26.0 dB".</summary>
+    public required string Required { get; init; }
+
+    /// <summary>The achieved value in words with unit, e.g. "-27.3 dB (worst at 9.30 GHz)".</summary>
+    public required string Achieved { get; init; }
+
+    /// <summary>Whether the requirement is met.</summary>
+    public required bool Passed { get; init; }
+}
+
+/// <summary>The inputs in words, for the report.</summary>
+public sealed record InputsSummary
+{
+    /// <summary>Slot type, e.g. "longitudinal" or "edge".</summary>
+    public required string SlotType { get; init; }
+
+    /// <summary>Feed type, e.g. "standing-wave, end-fed".</summary>
+    public required string FeedType { get; init; }
+
+    /// <summary>Taper in words, e.g. "Taylor, -26 dB, nbar 4".</summary>
+    public required string TaperDescription { get; init; }
+
+    /// <summary>Name of the slot model used, e.g. "moment method (finite wall)".</summary>
+    public required string SlotModelName { get; init; }
+
+    /// <summary>The longitudinal datum in words, e.g. "inner face of end short".</summary>
+    public string DatumDescription { get; init; } = "inner face of end short";
+
+    /// <summary>Machining tolerance (±) printed on every cut-list row, m; ≥ 0.</summary>
+    public required double CutTolerance { get; init; }
+}

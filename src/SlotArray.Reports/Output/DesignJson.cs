@@ -1,0 +1,281 @@
+using System.Numerics;
+using System.Text.Encodings.Web;
+using System.Text.Json;
+using SlotArray.Reports.Model;
+
+namespace SlotArray.Reports;
+
+/// <summary>
+/// <c>design.json</c>: the whole report, SI with unit-suffixed keys (issue 5 names the keys; more are added, none
+/// renamed). Numbers are written in the shortest round-trip form; a non-finite number is written as null.
+/// Keys are written in a fixed order, two-space indent, "\n" line ends, UTF-8 without byte-order mark.
+/// </summary>
+public static class DesignJson
+{
+    /// <summary>Writes the report as JSON to <paramref name="stream"/>.</summary>
+    public static void Write(DesignReport report, Stream stream)
+    {
+        var options = new JsonWriterOptions
+        {
+            Indented = true,
+            NewLine = "\n",
+            Encoder = JavaScriptEncoder.UnsafeRelaxedJsonEscaping,
+        };
+        using (var w = new Utf8JsonWriter(stream, options))
+            WriteReport(w, report);
+        stream.WriteByte((byte)'\n');
+    }
+
+    /// <summary>The JSON text of the report (as <see cref="Write"/> writes it).</summary>
+    public static string ToText(DesignReport report)
+    {
+        using var ms = new MemoryStream();
+        Write(report, ms);
+        return new System.Text.UTF8Encoding(false).GetString(ms.ToArray());
+    }
+
+    private static void WriteReport(Utf8JsonWriter w, DesignReport r)
+    {
+        w.WriteStartObject();
+        w.WriteString("name", r.Name);
+        Num(w, "frequency_hz", r.FrequencyHz);
+        w.WriteString("normalisation", Invariant.Normalisation);
+        w.WriteStartObject("band");
+        Num(w, "low_hz", r.BandLowHz);
+        Num(w, "high_hz", r.BandHighHz);
+        w.WriteEndObject();
+
+        w.WriteStartObject("guide");
+        w.WriteString("designation", r.Guide.Designation);
+        Num(w, "a_m", r.Guide.A);
+        Num(w, "b_m", r.Guide.B);
+        Num(w, "wall_m", r.Guide.Wall);
+        w.WriteString("metal", r.Guide.Metal);
+        Num(w, "guide_wavelength_m", r.Guide.GuideWavelength);
+        Num(w, "wave_impedance_ohm", r.Guide.WaveImpedanceOhm);
+        w.WriteEndObject();
+
+        w.WriteStartArray("slots");
+        foreach (var s in r.Slots)
+        {
+            w.WriteStartObject();
+            w.WriteNumber("index", s.Index);
+            Num(w, "position_m", s.Position);
+            if (s.Offset is { } x) Num(w, "offset_m", x);
+            if (s.TiltDeg is { } t) Num(w, "tilt_deg", t);
+            if (s.CutDepth is { } d) Num(w, "cut_depth_m", d);
+            Num(w, "length_m", s.Length);
+            Num(w, "overall_length_m", s.OverallLength);
+            Num(w, "width_m", s.Width);
+            w.WriteString("end", EndName(s.EndForm));
+            Num(w, "conductance", s.Conductance);
+            Num(w, "target_amplitude", s.TargetAmplitude);
+            Num(w, "achieved_amplitude", s.AchievedAmplitude);
+            Num(w, "achieved_phase_deg", s.AchievedPhaseDeg);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+
+        w.WriteStartObject("termination");
+        w.WriteString("type", r.Termination.Type);
+        Num(w, "distance_m", r.Termination.Distance);
+        w.WriteEndObject();
+
+        var p = r.Pattern;
+        w.WriteStartObject("pattern");
+        Num(w, "beam_deg", p.BeamDeg);
+        Num(w, "hpbw_deg", p.HpbwDeg);
+        Num(w, "peak_sidelobe_db", p.PeakSidelobeDb);
+        Num(w, "first_sidelobe_db", p.FirstSidelobeDb);
+        Num(w, "directivity_dbi", p.DirectivityDbi);
+        Num(w, "gain_dbi", p.GainDbi);
+        Num(w, "design_sidelobe_db", p.DesignSidelobeDb);
+        w.WriteStartObject("cut");
+        NumArray(w, "angle_deg", p.CutAngleDeg);
+        NumArray(w, "level_db", p.CutLevelDb);
+        w.WriteEndObject();
+        w.WriteEndObject();
+
+        w.WriteStartObject("match");
+        Num(w, "s11_db_at_design", r.Match.S11DbAtDesign);
+        Num(w, "vswr_at_design", r.Match.VswrAtDesign);
+        Num(w, "bandwidth_vswr15_hz", r.Match.BandwidthVswr15Hz);
+        Num(w, "bandwidth_vswr2_hz", r.Match.BandwidthVswr2Hz);
+        w.WriteEndObject();
+
+        w.WriteStartArray("sweep");
+        foreach (var q in r.Sweep)
+        {
+            w.WriteStartObject();
+            Num(w, "frequency_hz", q.FrequencyHz);
+            Num(w, "s11_re", q.S11.Real);
+            Num(w, "s11_im", q.S11.Imaginary);
+            Num(w, "beam_deg", q.BeamDeg);
+            Num(w, "peak_sidelobe_db", q.PeakSidelobeDb);
+            Num(w, "gain_dbi", q.GainDbi);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+
+        var i = r.Inputs;
+        w.WriteStartObject("inputs");
+        w.WriteString("slot_type", i.SlotType);
+        w.WriteString("feed_type", i.FeedType);
+        w.WriteString("taper", i.TaperDescription);
+        w.WriteString("slot_model", i.SlotModelName);
+        w.WriteString("datum", i.DatumDescription);
+        Num(w, "cut_tolerance_m", i.CutTolerance);
+        w.WriteEndObject();
+
+        w.WriteStartArray("requirements");
+        foreach (var q in r.Requirements)
+        {
+            w.WriteStartObject();
+            w.WriteString("description", q.Description);
+            w.WriteString("required", q.Required);
+            w.WriteString("achieved", q.Achieved);
+            w.WriteBoolean("pass", q.Passed);
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+
+        Strings(w, "warnings", r.Warnings);
+        Strings(w, "cautions", r.Cautions);
+        Strings(w, "tolerance", r.Tolerance);
+        w.WriteEndObject();
+    }
+
+    private static void Num(Utf8JsonWriter w, string key, double v)
+    {
+        if (double.IsFinite(v)) w.WriteNumber(key, v);
+        else w.WriteNull(key);
+    }
+
+    private static void NumArray(Utf8JsonWriter w, string key, IReadOnlyList<double> values)
+    {
+        w.WriteStartArray(key);
+        foreach (double v in values)
+        {
+            if (double.IsFinite(v)) w.WriteNumberValue(v);
+            else w.WriteNullValue();
+        }
+        w.WriteEndArray();
+    }
+
+    private static void Strings(Utf8JsonWriter w, string key, IReadOnlyList<string> values)
+    {
+        w.WriteStartArray(key);
+        foreach (string v in values) w.WriteStringValue(v);
+        w.WriteEndArray();
+    }
+
+    private static string EndName(SlotEndForm e) => e == SlotEndForm.Round ? "round" : "square";
+
+    /// <summary>Reads a report written by <see cref="Write"/> (round trip); a null number reads back as NaN.</summary>
+    /// <exception cref="JsonException">The text is not JSON or lacks a key the writer always writes.</exception>
+    public static DesignReport Read(Stream stream)
+    {
+        using var doc = JsonDocument.Parse(stream);
+        var root = doc.RootElement;
+        var g = root.GetProperty("guide");
+        var p = root.GetProperty("pattern");
+        var m = root.GetProperty("match");
+        var t = root.GetProperty("termination");
+        var inp = root.GetProperty("inputs");
+        var band = root.GetProperty("band");
+        return new DesignReport
+        {
+            Name = Str(root, "name"),
+            FrequencyHz = D(root, "frequency_hz"),
+            BandLowHz = D(band, "low_hz"),
+            BandHighHz = D(band, "high_hz"),
+            Guide = new GuideReport
+            {
+                Designation = Str(g, "designation"),
+                A = D(g, "a_m"),
+                B = D(g, "b_m"),
+                Wall = D(g, "wall_m"),
+                Metal = Str(g, "metal"),
+                GuideWavelength = D(g, "guide_wavelength_m"),
+                WaveImpedanceOhm = D(g, "wave_impedance_ohm"),
+            },
+            Slots = [.. root.GetProperty("slots").EnumerateArray().Select(s => new SlotReport
+            {
+                Index = s.GetProperty("index").GetInt32(),
+                Position = D(s, "position_m"),
+                Offset = OptD(s, "offset_m"),
+                TiltDeg = OptD(s, "tilt_deg"),
+                CutDepth = OptD(s, "cut_depth_m"),
+                Length = D(s, "length_m"),
+                OverallLength = D(s, "overall_length_m"),
+                Width = D(s, "width_m"),
+                EndForm = Str(s, "end") == "round" ? SlotEndForm.Round : SlotEndForm.Square,
+                Conductance = D(s, "conductance"),
+                TargetAmplitude = D(s, "target_amplitude"),
+                AchievedAmplitude = D(s, "achieved_amplitude"),
+                AchievedPhaseDeg = D(s, "achieved_phase_deg"),
+            })],
+            Termination = new TerminationReport { Type = Str(t, "type"), Distance = D(t, "distance_m") },
+            Pattern = new PatternReport
+            {
+                BeamDeg = D(p, "beam_deg"),
+                HpbwDeg = D(p, "hpbw_deg"),
+                PeakSidelobeDb = D(p, "peak_sidelobe_db"),
+                FirstSidelobeDb = D(p, "first_sidelobe_db"),
+                DirectivityDbi = D(p, "directivity_dbi"),
+                GainDbi = D(p, "gain_dbi"),
+                DesignSidelobeDb = D(p, "design_sidelobe_db"),
+                CutAngleDeg = Doubles(p.GetProperty("cut").GetProperty("angle_deg")),
+                CutLevelDb = Doubles(p.GetProperty("cut").GetProperty("level_db")),
+            },
+            Match = new MatchReport
+            {
+                S11DbAtDesign = D(m, "s11_db_at_design"),
+                VswrAtDesign = D(m, "vswr_at_design"),
+                BandwidthVswr15Hz = D(m, "bandwidth_vswr15_hz"),
+                BandwidthVswr2Hz = D(m, "bandwidth_vswr2_hz"),
+            },
+            Sweep = [.. root.GetProperty("sweep").EnumerateArray().Select(q => new SweepPoint
+            {
+                FrequencyHz = D(q, "frequency_hz"),
+                S11 = new Complex(D(q, "s11_re"), D(q, "s11_im")),
+                BeamDeg = D(q, "beam_deg"),
+                PeakSidelobeDb = D(q, "peak_sidelobe_db"),
+                GainDbi = D(q, "gain_dbi"),
+            })],
+            Inputs = new InputsSummary
+            {
+                SlotType = Str(inp, "slot_type"),
+                FeedType = Str(inp, "feed_type"),
+                TaperDescription = Str(inp, "taper"),
+                SlotModelName = Str(inp, "slot_model"),
+                DatumDescription = Str(inp, "datum"),
+                CutTolerance = D(inp, "cut_tolerance_m"),
+            },
+            Requirements = [.. root.GetProperty("requirements").EnumerateArray().Select(q => new RequirementResult
+            {
+                Description = Str(q, "description"),
+                Required = Str(q, "required"),
+                Achieved = Str(q, "achieved"),
+                Passed = q.GetProperty("pass").GetBoolean(),
+            })],
+            Warnings = StringList(root, "warnings"),
+            Cautions = StringList(root, "cautions"),
+            Tolerance = StringList(root, "tolerance"),
+        };
+    }
+
+    private static string Str(JsonElement e, string key) => e.GetProperty(key).GetString()
+        ?? throw new JsonException($"design.json: '{key}' is null, expected a string");
+
+    private static double D(JsonElement e, string key) => Value(e.GetProperty(key));
+
+    private static double Value(JsonElement v) => v.ValueKind == JsonValueKind.Null ? double.NaN : v.GetDouble();
+
+    private static double? OptD(JsonElement e, string key) => e.TryGetProperty(key, out var v) ? Value(v) : null;
+
+    private static double[] Doubles(JsonElement array) => [.. array.EnumerateArray().Select(Value)];
+
+    private static string[] StringList(JsonElement e, string key) =>
+        [.. e.GetProperty(key).EnumerateArray().Select(v => v.GetString() ?? "")];
+}

@@ -1,0 +1,97 @@
+using System.Globalization;
+using System.Text;
+using SlotArray.Reports.Model;
+using SlotArray.Reports.Plots;
+
+namespace SlotArray.Reports;
+
+/// <summary>One file of the output folder: its name and the writer that fills it.</summary>
+/// <param name="Name">File name inside the folder, e.g. "design.json".</param>
+/// <param name="Write">Writes the file's bytes for a report to a stream.</param>
+public sealed record OutputFile(string Name, Action<DesignReport, Stream> Write);
+
+/// <summary>
+/// Writes the whole output folder of <c>design</c> (architecture.md, "Output folder of design") atomically at
+/// folder level. Every file is written into a temporary sibling folder; only when all succeeded is that folder moved
+/// into place. Policy: a failed run leaves no new files and keeps an existing older output folder intact; a
+/// successful run replaces an existing output folder whole (no file of an older run survives). To protect a
+/// user's other work, an existing folder is replaced only if it is empty or holds nothing but files of this set;
+/// otherwise the run fails before writing anything, naming the foreign entries.
+/// </summary>
+public static class OutputFolder
+{
+    /// <summary>The files of the output folder, in the order they are written.</summary>
+    public static readonly IReadOnlyList<OutputFile> Files =
+    [
+        new("design.json", DesignJson.Write),
+        new("cutlist.csv", Text(CutListCsv.Write)),
+        new("layout.svg", Text(LayoutSvg.Write)),
+        new("pattern.png", (r, s) => PlotExport.Write(DesignPlots.Pattern(r), s, "png")),
+        new("pattern.svg", (r, s) => PlotExport.Write(DesignPlots.Pattern(r), s, "svg")),
+        new("taper.png", (r, s) => PlotExport.Write(DesignPlots.Taper(r), s, "png")),
+        new("slots.png", (r, s) => PlotExport.Write(DesignPlots.Slots(r), s, "png")),
+        new("sweep.png", (r, s) => PlotExport.Write(DesignPlots.Sweep(r), s, "png")),
+        new("input.s1p", Text(TouchstoneWriter.Write)),
+        new("summary.md", Text(SummaryMarkdown.Write)),
+    ];
+
+    /// <summary>Writes every file of <see cref="Files"/> for <paramref name="report"/> into <paramref name="directory"/>.</summary>
+    /// <exception cref="IOException">The folder holds files that are not outputs of this tool, or a file system operation failed.</exception>
+    public static void WriteAll(DesignReport report, string directory) => WriteAll(report, directory, Files);
+
+    /// <summary>Writes the given files atomically at folder level (see the class remarks); the seam for failure tests.</summary>
+    internal static void WriteAll(DesignReport report, string directory, IReadOnlyList<OutputFile> files)
+    {
+        string target = Path.TrimEndingDirectorySeparator(Path.GetFullPath(directory));
+        string parent = Path.GetDirectoryName(target) ?? throw new IOException($"cannot write the output into the root folder '{target}'; give a sub-folder");
+        string leaf = Path.GetFileName(target);
+        Directory.CreateDirectory(parent);
+        if (Directory.Exists(target))
+        {
+            var known = new HashSet<string>(Files.Select(f => f.Name).Concat(files.Select(f => f.Name)), StringComparer.Ordinal);
+            var foreign = Directory.EnumerateFileSystemEntries(target).Select(Path.GetFileName)
+                .Where(n => !known.Contains(n!)).Order(StringComparer.Ordinal).ToArray();
+            if (foreign.Length > 0)
+                throw new IOException($"output folder '{target}' holds {foreign.Length} entr{(foreign.Length == 1 ? "y" : "ies")} that this tool did not write ({string.Join(", ", foreign.Take(5))}{(foreign.Length > 5 ? ", ..." : "")}); it would replace the folder whole, so give a new or empty folder with -o");
+        }
+
+        string stamp = Environment.ProcessId.ToString(CultureInfo.InvariantCulture) + "-" + Guid.NewGuid().ToString("N")[..8];
+        string temp = Path.Combine(parent, $".{leaf}.tmp-{stamp}");
+        string old = Path.Combine(parent, $".{leaf}.old-{stamp}");
+        Directory.CreateDirectory(temp);
+        try
+        {
+            foreach (var f in files)
+            {
+                using var fs = new FileStream(Path.Combine(temp, f.Name), FileMode.CreateNew, FileAccess.Write, FileShare.None);
+                f.Write(report, fs);
+            }
+            if (Directory.Exists(target))
+            {
+                Directory.Move(target, old);
+                try { Directory.Move(temp, target); }
+                catch
+                {
+                    Directory.Move(old, target); // put the older output back whole
+                    throw;
+                }
+                Directory.Delete(old, recursive: true);
+            }
+            else
+            {
+                Directory.Move(temp, target);
+            }
+        }
+        finally
+        {
+            if (Directory.Exists(temp)) Directory.Delete(temp, recursive: true);
+        }
+    }
+
+    /// <summary>Adapts a text writer to a stream: UTF-8 without byte-order mark, invariant culture.</summary>
+    private static Action<DesignReport, Stream> Text(Action<DesignReport, TextWriter> write) => (r, s) =>
+    {
+        using var w = new StreamWriter(s, new UTF8Encoding(false), 1 << 16, leaveOpen: true);
+        write(r, w);
+    };
+}

@@ -1,0 +1,149 @@
+using System.Numerics;
+using OxyPlot;
+using OxyPlot.Annotations;
+using OxyPlot.Axes;
+using OxyPlot.Legends;
+using OxyPlot.Series;
+using SlotArray.Reports.Model;
+
+namespace SlotArray.Reports.Plots;
+
+/// <summary>
+/// The plots of the <c>design</c> output folder as OxyPlot models (exported by <see cref="PlotExport"/>):
+/// pattern, taper (designed vs achieved), slot dimensions, and the match sweep. Titles carry the array name.
+/// </summary>
+public static class DesignPlots
+{
+    /// <summary>Far-field pattern cut in dB (−60…0 dB) vs angle from broadside, with the design sidelobe level dashed.</summary>
+    public static PlotModel Pattern(DesignReport report)
+    {
+        var m = PlotExport.NewModel($"{report.Name}: far-field pattern at {Invariant.Ghz(report.FrequencyHz)} GHz");
+        var angles = report.Pattern.CutAngleDeg;
+        double lo = angles.Count > 0 ? angles.Min() : -90, hi = angles.Count > 0 ? angles.Max() : 90;
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Bottom, Title = "Angle from broadside (deg)", Minimum = lo, Maximum = hi, MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = OxyColor.FromRgb(225, 225, 225) });
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Left, Title = "Relative level (dB)", Minimum = -60, Maximum = 0, MajorStep = 10, MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = OxyColor.FromRgb(225, 225, 225) });
+        var s = new LineSeries { Title = "pattern", Color = OxyColors.Navy, StrokeThickness = 1.5 };
+        for (int i = 0; i < angles.Count; i++)
+        {
+            double db = report.Pattern.CutLevelDb[i];
+            s.Points.Add(new DataPoint(angles[i], double.IsFinite(db) ? Math.Max(db, -200) : -200));
+        }
+        m.Series.Add(s);
+        m.Annotations.Add(new LineAnnotation
+        {
+            Type = LineAnnotationType.Horizontal,
+            Y = report.Pattern.DesignSidelobeDb,
+            LineStyle = LineStyle.Dash,
+            Color = OxyColors.Firebrick,
+            StrokeThickness = 1.2,
+            Text = $"design sidelobe level {Invariant.Fixed(report.Pattern.DesignSidelobeDb, 1)} dB",
+            TextColor = OxyColors.Firebrick,
+        });
+        return m;
+    }
+
+    /// <summary>
+    /// Aperture amplitude per slot, designed (taper) and achieved, in dB, each normalised to its own peak so the
+    /// shapes compare.
+    /// </summary>
+    public static PlotModel Taper(DesignReport report)
+    {
+        var m = PlotExport.NewModel($"{report.Name}: aperture amplitude per slot");
+        AddLegend(m);
+        m.Axes.Add(SlotAxis(report));
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Left, Title = "Relative amplitude (dB, each curve normalised to its peak)", MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = OxyColor.FromRgb(225, 225, 225) });
+        double tMax = report.Slots.Count > 0 ? report.Slots.Max(s => Math.Abs(s.TargetAmplitude)) : 1;
+        double aMax = report.Slots.Count > 0 ? report.Slots.Max(s => Math.Abs(s.AchievedAmplitude)) : 1;
+        var designed = new LineSeries { Title = "designed (taper)", Color = OxyColors.Navy, MarkerType = MarkerType.Circle, MarkerSize = 4, MarkerFill = OxyColors.Navy };
+        var achieved = new LineSeries { Title = "achieved (network analysis)", Color = OxyColors.DarkOrange, LineStyle = LineStyle.Dash, MarkerType = MarkerType.Square, MarkerSize = 3, MarkerFill = OxyColors.DarkOrange };
+        foreach (var s in report.Slots)
+        {
+            designed.Points.Add(new DataPoint(s.Index, Db20(s.TargetAmplitude / tMax)));
+            achieved.Points.Add(new DataPoint(s.Index, Db20(s.AchievedAmplitude / aMax)));
+        }
+        m.Series.Add(designed);
+        m.Series.Add(achieved);
+        return m;
+    }
+
+    /// <summary>Offset (mm, signed) or tilt (deg) on the left axis and overall length (mm) on the right axis, per slot.</summary>
+    public static PlotModel Slots(DesignReport report)
+    {
+        bool tilt = CutListCsv.UsesTilt(report);
+        var m = PlotExport.NewModel($"{report.Name}: slot {(tilt ? "tilt" : "offset")} and length");
+        AddLegend(m);
+        m.Axes.Add(SlotAxis(report));
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Left, Key = "x", Title = tilt ? "Tilt (deg, signed)" : "Offset from centreline (mm, signed)", MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = OxyColor.FromRgb(225, 225, 225) });
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Right, Key = "l", Title = "Overall length (mm)" });
+        var first = new LineSeries { Title = tilt ? "tilt" : "offset", YAxisKey = "x", Color = OxyColors.Navy, MarkerType = MarkerType.Circle, MarkerSize = 4, MarkerFill = OxyColors.Navy };
+        var length = new LineSeries { Title = "overall length", YAxisKey = "l", Color = OxyColors.DarkGreen, LineStyle = LineStyle.Dash, MarkerType = MarkerType.Diamond, MarkerSize = 4, MarkerFill = OxyColors.DarkGreen };
+        foreach (var s in report.Slots)
+        {
+            first.Points.Add(new DataPoint(s.Index, tilt ? s.TiltDeg!.Value : s.Offset!.Value * 1e3));
+            length.Points.Add(new DataPoint(s.Index, s.OverallLength * 1e3));
+        }
+        m.Series.Add(first);
+        m.Series.Add(length);
+        return m;
+    }
+
+    /// <summary>Return loss (dB, left) and VSWR (right) vs frequency in GHz, analysis band shaded, VSWR 1.5 and 2 drawn.</summary>
+    public static PlotModel Sweep(DesignReport report)
+    {
+        var m = PlotExport.NewModel($"{report.Name}: input match");
+        AddLegend(m);
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Bottom, Title = "Frequency (GHz)", MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = OxyColor.FromRgb(225, 225, 225) });
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Left, Key = "rl", Title = "Return loss (dB)", Minimum = 0 });
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Right, Key = "vswr", Title = "VSWR", Minimum = 1, Maximum = 4 });
+        m.Annotations.Add(new RectangleAnnotation
+        {
+            MinimumX = report.BandLowHz * 1e-9,
+            MaximumX = report.BandHighHz * 1e-9,
+            Fill = OxyColor.FromAColor(40, OxyColors.SteelBlue),
+            Text = "analysis band",
+            TextVerticalAlignment = VerticalAlignment.Top,
+            YAxisKey = "vswr",
+        });
+        foreach (double v in (double[])[1.5, 2.0])
+        {
+            m.Annotations.Add(new LineAnnotation
+            {
+                Type = LineAnnotationType.Horizontal,
+                Y = v,
+                YAxisKey = "vswr",
+                LineStyle = LineStyle.Dash,
+                Color = OxyColors.Gray,
+                Text = $"VSWR {Invariant.Fixed(v, 1)}",
+            });
+        }
+        var rl = new LineSeries { Title = "return loss (dB)", YAxisKey = "rl", Color = OxyColors.Navy, StrokeThickness = 1.5 };
+        var vswr = new LineSeries { Title = "VSWR", YAxisKey = "vswr", Color = OxyColors.Firebrick, StrokeThickness = 1.5 };
+        foreach (var p in report.Sweep)
+        {
+            double mag = Math.Min(Complex.Abs(p.S11), 1 - 1e-12);
+            double f = p.FrequencyHz * 1e-9;
+            rl.Points.Add(new DataPoint(f, -Db20(Math.Max(mag, 1e-6))));
+            vswr.Points.Add(new DataPoint(f, Math.Min((1 + mag) / (1 - mag), 100)));
+        }
+        m.Series.Add(rl);
+        m.Series.Add(vswr);
+        return m;
+    }
+
+    private static double Db20(double ratio) => ratio > 0 ? 20 * Math.Log10(ratio) : -200;
+
+    private static LinearAxis SlotAxis(DesignReport report) => new()
+    {
+        Position = AxisPosition.Bottom,
+        Title = "Slot number",
+        Minimum = 0.5,
+        Maximum = report.Slots.Count + 0.5,
+        MajorStep = Math.Max(1, Math.Ceiling(report.Slots.Count / 16.0)),
+        MinorStep = 1,
+        MajorGridlineStyle = LineStyle.Solid,
+        MajorGridlineColor = OxyColor.FromRgb(225, 225, 225),
+    };
+
+    private static void AddLegend(PlotModel m) =>
+        m.Legends.Add(new Legend { LegendPosition = LegendPosition.BottomCenter, LegendPlacement = LegendPlacement.Outside, LegendOrientation = LegendOrientation.Horizontal });
+}

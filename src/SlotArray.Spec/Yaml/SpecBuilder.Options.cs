@@ -1,0 +1,141 @@
+using SlotArray.Core.Design;
+using SlotArray.Core.Quantities;
+
+namespace SlotArray.Spec.Yaml;
+
+internal sealed partial class SpecBuilder
+{
+    private static readonly string[] ToleranceKeys = ["offset", "length", "position", "width", "guide_width", "wall", "systematic", "trials", "seed"];
+    private static readonly string[] SystematicKeys = ["length", "offset"];
+    private static readonly string[] SigmaKeys = ["sigma"];
+    private static readonly string[] RequirementKeys = ["sidelobes", "cross_polar", "vswr"];
+    private static readonly string[] TransmitterKeys = ["peak_power", "average_power"];
+
+    /// <summary>Default Monte Carlo trials and seed when a tolerance block omits them.</summary>
+    internal const int DefaultTrials = 1000, DefaultSeed = 1;
+    /// <summary>Largest machining tolerance accepted (10 mm): beyond, a unit is surely wrong.</summary>
+    private const double MaxTolerance = 0.01;
+
+    /// <summary>Tolerance block (optional): each error `0.02 mm` (uniform ±) or `{sigma: 0.02 mm}` (normal), absent = none.</summary>
+    private ToleranceRequest? Tolerance(Section root, out bool ok)
+    {
+        ok = true;
+        if (!root.Has("tolerance")) return null;
+        var s = Sub(root, "tolerance", ToleranceKeys, false);
+        if (s is null) { ok = false; return null; }
+        var offset = OneTolerance(s, "offset");
+        var length = OneTolerance(s, "length");
+        var position = OneTolerance(s, "position");
+        var width = OneTolerance(s, "width");
+        var guideWidth = OneTolerance(s, "guide_width");
+        var wall = OneTolerance(s, "wall");
+        double? sysLength = 0, sysOffset = 0;
+        if (s.Has("systematic"))
+        {
+            var sys = Sub(s, "systematic", SystematicKeys, false);
+            if (sys is null) sysLength = null;
+            else
+            {
+                sysLength = sys.Has("length") ? Quantity(sys, "length", QuantityKind.Length, false, "0.01 mm") : 0;
+                sysOffset = sys.Has("offset") ? Quantity(sys, "offset", QuantityKind.Length, false, "0.01 mm") : 0;
+                if (sysLength is not null && !Require(sys, "length", Math.Abs(sysLength.Value) <= MaxTolerance, $"'length' must be within ±10 mm, got {Mm(sysLength.Value)}")) sysLength = null;
+                if (sysOffset is not null && !Require(sys, "offset", Math.Abs(sysOffset.Value) <= MaxTolerance, $"'offset' must be within ±10 mm, got {Mm(sysOffset.Value)}")) sysOffset = null;
+            }
+        }
+        int? trials = s.Has("trials") ? Integer(s, "trials", false, 1, 1_000_000, "2000") : DefaultTrials;
+        int? seed = s.Has("seed") ? Integer(s, "seed", false, 0, int.MaxValue, "7") : DefaultSeed;
+        if (offset is null || length is null || position is null || width is null || guideWidth is null || wall is null
+            || sysLength is null || sysOffset is null || trials is null || seed is null)
+        {
+            ok = false;
+            return null;
+        }
+        return new ToleranceRequest(offset, length, position, width, guideWidth, wall,
+            Length.FromMeters(sysLength.Value), Length.FromMeters(sysOffset.Value), trials.Value, seed.Value);
+    }
+
+    private Tolerance? OneTolerance(Section s, string key)
+    {
+        var node = s[key];
+        if (node is null) return Core.Design.Tolerance.None;
+        Current = node;
+        double? v;
+        ErrorDistribution law;
+        Section? sigma = null;
+        if (node is MappingNode)
+        {
+            sigma = Sub(s, key, SigmaKeys, false);
+            if (sigma is null) return null;
+            v = Quantity(sigma, "sigma", QuantityKind.Length, true, "0.02 mm");
+            law = ErrorDistribution.Normal;
+        }
+        else
+        {
+            v = Quantity(s, key, QuantityKind.Length, false, "0.02 mm");
+            law = ErrorDistribution.Uniform;
+        }
+        if (v is null) return null;
+        if (!(v >= 0 && v <= MaxTolerance))
+        {
+            D.Error((SpecNode?)sigma?["sigma"] ?? node, $"'{key}' tolerance must be between 0 and 10 mm, got {Mm(v.Value)}");
+            return null;
+        }
+        return new Tolerance(Length.FromMeters(v.Value), law);
+    }
+
+    /// <summary>Requirements (optional): sidelobes and cross_polar in dB (negative), vswr &gt; 1 (a number, or '1.5:1').</summary>
+    private Requirements? Requirements(Section root)
+    {
+        if (!root.Has("requirements")) return Core.Design.Requirements.None;
+        var s = Sub(root, "requirements", RequirementKeys, false);
+        if (s is null) return null;
+        bool ok = true;
+        double? sll = null, xpol = null, vswr = null;
+        if (s.Has("sidelobes"))
+        {
+            sll = Quantity(s, "sidelobes", QuantityKind.Decibels, false, "-26 dB");
+            ok &= sll is not null && Require(s, "sidelobes", sll < 0 && sll >= -100, $"'sidelobes' must be a negative level down to -100 dB, got {Num(sll.Value)} dB");
+        }
+        if (s.Has("cross_polar"))
+        {
+            xpol = Quantity(s, "cross_polar", QuantityKind.Decibels, false, "-25 dB");
+            ok &= xpol is not null && Require(s, "cross_polar", xpol < 0 && xpol >= -100, $"'cross_polar' must be a negative level down to -100 dB, got {Num(xpol.Value)} dB");
+        }
+        if (s.Has("vswr"))
+        {
+            var sc = Scalar(s, "vswr", false, "1.5");
+            string text = sc?.Value.Trim() ?? "";
+            if (text.EndsWith(":1", StringComparison.Ordinal)) text = text[..^2];
+            if (sc is not null && QuantityParser.TryParseNumber(text, out double v, out _) && v > 1 && v <= 100) vswr = v;
+            else
+            {
+                if (sc is not null) D.Error(sc, $"'vswr' must be a number above 1 such as '1.5' (or '1.5:1'), got '{sc.Value.Trim()}'");
+                ok = false;
+            }
+        }
+        return ok ? new Requirements(sll, xpol, vswr) : null;
+    }
+
+    /// <summary>Transmitter (optional): peak_power and average_power (W, kW, MW), positive, average ≤ peak.</summary>
+    private TransmitterRequest? Transmitter(Section root, out bool ok)
+    {
+        ok = true;
+        if (!root.Has("transmitter")) return null;
+        var s = Sub(root, "transmitter", TransmitterKeys, false);
+        if (s is null) { ok = false; return null; }
+        double? peak = null, average = null;
+        if (s.Has("peak_power"))
+        {
+            peak = Quantity(s, "peak_power", QuantityKind.Power, false, "25 kW");
+            ok &= peak is not null && Require(s, "peak_power", peak > 0 && peak <= 1e9, $"'peak_power' must be positive and at most 1000 MW, got {Num(peak.Value)} W");
+        }
+        if (s.Has("average_power"))
+        {
+            average = Quantity(s, "average_power", QuantityKind.Power, false, "20 W");
+            ok &= average is not null && Require(s, "average_power", average > 0 && average <= 1e9, $"'average_power' must be positive and at most 1000 MW, got {Num(average.Value)} W");
+        }
+        if (ok && peak is not null && average is not null)
+            ok &= Require(s, "average_power", average <= peak, $"'average_power' {Num(average.Value)} W cannot exceed 'peak_power' {Num(peak.Value)} W");
+        return ok ? new TransmitterRequest(peak, average) : null;
+    }
+}

@@ -1,0 +1,38 @@
+using SlotArray.Core.Coupling;
+using SlotArray.Tests.Shared;
+
+namespace SlotArray.Core.Tests.Coupling;
+
+/// <summary>
+/// Half-cosine-current mutual impedance: at kh = π/2 the half-cosine is the sinusoid, so the result must equal the
+/// induced-EMF closed form and the physics-reference §4.3 tables; reciprocity for unequal lengths.
+/// </summary>
+public class CosineCurrentMutualImpedanceTests
+{
+    private const double K = 2 * Math.PI;   // lengths below in wavelengths
+
+    [Theory]
+    [InlineData(0.50, 0.00, -12.52, -29.91)]
+    [InlineData(0.25, 0.50, 10.63, -12.52)]
+    [InlineData(0.10, 0.70, 4.19, -8.49)]
+    [InlineData(0.00, 0.75, 2.04, -7.97)]
+    public void Half_wave_equals_the_sinusoidal_closed_form_and_the_tables(double d, double s, double r, double x)
+    {
+        var z = CosineCurrentMutualImpedance.MutualElectrical(K * d, K * s, K * 0.25, K * 0.25);
+        Check.Absolute(r, z.Real, 0.006, "physics-reference §4.3 [N] tables");
+        Check.Absolute(x, z.Imaginary, 0.006, "physics-reference §4.3 [N] tables");
+        var closed = DipoleMutualImpedance.MutualElectrical(K * d, K * s, K * 0.25, K * 0.25);
+        Check.Absolute(closed.Real, z.Real, 1e-12 * closed.Magnitude, "induced-EMF closed form (cos(πz/2h) = sin(k(h − |z|)) at kh = π/2)");
+        Check.Absolute(closed.Imaginary, z.Imaginary, 1e-12 * closed.Magnitude, "induced-EMF closed form");
+    }
+
+    [Fact]
+    public void Reciprocity_for_unequal_lengths_and_close_pairs_are_rejected()
+    {
+        var z21 = CosineCurrentMutualImpedance.MutualElectrical(K * 0.12, K * 0.7, K * 0.22, K * 0.24);
+        var z12 = CosineCurrentMutualImpedance.MutualElectrical(K * 0.12, -K * 0.7, K * 0.24, K * 0.22);
+        Check.Absolute(z21.Real, z12.Real, 1e-12 * z21.Magnitude, "reciprocity Z12 = Z21");
+        Check.Absolute(z21.Imaginary, z12.Imaginary, 1e-12 * z21.Magnitude, "reciprocity Z12 = Z21");
+        Assert.Throws<ArgumentOutOfRangeException>(() => CosineCurrentMutualImpedance.MutualElectrical(0, K * 0.5, K * 0.25, K * 0.25));
+    }
+}

@@ -1,0 +1,67 @@
+using System.Globalization;
+
+namespace SlotArray.Reports.Tests;
+
+public class SummaryMarkdownTests
+{
+    private static string Text(Model.DesignReport r)
+    {
+        var w = new StringWriter(CultureInfo.InvariantCulture);
+        SummaryMarkdown.Write(r, w);
+        return w.ToString();
+    }
+
+    [Fact]
+    public void Summary_prints_the_standard_caution_when_the_model_has_none()
+    {
+        string md = Text(ReportFixture.Eight());
+        Assert.Contains("## Cautions", md);
+        Assert.Contains("RF exposure and high transmitter power can hurt; local regulations and licensed practice govern", md);
+    }
+
+    [Fact]
+    public void Summary_prints_the_models_cautions_instead_when_given()
+    {
+        var r = ReportFixture.Eight() with { Cautions = ["Power density on the beam axis falls to 10 W/m² at 12 m.", "Keep clear of the aperture."] };
+        string md = Text(r);
+        Assert.Contains("Power density on the beam axis falls to 10 W/m² at 12 m.", md);
+        Assert.Contains("Keep clear of the aperture.", md);
+        Assert.DoesNotContain(SummaryMarkdown.StandardCaution, md);
+    }
+
+    [Fact]
+    public void Summary_has_one_pass_fail_line_per_requirement()
+    {
+        var r = ReportFixture.Eight();
+        string md = Text(r);
+        Assert.Contains("- **PASS**: peak sidelobe at the design frequency: required ≤ -24.0 dB, achieved -24.8 dB", md);
+        Assert.Contains("- **FAIL**: VSWR over the band: required ≤ 1.5, achieved 1.71 at 9.450 GHz", md);
+        Assert.Equal(2, md.Split('\n').Count(l => l.StartsWith("- **PASS**") || l.StartsWith("- **FAIL**")));
+    }
+
+    [Fact]
+    public void Summary_lists_inputs_figures_slots_and_warnings_with_units()
+    {
+        var r = ReportFixture.Eight();
+        string md = Text(r);
+        Assert.Contains("| guide | WR-90, custom anodised: a = 22.860 mm, b = 10.160 mm |", md);
+        Assert.Contains("| band | 9.3000 to 9.4500 GHz |", md);
+        Assert.Contains("| taper | Dolph-Chebyshev, -25 dB |", md);
+        Assert.Contains("| half-power beamwidth | 8.10 | deg |", md);
+        Assert.Contains("| bandwidth with VSWR ≤ 2 | 183.0 | MHz |", md);
+        Assert.Contains("- mutual coupling is not in this model yet", md);
+        Assert.Contains("G0", md);
+        // one table row per slot: rows starting "| n |"
+        for (int i = 1; i <= 8; i++) Assert.Contains($"\n| {i} | ", md);
+        Assert.DoesNotContain('\r', md);
+    }
+
+    [Fact]
+    public void Tolerance_section_appears_only_with_lines()
+    {
+        Assert.DoesNotContain("## Tolerance", Text(ReportFixture.Eight()));
+        string md = Text(ReportFixture.Eight() with { Tolerance = ["peak sidelobe 95th percentile -22.9 dB (2000 trials)"] });
+        Assert.Contains("## Tolerance", md);
+        Assert.Contains("- peak sidelobe 95th percentile -22.9 dB (2000 trials)", md);
+    }
+}
