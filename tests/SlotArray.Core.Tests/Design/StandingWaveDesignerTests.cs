@@ -1,9 +1,9 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 using SlotArray.Tests.Shared;
-using static SlotArray.Core.Tests.Design.TestArrays;
+using static SlotArray.Core.Tests.DesignTests.TestArrays;
 
-namespace SlotArray.Core.Tests.Design;
+namespace SlotArray.Core.Tests.DesignTests;
 
 /// <summary>
 /// The standing-wave designer against physics-reference §5.1 and §11 #29 (WR-90 at 9.375 GHz; values computed there

@@ -3,7 +3,7 @@ using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
 using SlotArray.Core.Waveguides;
 
-namespace SlotArray.Core.Tests.Design;
+namespace SlotArray.Core.Tests.DesignTests;
 
 /// <summary>
 /// TEST DOUBLE, not a slot model of the product: a longitudinal broad-wall slot whose resonant conductance is

@@ -2,7 +2,7 @@ using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Waveguides;
 
-namespace SlotArray.Core.Tests.Design;
+namespace SlotArray.Core.Tests.DesignTests;
 
 /// <summary>Requests and guides shared by the designer and network tests (WR-90 at 9.375 GHz, the physics-reference case).</summary>
 internal static class TestArrays

@@ -2,9 +2,9 @@ using System.Numerics;
 using SlotArray.Core.Design;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
-using SlotArray.Core.Tests.Design;
+using SlotArray.Core.Tests.DesignTests;
 using SlotArray.Tests.Shared;
-using static SlotArray.Core.Tests.Design.TestArrays;
+using static SlotArray.Core.Tests.DesignTests.TestArrays;
 
 namespace SlotArray.Core.Tests.Network;
 

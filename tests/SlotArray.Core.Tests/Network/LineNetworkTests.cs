@@ -3,7 +3,7 @@ using SlotArray.Core.Design;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Tests.Shared;
-using static SlotArray.Core.Tests.Design.TestArrays;
+using static SlotArray.Core.Tests.DesignTests.TestArrays;
 
 namespace SlotArray.Core.Tests.Network;
 
