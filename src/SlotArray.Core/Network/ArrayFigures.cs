@@ -1,0 +1,87 @@
+using SlotArray.Core.Design;
+using SlotArray.Core.Patterns;
+using SlotArray.Core.Quantities;
+
+namespace SlotArray.Core.Network;
+
+/// <summary>
+/// The figures of a designed array at one frequency: the network (match, power budget) and the far field built from
+/// the network's slot excitations.
+/// </summary>
+/// <param name="Network">The network solution at this frequency.</param>
+/// <param name="Pattern">The far-field cut in the plane of the guide axis (see <see cref="ArrayFigures"/> for the angle convention).</param>
+/// <param name="Metrics">Beam direction, HPBW, sidelobes of that cut.</param>
+/// <param name="Directivity">Directivity in the beam direction (half-space, half-wave slot element), dimensionless.</param>
+/// <param name="Gain">Gain including mismatch and loss: D × radiation efficiency × (1 − |S11|²) = D × P_rad/P_inc.</param>
+public sealed record FrequencyFigures(NetworkSolution Network, Pattern Pattern, PatternMetrics Metrics, double Directivity, double Gain)
+{
+    /// <summary>The analysis frequency.</summary>
+    public Frequency Frequency => Network.Frequency;
+
+    /// <summary>Directivity, dBi.</summary>
+    public double DirectivityDbi => Patterns.Directivity.ToDbi(Directivity);
+
+    /// <summary>Gain, dBi.</summary>
+    public double GainDbi => Patterns.Directivity.ToDbi(Gain);
+}
+
+/// <summary>
+/// Far-field figures from the network's slot excitations: the array factor of the excitations
+/// <see cref="NetworkSolution.Excitations"/> at the slot positions times the half-wave slot's element pattern in the
+/// plane of the guide axis (physics-reference §7.1; pattern multiplication, C. A. Balanis, <i>Antenna Theory</i>,
+/// 3rd ed., Wiley 2005, Sec. 6.2), the metrics of the Patterns library, the half-space directivity
+/// (physics-reference §7.3) and gain = D × η_rad × (1 − |S11|²) (η_rad = radiated/accepted power; the IEEE Std 145
+/// gain times the mismatch factor, i.e. the realised gain). Isolated slots: no mutual coupling, infinite ground plane.
+/// </summary>
+/// <remarks>
+/// Angle convention (architecture.md, "Axes"): θ from broadside in the plane containing the guide axis, θ &gt; 0
+/// toward the datum end, i.e. toward the end short (or load) at z = 0, away from the end feed; for a centre feed,
+/// also toward the datum end. The Patterns library measures θ &gt; 0 toward +z, so the positions are passed as −z_n.
+/// </remarks>
+public static class ArrayFigures
+{
+    /// <summary>
+    /// The default grid: uniform in θ over the half-space, at least 1801 points and about 32 per lobe width
+    /// λ/(N d) in sin θ, so that the metrics resolve every lobe.
+    /// </summary>
+    /// <param name="design">The design (slot count and spacing).</param>
+    /// <param name="f">The highest frequency to be analysed.</param>
+    public static AngleGrid DefaultGrid(ArrayDesign design, Frequency f)
+    {
+        ArgumentNullException.ThrowIfNull(design);
+        double aperture = design.Count * design.Spacing.Meters / f.FreeSpaceWavelength.Meters;
+        int count = Math.Max(1801, 2 * (int)Math.Ceiling(32 * aperture) + 1);
+        return AngleGrid.HalfSpaceInTheta(count);
+    }
+
+    /// <summary>The figures at the frequency of one network solution.</summary>
+    /// <param name="design">The design that was analysed.</param>
+    /// <param name="network">Its network solution.</param>
+    /// <param name="grid">Angles of the cut; <see cref="DefaultGrid"/> when null.</param>
+    public static FrequencyFigures At(ArrayDesign design, NetworkSolution network, AngleGrid? grid = null)
+    {
+        ArgumentNullException.ThrowIfNull(design);
+        ArgumentNullException.ThrowIfNull(network);
+        var positions = design.Slots.Select(s => -s.Position.Meters).ToArray();
+        double k = network.Frequency.FreeSpaceWavenumber;
+        var element = ElementPatterns.HalfWaveSlotHPlane;
+        var pattern = ArrayFactor.Compute(positions, network.Excitations, k, grid ?? DefaultGrid(design, network.Frequency), element);
+        var metrics = PatternMetrics.Measure(pattern);
+        double d = Patterns.Directivity.HalfSpace(positions, network.Excitations, k, element, metrics.BeamDirection.Radians);
+        return new FrequencyFigures(network, pattern, metrics, d, d * network.RadiatedPower);
+    }
+
+    /// <summary>The figures at the design frequency and at every point of a sweep, on one grid.</summary>
+    /// <param name="design">The design that was swept.</param>
+    /// <param name="sweep">Its sweep.</param>
+    /// <param name="grid">Angles of the cut; <see cref="DefaultGrid"/> at the sweep's highest frequency when null.</param>
+    public static (FrequencyFigures AtDesign, IReadOnlyList<FrequencyFigures> Points) ForSweep(ArrayDesign design, FrequencySweep sweep,
+        AngleGrid? grid = null)
+    {
+        ArgumentNullException.ThrowIfNull(sweep);
+        var top = sweep.Points.Count > 0 ? sweep.Points[^1].Frequency : sweep.DesignFrequency;
+        var g = grid ?? DefaultGrid(design, top > sweep.DesignFrequency ? top : sweep.DesignFrequency);
+        var points = sweep.Points.Select(p => At(design, p, g)).ToArray();
+        return (At(design, sweep.AtDesign, g), Array.AsReadOnly(points));
+    }
+}
