@@ -1,0 +1,106 @@
+using SlotArray.Core.Network;
+using SlotArray.Core.Quantities;
+using SlotArray.Core.Slots;
+using SlotArray.Core.Tapers;
+
+namespace SlotArray.Core.Design;
+
+/// <summary>How finely the pipeline analyses a design.</summary>
+/// <param name="SweepPoints">Frequencies across the analysis band (≥ 2); default 201.</param>
+/// <param name="BandSearchFraction">How far either side of the design frequency the VSWR bands are searched, as a fraction of it; default 0.15.</param>
+public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFraction = 0.15)
+{
+    /// <summary>The defaults.</summary>
+    public static AnalysisOptions Default { get; } = new();
+}
+
+/// <summary>Everything one run computes: the taper, the slot model, the design and its analysis across the band.</summary>
+/// <param name="Request">What was asked.</param>
+/// <param name="Taper">The synthesised aperture taper (target amplitudes).</param>
+/// <param name="SlotModel">The slot model the design used and the analysis re-used.</param>
+/// <param name="Design">Per-slot geometry and the terminations.</param>
+/// <param name="Sweep">Network solutions across the analysis band, and at the design frequency.</param>
+/// <param name="AtDesign">Pattern, directivity and gain at the design frequency.</param>
+/// <param name="SweepFigures">Pattern, directivity and gain at each sweep frequency.</param>
+/// <param name="BandVswr15">The continuous band with VSWR ≤ 1.5 containing the design frequency, or null.</param>
+/// <param name="BandVswr2">The continuous band with VSWR ≤ 2 containing the design frequency, or null.</param>
+/// <param name="Warnings">Every validity limit met on the way (taper, slot model, designer), in order, without repeats.</param>
+public sealed record ArrayResult(
+    ArrayRequest Request,
+    TaperResult Taper,
+    IShuntSlotModel SlotModel,
+    ArrayDesign Design,
+    FrequencySweep Sweep,
+    FrequencyFigures AtDesign,
+    IReadOnlyList<FrequencyFigures> SweepFigures,
+    MatchBand? BandVswr15,
+    MatchBand? BandVswr2,
+    IReadOnlyList<DesignWarning> Warnings);
+
+/// <summary>
+/// The pipeline of architecture.md as one pure function: request → taper → slot model → designer → network
+/// analysis across the band → pattern, directivity and gain. Each stage is a pure function of the previous
+/// stage's immutable result, so the tolerance analysis can re-run <see cref="Analyse"/> on perturbed designs.
+/// </summary>
+public static class ArrayPipeline
+{
+    /// <summary>The slot model the request names, built for its guide, slot width and design frequency.</summary>
+    /// <exception cref="InfeasibleDesignException">The slot type has no designer yet.</exception>
+    public static IShuntSlotModel SlotModelFor(ArrayRequest request)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        return request.Slots.Type switch
+        {
+            SlotType.Longitudinal => LongitudinalSlotModels.Create(request.Slots.Model, request.Guide, request.Slots.Width, request.DesignFrequency),
+            SlotType.Edge => EdgeSlot.Create(request.Guide, request.Slots.Width),
+            _ => throw new InfeasibleDesignException(
+                $"slots of type '{request.Slots.Type}' have a conductance formula (slot command) but no array designer yet: use 'longitudinal' or 'edge' slots"),
+        };
+    }
+
+    /// <summary>The designer the feed type calls for.</summary>
+    public static ArrayDesign Synthesise(ArrayRequest request, IShuntSlotModel slot, TaperResult taper)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(taper);
+        return request.Feed.Type switch
+        {
+            FeedType.StandingWave => StandingWaveDesigner.Design(request, slot, taper.Weights),
+            _ => throw new InfeasibleDesignException(
+                $"the '{request.Feed.Type}' feed has no designer yet: use a standing-wave feed"),
+        };
+    }
+
+    /// <summary>Network and pattern analysis of a design across the request's band.</summary>
+    public static (FrequencySweep Sweep, FrequencyFigures AtDesign, IReadOnlyList<FrequencyFigures> Points) Analyse(
+        ArrayRequest request, ArrayDesign design, IShuntSlotModel slot, AnalysisOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(options);
+        if (options.SweepPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.SweepPoints, "a sweep needs at least 2 points");
+        var sweep = ArrayNetwork.Sweep(design, slot, request.BandLow, request.BandHigh, options.SweepPoints);
+        var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
+        return (sweep, atDesign, points);
+    }
+
+    /// <summary>Runs the whole pipeline.</summary>
+    /// <exception cref="InfeasibleDesignException">The request cannot be realised; the message says what to change.</exception>
+    public static ArrayResult Run(ArrayRequest request, AnalysisOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        options ??= AnalysisOptions.Default;
+        var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
+        var slot = SlotModelFor(request);
+        var design = Synthesise(request, slot, taper);
+        var (sweep, atDesign, points) = Analyse(request, design, slot, options);
+        var f0 = request.DesignFrequency;
+        var lo = Frequency.FromHertz(f0.Hertz * (1 - options.BandSearchFraction));
+        var hi = Frequency.FromHertz(f0.Hertz * (1 + options.BandSearchFraction));
+        var step = Frequency.FromHertz(f0.Hertz * 1e-3);
+        var b15 = ArrayNetwork.FindBand(design, slot, 1.5, lo, hi, step);
+        var b2 = ArrayNetwork.FindBand(design, slot, 2.0, lo, hi, step);
+        var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
+            .DistinctBy(w => w.Message).ToList();
+        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings);
+    }
+}
