@@ -25,10 +25,20 @@ public static class DesignCommand
         var spec = new Argument<string>("spec") { Description = "The YAML spec, e.g. arrays/harbour-surveillance-16.yaml" };
         var outDir = OutputOption();
         var json = new Option<bool>("--json") { Description = "Print design.json on stdout (messages stay on stderr)" };
-        var cmd = new Command("design", "Synthesise the array, analyse it across the band and write every output file") { spec, outDir, json };
-        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), pr.GetValue(json), output, error));
+        var (cacheDir, noCache) = CacheOptions();
+        var cmd = new Command("design", "Synthesise the array, analyse it across the band and write every output file") { spec, outDir, json, cacheDir, noCache };
+        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), pr.GetValue(json), CacheOf(pr, cacheDir, noCache), output, error));
         return cmd;
     }
+
+    /// <summary>The slot-cache options shared with <c>sweep</c>: <c>--cache-dir DIR</c> and <c>--no-cache</c>.</summary>
+    internal static (Option<string?> Dir, Option<bool> Off) CacheOptions() => (
+        new Option<string?>("--cache-dir") { Description = "Folder of the slot characterisation cache (default $XDG_CACHE_HOME/slotarray or ~/.cache/slotarray)" },
+        new Option<bool>("--no-cache") { Description = "Neither read nor write the slot characterisation cache" });
+
+    /// <summary>The cache the options select, or null with <c>--no-cache</c>.</summary>
+    internal static SlotCache? CacheOf(ParseResult pr, Option<string?> dir, Option<bool> off) =>
+        pr.GetValue(off) ? null : new SlotCache(pr.GetValue(dir) ?? SlotCache.DefaultDirectory());
 
     /// <summary>The <c>-o</c> option shared with <c>sweep</c>: the output folder, default <c>out/&lt;name&gt;</c>.</summary>
     internal static Option<string?> OutputOption() => new("--output", "-o")
@@ -39,12 +49,12 @@ public static class DesignCommand
     /// <summary>The default output folder of a spec named <paramref name="name"/>: <c>out/&lt;name&gt;</c>.</summary>
     internal static string DefaultFolder(string name) => Path.Combine("out", name);
 
-    private static int Run(string path, string? outDir, bool json, TextWriter output, TextWriter error)
+    private static int Run(string path, string? outDir, bool json, SlotCache? cache, TextWriter output, TextWriter error)
     {
         var request = Load(path, error, out int code);
         if (request is null) return code;
         var clock = Stopwatch.StartNew();
-        var result = Analyse(request, error);
+        var result = Analyse(request, cache, error);
         var report = DesignReportBuilder.Build(result);
         string folder = outDir ?? DefaultFolder(request.Name);
         error.WriteLine($"writing {OutputFolder.Files.Count} files to {folder}/ ...");
@@ -76,12 +86,16 @@ public static class DesignCommand
         return null;
     }
 
-    /// <summary>Runs the pipeline with the slot cache, printing progress to <paramref name="error"/>.</summary>
-    internal static ArrayResult Analyse(ArrayRequest request, TextWriter error)
+    /// <summary>Runs the pipeline with the slot cache (when given), printing progress to <paramref name="error"/>.</summary>
+    internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error)
     {
-        error.WriteLine(string.Format(Inv, "designing '{0}': {1} slots at {2:0.####} GHz, analysing {3:0.####} to {4:0.####} GHz ...",
-            request.Name, request.Slots.Count, request.DesignFrequency.Gigahertz, request.BandLow.Gigahertz, request.BandHigh.Gigahertz));
-        return ArrayPipeline.Run(request);
+        int loaded = cache?.Load(request, error) ?? 0;
+        error.WriteLine(string.Format(Inv, "designing '{0}': {1} slots at {2:0.####} GHz, analysing {3:0.####} to {4:0.####} GHz{5} ...",
+            request.Name, request.Slots.Count, request.DesignFrequency.Gigahertz, request.BandLow.Gigahertz, request.BandHigh.Gigahertz,
+            cache is null ? "" : string.Format(Inv, " ({0} slot table(s) from the cache)", loaded)));
+        var result = ArrayPipeline.Run(request);
+        cache?.Save(error);
+        return result;
     }
 
     private static void PrintSummary(TextWriter o, DesignReport r, string folder)

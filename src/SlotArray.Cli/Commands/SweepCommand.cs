@@ -23,16 +23,17 @@ public static class SweepCommand
     {
         var spec = new Argument<string>("spec") { Description = "The YAML spec, e.g. arrays/harbour-surveillance-16.yaml" };
         var outDir = DesignCommand.OutputOption();
-        var cmd = new Command("sweep", "Frequency response of the designed array: sweep.png, input.s1p and a table on stdout") { spec, outDir };
-        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), output, error));
+        var (cacheDir, noCache) = DesignCommand.CacheOptions();
+        var cmd = new Command("sweep", "Frequency response of the designed array: sweep.png, input.s1p and a table on stdout") { spec, outDir, cacheDir, noCache };
+        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), DesignCommand.CacheOf(pr, cacheDir, noCache), output, error));
         return cmd;
     }
 
-    private static int Run(string path, string? outDir, TextWriter output, TextWriter error)
+    private static int Run(string path, string? outDir, SlotCache? cache, TextWriter output, TextWriter error)
     {
         var request = DesignCommand.Load(path, error, out int code);
         if (request is null) return code;
-        var report = DesignReportBuilder.Build(DesignCommand.Analyse(request, error));
+        var report = DesignReportBuilder.Build(DesignCommand.Analyse(request, cache, error));
         string folder = outDir ?? DesignCommand.DefaultFolder(request.Name);
         AtomicFile.Write(Path.Combine(folder, "sweep.png"), s => PlotExport.Write(DesignPlots.Sweep(report), s, "png"));
         AtomicFile.Write(Path.Combine(folder, "input.s1p"), s =>
