@@ -123,12 +123,15 @@ public sealed class FrequencyInterpolatedSlotModel : IShuntSlotModel
         long k0 = (long)Math.Floor((low.Hertz / Reference.Hertz - 1) / Step) - (Order / 2 - 1);
         long k1 = (long)Math.Ceiling((high.Hertz / Reference.Hertz - 1) / Step) + Order / 2;
         if (1 + k0 * Step <= 0.05) return;
-        var work = slots.Distinct().SelectMany(s => Enumerable.Range(0, (int)(k1 - k0 + 1)).Select(i => (s, k: k0 + i))).ToArray();
+        var work = slots.Select(s => (Coupling: Math.Abs(s.Coupling), s.Length)).Distinct().SelectMany(s => Enumerable.Range(0, (int)(k1 - k0 + 1)).Select(i => (s, k: k0 + i))).ToArray();
         Parallel.ForEach(work, w => Node(w.s.Coupling, w.s.Length, w.k));
     }
 
     private Complex Node(double coupling, Length length, long k)
-        => _nodes.GetOrAdd((coupling, length.Meters, k), key => new Lazy<Complex>(() => Inner.Admittance(coupling, length, NodeFrequency(k)))).Value;
+    {
+        double c = Math.Abs(coupling);   // y is even in the coupling (see remarks)
+        return _nodes.GetOrAdd((c, length.Meters, k), key => new Lazy<Complex>(() => Inner.Admittance(c, length, NodeFrequency(k)))).Value;
+    }
 
     /// <inheritdoc />
     public SlotResonance Resonance(double coupling, Frequency f) => Inner.Resonance(coupling, f);
