@@ -15,6 +15,9 @@ namespace SlotArray.Core.Network;
 /// <param name="Gain">Gain including mismatch and loss: D × radiation efficiency × (1 − |S11|²) = D × P_rad/P_inc.</param>
 public sealed record FrequencyFigures(NetworkSolution Network, Pattern Pattern, PatternMetrics Metrics, double Directivity, double Gain)
 {
+    /// <summary>Edge (tilted) slots: the cross-polarised cut and its peak relative to the co-polar beam; null for untilted slots.</summary>
+    public CrossPolarFigures? CrossPolar { get; init; }
+
     /// <summary>The analysis frequency.</summary>
     public Frequency Frequency => Network.Frequency;
 
@@ -64,8 +67,20 @@ public static class ArrayFigures
         ArgumentNullException.ThrowIfNull(network);
         var positions = design.Slots.Select(s => -s.Position.Meters).ToArray();
         double k = network.Frequency.FreeSpaceWavenumber;
+        grid ??= DefaultGrid(design, network.Frequency);
+        if (design.CouplingKind == Slots.SlotCouplingKind.Tilt)
+        {
+            var tilts = design.Slots.Select(s => s.Coupling).ToArray();
+            var co = CrossPolarPattern.CoPolarSources(network.Excitations, tilts);
+            var coPattern = ArrayFactor.Compute(positions, co, k, grid, CrossPolarPattern.EdgeSlotCoPolarElement);
+            var coMetrics = PatternMetrics.Measure(coPattern);
+            var cross = CrossPolarPattern.Compute(positions, network.Excitations, tilts, k, coPattern);
+            double dCo = Patterns.Directivity.HalfSpace(positions, co, k, CrossPolarPattern.EdgeSlotCoPolarElement, coMetrics.BeamDirection.Radians);
+            double dEdge = dCo / (1 + cross.PowerRatio);
+            return new FrequencyFigures(network, coPattern, coMetrics, dEdge, dEdge * network.RadiatedPower) { CrossPolar = cross };
+        }
         var element = ElementPatterns.HalfWaveSlotHPlane;
-        var pattern = ArrayFactor.Compute(positions, network.Excitations, k, grid ?? DefaultGrid(design, network.Frequency), element);
+        var pattern = ArrayFactor.Compute(positions, network.Excitations, k, grid, element);
         var metrics = PatternMetrics.Measure(pattern);
         double d = Patterns.Directivity.HalfSpace(positions, network.Excitations, k, element, metrics.BeamDirection.Radians);
         return new FrequencyFigures(network, pattern, metrics, d, d * network.RadiatedPower);
