@@ -74,7 +74,10 @@ public sealed record TravellingWaveDesign(
 /// stops when max_n |10 log10(P_n/T_n)| &lt; <see cref="TravellingWaveOptions.ToleranceDb"/> and throws
 /// <see cref="ConvergenceException"/> after <see cref="TravellingWaveOptions.MaximumIterations"/>; it contracts
 /// because each slot's update is exact for its own power and the coupling through the slots' small reflections is
-/// weak away from λg/2 spacing (measured: see the tests and the benchmark notes). (3) Geometry: each g_n is turned
+/// weak away from λg/2 spacing. Measured (WR-90 aluminium, 32 slots, Taylor 30 dB n̄ = 4, d = 0.45 λg, P_L = 5 %):
+/// the closed-form start is 0.54 dB off in power; the residual then falls about tenfold every five iterations, not
+/// monotonically (it oscillates with a period of about three iterations while the reflections settle), below 1e-4 dB
+/// after about 20 iterations and below 1e-9 dB after 45. (3) Geometry: each g_n is turned
 /// into a coupling (offset or tilt) and the length resonant at the design frequency by the slot model
 /// (<see cref="IShuntSlotModel.ForConductance"/>), the coupling's sign alternating slot to slot (and flipped for a
 /// negative a_n). (4) Check: the design is re-analysed with the slot model itself
