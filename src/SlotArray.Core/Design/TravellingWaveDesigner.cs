@@ -47,6 +47,9 @@ public sealed record TravellingWaveDesign(
     Angle? Squint,
     double? ScanRate)
 {
+    /// <summary>Largest departure of the slot excitations' phases from the travelling-wave progression at the design frequency, degrees (mean removed).</summary>
+    public double PhaseErrorDegrees { get; init; }
+
     /// <summary>Scan rate in degrees per 100 MHz, or null.</summary>
     public double? ScanRateDegreesPer100MHz => ScanRate is { } r ? r * 180 / Math.PI * 1e8 : null;
 }
@@ -209,9 +212,34 @@ public static class TravellingWaveDesigner
             warnings.Add(new DesignWarning("travelling-wave-slot-model-residual", string.Create(CultureInfo.InvariantCulture,
                 $"re-analysed with the slot model itself, the aperture amplitudes depart from the taper by up to {error:0.###} dB at {f0} (the model's resonant admittance differs from its tabulated resonance)")));
 
+        double phaseError = PhaseErrorDegrees(check, design);
+        if (phaseError > 5)
+            warnings.Add(new DesignWarning("travelling-wave-phase-ripple", string.Create(CultureInfo.InvariantCulture,
+                $"the slot reflections add partially in phase at {spacing / lambdaG:0.###} guide wavelengths: the slot excitations depart from the travelling-wave phase progression by up to {phaseError:0.#} deg at {f0}, which raises the sidelobes (resonant slots set amplitudes, not phases); a spacing farther from 0.5 guide-wavelength reduces it")));
+
         var refinement = new TravellingWaveRefinement(iterations, history.Count > 0 ? history[^1] : double.NaN, history.AsReadOnly());
         return new TravellingWaveDesign(design with { Warnings = warnings.AsReadOnly() }, loadFraction, Array.AsReadOnly(targets),
-            Array.AsReadOnly(startG), refinement, error, squint, TravellingWaveBeam.ScanRate(guide, spacing, f0));
+            Array.AsReadOnly(startG), refinement, error, squint, TravellingWaveBeam.ScanRate(guide, spacing, f0)) { PhaseErrorDegrees = phaseError };
+    }
+
+    /// <summary>
+    /// Largest departure, degrees, of the slot excitations' phases (alternation sign removed) from the travelling wave's
+    /// progression e^{jβ z_n}, after removing their mean (circular mean of the departures).
+    /// </summary>
+    private static double PhaseErrorDegrees(NetworkSolution solution, ArrayDesign design)
+    {
+        double beta = design.Guide.PhaseConstant(design.DesignFrequency);
+        var dev = new Complex[design.Count];
+        Complex mean = 0;
+        for (int i = 0; i < dev.Length; i++)
+        {
+            var e = solution.Excitations[i] * Math.Sign(design.Slots[i].Coupling) * Complex.FromPolarCoordinates(1, -beta * design.Slots[i].Position.Meters);
+            dev[i] = e / e.Magnitude;
+            mean += dev[i];
+        }
+        double worst = 0;
+        foreach (var d in dev) worst = Math.Max(worst, Math.Abs((d / mean).Phase));
+        return worst * 180 / Math.PI;
     }
 
     /// <summary>

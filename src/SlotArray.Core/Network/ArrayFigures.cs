@@ -65,24 +65,33 @@ public static class ArrayFigures
     {
         ArgumentNullException.ThrowIfNull(design);
         ArgumentNullException.ThrowIfNull(network);
-        var positions = design.Slots.Select(s => -s.Position.Meters).ToArray();
+        // Positions −z_n (see remarks), listed in increasing order (slot N first) so that equally spaced slots take the
+        // array factor's fast path; the excitations follow the same order.
+        int n = design.Count;
+        var positions = new double[n];
+        var excitations = new System.Numerics.Complex[n];
+        for (int i = 0; i < n; i++)
+        {
+            positions[i] = -design.Slots[n - 1 - i].Position.Meters;
+            excitations[i] = network.Excitations[n - 1 - i];
+        }
         double k = network.Frequency.FreeSpaceWavenumber;
         grid ??= DefaultGrid(design, network.Frequency);
         if (design.CouplingKind == Slots.SlotCouplingKind.Tilt)
         {
-            var tilts = design.Slots.Select(s => s.Coupling).ToArray();
-            var co = CrossPolarPattern.CoPolarSources(network.Excitations, tilts);
+            var tilts = Enumerable.Range(0, n).Select(i => design.Slots[n - 1 - i].Coupling).ToArray();
+            var co = CrossPolarPattern.CoPolarSources(excitations, tilts);
             var coPattern = ArrayFactor.Compute(positions, co, k, grid, CrossPolarPattern.EdgeSlotCoPolarElement);
             var coMetrics = PatternMetrics.Measure(coPattern);
-            var cross = CrossPolarPattern.Compute(positions, network.Excitations, tilts, k, coPattern);
+            var cross = CrossPolarPattern.Compute(positions, excitations, tilts, k, coPattern);
             double dCo = Patterns.Directivity.HalfSpace(positions, co, k, CrossPolarPattern.EdgeSlotCoPolarElement, coMetrics.BeamDirection.Radians);
             double dEdge = dCo / (1 + cross.PowerRatio);
             return new FrequencyFigures(network, coPattern, coMetrics, dEdge, dEdge * network.RadiatedPower) { CrossPolar = cross };
         }
         var element = ElementPatterns.HalfWaveSlotHPlane;
-        var pattern = ArrayFactor.Compute(positions, network.Excitations, k, grid, element);
+        var pattern = ArrayFactor.Compute(positions, excitations, k, grid, element);
         var metrics = PatternMetrics.Measure(pattern);
-        double d = Patterns.Directivity.HalfSpace(positions, network.Excitations, k, element, metrics.BeamDirection.Radians);
+        double d = Patterns.Directivity.HalfSpace(positions, excitations, k, element, metrics.BeamDirection.Radians);
         return new FrequencyFigures(network, pattern, metrics, d, d * network.RadiatedPower);
     }
 
