@@ -84,7 +84,9 @@ public static class ArrayFigures
             var coPattern = ArrayFactor.Compute(positions, co, k, grid, CrossPolarPattern.EdgeSlotCoPolarElement);
             var coMetrics = PatternMetrics.Measure(coPattern);
             var cross = CrossPolarPattern.Compute(positions, excitations, tilts, k, coPattern);
-            double dCo = Patterns.Directivity.HalfSpace(positions, co, k, CrossPolarPattern.EdgeSlotCoPolarElement, coMetrics.BeamDirection.Radians);
+            // Uniform element over the half-space: ∫|AF|² du = 2 Σ a_m a_n* sinc(kΔz), so the half-space directivity is exactly
+            // twice the isotropic full-sphere one (physics-reference §7.3), in closed form.
+            double dCo = 2 * Patterns.Directivity.Isotropic(positions, co, k, coMetrics.BeamDirection.Radians);
             double dEdge = dCo / (1 + cross.PowerRatio);
             return new FrequencyFigures(network, coPattern, coMetrics, dEdge, dEdge * network.RadiatedPower) { CrossPolar = cross };
         }
@@ -105,7 +107,9 @@ public static class ArrayFigures
         ArgumentNullException.ThrowIfNull(sweep);
         var top = sweep.Points.Count > 0 ? sweep.Points[^1].Frequency : sweep.DesignFrequency;
         var g = grid ?? DefaultGrid(design, top > sweep.DesignFrequency ? top : sweep.DesignFrequency);
-        var points = sweep.Points.Select(p => At(design, p, g)).ToArray();
+        // Each point is an independent pure computation written to its own slot: parallel and still deterministic.
+        var points = new FrequencyFigures[sweep.Points.Count];
+        Parallel.For(0, points.Length, i => points[i] = At(design, sweep.Points[i], g));
         return (At(design, sweep.AtDesign, g), Array.AsReadOnly(points));
     }
 }
