@@ -142,4 +142,20 @@ public class TravellingWaveDesignerTests
         var sol = ArrayNetwork.Solve(tw.Design, slot, F0);
         Check.Absolute(0.05, sol.LoadPower, 1e-4, "feed.load");
     }
+
+    [Theory]
+    [InlineData(9.2)]
+    [InlineData(9.55)]
+    public void Slots_without_susceptance_scan_exactly_as_the_phase_condition(double ghz)
+    {
+        // physics-reference §5.2: θ_b(f) from sin θ_b = λ/λg − λ/(2d). Frequency-independent real slots add no phase to the
+        // line, so the network pattern must follow the closed form off the design frequency too (real slots, whose
+        // susceptance loads the line away from resonance, scan at a different rate: see the marine demo's summary).
+        var slot = StevensonTestSlot.FrequencyIndependent(Wr90Lossless, Width, F0);
+        var tw = TravellingWaveDesigner.Design(Travelling(40, 0.10, spacing: 0.45, guide: Wr90Lossless), slot, Taylor30(40));
+        var f = Frequency.FromGigahertz(ghz);
+        var fig = ArrayFigures.At(tw.Design, ArrayNetwork.Solve(tw.Design, slot, f));
+        Check.Absolute(TravellingWaveBeam.Direction(Wr90Lossless, tw.Design.Spacing, f)!.Value.Degrees, fig.Metrics.BeamDirection.Degrees, 0.03,
+            "physics-reference §5.2 closed form (tolerance: the residual phase ripple of the slot reflections)");
+    }
 }
