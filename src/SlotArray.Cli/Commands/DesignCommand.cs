@@ -108,6 +108,13 @@ public static class DesignCommand
         o.WriteLine(string.Format(Inv, "  beam, HPBW             {0:0.00} deg, {1:0.00} deg", Math.Round(p.BeamDeg, 2) + 0.0, p.HpbwDeg));
         o.WriteLine(string.Format(Inv, "  peak sidelobe          {0:0.00} dB (design {1:0.0} dB)", p.PeakSidelobeDb, p.DesignSidelobeDb));
         o.WriteLine(string.Format(Inv, "  directivity, gain      {0:0.00} dBi, {1:0.00} dBi", p.DirectivityDbi, p.GainDbi));
+        if (r.TravellingWave is { } tw && r.Load is { } load)
+        {
+            o.WriteLine(string.Format(Inv, "  squint, scan rate      {0:0.00} deg (+ toward the load), {1:0.000} deg per 100 MHz", tw.SquintDeg, tw.ScanFromSweepDegPer100MHz));
+            o.WriteLine(string.Format(Inv, "  load power, efficiency {0:0.00} % of input (asked {1:0.##} %), {2:0.0} % radiated", load.PowerWPerWIn * 100, load.Fraction * 100, tw.Efficiency * 100));
+        }
+        if (p.CrossPolarDb is { } xpol)
+            o.WriteLine(string.Format(Inv, "  cross-polar peak       {0:0.00} dB at {1:0.0} deg", xpol, p.CrossPolarDirectionDeg ?? double.NaN));
         foreach (var q in r.Requirements)
             o.WriteLine($"  {(q.Passed ? "PASS" : "FAIL")}  {q.Description}: required {q.Required}, achieved {q.Achieved}");
         o.WriteLine($"  wrote {folder}/: {string.Join(", ", OutputFolder.Files.Select(f => f.Name))}");

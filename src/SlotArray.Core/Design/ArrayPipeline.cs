@@ -41,7 +41,11 @@ public sealed record ArrayResult(
     IReadOnlyList<FrequencyFigures> SweepFigures,
     MatchBand? BandVswr15,
     MatchBand? BandVswr2,
-    IReadOnlyList<DesignWarning> Warnings);
+    IReadOnlyList<DesignWarning> Warnings)
+{
+    /// <summary>Travelling-wave feed: the designer's figures (targets, refinement, squint, scan rate); null for a standing-wave feed.</summary>
+    public TravellingWaveDesign? TravellingWave { get; init; }
+}
 
 /// <summary>
 /// The pipeline of architecture.md as one pure function: request → taper → slot model → designer → network
@@ -66,15 +70,27 @@ public static class ArrayPipeline
 
     /// <summary>The designer the feed type calls for.</summary>
     public static ArrayDesign Synthesise(ArrayRequest request, IShuntSlotModel slot, TaperResult taper)
+        => SynthesiseWithFigures(request, slot, taper).Design;
+
+    /// <summary>
+    /// The designer the feed type calls for (standing-wave: <see cref="StandingWaveDesigner"/>; travelling-wave:
+    /// <see cref="TravellingWaveDesigner"/>), with the travelling-wave designer's own figures (null for a standing wave).
+    /// </summary>
+    public static (ArrayDesign Design, TravellingWaveDesign? TravellingWave) SynthesiseWithFigures(ArrayRequest request, IShuntSlotModel slot,
+        TaperResult taper)
     {
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(taper);
-        return request.Feed.Type switch
+        switch (request.Feed.Type)
         {
-            FeedType.StandingWave => StandingWaveDesigner.Design(request, slot, taper.Weights),
-            _ => throw new InfeasibleDesignException(
-                $"the '{request.Feed.Type}' feed has no designer yet: use a standing-wave feed"),
-        };
+            case FeedType.StandingWave:
+                return (StandingWaveDesigner.Design(request, slot, taper.Weights), null);
+            case FeedType.TravellingWave:
+                var tw = TravellingWaveDesigner.Design(request, slot, taper.Weights);
+                return (tw.Design, tw);
+            default:
+                throw new InfeasibleDesignException($"the '{request.Feed.Type}' feed has no designer: use a standing-wave or travelling-wave feed");
+        }
     }
 
     /// <summary>
@@ -119,7 +135,7 @@ public static class ArrayPipeline
         options ??= AnalysisOptions.Default;
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
         var slot = SlotModelFor(request);
-        var design = Synthesise(request, slot, taper);
+        var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
         var f0 = request.DesignFrequency;
@@ -130,6 +146,6 @@ public static class ArrayPipeline
         var b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
             .DistinctBy(w => w.Message).ToList();
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings);
+        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling };
     }
 }

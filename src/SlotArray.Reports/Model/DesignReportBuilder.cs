@@ -24,7 +24,10 @@ namespace SlotArray.Reports.Model;
 /// <see cref="NetworkSolution.Excitations"/> at the design frequency; both are normalised so that their largest
 /// magnitude is 1. The achieved phase is that of the excitation relative to the slot of largest achieved amplitude.</item>
 /// <item>Requirements: sidelobes (the spec's level, else the taper's design level) at the design frequency and as the
-/// worst over the sweep of the analysis band; VSWR as the worst over the sweep of the whole analysis band.</item>
+/// worst over the sweep of the analysis band; VSWR as the worst over the sweep of the whole analysis band; cross-polar
+/// level (edge slots) as the worst over the design frequency and the sweep.</item>
+/// <item>Travelling wave: datum the inner face of the load-end flange; the load power and efficiency from the network at
+/// the design frequency; the squint and scan rate from the phase condition, and the scan rate also from the sweep.</item>
 /// <item>Cautions: <see cref="SafetyCautions.Standard"/> always; with a transmitter, the exposure screen and the
 /// power-handling margin with the network's own standing-wave peak field (see <see cref="StandingWavePeak"/>).</item>
 /// </list>
@@ -101,6 +104,9 @@ public static class DesignReportBuilder
                 DesignSidelobeDb = DesignSidelobeLevel(request.Taper) ?? double.NaN,
                 CutAngleDeg = [.. atDesign.Pattern.Theta.Select(t => t * 180 / Math.PI)],
                 CutLevelDb = atDesign.Pattern.RelativeDecibels(PatternFloorDb),
+                CrossPolarDb = atDesign.CrossPolar?.PeakLevelDb,
+                CrossPolarDirectionDeg = atDesign.CrossPolar?.PeakDirection.Degrees,
+                CrossCutLevelDb = atDesign.CrossPolar is { } x ? CrossLevels(x, atDesign.Pattern.PeakPower) : [],
             },
             Match = new MatchReport
             {
@@ -116,6 +122,8 @@ public static class DesignReportBuilder
                 BeamDeg = p.Metrics.BeamDirection.Degrees,
                 PeakSidelobeDb = p.Metrics.PeakSidelobeDb ?? double.NaN,
                 GainDbi = p.GainDbi,
+                HpbwDeg = p.Metrics.HalfPowerBeamwidth.Degrees,
+                CrossPolarDb = p.CrossPolar?.PeakLevelDb,
             })],
             Inputs = new InputsSummary
             {
@@ -129,6 +137,38 @@ public static class DesignReportBuilder
             Warnings = warnings,
             Cautions = Cautions(result),
             Requirements = requirements,
+            Load = result.TravellingWave is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
+            TravellingWave = result.TravellingWave is { } t ? TravellingWaveOf(result, t) : null,
+        };
+    }
+
+    /// <summary>Cross-polar cut in dB relative to the co-polar peak, floored at <see cref="PatternFloorDb"/>.</summary>
+    private static double[] CrossLevels(Core.Patterns.CrossPolarFigures x, double coPeak) =>
+        [.. x.Pattern.Power.Select(p => p > 0 && coPeak > 0 ? Math.Max(PatternFloorDb, 10 * Math.Log10(p / coPeak)) : PatternFloorDb)];
+
+    private static TravellingWaveReport TravellingWaveOf(ArrayResult result, TravellingWaveDesign tw)
+    {
+        var n = result.AtDesign.Network;
+        // Least-squares slope of the network beam direction against frequency over the sweep.
+        var pts = result.SweepFigures;
+        double slope = double.NaN;
+        if (pts.Count >= 2)
+        {
+            double mf = pts.Average(p => p.Frequency.Hertz), mb = pts.Average(p => p.Metrics.BeamDirection.Degrees);
+            double sxy = pts.Sum(p => (p.Frequency.Hertz - mf) * (p.Metrics.BeamDirection.Degrees - mb));
+            double sxx = pts.Sum(p => (p.Frequency.Hertz - mf) * (p.Frequency.Hertz - mf));
+            slope = sxx > 0 ? sxy / sxx * 1e8 : double.NaN;
+        }
+        return new TravellingWaveReport
+        {
+            SquintDeg = tw.Squint?.Degrees ?? double.NaN,
+            ScanDegPer100MHz = tw.ScanRateDegreesPer100MHz ?? double.NaN,
+            ScanFromSweepDegPer100MHz = slope,
+            Efficiency = n.RadiationEfficiency,
+            WallLossWPerWIn = n.WallLoss,
+            RefinementIterations = tw.Refinement.Iterations,
+            RefinementResidualDb = tw.Refinement.ResidualDb,
+            PhaseErrorDeg = tw.PhaseErrorDegrees,
         };
     }
 
@@ -154,7 +194,11 @@ public static class DesignReportBuilder
         var inputs = design.Slots.Select(s => new SlotCutInput(s.Index, s.Position,
             tilt ? null : Length.FromMeters(s.Coupling), tilt ? Angle.FromRadians(s.Coupling) : null,
             s.Length, s.Width, request.Slots.Cutter, Length.FromMeters(tolerance))).ToList();
-        return CutList.Build(new CutListGuide(g.BroadWall, g.NarrowWall, g.WallThickness), inputs);
+        // Travelling wave: the matched load sits at z = 0, so the datum is the inner face of the load-end flange.
+        var datums = request.Feed.Type == FeedType.TravellingWave
+            ? Datums.Default with { Longitudinal = LongitudinalDatumKind.LoadFlangeInnerFace }
+            : Datums.Default;
+        return CutList.Build(new CutListGuide(g.BroadWall, g.NarrowWall, g.WallThickness), inputs, datums);
     }
 
     private static List<SlotReport> Slots(ArrayResult result, CutList cut)
@@ -247,7 +291,19 @@ public static class DesignReportBuilder
                 Passed = worst.Network.Vswr <= vswr,
             });
         }
-        if (request.Requirements.CrossPolarDb is { } xp)
+        if (request.Requirements.CrossPolarDb is { } xpol && result.AtDesign.CrossPolar is { } cross)
+        {
+            var worst = band.Count > 0 ? band.MaxBy(p => p.CrossPolar?.PeakLevelDb ?? double.NegativeInfinity)! : result.AtDesign;
+            double w = Math.Max(worst.CrossPolar?.PeakLevelDb ?? double.NegativeInfinity, cross.PeakLevelDb);
+            list.Add(new RequirementResult
+            {
+                Description = "peak cross-polar level, worst over the analysis band",
+                Required = string.Create(Inv, $"≤ {xpol:0.0#} dB"),
+                Achieved = string.Create(Inv, $"{w:0.00} dB worst; {cross.PeakLevelDb:0.00} dB at {cross.PeakDirection.Degrees:0.#} deg at the design frequency (bare slots, no polarisation filter modelled)"),
+                Passed = w <= xpol,
+            });
+        }
+        else if (request.Requirements.CrossPolarDb is { } xp)
             warnings.Add(string.Create(Inv, $"requirements.cross_polar ({xp:0.0#} dB) is not checked: this analysis has no cross-polar prediction for {SlotTypeName(request.Slots.Type)} slots"));
         return (list, warnings);
     }
@@ -298,8 +354,12 @@ public static class DesignReportBuilder
         return list;
     }
 
-    private static string DatumName(Datums d) => d.Longitudinal == LongitudinalDatumKind.EndShortInnerFace
-        ? "inner face of the end short" : "feed flange face";
+    private static string DatumName(Datums d) => d.Longitudinal switch
+    {
+        LongitudinalDatumKind.EndShortInnerFace => "inner face of the end short",
+        LongitudinalDatumKind.LoadFlangeInnerFace => "inner face of the load-end flange (matched load)",
+        _ => "feed flange face",
+    };
 
     private static string TerminationName(TerminationKind k) => k switch
     {
