@@ -42,7 +42,7 @@ public class SpecLoaderTests
         Assert.Equal(ErrorDistribution.Uniform, t.Offset.Distribution);
         Assert.Equal(ErrorDistribution.Normal, t.Wall.Distribution);
         Check.Relative(0.05e-3, t.Wall.Value.Meters, 1e-12, "as written ({sigma: 0.05 mm})");
-        Assert.Equal(new Requirements(-24, -25, 2.0), r.Requirements);
+        Assert.Equal(new Requirements(-24, -25, 1.5), r.Requirements);
         Assert.Equal(new TransmitterRequest(25e3, 20), r.Transmitter);
     }
 
