@@ -58,4 +58,24 @@ public class DesignReferenceTests
         Complex hi = model.Admittance(r.Coupling, r.ResonantLength, Frequency.FromHertz(f0 * 1.005));
         Assert.True(hi.Imaginary < lo.Imaginary, $"Im y rises with frequency ({lo.Imaginary:E3} → {hi.Imaginary:E3}): the explanation does not hold");
     }
+
+    [Fact]
+    public void Centre_fed_tube_example_designs_matched_with_both_shorts_placed()
+    {
+        // arrays/sector-5g8-tube.yaml: 12 slots in a 40 × 20 mm tube, centre feed. Each half is a resonant array with its
+        // own Σ g = 1 (physics-reference §5.1 match rule, per half), so Σ g = 2; shorts λg/4 beyond slots 1 and 12.
+        string outDir = Path.Combine(DesignRuns.TempFolder("tube"), "out");
+        var (code, _, err) = DesignRuns.Run("design", RepoFiles.Tube, "-o", outDir, "--no-cache");
+        Assert.True(code == ExitCodes.Ok, err);
+        var json = JsonDocument.Parse(File.ReadAllText(Path.Combine(outDir, "design.json"))).RootElement;
+        var slots = json.GetProperty("slots").EnumerateArray().ToList();
+        Check.Absolute(2.0, slots.Sum(s => s.GetProperty("conductance").GetDouble()), 1e-12, "physics-reference §5.1, Σ g = 1 per half");
+        Assert.True(json.GetProperty("match").GetProperty("s11_db_at_design").GetDouble() < -25, "matched at the design frequency");
+        double lg = json.GetProperty("guide").GetProperty("guide_wavelength_m").GetDouble();
+        var t = json.GetProperty("termination");
+        Check.Absolute(lg / 4, t.GetProperty("distance_m").GetDouble(), 1e-12, "physics-reference §5.1: short λg/4 beyond slot 1");
+        Check.Absolute(slots[^1].GetProperty("position_m").GetDouble() + lg / 4, t.GetProperty("far_short_position_m").GetDouble(), 1e-12, "physics-reference §5.1: short λg/4 beyond slot 12");
+        Check.Absolute((slots[5].GetProperty("position_m").GetDouble() + slots[6].GetProperty("position_m").GetDouble()) / 2,
+            t.GetProperty("feed_position_m").GetDouble(), 1e-12, "series junction midway between slots 6 and 7 (StandingWaveDesigner remarks)");
+    }
 }

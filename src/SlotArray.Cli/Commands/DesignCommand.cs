@@ -105,7 +105,7 @@ public static class DesignCommand
         o.WriteLine($"{r.Name}: {r.Slots.Count} slots, {r.Inputs.FeedType}, {r.Inputs.TaperDescription}, {r.Inputs.SlotModelName}");
         o.WriteLine(string.Format(Inv, "  S11 at {0:0.####} GHz     {1:0.00} dB (VSWR {2:0.000})", r.FrequencyHz * 1e-9, m.S11DbAtDesign, m.VswrAtDesign));
         o.WriteLine(string.Format(Inv, "  VSWR <= 1.5 / 2 band   {0:0.0} / {1:0.0} MHz", m.BandwidthVswr15Hz * 1e-6, m.BandwidthVswr2Hz * 1e-6));
-        o.WriteLine(string.Format(Inv, "  beam, HPBW             {0:0.00} deg, {1:0.00} deg", p.BeamDeg, p.HpbwDeg));
+        o.WriteLine(string.Format(Inv, "  beam, HPBW             {0:0.00} deg, {1:0.00} deg", Math.Round(p.BeamDeg, 2) + 0.0, p.HpbwDeg));
         o.WriteLine(string.Format(Inv, "  peak sidelobe          {0:0.00} dB (design {1:0.0} dB)", p.PeakSidelobeDb, p.DesignSidelobeDb));
         o.WriteLine(string.Format(Inv, "  directivity, gain      {0:0.00} dBi, {1:0.00} dBi", p.DirectivityDbi, p.GainDbi));
         if (r.TravellingWave is { } tw && r.Load is { } load)

@@ -118,8 +118,13 @@ public static class ArrayPipeline
         if (options.SweepPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.SweepPoints, "a sweep needs at least 2 points");
         slot = AnalysisModel(request, design, slot, options);
         var sweep = ArrayNetwork.Sweep(design, slot, request.BandLow, request.BandHigh, options.SweepPoints);
-        var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
-        return (sweep, atDesign, points);
+        // ArrayFigures.ForSweep point by point, in parallel: each point's figures are a pure function of its network
+        // solution, so the order of evaluation cannot change them.
+        var top = sweep.Points.Count > 0 && sweep.Points[^1].Frequency > design.DesignFrequency ? sweep.Points[^1].Frequency : design.DesignFrequency;
+        var grid = ArrayFigures.DefaultGrid(design, top);
+        var points = new FrequencyFigures[sweep.Points.Count];
+        Parallel.For(0, points.Length, i => points[i] = ArrayFigures.At(design, sweep.Points[i], grid));
+        return (sweep, ArrayFigures.At(design, sweep.AtDesign, grid), Array.AsReadOnly(points));
     }
 
     /// <summary>Runs the whole pipeline.</summary>

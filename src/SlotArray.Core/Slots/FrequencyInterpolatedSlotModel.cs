@@ -87,8 +87,8 @@ public sealed class FrequencyInterpolatedSlotModel : IShuntSlotModel
 
     /// <summary>
     /// The interpolated admittance: y at the node when f is one, else the Lagrange interpolant through the
-    /// <see cref="Order"/> nodes nearest f (centred stencil). Falls back to the inner model when a node would lie at or
-    /// below 0 Hz.
+    /// <see cref="Order"/> nodes nearest f (centred stencil). Falls back to the inner model when a node of the stencil
+    /// would lie at or below the guide's TE10 cutoff.
     /// </summary>
     public Complex Admittance(double coupling, Length length, Frequency f)
     {
@@ -97,7 +97,7 @@ public sealed class FrequencyInterpolatedSlotModel : IShuntSlotModel
         double nearest = Math.Round(u);
         if (Math.Abs(u - nearest) <= 1e-9) return Node(coupling, length, (long)nearest);
         long first = (long)Math.Floor(u) - (Order / 2 - 1);
-        if (1 + first * Step <= 0.05) return Inner.Admittance(coupling, length, f);
+        if (!AboveCutoff(first)) return Inner.Admittance(coupling, length, f);
         var sum = Complex.Zero;
         for (int i = 0; i < Order; i++)
         {
@@ -122,10 +122,13 @@ public sealed class FrequencyInterpolatedSlotModel : IShuntSlotModel
         ArgumentNullException.ThrowIfNull(slots);
         long k0 = (long)Math.Floor((low.Hertz / Reference.Hertz - 1) / Step) - (Order / 2 - 1);
         long k1 = (long)Math.Ceiling((high.Hertz / Reference.Hertz - 1) / Step) + Order / 2;
-        if (1 + k0 * Step <= 0.05) return;
+        if (!AboveCutoff(k0)) return;
         var work = slots.Select(s => (Coupling: Math.Abs(s.Coupling), s.Length)).Distinct().SelectMany(s => Enumerable.Range(0, (int)(k1 - k0 + 1)).Select(i => (s, k: k0 + i))).ToArray();
         Parallel.ForEach(work, w => Node(w.s.Coupling, w.s.Length, w.k));
     }
+
+    /// <summary>Whether node k lies above the guide's TE10 cutoff (below it the inner model has no admittance).</summary>
+    private bool AboveCutoff(long k) => NodeFrequency(k).Hertz > Guide.CutoffTe10.Hertz * (1 + 1e-6);
 
     private Complex Node(double coupling, Length length, long k)
     {

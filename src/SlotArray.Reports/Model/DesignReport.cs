@@ -185,8 +185,15 @@ public sealed record TerminationReport
     /// <summary>Kind, e.g. "short" or "matched-load".</summary>
     public required string Type { get; init; }
 
-    /// <summary>Distance from the last slot centre to the short's inner face (or to the load), m.</summary>
+    /// <summary>Distance from the inner face of the short (or the load) to the nearest slot centre, m (at the datum end: slot 1).</summary>
     public required double Distance { get; init; }
+
+    /// <summary>The feed reference plane (where S11 is referred), m from datum A: the last slot centre for an end feed,
+    /// the series junction for a centre feed; null when not known.</summary>
+    public double? FeedPosition { get; init; }
+
+    /// <summary>Centre feed only: the inner face of the second end short beyond the last slot, m from datum A; null for an end feed.</summary>
+    public double? FarShortPosition { get; init; }
 }
 
 /// <summary>Pattern figures at the design frequency in the plane containing the guide axis, and the cut itself.</summary>

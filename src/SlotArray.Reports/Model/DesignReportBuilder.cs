@@ -90,6 +90,8 @@ public static class DesignReportBuilder
             {
                 Type = TerminationName(design.NearTermination.Kind),
                 Distance = design.NearTermination.Distance.Meters,
+                FeedPosition = design.FeedPlane.Meters,
+                FarShortPosition = design.FarTermination is { } far ? (design.Slots[^1].Position + far.Distance).Meters : null,
             },
             Pattern = new PatternReport
             {

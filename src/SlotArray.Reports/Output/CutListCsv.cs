@@ -37,6 +37,9 @@ public static class CutListCsv
             $"# wall: {Invariant.Mm(g.Wall)} mm; metal: {g.Metal}",
             $"# slots: {report.Inputs.SlotType}; {Invariant.Int(report.Slots.Count)} slots",
         };
+        if (report.Termination.FeedPosition is { } feed)
+            comments.Add($"# ends: datum A is position 0 (slot 1 is the slot nearest it); feed reference plane at {Invariant.Mm(feed)} mm"
+                + (report.Termination.FarShortPosition is { } far ? $"; second end short (inner face) at {Invariant.Mm(far)} mm: centre feed" : ": the feed guide continues beyond the last slot"));
         if (tilt)
         {
             comments.Add("# tilt_deg: signed tilt of the slot from the transverse direction; cut_depth_mm: depth of cut into each broad wall measured from the outer narrow-wall face");

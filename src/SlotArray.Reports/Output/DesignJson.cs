@@ -79,6 +79,8 @@ public static class DesignJson
         w.WriteStartObject("termination");
         w.WriteString("type", r.Termination.Type);
         Num(w, "distance_m", r.Termination.Distance);
+        if (r.Termination.FeedPosition is { } feed) Num(w, "feed_position_m", feed);
+        if (r.Termination.FarShortPosition is { } far) Num(w, "far_short_position_m", far);
         w.WriteEndObject();
 
         if (r.Load is { } load)
@@ -241,7 +243,13 @@ public static class DesignJson
                 AchievedAmplitude = D(s, "achieved_amplitude"),
                 AchievedPhaseDeg = D(s, "achieved_phase_deg"),
             })],
-            Termination = new TerminationReport { Type = Str(t, "type"), Distance = D(t, "distance_m") },
+            Termination = new TerminationReport
+            {
+                Type = Str(t, "type"),
+                Distance = D(t, "distance_m"),
+                FeedPosition = OptD(t, "feed_position_m"),
+                FarShortPosition = OptD(t, "far_short_position_m"),
+            },
             Pattern = new PatternReport
             {
                 BeamDeg = D(p, "beam_deg"),

@@ -32,7 +32,9 @@ public static class LayoutSvg
         double faceHeight = mm(tilt ? g.B + 2 * g.Wall : g.A + 2 * g.Wall);
         var slots = report.Slots.OrderBy(s => s.Position).ThenBy(s => s.Index).ToArray();
         double zEnd = slots.Length == 0 ? 0 : slots.Max(s => mm(s.Position + s.OverallLength / 2));
-        double faceLength = zEnd + Math.Max(mm(g.GuideWavelength) / 2, 15);
+        double faceLength = report.Termination.FarShortPosition is { } farEnd && mm(farEnd) >= zEnd
+            ? mm(farEnd)   // centre feed: the face ends at the second short
+            : zEnd + Math.Max(mm(g.GuideWavelength) / 2, 15);
 
         // table geometry
         string[] head = tilt
@@ -100,7 +102,18 @@ public static class LayoutSvg
         TextAt(left + 1, note + 4.5, tilt
             ? "narrow face shown, broad walls folded out above and below; z along the guide from datum A; + tilt: upper end farther from A"
             : "+x side at top; DATUM B: outside face of the -x side wall (bottom edge)", "start", Text);
-        TextAt(left + faceLength - 1, faceTop - 1.5, "to feed", "end", Text);
+        if (report.Termination.FarShortPosition is { } farShort && mm(farShort) <= faceLength)
+        {
+            // centre feed: the second end short and the series junction are part of the drawing
+            Line(left + mm(farShort), dimTop - 4, left + mm(farShort), faceBottom + 12, "datum");
+            TextAt(left + mm(farShort) - 1, faceTop - 1.5, "second end short (inner face)", "end", Text);
+            if (report.Termination.FeedPosition is { } junction)
+                TextAt(left + mm(junction), faceBottom + 3.5, "feed junction " + Invariant.Mm(junction), "middle", Text);
+        }
+        else
+        {
+            TextAt(left + faceLength - 1, faceTop - 1.5, "to feed", "end", Text);
+        }
 
         // slots, centre marks, numbers
         foreach (var s in slots)

@@ -62,10 +62,26 @@ public static class OutputFolder
         Directory.CreateDirectory(temp);
         try
         {
-            foreach (var f in files)
+            // Render every file in memory in parallel (the plots dominate), then write them in the fixed order.
+            var bytes = new byte[files.Count][];
+            try
             {
-                using var fs = new FileStream(Path.Combine(temp, f.Name), FileMode.CreateNew, FileAccess.Write, FileShare.None);
-                f.Write(report, fs);
+                Parallel.For(0, files.Count, i =>
+                {
+                    using var ms = new MemoryStream();
+                    files[i].Write(report, ms);
+                    bytes[i] = ms.ToArray();
+                });
+            }
+            catch (AggregateException e) when (e.InnerExceptions.Count > 0)
+            {
+                // a writer's own exception (not the AggregateException wrapper), as a sequential run throws it
+                System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
+            }
+            for (int i = 0; i < files.Count; i++)
+            {
+                using var fs = new FileStream(Path.Combine(temp, files[i].Name), FileMode.CreateNew, FileAccess.Write, FileShare.None);
+                fs.Write(bytes[i]);
             }
             if (Directory.Exists(target))
             {

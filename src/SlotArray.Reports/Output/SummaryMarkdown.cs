@@ -46,7 +46,9 @@ public static class SummaryMarkdown
         L("| --- | ---: | --- |");
         L($"| guide wavelength at the design frequency | {Invariant.Mm(g.GuideWavelength)} | mm |");
         L($"| TE10 wave impedance | {Invariant.Fixed(g.WaveImpedanceOhm, 2)} | Ω |");
-        L($"| termination: {Escape(report.Termination.Type)}, last slot centre to it | {Invariant.Mm(report.Termination.Distance)} | mm |");
+        L($"| termination: {Escape(report.Termination.Type)}, its inner face (datum A) to the centre of slot 1 | {Invariant.Mm(report.Termination.Distance)} | mm |");
+        if (report.Termination.FeedPosition is { } feed) L($"| feed reference plane from datum A | {Invariant.Mm(feed)} | mm |");
+        if (report.Termination.FarShortPosition is { } far) L($"| second end short (inner face) from datum A | {Invariant.Mm(far)} | mm |");
         L($"| beam direction from broadside | {Invariant.Fixed(p.BeamDeg, 2)} | deg |");
         L($"| half-power beamwidth | {Invariant.Fixed(p.HpbwDeg, 2)} | deg |");
         L($"| peak sidelobe (design level {Invariant.Fixed(p.DesignSidelobeDb, 1)} dB) | {Invariant.Fixed(p.PeakSidelobeDb, 2)} | dB |");
@@ -87,7 +89,7 @@ public static class SummaryMarkdown
         L();
         L("## Slots");
         L();
-        L($"Positions from datum A ({Escape(i.DatumDescription)}); {Invariant.Normalisation}; amplitudes linear, phase in degrees.");
+        L($"Positions from datum A ({Escape(i.DatumDescription)}); {Invariant.Normalisation}; amplitudes linear, each normalised to its largest value; phase in degrees.");
         L();
         if (tilt)
         {
