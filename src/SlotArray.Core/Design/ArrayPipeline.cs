@@ -35,7 +35,15 @@ public sealed record ArrayResult(
     IReadOnlyList<FrequencyFigures> SweepFigures,
     MatchBand? BandVswr15,
     MatchBand? BandVswr2,
-    IReadOnlyList<DesignWarning> Warnings);
+    IReadOnlyList<DesignWarning> Warnings)
+{
+    /// <summary>
+    /// <c>coupling: mutual</c> only: Elliott's design with its iteration history, and the coupled and isolated-slot
+    /// designs side by side under the coupled analysis; null for <c>coupling: none</c>. When set, <see cref="Design"/> is
+    /// the coupled design and <see cref="Sweep"/>, the figures and the bands come from the coupled analysis.
+    /// </summary>
+    public ElliottComparison? Coupling { get; init; }
+}
 
 /// <summary>
 /// The pipeline of architecture.md as one pure function: request → taper → slot model → designer → network
@@ -91,6 +99,7 @@ public static class ArrayPipeline
         options ??= AnalysisOptions.Default;
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
         var slot = SlotModelFor(request);
+        if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
         var design = Synthesise(request, slot, taper);
         var (sweep, atDesign, points) = Analyse(request, design, slot, options);
         var f0 = request.DesignFrequency;
@@ -102,5 +111,26 @@ public static class ArrayPipeline
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
             .DistinctBy(w => w.Message).ToList();
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings);
+    }
+
+    /// <summary>
+    /// <c>coupling: mutual</c>: Elliott's design (<see cref="ElliottDesigner"/>), the band analysed with the coupled
+    /// network (<see cref="CoupledArrayNetwork"/>), VSWR bands from that sweep, and the comparison with the isolated-slot design.
+    /// </summary>
+    private static ArrayResult RunCoupled(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
+    {
+        if (request.Feed.Type != FeedType.StandingWave)
+            throw new InfeasibleDesignException(
+                $"coupling: mutual is implemented for standing-wave feeds only; the '{request.Feed.Type}' feed has no coupled designer yet: use coupling: none");
+        var elliott = ElliottDesigner.Design(request, slot, taper.Weights);
+        var design = elliott.Design;
+        var sweep = CoupledArrayNetwork.Sweep(design, slot, request.BandLow, request.BandHigh, options.SweepPoints);
+        var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
+        var comparison = ElliottComparison.Of(elliott, slot, request.BandLow, request.BandHigh);
+        var warnings = taper.Warnings.Concat(design.Warnings).DistinctBy(w => w.Message).ToList();
+        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
+        {
+            Coupling = comparison,
+        };
     }
 }
