@@ -1,4 +1,6 @@
+using System.Collections.Concurrent;
 using System.Numerics;
+using System.Runtime.CompilerServices;
 using SlotArray.Core.Coupling;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
@@ -68,6 +70,19 @@ public static class ElliottDesigner
 {
     private const int NewtonIterations = 60;
 
+    private static readonly ConditionalWeakTable<IShuntSlotModel, ConcurrentDictionary<double, ElliottSlotSurrogate>> Surrogates = new();
+
+    /// <summary>
+    /// The surrogate of <paramref name="slot"/> at frequency f, built once per model and frequency and cached (the build
+    /// costs <see cref="ElliottSlotSurrogate.OffsetNodes"/> × <see cref="ElliottSlotSurrogate.RatioNodes"/> direct solves;
+    /// the result depends only on the model and f, so caching does not change any design).
+    /// </summary>
+    public static ElliottSlotSurrogate SurrogateFor(IShuntSlotModel slot, Frequency f)
+    {
+        ArgumentNullException.ThrowIfNull(slot);
+        return Surrogates.GetOrCreateValue(slot).GetOrAdd(f.Hertz, _ => new ElliottSlotSurrogate(slot, f));
+    }
+
     /// <summary>
     /// Designs the array. Throws <see cref="InfeasibleDesignException"/> when a slot would need an offset or length
     /// outside the slot model's range, and <see cref="ConvergenceException"/> when the iteration does not meet the
@@ -91,7 +106,7 @@ public static class ElliottDesigner
         var f0 = request.DesignFrequency;
         var guide = request.Guide;
         int n = uncoupled.Count;
-        var surrogate = new ElliottSlotSurrogate(slot, f0);
+        var surrogate = SurrogateFor(slot, f0);
         double scale = 1 / (ElliottDesignEquations.Gamma0(guide, f0) * PhysicalConstants.HalfWaveDipoleResistance);
         double halves = request.Feed.Position == FeedPosition.Centre ? StandingWaveDesigner.CentreJunctionRatio : 1;
 
