@@ -148,9 +148,11 @@ public static class ArrayPipeline
                 $"coupling: mutual is implemented for standing-wave feeds only; the '{request.Feed.Type}' feed has no coupled designer yet: use coupling: none");
         var elliott = ElliottDesigner.Design(request, slot, taper.Weights);
         var design = elliott.Design;
-        var sweep = CoupledArrayNetwork.Sweep(design, slot, request.BandLow, request.BandHigh, options.SweepPoints);
+        var analysis = AnalysisModel(request, design, slot, options);
+        var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
-        var comparison = ElliottComparison.Of(elliott, slot, request.BandLow, request.BandHigh);
+        var comparison = ElliottComparison.Of(elliott, analysis, AnalysisModel(request, elliott.Uncoupled, slot, options),
+            request.BandLow, request.BandHigh);
         var warnings = taper.Warnings.Concat(design.Warnings).DistinctBy(w => w.Message).ToList();
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
         {

@@ -29,10 +29,16 @@ public sealed record ElliottComparison(ElliottResult Elliott, CoupledFigures Cou
     public const int BestMatchSamples = 41;
 
     /// <summary>Analyses both designs of <paramref name="elliott"/> over [low, high] with the coupled network.</summary>
-    public static ElliottComparison Of(ElliottResult elliott, IShuntSlotModel slot, Quantities.Frequency low, Quantities.Frequency high)
+    /// <param name="elliott">The coupled design and the isolated-slot design it started from.</param>
+    /// <param name="coupledSlot">The slot model evaluated for the coupled design (e.g. frequency-interpolated on its slots).</param>
+    /// <param name="uncoupledSlot">The slot model evaluated for the isolated-slot design.</param>
+    /// <param name="low">Lower edge of the best-match search.</param>
+    /// <param name="high">Upper edge of the best-match search.</param>
+    public static ElliottComparison Of(ElliottResult elliott, IShuntSlotModel coupledSlot, IShuntSlotModel uncoupledSlot,
+        Quantities.Frequency low, Quantities.Frequency high)
     {
         ArgumentNullException.ThrowIfNull(elliott);
-        return new ElliottComparison(elliott, Figures(elliott.Design, slot, low, high), Figures(elliott.Uncoupled, slot, low, high));
+        return new ElliottComparison(elliott, Figures(elliott.Design, coupledSlot, low, high), Figures(elliott.Uncoupled, uncoupledSlot, low, high));
     }
 
     private static CoupledFigures Figures(ArrayDesign d, IShuntSlotModel slot, Quantities.Frequency low, Quantities.Frequency high)

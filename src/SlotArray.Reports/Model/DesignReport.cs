@@ -52,6 +52,9 @@ public sealed record DesignReport
 
     /// <summary>Optional summary lines of a tolerance (Monte Carlo) study; empty when none was run.</summary>
     public IReadOnlyList<string> Tolerance { get; init; } = [];
+
+    /// <summary><c>coupling: mutual</c>: the coupled and isolated-slot designs side by side; null otherwise.</summary>
+    public CouplingReport? Coupling { get; init; }
 }
 
 /// <summary>The waveguide: inside dimensions, wall, metal and the TE10 figures at the design frequency.</summary>

@@ -127,6 +127,7 @@ public static class DesignReportBuilder
             Warnings = warnings,
             Cautions = Cautions(result),
             Requirements = requirements,
+            Coupling = CouplingReport.Of(result),
         };
     }
 

@@ -63,6 +63,7 @@ public static class SummaryMarkdown
             L($"| worst VSWR over the sweep ({Invariant.Ghz(report.Sweep[0].FrequencyHz)} to {Invariant.Ghz(report.Sweep[^1].FrequencyHz)} GHz) | {Invariant.Fixed((1 + worst) / (1 - worst), 3)} | |");
         }
         L();
+        if (report.Coupling is { } coupling) CouplingSummary.Write(coupling, s => L(s));
         L("## Requirements");
         L();
         if (report.Requirements.Count == 0) L("No requirements were given.");
