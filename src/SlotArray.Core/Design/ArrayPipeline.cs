@@ -120,6 +120,9 @@ public static class ArrayPipeline
     {
         ArgumentNullException.ThrowIfNull(request);
         options ??= AnalysisOptions.Default;
+        if (request.Coupling == CouplingMode.Mutual && (request.Feed.Type != FeedType.StandingWave || request.Slots.Type != SlotType.Longitudinal))
+            throw new InfeasibleDesignException(
+                $"coupling: mutual is implemented for standing-wave arrays of longitudinal slots only; a {request.Feed.Type} feed with {request.Slots.Type} slots has no coupled designer yet: use coupling: none");
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
         var slot = SlotModelFor(request);
         if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
@@ -143,9 +146,6 @@ public static class ArrayPipeline
     /// </summary>
     private static ArrayResult RunCoupled(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
     {
-        if (request.Feed.Type != FeedType.StandingWave)
-            throw new InfeasibleDesignException(
-                $"coupling: mutual is implemented for standing-wave feeds only; the '{request.Feed.Type}' feed has no coupled designer yet: use coupling: none");
         var elliott = ElliottDesigner.Design(request, slot, taper.Weights);
         var design = elliott.Design;
         var analysis = AnalysisModel(request, design, slot, options);
