@@ -92,15 +92,6 @@ public sealed class ElliottSlotSurrogate
     /// <summary>Resonant full length L_r(x) (m) interpolated over x².</summary>
     public double ResonantLength(double offset) => lr.Interpolate(offset * offset);
 
-    /// <summary>Whether (x, L) lies inside the grid (|x| ≤ the largest offset, L/L_r(x) within the ratio range).</summary>
-    public bool Covers(double offset, double length)
-    {
-        double x = Math.Abs(offset);
-        if (!(x <= MaximumOffset * (1 + 1e-12)) || !(length > 0)) return false;
-        double r = length / ResonantLength(x);
-        return r >= MinimumRatio && r <= MaximumRatio;
-    }
-
     /// <summary>The interpolated admittance y = Y/G0 of a slot of offset x (m, either sign) and full length L (m).</summary>
     public Complex Admittance(double offset, double length)
     {
