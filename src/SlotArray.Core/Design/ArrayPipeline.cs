@@ -45,6 +45,13 @@ public sealed record ArrayResult(
 {
     /// <summary>Travelling-wave feed: the designer's figures (targets, refinement, squint, scan rate); null for a standing-wave feed.</summary>
     public TravellingWaveDesign? TravellingWave { get; init; }
+
+    /// <summary>
+    /// <c>coupling: mutual</c> only: Elliott's design with its iteration history, and the coupled and isolated-slot
+    /// designs side by side under the coupled analysis; null for <c>coupling: none</c>. When set, <see cref="Design"/> is
+    /// the coupled design and <see cref="Sweep"/>, the figures and the bands come from the coupled analysis.
+    /// </summary>
+    public ElliottComparison? Coupling { get; init; }
 }
 
 /// <summary>
@@ -133,8 +140,12 @@ public static class ArrayPipeline
     {
         ArgumentNullException.ThrowIfNull(request);
         options ??= AnalysisOptions.Default;
+        if (request.Coupling == CouplingMode.Mutual && (request.Feed.Type != FeedType.StandingWave || request.Slots.Type != SlotType.Longitudinal))
+            throw new InfeasibleDesignException(
+                $"coupling: mutual is implemented for standing-wave arrays of longitudinal slots only; a {request.Feed.Type} feed with {request.Slots.Type} slots has no coupled designer yet: use coupling: none");
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
         var slot = SlotModelFor(request);
+        if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
         var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
@@ -147,5 +158,25 @@ public static class ArrayPipeline
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
             .DistinctBy(w => w.Message).ToList();
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling };
+    }
+
+    /// <summary>
+    /// <c>coupling: mutual</c>: Elliott's design (<see cref="ElliottDesigner"/>), the band analysed with the coupled
+    /// network (<see cref="CoupledArrayNetwork"/>), VSWR bands from that sweep, and the comparison with the isolated-slot design.
+    /// </summary>
+    private static ArrayResult RunCoupled(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
+    {
+        var elliott = ElliottDesigner.Design(request, slot, taper.Weights);
+        var design = elliott.Design;
+        var analysis = AnalysisModel(request, design, slot, options);
+        var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
+        var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
+        var comparison = ElliottComparison.Of(elliott, analysis, AnalysisModel(request, elliott.Uncoupled, slot, options),
+            request.BandLow, request.BandHigh);
+        var warnings = taper.Warnings.Concat(design.Warnings).DistinctBy(w => w.Message).ToList();
+        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
+        {
+            Coupling = comparison,
+        };
     }
 }

@@ -58,6 +58,9 @@ public sealed record DesignReport
 
     /// <summary>Travelling-wave arrays: squint, scan rate, efficiency and the designer's refinement; null otherwise.</summary>
     public TravellingWaveReport? TravellingWave { get; init; }
+
+    /// <summary><c>coupling: mutual</c>: the coupled and isolated-slot designs side by side; null otherwise.</summary>
+    public CouplingReport? Coupling { get; init; }
 }
 
 /// <summary>The matched load of a travelling-wave array.</summary>

@@ -139,6 +139,7 @@ public static class DesignReportBuilder
             Requirements = requirements,
             Load = result.TravellingWave is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
             TravellingWave = result.TravellingWave is { } t ? TravellingWaveOf(result, t) : null,
+            Coupling = CouplingReport.Of(result),
         };
     }
 

@@ -82,6 +82,7 @@ public static class SummaryMarkdown
         L();
         WriteScan(report, L);
         L();
+        if (report.Coupling is { } coupling) CouplingSummary.Write(coupling, s => L(s));
         L("## Requirements");
         L();
         if (report.Requirements.Count == 0) L("No requirements were given.");
