@@ -113,6 +113,17 @@ public static class DesignCommand
             o.WriteLine(string.Format(Inv, "  squint, scan rate      {0:0.00} deg (+ toward the load), {1:0.000} deg per 100 MHz", tw.SquintDeg, tw.ScanFromSweepDegPer100MHz));
             o.WriteLine(string.Format(Inv, "  load power, efficiency {0:0.00} % of input (asked {1:0.##} %), {2:0.0} % radiated", load.PowerWPerWIn * 100, load.Fraction * 100, tw.Efficiency * 100));
         }
+        if (r.Coupling is { } c)
+        {
+            o.WriteLine("  Elliott's design with mutual coupling:");
+            foreach (var it in c.Iterations)
+                o.WriteLine(string.Format(Inv, "    iteration {0,2}: offsets move ≤ {1:0.00000} mm, lengths ≤ {2:0.00000} mm (slot {3}), match error {4:0.000000}",
+                    it.Index, it.MaximumOffsetChange * 1e3, it.MaximumLengthChange * 1e3, it.WorstSlot, it.MatchError));
+            o.WriteLine("                         coupled design   isolated-slot design (both with coupling in the analysis)");
+            o.WriteLine(string.Format(Inv, "  S11 at design         {0,10:0.00} dB    {1,10:0.00} dB", c.Coupled.S11DbAtDesign, c.Uncoupled.S11DbAtDesign));
+            o.WriteLine(string.Format(Inv, "  best match at         {0,10:0.0000} GHz   {1,10:0.0000} GHz", c.Coupled.BestMatchHz * 1e-9, c.Uncoupled.BestMatchHz * 1e-9));
+            o.WriteLine(string.Format(Inv, "  peak sidelobe         {0,10:0.00} dB    {1,10:0.00} dB", c.Coupled.PeakSidelobeDb, c.Uncoupled.PeakSidelobeDb));
+        }
         if (p.CrossPolarDb is { } xpol)
             o.WriteLine(string.Format(Inv, "  cross-polar peak       {0:0.00} dB at {1:0.0} deg", xpol, p.CrossPolarDirectionDeg ?? double.NaN));
         foreach (var q in r.Requirements)
