@@ -105,23 +105,10 @@ public static class StandingWaveDesigner
 
     private static void CheckTaper(ArrayRequest request, IReadOnlyList<double> amplitudes, int n, bool centre)
     {
-        if (n < 2)
-            throw new InfeasibleDesignException($"a standing-wave array needs at least 2 slots, the request has {n}: set slots.count ≥ 2");
-        if (amplitudes.Count != n)
-            throw new InfeasibleDesignException(
-                $"the taper gives {amplitudes.Count} amplitudes but the array has {n} slots: give {n} weights or set slots.count: {amplitudes.Count}");
+        TaperChecks.Require(request, amplitudes, n, "standing-wave");
         if (centre && n % 2 != 0)
             throw new InfeasibleDesignException(
                 $"a centre-fed array is two equal halves, but the request has an odd slot count {n}: use {n - 1} or {n + 1} slots, or feed at the end");
-        for (int i = 0; i < n; i++)
-        {
-            double a = amplitudes[i];
-            if (!double.IsFinite(a))
-                throw new InfeasibleDesignException($"slot {i + 1} has amplitude {a}: the taper weights must be finite numbers");
-            if (a == 0)
-                throw new InfeasibleDesignException(
-                    $"slot {i + 1} has amplitude 0, which needs a slot on the centreline that does not radiate: remove that slot or give it a non-zero weight ({request.Taper.Type} taper)");
-        }
     }
 
     private static void CheckConductances(double[] g, IShuntSlotModel slot, Frequency f0)

@@ -294,22 +294,7 @@ public static class TravellingWaveDesigner
     }
 
     private static void CheckTaper(ArrayRequest request, IReadOnlyList<double> amplitudes, int n)
-    {
-        if (n < 2)
-            throw new InfeasibleDesignException($"a travelling-wave array needs at least 2 slots, the request has {n}: set slots.count ≥ 2");
-        if (amplitudes.Count != n)
-            throw new InfeasibleDesignException(
-                $"the taper gives {amplitudes.Count} amplitudes but the array has {n} slots: give {n} weights or set slots.count: {amplitudes.Count}");
-        for (int i = 0; i < n; i++)
-        {
-            double a = amplitudes[i];
-            if (!double.IsFinite(a))
-                throw new InfeasibleDesignException($"slot {i + 1} has amplitude {a}: the taper weights must be finite numbers");
-            if (a == 0)
-                throw new InfeasibleDesignException(
-                    $"slot {i + 1} has amplitude 0, which needs a slot that does not radiate: remove that slot or give it a non-zero weight ({request.Taper.Type} taper)");
-        }
-    }
+        => TaperChecks.Require(request, amplitudes, n, "travelling-wave");
 
     private static void CheckConductances(double[] g, IShuntSlotModel slot, Frequency f0, double loadFraction)
     {
