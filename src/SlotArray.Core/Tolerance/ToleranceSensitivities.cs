@@ -19,7 +19,7 @@ public enum ToleranceQuantity
 /// <param name="Slot">1-based slot number.</param>
 /// <param name="Quantity">The dimension.</param>
 /// <param name="DsllDbPerMm">d(peak sidelobe, dB)/d(error, mm).</param>
-/// <param name="Ds11DbPerMm">d(20 log10 |S11| at the design frequency, dB)/d(error, mm).</param>
+/// <param name="Ds11DbPerMm">d(20 log10 |S11| at the design frequency, dB)/d(error, mm). Near a perfect match |S11| has a zero and this derivative of its logarithm mostly reflects the step (the curvature of g); the Monte Carlo S11 percentiles are then the useful figure.</param>
 public sealed record SlotSensitivity(int Slot, ToleranceQuantity Quantity, double DsllDbPerMm, double Ds11DbPerMm);
 
 /// <summary>
