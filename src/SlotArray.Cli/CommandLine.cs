@@ -20,6 +20,7 @@ public static class CommandLine
             CheckCommand.Build(output, error),
             SlotCommand.Build(output, error),
             TaperCommand.Build(output, error),
+            ToleranceCommand.Build(output, error),
         };
         return root;
     }
