@@ -54,9 +54,9 @@ public static class ToleranceCommand
             $"{path}: the spec has no tolerance: block; add one, e.g. 'tolerance: {{offset: 0.02 mm, length: 0.02 mm, trials: 2000, seed: 1}}'");
         tol = tol with { Trials = trials ?? tol.Trials, Seed = seed ?? tol.Seed };
 
-        var nominal = ArrayPipeline.Run(request);
-        foreach (var w in nominal.Warnings) error.WriteLine($"warning: {w.Message}");
-        var result = Analyse(nominal, tol, interactive: !json && !Console.IsOutputRedirected && AnsiConsole.Profile.Capabilities.Interactive);
+        var (design, slot) = ToleranceAnalysis.Design(request);
+        foreach (var w in design.Warnings) error.WriteLine($"warning: {w.Message}");
+        var result = Analyse(request, design, slot, tol, interactive: !json && !Console.IsOutputRedirected && AnsiConsole.Profile.Capabilities.Interactive);
 
         Write(dir, request, result);
         if (json) output.Write(ToleranceJson.ToText(request.Name, request.DesignFrequency.Hertz, result));
@@ -69,15 +69,15 @@ public static class ToleranceCommand
     }
 
     /// <summary>Runs the analysis, with a Spectre progress bar when <paramref name="interactive"/>.</summary>
-    private static ToleranceResult Analyse(ArrayResult nominal, ToleranceRequest tol, bool interactive)
+    private static ToleranceResult Analyse(ArrayRequest request, ArrayDesign design, Core.Slots.IShuntSlotModel slot, ToleranceRequest tol, bool interactive)
     {
-        if (!interactive) return ToleranceAnalysis.Run(nominal, tol);
+        if (!interactive) return ToleranceAnalysis.Run(request, design, slot, tol);
         ToleranceResult? result = null;
         AnsiConsole.Progress().Start(ctx =>
         {
             var task = ctx.AddTask("Monte Carlo trials", maxValue: tol.Trials);
             var gate = new object();
-            result = ToleranceAnalysis.Run(nominal, tol, progress: done => { lock (gate) task.Value = Math.Max(task.Value, done); });
+            result = ToleranceAnalysis.Run(request, design, slot, tol, progress: done => { lock (gate) task.Value = Math.Max(task.Value, done); });
             task.Value = tol.Trials;
         });
         return result!;

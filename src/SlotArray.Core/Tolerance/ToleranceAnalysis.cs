@@ -31,6 +31,19 @@ public static class ToleranceAnalysis
         return (guide, width) => ArrayPipeline.SlotModelFor(request with { Guide = guide, Slots = request.Slots with { Width = width } });
     }
 
+    /// <summary>
+    /// The nominal design by the pipeline's own stages (taper, slot model, designer: <see cref="ArrayPipeline"/>) without
+    /// its band sweep, which the tolerance analysis at the design frequency does not need.
+    /// </summary>
+    /// <exception cref="InfeasibleDesignException">The request cannot be realised.</exception>
+    public static (ArrayDesign Design, Slots.IShuntSlotModel Slot) Design(ArrayRequest request)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        var taper = Tapers.TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
+        var slot = ArrayPipeline.SlotModelFor(request);
+        return (ArrayPipeline.Synthesise(request, slot, taper), slot);
+    }
+
     /// <summary>Runs the analysis of a pipeline result.</summary>
     /// <param name="nominal">The pipeline's result for the request.</param>
     /// <param name="tolerance">The tolerances; the request's when null.</param>
@@ -41,11 +54,26 @@ public static class ToleranceAnalysis
         Action<int>? progress = null)
     {
         ArgumentNullException.ThrowIfNull(nominal);
-        var tol = tolerance ?? nominal.Request.Tolerance
+        return Run(nominal.Request, nominal.Design, nominal.SlotModel, tolerance, options, progress);
+    }
+
+    /// <summary>Runs the analysis of a design.</summary>
+    /// <param name="request">The request the design answers (tolerances, sidelobe target, slot-model kind).</param>
+    /// <param name="design">The nominal design.</param>
+    /// <param name="slot">The slot model the design used.</param>
+    /// <param name="tolerance">The tolerances; the request's when null.</param>
+    /// <param name="options">Grids, surrogate nodes and threads.</param>
+    /// <param name="progress">Called with the trials done so far (from worker threads), or null.</param>
+    /// <exception cref="ArgumentException">Neither the request nor the caller gives tolerances.</exception>
+    public static ToleranceResult Run(ArrayRequest request, ArrayDesign design, Slots.IShuntSlotModel slot, ToleranceRequest? tolerance = null,
+        ToleranceOptions? options = null, Action<int>? progress = null)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        var tol = tolerance ?? request.Tolerance
             ?? throw new ArgumentException("the spec has no tolerance: block; add one (e.g. offset: 0.02 mm, length: 0.02 mm)", nameof(tolerance));
         options ??= ToleranceOptions.Default;
-        var model = ArrayTrialModel.Build(nominal.Design, nominal.SlotModel, FactoryFor(nominal.Request), tol, options);
-        var mc = ToleranceMonteCarlo.Run(model, tol.Trials, tol.Seed, TargetDb(nominal.Request), options, progress);
+        var model = ArrayTrialModel.Build(design, slot, FactoryFor(request), tol, options);
+        var mc = ToleranceMonteCarlo.Run(model, tol.Trials, tol.Seed, TargetDb(request), options, progress);
         var sens = ToleranceSensitivities.Compute(model, options);
         return new ToleranceResult(tol, mc, sens, model.SurrogateSamples);
     }

@@ -20,7 +20,7 @@ public static class ToleranceSummary
         var lines = new List<string>
         {
             string.Format(CultureInfo.InvariantCulture, "With {0}, {1} % of builds meet {2} dB ({3} trials, seed {4}).",
-                Applied(result.Tolerance), Invariant.Fixed(100 * mc.ProbabilityMeetsTarget, 0), Invariant.Fixed(mc.TargetDb, 1), Invariant.Int(mc.Trials), Invariant.Int(mc.Seed)),
+                Applied(result.Tolerance), Invariant.Fixed(100 * mc.ProbabilityMeetsTarget, 1), Invariant.Fixed(mc.TargetDb, 1), Invariant.Int(mc.Trials), Invariant.Int(mc.Seed)),
             $"Peak sidelobe: nominal {Invariant.Fixed(mc.Nominal.PeakSidelobeDb, 2)} dB; over the builds mean {Invariant.Fixed(mc.PeakSidelobeDb.Mean, 2)} dB, median {Invariant.Fixed(mc.PeakSidelobeDb.P50, 2)} dB, 90 % {Invariant.Fixed(mc.PeakSidelobeDb.P90, 2)} dB, 95 % {Invariant.Fixed(mc.PeakSidelobeDb.P95, 2)} dB, 99 % {Invariant.Fixed(mc.PeakSidelobeDb.P99, 2)} dB.",
             $"Gain loss: mean {Invariant.Fixed(mc.GainLossDb.Mean, 3)} dB, 95 % of builds lose less than {Invariant.Fixed(mc.GainLossDb.P95, 3)} dB; beam pointing within {Invariant.Fixed(mc.PointingErrorDeg.P95, 3)} deg for 95 %.",
             $"Match at the design frequency: S11 median {Invariant.Fixed(mc.S11Db.P50, 1)} dB, 95 % of builds below {Invariant.Fixed(mc.S11Db.P95, 1)} dB (nominal {Invariant.Fixed(mc.Nominal.S11Db, 1)} dB).",

@@ -22,7 +22,7 @@ public static class TolerancePlot
     public static PlotModel Build(string name, MonteCarloResult result, int bins = 40)
     {
         ArgumentNullException.ThrowIfNull(result);
-        var m = PlotExport.NewModel($"{name}: machining tolerances, {Invariant.Int(result.Trials)} builds, {Invariant.Fixed(100 * result.ProbabilityMeetsTarget, 0)} % meet {Invariant.Fixed(result.TargetDb, 1)} dB");
+        var m = PlotExport.NewModel($"{name}: machining tolerances, {Invariant.Int(result.Trials)} builds, {Invariant.Fixed(100 * result.ProbabilityMeetsTarget, 1)} % meet {Invariant.Fixed(result.TargetDb, 1)} dB");
         m.Legends.Add(new Legend { LegendPosition = LegendPosition.TopRight, LegendPlacement = LegendPlacement.Inside, LegendBackground = OxyColor.FromAColor(220, OxyColors.White) });
 
         var samples = result.PeakSidelobeSamples;
