@@ -52,11 +52,11 @@ public static class ToleranceMonteCarlo
             int now = Interlocked.Add(ref done, end - c * Chunk);
             progress?.Invoke(now);
         });
-        return Reduce(model, seed, targetDb, evaluator, nominal, outcomes);
+        return Reduce(model, seed, targetDb, evaluator, nominal, outcomes, options.Threads);
     }
 
     private static MonteCarloResult Reduce(IToleranceTrialModel model, int seed, double targetDb, TrialEvaluator evaluator,
-        TrialOutcome nominal, TrialOutcome[] outcomes)
+        TrialOutcome nominal, TrialOutcome[] outcomes, int threads)
     {
         int trials = outcomes.Length, n = model.Nominal.Excitations.Length;
         var psl = new double[trials];
@@ -86,10 +86,10 @@ public static class ToleranceMonteCarlo
         var figures = new NominalFigures(nominal.PeakSidelobeDb, nominal.BeamDirection * 180 / Math.PI, nominal.S11Db, nominal.Gain);
         return new MonteCarloResult(trials, seed, targetDb, figures, SampleSummary.Of(psl), (double)meets / trials,
             SampleSummary.Of(loss), SampleSummary.Of(point), SampleSummary.Of(s11), Math.Sqrt(sa2), Math.Sqrt(sp2), Math.Sqrt(sz2), eta,
-            analytic, mcFloor, Array.AsReadOnly(psl), Envelope(evaluator, nominal, outcomes));
+            analytic, mcFloor, Array.AsReadOnly(psl), Envelope(evaluator, nominal, outcomes, threads));
     }
 
-    private static PatternEnvelope? Envelope(TrialEvaluator evaluator, TrialOutcome nominal, TrialOutcome[] outcomes)
+    private static PatternEnvelope? Envelope(TrialEvaluator evaluator, TrialOutcome nominal, TrialOutcome[] outcomes, int threads)
     {
         if (nominal.Envelope is null) return null;
         int m = nominal.Envelope.Length;
@@ -97,7 +97,7 @@ public static class ToleranceMonteCarlo
         var p50 = new double[m];
         var p95 = new double[m];
         var max = new double[m];
-        Parallel.For(0, m, j =>
+        Parallel.For(0, m, new ParallelOptions { MaxDegreeOfParallelism = threads }, j =>
         {
             var column = new double[outcomes.Length];
             for (int i = 0; i < column.Length; i++) column[i] = outcomes[i].Envelope![j];

@@ -1,7 +1,7 @@
 namespace SlotArray.Core.Tolerance;
 
 /// <summary>How the tolerance analysis samples and evaluates.</summary>
-/// <param name="PatternPoints">Angles of each trial's pattern cut, uniform in θ over the half-space; ≥ 256, default 2048.</param>
+/// <param name="PatternPoints">Angles of each trial's pattern cut, uniform in θ over the half-space; ≥ 256, default 2048 (an even count is raised by one so that broadside is a sample).</param>
 /// <param name="SurrogateNodes">Chebyshev nodes per variable of each slot's (coupling, length) surrogate; odd, ≥ 3, default 5.</param>
 /// <param name="MaxThreads">Worker threads; 0 (default) uses every core. Results do not depend on it.</param>
 /// <param name="EnvelopePoints">Angles kept per trial for the percentile envelope (a subsample of the cut); 0 keeps none; default 256.</param>

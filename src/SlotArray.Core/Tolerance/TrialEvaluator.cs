@@ -40,12 +40,17 @@ internal sealed class TrialEvaluator
     private readonly TrialNetwork nominal;
     private readonly double[] nominalPatternPositions;
     private readonly double nominalPeakPower;
+    private readonly NearUniformArrayFactor? gridSum, floorSum;
+    private readonly HalfSpacePowerKernel? powerKernel;
+    private readonly Complex[]? nominalFloorField;
 
     public TrialEvaluator(TrialNetwork nominal, double wavenumber, ToleranceOptions options)
     {
         this.nominal = nominal;
         k = wavenumber;
-        grid = AngleGrid.HalfSpaceInTheta(options.PatternPoints);
+        // An odd count puts broadside on a sample: an even grid straddles a symmetric beam with two equal samples,
+        // and the metrics would count the second as a sidelobe.
+        grid = AngleGrid.HalfSpaceInTheta(options.PatternPoints | 1);
         var e = ElementPatterns.HalfWaveSlotHPlane;
         element = grid.Theta.Select(e).ToArray();
         envelopeStride = options.EnvelopePoints == 0 ? 0 : Math.Max(1, options.PatternPoints / options.EnvelopePoints);
@@ -68,7 +73,14 @@ internal sealed class TrialEvaluator
                 quadWeights[i] = 0.5 * h * rule.Weights[q] * el * el;
             }
         nominalPatternPositions = nominal.Positions.Select(z => -z).ToArray();
-        var metrics = PatternOf(nominalPatternPositions, nominal.Excitations, out _);
+        if (IsEquallySpaced(nominalPatternPositions))
+        {
+            gridSum = new NearUniformArrayFactor(nominalPatternPositions, k, grid.Sines.ToArray());
+            floorSum = new NearUniformArrayFactor(nominalPatternPositions, k, floorSines);
+            powerKernel = new HalfSpacePowerKernel(nominalPatternPositions, k, e);
+            nominalFloorField = floorSum.Evaluate(nominal.Excitations, new double[nominal.Excitations.Length]);
+        }
+        var metrics = PatternOf(nominalPatternPositions, nominal.Excitations, new double[nominal.Excitations.Length], out _);
         var af0 = ArrayFactor.AtSines(nominalPatternPositions, nominal.Excitations, k, [Math.Sin(metrics.BeamDirection.Radians)])[0];
         nominalPeakPower = af0.Real * af0.Real + af0.Imaginary * af0.Imaginary;
         EnvelopeAngles = envelopeStride == 0 ? [] : Enumerable.Range(0, grid.Count).Where(i => i % envelopeStride == 0).Select(i => grid.Theta[i]).ToArray();
@@ -77,9 +89,18 @@ internal sealed class TrialEvaluator
     /// <summary>θ of the envelope samples, rad.</summary>
     public double[] EnvelopeAngles { get; }
 
-    private PatternMetrics PatternOf(double[] patternPositions, Complex[] excitations, out Pattern pattern)
+    private static bool IsEquallySpaced(double[] p)
     {
-        var af = ArrayFactor.AtSines(patternPositions, excitations, k, grid.Sines.AsSpan());
+        if (p.Length < 2) return false;
+        double d = (p[^1] - p[0]) / (p.Length - 1), tol = 1e-12 * Math.Abs(p[^1] - p[0]);
+        for (int i = 0; i < p.Length; i++) if (Math.Abs(p[i] - (p[0] + i * d)) > tol) return false;
+        return d != 0;
+    }
+
+    /// <summary>The cut for excitations at the pattern positions <paramref name="patternPositions"/> = nominal + <paramref name="offsets"/>.</summary>
+    private PatternMetrics PatternOf(double[] patternPositions, Complex[] excitations, double[] offsets, out Pattern pattern)
+    {
+        var af = gridSum is not null ? gridSum.Evaluate(excitations, offsets) : ArrayFactor.AtSines(patternPositions, excitations, k, grid.Sines.AsSpan());
         for (int i = 0; i < af.Length; i++) af[i] *= element[i];
         pattern = new Pattern(grid, ImmutableArray.Create(af));
         return PatternMetrics.Measure(pattern);
@@ -89,16 +110,24 @@ internal sealed class TrialEvaluator
     {
         int n = t.Positions.Length;
         var pos = new double[n];
-        for (int i = 0; i < n; i++) pos[i] = -t.Positions[i];
-        var metrics = PatternOf(pos, t.Excitations, out var pattern);
+        var offsets = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            pos[i] = -t.Positions[i];
+            offsets[i] = pos[i] - nominalPatternPositions[i];
+        }
+        var metrics = PatternOf(pos, t.Excitations, offsets, out var pattern);
         double beam = metrics.BeamDirection.Radians;
 
         // Half-space directivity D = 4 |E·AF|²(θb) / ∫ |E·AF|² du (Directivity.HalfSpace, same rule).
         var afBeam = ArrayFactor.AtSines(pos, t.Excitations, k, [Math.Sin(beam)])[0];
         double eb = ElementPatterns.HalfWaveSlotHPlane(beam);
-        var afq = ArrayFactor.AtSines(pos, t.Excitations, k, quadSines);
-        double integral = 0;
-        for (int i = 0; i < afq.Length; i++) integral += quadWeights[i] * (afq[i].Real * afq[i].Real + afq[i].Imaginary * afq[i].Imaginary);
+        if (powerKernel is null || !powerKernel.TryPower(t.Excitations, offsets, out double integral))
+        {
+            var afq = ArrayFactor.AtSines(pos, t.Excitations, k, quadSines);
+            integral = 0;
+            for (int i = 0; i < afq.Length; i++) integral += quadWeights[i] * (afq[i].Real * afq[i].Real + afq[i].Imaginary * afq[i].Imaginary);
+        }
         double directivity = 4 * eb * eb * (afBeam.Real * afBeam.Real + afBeam.Imaginary * afBeam.Imaginary) / integral;
 
         // Excitation errors against the nominal, common factor removed.
@@ -126,7 +155,15 @@ internal sealed class TrialEvaluator
             both[n + i] = nominalPatternPositions[i];
             diff[n + i] = -nominal.Excitations[i];
         }
-        var err = ArrayFactor.AtSines(both, diff, k, floorSines);
+        Complex[] err;
+        if (floorSum is not null)
+        {
+            var scaled = new Complex[n];
+            for (int i = 0; i < n; i++) scaled[i] = diff[i];
+            err = floorSum.Evaluate(scaled, offsets);
+            for (int j = 0; j < err.Length; j++) err[j] -= nominalFloorField![j];
+        }
+        else err = ArrayFactor.AtSines(both, diff, k, floorSines);
         double floor = 0;
         foreach (var v in err) floor += v.Real * v.Real + v.Imaginary * v.Imaginary;
         floor /= err.Length * nominalPeakPower;
