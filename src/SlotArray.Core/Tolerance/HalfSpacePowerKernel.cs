@@ -20,7 +20,7 @@ internal sealed class HalfSpacePowerKernel
     private const double Remainder = 1e-12;
     private readonly int n;
     private readonly double k;
-    private readonly Complex[,] kernel;   // [q, lag + n − 1]
+    private readonly Complex[,] kernel;   // K_q/q! at [q, lag + n − 1]
 
     public HalfSpacePowerKernel(double[] nominalPositions, double wavenumber, Func<double, double> element)
     {
@@ -45,7 +45,7 @@ internal sealed class HalfSpacePowerKernel
                     for (int o = 0; o <= MaxOrder; o++)
                     {
                         kernel[o, lag + n - 1] += t;
-                        t *= jku;
+                        t *= jku / (o + 1);   // stored as K_q/q!
                     }
                 }
             }
@@ -62,19 +62,20 @@ internal sealed class HalfSpacePowerKernel
         while (term > Remainder && order < MaxOrder) { order++; term *= x / (order + 1); }
         power = 0;
         if (term > Remainder) return false;
+        // K(−x) = K(x)* (E² is real), so the pair (n, m) is the conjugate of (m, n): P = Σ|a_m|² K(0) + 2 Re Σ_{m>n}.
         double sum = 0;
-        Span<double> fact = stackalloc double[MaxOrder + 1];
-        fact[0] = 1;
-        for (int q = 1; q <= MaxOrder; q++) fact[q] = fact[q - 1] * q;
         for (int m = 0; m < n; m++)
-            for (int i = 0; i < n; i++)
+        {
+            sum += (a[m].Real * a[m].Real + a[m].Imaginary * a[m].Imaginary) * kernel[0, n - 1].Real;
+            for (int i = 0; i < m; i++)
             {
                 int lag = m - i + n - 1;
                 double delta = offsets[m] - offsets[i];
-                Complex kk = kernel[order, lag] / fact[order];
-                for (int q = order - 1; q >= 0; q--) kk = kk * delta + kernel[q, lag] / fact[q];
-                sum += (a[m] * Complex.Conjugate(a[i]) * kk).Real;
+                Complex kk = kernel[order, lag];
+                for (int q = order - 1; q >= 0; q--) kk = kk * delta + kernel[q, lag];
+                sum += 2 * (a[m] * Complex.Conjugate(a[i]) * kk).Real;
             }
+        }
         power = sum;
         return true;
     }

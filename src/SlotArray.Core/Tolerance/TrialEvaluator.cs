@@ -102,7 +102,7 @@ internal sealed class TrialEvaluator
     {
         var af = gridSum is not null ? gridSum.Evaluate(excitations, offsets) : ArrayFactor.AtSines(patternPositions, excitations, k, grid.Sines.AsSpan());
         for (int i = 0; i < af.Length; i++) af[i] *= element[i];
-        pattern = new Pattern(grid, ImmutableArray.Create(af));
+        pattern = new Pattern(grid, System.Runtime.InteropServices.ImmutableCollectionsMarshal.AsImmutableArray(af));   // af is not used again: no copy
         return PatternMetrics.Measure(pattern);
     }
 
