@@ -20,6 +20,8 @@ public static class CommandLine
             CheckCommand.Build(output, error),
             SlotCommand.Build(output, error),
             TaperCommand.Build(output, error),
+            DesignCommand.Build(output, error),
+            SweepCommand.Build(output, error),
             ToleranceCommand.Build(output, error),
         };
         return root;

@@ -96,6 +96,10 @@ public class LayoutSvgTests
         var face = svg.Descendants(Svg + "rect").Single(e => (string?)e.Attribute("id") == "face");
         Check.Absolute(10.16 + 2 * 1.27, Attr(face, "height"), 1e-3, "outside height b + 2·wall");
         var slot1 = svg.Descendants(Svg + "rect").Single(e => (string?)e.Attribute("id") == "slot-1");
-        Assert.StartsWith("rotate(-8.000 ", slot1.Attribute("transform")!.Value);
+        // + tilt: the end in the upper broad wall lies farther from datum A (clockwise on the sheet: SVG rotate is clockwise with y down).
+        Assert.StartsWith("rotate(8.000 ", slot1.Attribute("transform")!.Value);
+        // The wraps into the folded-out broad walls are as deep as the cut depth (fixture: 3.1 mm for slot 1).
+        foreach (string id in new[] { "wrap-upper-1", "wrap-lower-1" })
+            Check.Absolute(3.1, Attr(svg.Descendants(Svg + "rect").Single(e => (string?)e.Attribute("id") == id), "height"), 1e-3, "cut depth from the outer narrow-wall face");
     }
 }

@@ -8,9 +8,9 @@ namespace SlotArray.Spec.Tests;
 public class SpecLoaderTests
 {
     [Fact]
-    public void Both_examples_load_without_errors_or_warnings()
+    public void Every_example_loads_without_errors_or_warnings()
     {
-        Assert.Equal(2, RepoFiles.Examples.Count);
+        Assert.Equal(3, RepoFiles.Examples.Count);   // harbour demo, custom tube, marine travelling-wave edge-slot demo
         foreach (string path in RepoFiles.Examples)
         {
             var r = SpecLoader.LoadFile(path);
@@ -25,8 +25,8 @@ public class SpecLoaderTests
         var r = SpecLoader.LoadFile(RepoFiles.Demo).Request!;
         Assert.Equal("harbour-surveillance-16", r.Name);
         Check.Relative(9.41e9, r.DesignFrequency.Hertz, 1e-12, "as written in the spec");
-        Check.Relative(9.30e9, r.BandLow.Hertz, 1e-12, "as written in the spec");
-        Check.Relative(9.52e9, r.BandHigh.Hertz, 1e-12, "as written in the spec");
+        Check.Relative(9.35e9, r.BandLow.Hertz, 1e-12, "as written in the spec");
+        Check.Relative(9.47e9, r.BandHigh.Hertz, 1e-12, "as written in the spec");
         Assert.Equal("WR-90", r.Guide.Designation);
         Check.Relative(0.900 * 0.0254, r.Guide.BroadWall.Meters, 1e-12, "WR-90 inside a = 0.900 in (EIA RS-261-B)");
         Check.Relative(0.400 * 0.0254, r.Guide.NarrowWall.Meters, 1e-12, "WR-90 inside b = 0.400 in (EIA RS-261-B)");

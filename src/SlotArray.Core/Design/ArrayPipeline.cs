@@ -8,7 +8,13 @@ namespace SlotArray.Core.Design;
 /// <summary>How finely the pipeline analyses a design.</summary>
 /// <param name="SweepPoints">Frequencies across the analysis band (≥ 2); default 201.</param>
 /// <param name="BandSearchFraction">How far either side of the design frequency the VSWR bands are searched, as a fraction of it; default 0.15.</param>
-public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFraction = 0.15)
+/// <param name="AdmittanceStep">
+/// Node spacing (fraction of the design frequency) of the <see cref="FrequencyInterpolatedSlotModel"/> through which the
+/// analysis evaluates each slot's y(f); default <see cref="FrequencyInterpolatedSlotModel.DefaultStep"/>; 0: solve the
+/// slot model directly at every frequency.
+/// </param>
+public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFraction = 0.15,
+    double AdmittanceStep = FrequencyInterpolatedSlotModel.DefaultStep)
 {
     /// <summary>The defaults.</summary>
     public static AnalysisOptions Default { get; } = new();
@@ -35,7 +41,11 @@ public sealed record ArrayResult(
     IReadOnlyList<FrequencyFigures> SweepFigures,
     MatchBand? BandVswr15,
     MatchBand? BandVswr2,
-    IReadOnlyList<DesignWarning> Warnings);
+    IReadOnlyList<DesignWarning> Warnings)
+{
+    /// <summary>Travelling-wave feed: the designer's figures (targets, refinement, squint, scan rate); null for a standing-wave feed.</summary>
+    public TravellingWaveDesign? TravellingWave { get; init; }
+}
 
 /// <summary>
 /// The pipeline of architecture.md as one pure function: request → taper → slot model → designer → network
@@ -60,24 +70,53 @@ public static class ArrayPipeline
 
     /// <summary>The designer the feed type calls for.</summary>
     public static ArrayDesign Synthesise(ArrayRequest request, IShuntSlotModel slot, TaperResult taper)
+        => SynthesiseWithFigures(request, slot, taper).Design;
+
+    /// <summary>
+    /// The designer the feed type calls for (standing-wave: <see cref="StandingWaveDesigner"/>; travelling-wave:
+    /// <see cref="TravellingWaveDesigner"/>), with the travelling-wave designer's own figures (null for a standing wave).
+    /// </summary>
+    public static (ArrayDesign Design, TravellingWaveDesign? TravellingWave) SynthesiseWithFigures(ArrayRequest request, IShuntSlotModel slot,
+        TaperResult taper)
     {
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(taper);
-        return request.Feed.Type switch
+        switch (request.Feed.Type)
         {
-            FeedType.StandingWave => StandingWaveDesigner.Design(request, slot, taper.Weights),
-            _ => throw new InfeasibleDesignException(
-                $"the '{request.Feed.Type}' feed has no designer yet: use a standing-wave feed"),
-        };
+            case FeedType.StandingWave:
+                return (StandingWaveDesigner.Design(request, slot, taper.Weights), null);
+            case FeedType.TravellingWave:
+                var tw = TravellingWaveDesigner.Design(request, slot, taper.Weights);
+                return (tw.Design, tw);
+            default:
+                throw new InfeasibleDesignException($"the '{request.Feed.Type}' feed has no designer: use a standing-wave or travelling-wave feed");
+        }
     }
 
-    /// <summary>Network and pattern analysis of a design across the request's band.</summary>
+    /// <summary>
+    /// The slot model the analysis evaluates: <paramref name="slot"/> behind a <see cref="FrequencyInterpolatedSlotModel"/>
+    /// on the design frequency's grid (its nodes for the request's band computed in parallel), or
+    /// <paramref name="slot"/> itself when <see cref="AnalysisOptions.AdmittanceStep"/> is 0.
+    /// </summary>
+    public static IShuntSlotModel AnalysisModel(ArrayRequest request, ArrayDesign design, IShuntSlotModel slot, AnalysisOptions options)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(design);
+        ArgumentNullException.ThrowIfNull(options);
+        if (options.AdmittanceStep == 0 || slot is FrequencyInterpolatedSlotModel) return slot;
+        var model = new FrequencyInterpolatedSlotModel(slot, design.DesignFrequency, options.AdmittanceStep);
+        model.Prepare([.. design.Slots.Select(s => (s.Coupling, s.Length))], request.BandLow, request.BandHigh);
+        return model;
+    }
+
+    /// <summary>Network and pattern analysis of a design across the request's band (through <see cref="AnalysisModel"/>).</summary>
     public static (FrequencySweep Sweep, FrequencyFigures AtDesign, IReadOnlyList<FrequencyFigures> Points) Analyse(
         ArrayRequest request, ArrayDesign design, IShuntSlotModel slot, AnalysisOptions options)
     {
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(options);
         if (options.SweepPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.SweepPoints, "a sweep needs at least 2 points");
+        slot = AnalysisModel(request, design, slot, options);
         var sweep = ArrayNetwork.Sweep(design, slot, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
         return (sweep, atDesign, points);
@@ -91,16 +130,17 @@ public static class ArrayPipeline
         options ??= AnalysisOptions.Default;
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
         var slot = SlotModelFor(request);
-        var design = Synthesise(request, slot, taper);
-        var (sweep, atDesign, points) = Analyse(request, design, slot, options);
+        var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
+        var analysis = AnalysisModel(request, design, slot, options);
+        var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
         var f0 = request.DesignFrequency;
         var lo = Frequency.FromHertz(f0.Hertz * (1 - options.BandSearchFraction));
         var hi = Frequency.FromHertz(f0.Hertz * (1 + options.BandSearchFraction));
         var step = Frequency.FromHertz(f0.Hertz * 1e-3);
-        var b15 = ArrayNetwork.FindBand(design, slot, 1.5, lo, hi, step);
-        var b2 = ArrayNetwork.FindBand(design, slot, 2.0, lo, hi, step);
+        var b15 = ArrayNetwork.FindBand(design, analysis, 1.5, lo, hi, step);
+        var b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
             .DistinctBy(w => w.Message).ToList();
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings);
+        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling };
     }
 }

@@ -9,6 +9,8 @@ public enum LongitudinalDatumKind
     EndShortInnerFace,
     /// <summary>The face of the feed flange.</summary>
     FeedFlangeFace,
+    /// <summary>The inner face of the load-end flange, where the matched load of a travelling-wave array sits.</summary>
+    LoadFlangeInnerFace,
 }
 
 /// <summary>Which narrow (side) wall the transverse positions of broad-wall slots are measured from.</summary>
@@ -39,7 +41,12 @@ public sealed record Datums(LongitudinalDatumKind Longitudinal, TransverseDatumS
 
     /// <summary>One sentence naming the datums, for the cut-list header and the drawing.</summary>
     public string Description =>
-        (Longitudinal == LongitudinalDatumKind.EndShortInnerFace ? "inner face of the end short" : "feed flange face")
+        (Longitudinal switch
+        {
+            LongitudinalDatumKind.EndShortInnerFace => "inner face of the end short",
+            LongitudinalDatumKind.LoadFlangeInnerFace => "inner face of the load-end flange (matched load)",
+            _ => "feed flange face",
+        })
         + ": every slot centre position by baseline dimensioning from this one face; transverse positions from the outside of the "
         + (Transverse == TransverseDatumSide.MinusXWall ? "-x" : "+x") + " side wall (x positive toward the +x side wall)";
 

@@ -15,6 +15,9 @@ namespace SlotArray.Core.Network;
 /// <param name="Gain">Gain including mismatch and loss: D × radiation efficiency × (1 − |S11|²) = D × P_rad/P_inc.</param>
 public sealed record FrequencyFigures(NetworkSolution Network, Pattern Pattern, PatternMetrics Metrics, double Directivity, double Gain)
 {
+    /// <summary>Edge (tilted) slots: the cross-polarised cut and its peak relative to the co-polar beam; null for untilted slots.</summary>
+    public CrossPolarFigures? CrossPolar { get; init; }
+
     /// <summary>The analysis frequency.</summary>
     public Frequency Frequency => Network.Frequency;
 
@@ -62,12 +65,35 @@ public static class ArrayFigures
     {
         ArgumentNullException.ThrowIfNull(design);
         ArgumentNullException.ThrowIfNull(network);
-        var positions = design.Slots.Select(s => -s.Position.Meters).ToArray();
+        // Positions −z_n (see remarks), listed in increasing order (slot N first) so that equally spaced slots take the
+        // array factor's fast path; the excitations follow the same order.
+        int n = design.Count;
+        var positions = new double[n];
+        var excitations = new System.Numerics.Complex[n];
+        for (int i = 0; i < n; i++)
+        {
+            positions[i] = -design.Slots[n - 1 - i].Position.Meters;
+            excitations[i] = network.Excitations[n - 1 - i];
+        }
         double k = network.Frequency.FreeSpaceWavenumber;
+        grid ??= DefaultGrid(design, network.Frequency);
+        if (design.CouplingKind == Slots.SlotCouplingKind.Tilt)
+        {
+            var tilts = Enumerable.Range(0, n).Select(i => design.Slots[n - 1 - i].Coupling).ToArray();
+            var co = CrossPolarPattern.CoPolarSources(excitations, tilts);
+            var coPattern = ArrayFactor.Compute(positions, co, k, grid, CrossPolarPattern.EdgeSlotCoPolarElement);
+            var coMetrics = PatternMetrics.Measure(coPattern);
+            var cross = CrossPolarPattern.Compute(positions, excitations, tilts, k, coPattern);
+            // Uniform element over the half-space: ∫|AF|² du = 2 Σ a_m a_n* sinc(kΔz), so the half-space directivity is exactly
+            // twice the isotropic full-sphere one (physics-reference §7.3), in closed form.
+            double dCo = 2 * Patterns.Directivity.Isotropic(positions, co, k, coMetrics.BeamDirection.Radians);
+            double dEdge = dCo / (1 + cross.PowerRatio);
+            return new FrequencyFigures(network, coPattern, coMetrics, dEdge, dEdge * network.RadiatedPower) { CrossPolar = cross };
+        }
         var element = ElementPatterns.HalfWaveSlotHPlane;
-        var pattern = ArrayFactor.Compute(positions, network.Excitations, k, grid ?? DefaultGrid(design, network.Frequency), element);
+        var pattern = ArrayFactor.Compute(positions, excitations, k, grid, element);
         var metrics = PatternMetrics.Measure(pattern);
-        double d = Patterns.Directivity.HalfSpace(positions, network.Excitations, k, element, metrics.BeamDirection.Radians);
+        double d = Patterns.Directivity.HalfSpace(positions, excitations, k, element, metrics.BeamDirection.Radians);
         return new FrequencyFigures(network, pattern, metrics, d, d * network.RadiatedPower);
     }
 
@@ -81,7 +107,9 @@ public static class ArrayFigures
         ArgumentNullException.ThrowIfNull(sweep);
         var top = sweep.Points.Count > 0 ? sweep.Points[^1].Frequency : sweep.DesignFrequency;
         var g = grid ?? DefaultGrid(design, top > sweep.DesignFrequency ? top : sweep.DesignFrequency);
-        var points = sweep.Points.Select(p => At(design, p, g)).ToArray();
+        // Each point is an independent pure computation written to its own slot: parallel and still deterministic.
+        var points = new FrequencyFigures[sweep.Points.Count];
+        Parallel.For(0, points.Length, i => points[i] = At(design, sweep.Points[i], g));
         return (At(design, sweep.AtDesign, g), Array.AsReadOnly(points));
     }
 }

@@ -165,7 +165,8 @@ public static class ArrayFactor
         var ai = new double[n];
         for (int i = 0; i < n; i++) { zr[i] = z[i]; ar[i] = a[i].Real; ai[i] = a[i].Imaginary; }
         var f = new Complex[m];
-        bool symmetric = true;
+        // Symmetric: u[j] = −u[m−1−j] for every j, including a middle point u = 0 when m is odd (a lone u ≠ 0 is not).
+        bool symmetric = m % 2 == 0 || u[m / 2] == 0;
         for (int j = 0; j < m / 2 && symmetric; j++) symmetric = u[j] == -u[m - 1 - j];
         int upper = symmetric ? (m + 1) / 2 : m;
         int lanes = Vector256<double>.Count, step = 2 * lanes;

@@ -64,6 +64,21 @@ public sealed class ResonantCharacterisation
         return new ResonantCharacterisation(table, solver.Guide.BroadWall.Meters);
     }
 
+    /// <summary>
+    /// Puts a stored table (for example one the CLI kept on disk) into the in-memory cache, so that <see cref="For"/>
+    /// returns it without computing; a table already cached under its key is kept. Throws like <see cref="FromTable"/>
+    /// when the table does not match the solver.
+    /// </summary>
+    public static void Preload(LongitudinalSlotMomentMethod solver, ResonantCharacterisationTable table)
+    {
+        var c = FromTable(solver, table);
+        Cache.TryAdd(table.Key, new Lazy<ResonantCharacterisation>(() => c));
+    }
+
+    /// <summary>The tables computed or preloaded so far in this process, ordered by key (for a caller that stores them).</summary>
+    public static IReadOnlyList<ResonantCharacterisationTable> CachedTables() =>
+        [.. Cache.Values.Where(l => l.IsValueCreated).Select(l => l.Value.Table).OrderBy(t => t.Key, StringComparer.Ordinal)];
+
     /// <summary>The cache key: every input that determines the table.</summary>
     public static string KeyOf(LongitudinalSlotMomentMethod solver, Frequency f, int offsetCount)
     {

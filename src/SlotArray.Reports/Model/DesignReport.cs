@@ -52,6 +52,50 @@ public sealed record DesignReport
 
     /// <summary>Optional summary lines of a tolerance (Monte Carlo) study; empty when none was run.</summary>
     public IReadOnlyList<string> Tolerance { get; init; } = [];
+
+    /// <summary>Travelling-wave arrays: the power left for the matched load; null for a standing-wave array.</summary>
+    public LoadReport? Load { get; init; }
+
+    /// <summary>Travelling-wave arrays: squint, scan rate, efficiency and the designer's refinement; null otherwise.</summary>
+    public TravellingWaveReport? TravellingWave { get; init; }
+}
+
+/// <summary>The matched load of a travelling-wave array.</summary>
+public sealed record LoadReport
+{
+    /// <summary>Fraction of the input power the spec asked for the load (feed.load), 0 … 1.</summary>
+    public required double Fraction { get; init; }
+
+    /// <summary>Power the network analysis delivers into the load at the design frequency, watts per watt of incident power.</summary>
+    public required double PowerWPerWIn { get; init; }
+}
+
+/// <summary>Travelling-wave figures at the design frequency and across the band.</summary>
+public sealed record TravellingWaveReport
+{
+    /// <summary>Beam squint from the phase condition sin θ = λ/λg − λ/(2d), degrees, positive toward the load end (physics-reference §5.2).</summary>
+    public required double SquintDeg { get; init; }
+
+    /// <summary>Scan rate dθ/df from the phase condition at the design frequency, degrees per 100 MHz.</summary>
+    public required double ScanDegPer100MHz { get; init; }
+
+    /// <summary>Scan rate from the network patterns: least-squares slope of the beam direction over the sweep, degrees per 100 MHz.</summary>
+    public required double ScanFromSweepDegPer100MHz { get; init; }
+
+    /// <summary>Radiation efficiency at the design frequency: radiated / accepted power (the rest goes to the load and the walls).</summary>
+    public required double Efficiency { get; init; }
+
+    /// <summary>Power lost in the guide walls at the design frequency, watts per watt of incident power.</summary>
+    public required double WallLossWPerWIn { get; init; }
+
+    /// <summary>Network refinement iterations of the designer.</summary>
+    public required int RefinementIterations { get; init; }
+
+    /// <summary>Final refinement residual: largest |10 log10(P_n/T_n)| over the slots, dB (power).</summary>
+    public required double RefinementResidualDb { get; init; }
+
+    /// <summary>Largest departure of the slot phases from the travelling-wave progression, degrees (mean removed).</summary>
+    public required double PhaseErrorDeg { get; init; }
 }
 
 /// <summary>The waveguide: inside dimensions, wall, metal and the TE10 figures at the design frequency.</summary>
@@ -174,6 +218,15 @@ public sealed record PatternReport
 
     /// <summary>Pattern level at each angle of <see cref="CutAngleDeg"/>, dB relative to the beam peak.</summary>
     public required IReadOnlyList<double> CutLevelDb { get; init; }
+
+    /// <summary>Edge slots: peak cross-polarised level relative to the co-polar beam peak, dB; null otherwise.</summary>
+    public double? CrossPolarDb { get; init; }
+
+    /// <summary>Edge slots: direction of that cross-polar peak, degrees from broadside; null otherwise.</summary>
+    public double? CrossPolarDirectionDeg { get; init; }
+
+    /// <summary>Edge slots: cross-polarised level at each angle of <see cref="CutAngleDeg"/>, dB relative to the co-polar peak; empty otherwise.</summary>
+    public IReadOnlyList<double> CrossCutLevelDb { get; init; } = [];
 }
 
 /// <summary>Input match.</summary>
@@ -209,6 +262,12 @@ public sealed record SweepPoint
 
     /// <summary>Gain, dBi.</summary>
     public required double GainDbi { get; init; }
+
+    /// <summary>Half-power beamwidth, degrees (NaN when not measured).</summary>
+    public double HpbwDeg { get; init; } = double.NaN;
+
+    /// <summary>Edge slots: peak cross-polarised level relative to the co-polar peak, dB; null otherwise.</summary>
+    public double? CrossPolarDb { get; init; }
 }
 
 /// <summary>The outcome of one requirement of the spec.</summary>

@@ -81,6 +81,27 @@ public static class DesignJson
         Num(w, "distance_m", r.Termination.Distance);
         w.WriteEndObject();
 
+        if (r.Load is { } load)
+        {
+            w.WriteStartObject("load");
+            Num(w, "fraction", load.Fraction);
+            Num(w, "power_w_per_w_in", load.PowerWPerWIn);
+            w.WriteEndObject();
+        }
+        if (r.TravellingWave is { } tw)
+        {
+            w.WriteStartObject("travelling_wave");
+            Num(w, "squint_deg", tw.SquintDeg);
+            Num(w, "scan_deg_per_100mhz", tw.ScanDegPer100MHz);
+            Num(w, "scan_from_sweep_deg_per_100mhz", tw.ScanFromSweepDegPer100MHz);
+            Num(w, "efficiency", tw.Efficiency);
+            Num(w, "wall_loss_w_per_w_in", tw.WallLossWPerWIn);
+            w.WriteNumber("refinement_iterations", tw.RefinementIterations);
+            Num(w, "refinement_residual_db", tw.RefinementResidualDb);
+            Num(w, "phase_error_deg", tw.PhaseErrorDeg);
+            w.WriteEndObject();
+        }
+
         var p = r.Pattern;
         w.WriteStartObject("pattern");
         Num(w, "beam_deg", p.BeamDeg);
@@ -93,7 +114,10 @@ public static class DesignJson
         w.WriteStartObject("cut");
         NumArray(w, "angle_deg", p.CutAngleDeg);
         NumArray(w, "level_db", p.CutLevelDb);
+        if (p.CrossCutLevelDb.Count > 0) NumArray(w, "cross_level_db", p.CrossCutLevelDb);
         w.WriteEndObject();
+        if (p.CrossPolarDb is { } xp) Num(w, "cross_polar_db", xp);
+        if (p.CrossPolarDirectionDeg is { } xd) Num(w, "cross_polar_direction_deg", xd);
         w.WriteEndObject();
 
         w.WriteStartObject("match");
@@ -113,6 +137,8 @@ public static class DesignJson
             Num(w, "beam_deg", q.BeamDeg);
             Num(w, "peak_sidelobe_db", q.PeakSidelobeDb);
             Num(w, "gain_dbi", q.GainDbi);
+            Num(w, "hpbw_deg", q.HpbwDeg);
+            if (q.CrossPolarDb is { } qx) Num(w, "cross_polar_db", qx);
             w.WriteEndObject();
         }
         w.WriteEndArray();
@@ -227,6 +253,9 @@ public static class DesignJson
                 DesignSidelobeDb = D(p, "design_sidelobe_db"),
                 CutAngleDeg = Doubles(p.GetProperty("cut").GetProperty("angle_deg")),
                 CutLevelDb = Doubles(p.GetProperty("cut").GetProperty("level_db")),
+                CrossCutLevelDb = p.GetProperty("cut").TryGetProperty("cross_level_db", out var xc) ? Doubles(xc) : [],
+                CrossPolarDb = OptD(p, "cross_polar_db"),
+                CrossPolarDirectionDeg = OptD(p, "cross_polar_direction_deg"),
             },
             Match = new MatchReport
             {
@@ -242,6 +271,8 @@ public static class DesignJson
                 BeamDeg = D(q, "beam_deg"),
                 PeakSidelobeDb = D(q, "peak_sidelobe_db"),
                 GainDbi = D(q, "gain_dbi"),
+                HpbwDeg = OptD(q, "hpbw_deg") ?? double.NaN,
+                CrossPolarDb = OptD(q, "cross_polar_db"),
             })],
             Inputs = new InputsSummary
             {
@@ -262,6 +293,21 @@ public static class DesignJson
             Warnings = StringList(root, "warnings"),
             Cautions = StringList(root, "cautions"),
             Tolerance = StringList(root, "tolerance"),
+            Load = root.TryGetProperty("load", out var ld)
+                ? new LoadReport { Fraction = D(ld, "fraction"), PowerWPerWIn = D(ld, "power_w_per_w_in") } : null,
+            TravellingWave = root.TryGetProperty("travelling_wave", out var tw)
+                ? new TravellingWaveReport
+                {
+                    SquintDeg = D(tw, "squint_deg"),
+                    ScanDegPer100MHz = D(tw, "scan_deg_per_100mhz"),
+                    ScanFromSweepDegPer100MHz = D(tw, "scan_from_sweep_deg_per_100mhz"),
+                    Efficiency = D(tw, "efficiency"),
+                    WallLossWPerWIn = D(tw, "wall_loss_w_per_w_in"),
+                    RefinementIterations = tw.GetProperty("refinement_iterations").GetInt32(),
+                    RefinementResidualDb = D(tw, "refinement_residual_db"),
+                    PhaseErrorDeg = D(tw, "phase_error_deg"),
+                }
+                : null,
         };
     }
 

@@ -11,8 +11,10 @@ namespace SlotArray.Reports;
 /// shortest nearest the part, so no two labels share a line. Transverse positions are tabulated on the sheet
 /// (offset, side and distance from datum B, the outside face of the −x side wall). A long array gives one long sheet
 /// (no splitting): every dimension refers to datum A, so the sheet may be tiled for printing without losing any.
-/// Edge slots are drawn on the narrow face as straight slots of their overall length, tilted by their signed tilt
-/// (counter-clockwise positive as seen on the sheet); the wrap into the broad walls is given as the cut depth.
+/// Edge slots are drawn on the narrow face across its outer height, tilted by their signed tilt from the direction
+/// across the face (positive: the end in the upper broad wall lies farther from datum A, i.e. clockwise on the sheet);
+/// the two broad walls are drawn folded out above and below the narrow face (developed view), where each cut wraps
+/// into them square to the guide axis to its cut depth, measured from the outer narrow-wall face (the fold line).
 /// </summary>
 public static class LayoutSvg
 {
@@ -40,15 +42,17 @@ public static class LayoutSvg
         double blockW = colW.Sum() + 8;
 
         double left = Margin + 8;
-        double sheetW = Math.Max(left + faceLength + Margin + 20, Math.Max(TitleWidth, blockW) + 2 * Margin);
+        double sheetW = Math.Max(left + faceLength + Margin + (tilt ? 48 : 20), Math.Max(TitleWidth, blockW) + 2 * Margin);
         int blocks = Math.Max(1, (int)((sheetW - 2 * Margin) / blockW));
         int rowsPerBlock = Math.Max(1, (slots.Length + blocks - 1) / blocks);
 
+        // Edge slots: the broad walls folded out above and below the narrow face, as deep as the deepest cut plus 2 mm.
+        double wrap = tilt ? slots.Select(s => mm(s.CutDepth ?? 0)).DefaultIfEmpty(0).Max() + 2 : 0;
         double dimTop = Margin + 10;
-        double faceTop = dimTop + DimPitch * slots.Length + 6;
+        double faceTop = dimTop + DimPitch * slots.Length + 6 + wrap;
         double cl = faceTop + faceHeight / 2;
         double faceBottom = faceTop + faceHeight;
-        double tableTop = faceBottom + (tilt ? 25 : 22);
+        double tableTop = faceBottom + wrap + (tilt ? 25 : 22);
         double tableBottom = tableTop + RowHeight * (rowsPerBlock + 1);
         double titleTop = tableBottom + 10;
         const int titleLines = 8;
@@ -84,10 +88,17 @@ public static class LayoutSvg
         Line(left - 4, cl, left + faceLength + 6, cl, "centre");
         TextAt(left + faceLength + 7, cl + Text / 3, "CL", "start");
         Line(left, dimTop - 4, left, faceBottom + 12, "datum");
-        double note = faceBottom + (tilt ? 9 : 6);
+        double note = faceBottom + wrap + (tilt ? 9 : 6);
+        if (tilt)
+        {
+            Ln($"<rect class=\"thin\" id=\"upper-broad-wall\" x=\"{X(0)}\" y=\"{F(faceTop - wrap)}\" width=\"{F(faceLength)}\" height=\"{F(wrap)}\"/>");
+            Ln($"<rect class=\"thin\" id=\"lower-broad-wall\" x=\"{X(0)}\" y=\"{F(faceBottom)}\" width=\"{F(faceLength)}\" height=\"{F(wrap)}\"/>");
+            TextAt(left + faceLength + 1.5, faceTop - wrap / 2 + Text / 3, "upper broad wall, folded out", "start", Text);
+            TextAt(left + faceLength + 1.5, faceBottom + wrap / 2 + Text / 3, "lower broad wall, folded out", "start", Text);
+        }
         TextAt(left + 1, note, "DATUM A: " + report.Inputs.DatumDescription, "start", 3);
         TextAt(left + 1, note + 4.5, tilt
-            ? "narrow face shown; z along the guide from datum A"
+            ? "narrow face shown, broad walls folded out above and below; z along the guide from datum A; + tilt: upper end farther from A"
             : "+x side at top; DATUM B: outside face of the -x side wall (bottom edge)", "start", Text);
         TextAt(left + faceLength - 1, faceTop - 1.5, "to feed", "end", Text);
 
@@ -97,13 +108,22 @@ public static class LayoutSvg
             double z = mm(s.Position), len = mm(s.OverallLength), w = mm(s.Width);
             double yc = tilt ? cl : cl - mm(s.Offset!.Value);
             double r = s.EndForm == SlotEndForm.Round ? w / 2 : 0;
-            string rot = tilt ? $" transform=\"rotate({F(-s.TiltDeg!.Value)} {X(z)} {F(yc)})\"" : "";
-            Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Index)}\" x=\"{X(z - len / 2)}\" y=\"{F(yc - w / 2)}\" width=\"{F(len)}\" height=\"{F(w)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"{rot}/>");
+            if (tilt)
+            {
+                // Across the narrow face at the tilt, then square to the guide axis into each folded-out broad wall.
+                double th = s.TiltDeg!.Value * Math.PI / 180, run = faceHeight / 2 * Math.Tan(th), depth = mm(s.CutDepth ?? 0);
+                Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Index)}\" x=\"{X(z - w / 2)}\" y=\"{F(faceTop)}\" width=\"{F(w)}\" height=\"{F(faceHeight / Math.Cos(th))}\" transform=\"rotate({F(s.TiltDeg!.Value)} {X(z)} {F(cl)}) translate(0 {F(faceHeight / 2 - faceHeight / (2 * Math.Cos(th)))})\"/>");
+                double wz = w / Math.Cos(th);
+                Ln($"<rect class=\"slot\" id=\"wrap-upper-{Invariant.Int(s.Index)}\" x=\"{X(z + run - wz / 2)}\" y=\"{F(faceTop - depth)}\" width=\"{F(wz)}\" height=\"{F(depth)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
+                Ln($"<rect class=\"slot\" id=\"wrap-lower-{Invariant.Int(s.Index)}\" x=\"{X(z - run - wz / 2)}\" y=\"{F(faceBottom)}\" width=\"{F(wz)}\" height=\"{F(depth)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
+            }
+            else
+                Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Index)}\" x=\"{X(z - len / 2)}\" y=\"{F(yc - w / 2)}\" width=\"{F(len)}\" height=\"{F(w)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
             Line(left + z - 1.2, yc, left + z + 1.2, yc, "thin");
             Line(left + z, yc - 1.2, left + z, yc + 1.2, "thin");
             // broad face: number on the far side of the centreline; narrow face: below the face, clear of the tilted slot
             double side = tilt || s.Offset!.Value >= 0 ? 1 : -1;
-            double yn = tilt ? faceBottom + 3.5 : cl + side * (faceHeight / 2 - 1.2) + (side > 0 ? 0 : Text);
+            double yn = tilt ? faceBottom + wrap + 3.5 : cl + side * (faceHeight / 2 - 1.2) + (side > 0 ? 0 : Text);
             TextAt(left + z, yn, Invariant.Int(s.Index), "middle", Text, " font-weight=\"bold\"");
         }
 
@@ -112,8 +132,8 @@ public static class LayoutSvg
         {
             var s = slots[k];
             double z = mm(s.Position);
-            double y = faceTop - 6 - DimPitch * k;
-            Line(left + z, faceTop - 0.5, left + z, y - 1.5, "thin");
+            double y = faceTop - wrap - 6 - DimPitch * k;
+            Line(left + z, faceTop - wrap - 0.5, left + z, y - 1.5, "thin");
             Line(left, y, left + z, y, "thin");
             Arrow(left, y, -1);
             Arrow(left + z, y, 1);

@@ -31,6 +31,7 @@ public static class OutputFolder
         new("taper.png", (r, s) => PlotExport.Write(DesignPlots.Taper(r), s, "png")),
         new("slots.png", (r, s) => PlotExport.Write(DesignPlots.Slots(r), s, "png")),
         new("sweep.png", (r, s) => PlotExport.Write(DesignPlots.Sweep(r), s, "png")),
+        new("scan.png", (r, s) => PlotExport.Write(ScanPlot.Build(r), s, "png")),
         new("input.s1p", Text(TouchstoneWriter.Write)),
         new("summary.md", Text(SummaryMarkdown.Write)),
     ];

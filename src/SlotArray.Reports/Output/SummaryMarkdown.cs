@@ -62,6 +62,23 @@ public static class SummaryMarkdown
             double worst = report.Sweep.Max(s => Complex.Abs(s.S11));
             L($"| worst VSWR over the sweep ({Invariant.Ghz(report.Sweep[0].FrequencyHz)} to {Invariant.Ghz(report.Sweep[^1].FrequencyHz)} GHz) | {Invariant.Fixed((1 + worst) / (1 - worst), 3)} | |");
         }
+        if (p.CrossPolarDb is { } xpol)
+            L($"| peak cross-polar level (edge-slot tilts, no polarisation filter) at {Invariant.Fixed(p.CrossPolarDirectionDeg ?? double.NaN, 1)} deg | {Invariant.Fixed(xpol, 2)} | dB |");
+        if (report.Load is { } load)
+        {
+            L($"| power into the matched load (asked {Invariant.Fixed(load.Fraction * 100, 2)} %) | {Invariant.Fixed(load.PowerWPerWIn * 100, 3)} | % of input |");
+        }
+        if (report.TravellingWave is { } tw)
+        {
+            L($"| radiation efficiency (radiated / accepted) | {Invariant.Fixed(tw.Efficiency * 100, 2)} | % |");
+            L($"| wall loss | {Invariant.Fixed(tw.WallLossWPerWIn * 100, 3)} | % of input |");
+            L($"| beam squint, phase condition sin θ = λ/λg − λ/(2d) (+ toward the load end) | {Invariant.Fixed(tw.SquintDeg, 3)} | deg |");
+            L($"| scan rate, phase condition / network sweep | {Invariant.Fixed(tw.ScanDegPer100MHz, 3)} / {Invariant.Fixed(tw.ScanFromSweepDegPer100MHz, 3)} | deg per 100 MHz |");
+            L($"| designer: network refinement iterations, final residual | {Invariant.Int(tw.RefinementIterations)}, {Invariant.Fixed(tw.RefinementResidualDb, 6)} | –, dB |");
+            L($"| largest slot phase departure from the travelling-wave progression | {Invariant.Fixed(tw.PhaseErrorDeg, 2)} | deg |");
+        }
+        L();
+        WriteScan(report, L);
         L();
         L("## Requirements");
         L();
@@ -109,6 +126,39 @@ public static class SummaryMarkdown
         {
             if (k > 0) L();
             L(Escape(cautions[k]));
+        }
+    }
+
+    /// <summary>Most rows of the frequency-scan table (evenly spaced over the sweep, both ends included).</summary>
+    public const int ScanRows = 11;
+
+    private static void WriteScan(DesignReport report, Action<string> line)
+    {
+        line("## Frequency scan");
+        line("");
+        if (report.Sweep.Count == 0)
+        {
+            line("No sweep was run.");
+            return;
+        }
+        bool xpol = report.Sweep.Any(s => s.CrossPolarDb is not null);
+        line($"Beam direction from broadside (positive toward the {(report.Load is null ? "datum (short)" : "load")} end), half-power beamwidth, peak sidelobe and gain from the network analysis; every sweep point is in design.json and scan.png.");
+        line("");
+        line("| frequency (GHz) | beam (deg) | HPBW (deg) | peak sidelobe (dB) | gain (dBi) |" + (xpol ? " cross-polar (dB) |" : ""));
+        line("| ---: | ---: | ---: | ---: | ---: |" + (xpol ? " ---: |" : ""));
+        int n = report.Sweep.Count, rows = Math.Min(ScanRows, n);
+        var picked = Enumerable.Range(0, rows).Select(k => rows == 1 ? 0 : (int)Math.Round((double)k * (n - 1) / (rows - 1))).Distinct();
+        foreach (int k in picked)
+        {
+            var s = report.Sweep[k];
+            line($"| {Invariant.Ghz(s.FrequencyHz, 4)} | {Invariant.Fixed(s.BeamDeg, 3)} | {Invariant.Fixed(s.HpbwDeg, 3)} | {Invariant.Fixed(s.PeakSidelobeDb, 2)} | {Invariant.Fixed(s.GainDbi, 2)} |"
+                + (xpol ? $" {Invariant.Fixed(s.CrossPolarDb ?? double.NaN, 2)} |" : ""));
+        }
+        if (n >= 2 && report.Sweep[^1].FrequencyHz > report.Sweep[0].FrequencyHz)
+        {
+            double rate = (report.Sweep[^1].BeamDeg - report.Sweep[0].BeamDeg) / ((report.Sweep[^1].FrequencyHz - report.Sweep[0].FrequencyHz) * 1e-8);
+            line("");
+            line($"Squint per 100 MHz across the sweep (end to end): {Invariant.Fixed(rate, 3)} deg.");
         }
     }
 

@@ -29,6 +29,15 @@ public static class DesignPlots
             s.Points.Add(new DataPoint(angles[i], double.IsFinite(db) ? Math.Max(db, -200) : -200));
         }
         m.Series.Add(s);
+        if (report.Pattern.CrossCutLevelDb.Count == angles.Count && angles.Count > 0)
+        {
+            // Edge slots: the cross-polarised cut on the same scale (relative to the co-polar peak).
+            m.Legends.Add(new Legend { LegendPosition = LegendPosition.TopRight });
+            s.Title = "co-polar";
+            var x = new LineSeries { Title = "cross-polar", Color = OxyColors.DarkOrange, StrokeThickness = 1.2 };
+            for (int i = 0; i < angles.Count; i++) x.Points.Add(new DataPoint(angles[i], Math.Max(report.Pattern.CrossCutLevelDb[i], -200)));
+            m.Series.Add(x);
+        }
         m.Annotations.Add(new LineAnnotation
         {
             Type = LineAnnotationType.Horizontal,

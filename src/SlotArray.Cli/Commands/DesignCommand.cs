@@ -1,0 +1,122 @@
+using System.CommandLine;
+using System.Diagnostics;
+using System.Globalization;
+using SlotArray.Core.Design;
+using SlotArray.Reports;
+using SlotArray.Reports.Model;
+using SlotArray.Spec;
+
+namespace SlotArray.Cli.Commands;
+
+/// <summary>
+/// <c>slotarray design SPEC [-o DIR] [--json]</c>: the main job. Loads the spec (exit 2 with positioned errors), runs
+/// the pipeline (synthesis, network analysis across the band, pattern and figures), writes every output file
+/// atomically into DIR (default <c>out/&lt;name&gt;</c>, the spec's name) and prints a short summary. An infeasible
+/// design exits 1 with the reason and writes nothing. Progress, warnings and errors go to stderr; with
+/// <c>--json</c> stdout carries the content of design.json and nothing else.
+/// </summary>
+public static class DesignCommand
+{
+    private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
+
+    /// <summary>Builds the command.</summary>
+    public static Command Build(TextWriter output, TextWriter error)
+    {
+        var spec = new Argument<string>("spec") { Description = "The YAML spec, e.g. arrays/harbour-surveillance-16.yaml" };
+        var outDir = OutputOption();
+        var json = new Option<bool>("--json") { Description = "Print design.json on stdout (messages stay on stderr)" };
+        var (cacheDir, noCache) = CacheOptions();
+        var cmd = new Command("design", "Synthesise the array, analyse it across the band and write every output file") { spec, outDir, json, cacheDir, noCache };
+        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), pr.GetValue(json), CacheOf(pr, cacheDir, noCache), output, error));
+        return cmd;
+    }
+
+    /// <summary>The slot-cache options shared with <c>sweep</c>: <c>--cache-dir DIR</c> and <c>--no-cache</c>.</summary>
+    internal static (Option<string?> Dir, Option<bool> Off) CacheOptions() => (
+        new Option<string?>("--cache-dir") { Description = "Folder of the slot characterisation cache (default $XDG_CACHE_HOME/slotarray or ~/.cache/slotarray)" },
+        new Option<bool>("--no-cache") { Description = "Neither read nor write the slot characterisation cache" });
+
+    /// <summary>The cache the options select, or null with <c>--no-cache</c>.</summary>
+    internal static SlotCache? CacheOf(ParseResult pr, Option<string?> dir, Option<bool> off) =>
+        pr.GetValue(off) ? null : new SlotCache(pr.GetValue(dir) ?? SlotCache.DefaultDirectory());
+
+    /// <summary>The <c>-o</c> option shared with <c>sweep</c>: the output folder, default <c>out/&lt;name&gt;</c>.</summary>
+    internal static Option<string?> OutputOption() => new("--output", "-o")
+    {
+        Description = "Output folder (default out/<name>, <name> from the spec); replaced whole on success, untouched on failure",
+    };
+
+    /// <summary>The default output folder of a spec named <paramref name="name"/>: <c>out/&lt;name&gt;</c>.</summary>
+    internal static string DefaultFolder(string name) => Path.Combine("out", name);
+
+    private static int Run(string path, string? outDir, bool json, SlotCache? cache, TextWriter output, TextWriter error)
+    {
+        var request = Load(path, error, out int code);
+        if (request is null) return code;
+        var clock = Stopwatch.StartNew();
+        var result = Analyse(request, cache, error);
+        var report = DesignReportBuilder.Build(result);
+        string folder = outDir ?? DefaultFolder(request.Name);
+        error.WriteLine($"writing {OutputFolder.Files.Count} files to {folder}/ ...");
+        OutputFolder.WriteAll(report, folder);
+        foreach (string w in report.Warnings) error.WriteLine($"warning: {w}");
+        if (json)
+        {
+            output.Write(DesignJson.ToText(report));
+        }
+        else
+        {
+            PrintSummary(output, report, folder);
+        }
+        error.WriteLine(string.Format(Inv, "done in {0:0.0} s", clock.Elapsed.TotalSeconds));
+        return ExitCodes.Ok;
+    }
+
+    /// <summary>Loads and validates a spec; prints its warnings and errors to <paramref name="error"/>. Null with the exit code on failure.</summary>
+    internal static ArrayRequest? Load(string path, TextWriter error, out int code)
+    {
+        code = ExitCodes.Ok;
+        if (!File.Exists(path)) throw new UserInputException($"spec file not found: {path}");
+        var result = SpecLoader.LoadFile(path);
+        foreach (var w in result.Warnings) error.WriteLine(w);
+        foreach (var e in result.Errors) error.WriteLine(e);
+        if (result.IsValid) return result.Request;
+        error.WriteLine(string.Format(Inv, "{0}: {1} error(s); nothing designed", path, result.Errors.Count));
+        code = ExitCodes.BadInput;
+        return null;
+    }
+
+    /// <summary>Runs the pipeline with the slot cache (when given), printing progress to <paramref name="error"/>.</summary>
+    internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error)
+    {
+        int loaded = cache?.Load(request, error) ?? 0;
+        error.WriteLine(string.Format(Inv, "designing '{0}': {1} slots at {2:0.####} GHz, analysing {3:0.####} to {4:0.####} GHz{5} ...",
+            request.Name, request.Slots.Count, request.DesignFrequency.Gigahertz, request.BandLow.Gigahertz, request.BandHigh.Gigahertz,
+            cache is null ? "" : string.Format(Inv, " ({0} slot table(s) from the cache)", loaded)));
+        var result = ArrayPipeline.Run(request);
+        cache?.Save(error);
+        return result;
+    }
+
+    private static void PrintSummary(TextWriter o, DesignReport r, string folder)
+    {
+        var p = r.Pattern;
+        var m = r.Match;
+        o.WriteLine($"{r.Name}: {r.Slots.Count} slots, {r.Inputs.FeedType}, {r.Inputs.TaperDescription}, {r.Inputs.SlotModelName}");
+        o.WriteLine(string.Format(Inv, "  S11 at {0:0.####} GHz     {1:0.00} dB (VSWR {2:0.000})", r.FrequencyHz * 1e-9, m.S11DbAtDesign, m.VswrAtDesign));
+        o.WriteLine(string.Format(Inv, "  VSWR <= 1.5 / 2 band   {0:0.0} / {1:0.0} MHz", m.BandwidthVswr15Hz * 1e-6, m.BandwidthVswr2Hz * 1e-6));
+        o.WriteLine(string.Format(Inv, "  beam, HPBW             {0:0.00} deg, {1:0.00} deg", p.BeamDeg, p.HpbwDeg));
+        o.WriteLine(string.Format(Inv, "  peak sidelobe          {0:0.00} dB (design {1:0.0} dB)", p.PeakSidelobeDb, p.DesignSidelobeDb));
+        o.WriteLine(string.Format(Inv, "  directivity, gain      {0:0.00} dBi, {1:0.00} dBi", p.DirectivityDbi, p.GainDbi));
+        if (r.TravellingWave is { } tw && r.Load is { } load)
+        {
+            o.WriteLine(string.Format(Inv, "  squint, scan rate      {0:0.00} deg (+ toward the load), {1:0.000} deg per 100 MHz", tw.SquintDeg, tw.ScanFromSweepDegPer100MHz));
+            o.WriteLine(string.Format(Inv, "  load power, efficiency {0:0.00} % of input (asked {1:0.##} %), {2:0.0} % radiated", load.PowerWPerWIn * 100, load.Fraction * 100, tw.Efficiency * 100));
+        }
+        if (p.CrossPolarDb is { } xpol)
+            o.WriteLine(string.Format(Inv, "  cross-polar peak       {0:0.00} dB at {1:0.0} deg", xpol, p.CrossPolarDirectionDeg ?? double.NaN));
+        foreach (var q in r.Requirements)
+            o.WriteLine($"  {(q.Passed ? "PASS" : "FAIL")}  {q.Description}: required {q.Required}, achieved {q.Achieved}");
+        o.WriteLine($"  wrote {folder}/: {string.Join(", ", OutputFolder.Files.Select(f => f.Name))}");
+    }
+}

@@ -1,0 +1,395 @@
+using System.Globalization;
+using System.Numerics;
+using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
+using SlotArray.Core.Network;
+using SlotArray.Core.Quantities;
+using SlotArray.Core.Safety;
+using SlotArray.Core.Slots;
+
+namespace SlotArray.Reports.Model;
+
+/// <summary>
+/// The adapter from the Core pipeline's <see cref="ArrayResult"/> to the writers' <see cref="DesignReport"/>: every
+/// field of the report is taken from the result (and the request it carries), converted to the report's units.
+/// </summary>
+/// <remarks>
+/// <list type="bullet">
+/// <item>Positions: slot centres from the longitudinal datum, the inner face of the end short at z = 0 (the designer's
+/// z axis, architecture.md "Axes"); offsets signed, positive toward the +x side wall.</item>
+/// <item>Lengths: the equivalent rectangular length the slot model resonated, and the overall tip-to-tip length by
+/// <see cref="CutList.Build"/> (round ends from the spec's cutter by the equal-area rule of <see cref="RoundEndedSlot"/>,
+/// physics-reference §9.1; square ends without a cutter).</item>
+/// <item>Amplitudes: the target is the taper weight, the achieved one the magnitude of the network's slot excitation
+/// <see cref="NetworkSolution.Excitations"/> at the design frequency; both are normalised so that their largest
+/// magnitude is 1. The achieved phase is that of the excitation relative to the slot of largest achieved amplitude.</item>
+/// <item>Requirements: sidelobes (the spec's level, else the taper's design level) at the design frequency and as the
+/// worst over the sweep of the analysis band; VSWR as the worst over the sweep of the whole analysis band; cross-polar
+/// level (edge slots) as the worst over the design frequency and the sweep.</item>
+/// <item>Travelling wave: datum the inner face of the load-end flange; the load power and efficiency from the network at
+/// the design frequency; the squint and scan rate from the phase condition, and the scan rate also from the sweep.</item>
+/// <item>Cautions: <see cref="SafetyCautions.Standard"/> always; with a transmitter, the exposure screen and the
+/// power-handling margin with the network's own standing-wave peak field (see <see cref="StandingWavePeak"/>).</item>
+/// </list>
+/// </remarks>
+public static class DesignReportBuilder
+{
+    private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
+
+    /// <summary>Floor of the pattern cut written to the report, dB below the beam peak.</summary>
+    public const double PatternFloorDb = -100;
+
+    /// <summary>The note every report carries: the model has no mutual coupling (unless the spec asked for it).</summary>
+    public const string NoMutualCouplingNote =
+        "mutual coupling between the slots is not in this model: the slots are designed and analysed as isolated slots (external coupling shifts their admittances and raises sidelobes)";
+
+    /// <summary>Builds the report of one pipeline run.</summary>
+    /// <param name="result">The pipeline's result.</param>
+    /// <exception cref="Core.InfeasibleDesignException">A slot cannot be cut as designed (it reaches the side wall, or the cutter is wider than the slot).</exception>
+    public static DesignReport Build(ArrayResult result)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        var request = result.Request;
+        var design = result.Design;
+        var guide = design.Guide;
+        var f0 = design.DesignFrequency;
+        double tolerance = CutTolerance(request.Tolerance);
+        var cut = CutListOf(request, design, tolerance);
+        var atDesign = result.AtDesign;
+        var slots = Slots(result, cut);
+
+        var warnings = result.Warnings.Select(w => w.Message).ToList();
+        warnings.AddRange(cut.Notes.Where(n => n.Code != "cutlist-datum").Select(n => n.Message));
+        if (request.Coupling == CouplingMode.None) warnings.Add(NoMutualCouplingNote);
+        foreach (var b in new[] { result.BandVswr15, result.BandVswr2 })
+            if (b is { } band && (band.LowLimited || band.HighLimited))
+                warnings.Add(string.Create(Inv, $"the VSWR ≤ {band.VswrLimit:0.0#} band reaches the edge of the search range ({band.Low} to {band.High}): it is at least as wide as reported"));
+        var (requirements, requirementWarnings) = Requirements(result);
+        warnings.AddRange(requirementWarnings);
+
+        return new DesignReport
+        {
+            Name = design.Name,
+            FrequencyHz = f0.Hertz,
+            BandLowHz = request.BandLow.Hertz,
+            BandHighHz = request.BandHigh.Hertz,
+            Guide = new GuideReport
+            {
+                Designation = guide.Designation == "custom"
+                    ? string.Create(Inv, $"custom tube {guide.BroadWall.Millimeters:0.###} × {guide.NarrowWall.Millimeters:0.###} mm inside")
+                    : guide.Designation,
+                A = guide.BroadWall.Meters,
+                B = guide.NarrowWall.Meters,
+                Wall = guide.WallThickness.Meters,
+                Metal = guide.MetalName,
+                GuideWavelength = design.GuideWavelength.Meters,
+                WaveImpedanceOhm = guide.WaveImpedance(f0),
+            },
+            Slots = slots,
+            Termination = new TerminationReport
+            {
+                Type = TerminationName(design.NearTermination.Kind),
+                Distance = design.NearTermination.Distance.Meters,
+            },
+            Pattern = new PatternReport
+            {
+                BeamDeg = atDesign.Metrics.BeamDirection.Degrees,
+                HpbwDeg = atDesign.Metrics.HalfPowerBeamwidth.Degrees,
+                PeakSidelobeDb = atDesign.Metrics.PeakSidelobeDb ?? double.NaN,
+                FirstSidelobeDb = atDesign.Metrics.FirstSidelobeDb ?? double.NaN,
+                DirectivityDbi = atDesign.DirectivityDbi,
+                GainDbi = atDesign.GainDbi,
+                DesignSidelobeDb = DesignSidelobeLevel(request.Taper) ?? double.NaN,
+                CutAngleDeg = [.. atDesign.Pattern.Theta.Select(t => t * 180 / Math.PI)],
+                CutLevelDb = atDesign.Pattern.RelativeDecibels(PatternFloorDb),
+                CrossPolarDb = atDesign.CrossPolar?.PeakLevelDb,
+                CrossPolarDirectionDeg = atDesign.CrossPolar?.PeakDirection.Degrees,
+                CrossCutLevelDb = atDesign.CrossPolar is { } x ? CrossLevels(x, atDesign.Pattern.PeakPower) : [],
+            },
+            Match = new MatchReport
+            {
+                S11DbAtDesign = 20 * Math.Log10(atDesign.Network.S11.Magnitude),
+                VswrAtDesign = atDesign.Network.Vswr,
+                BandwidthVswr15Hz = result.BandVswr15?.Width.Hertz ?? 0,
+                BandwidthVswr2Hz = result.BandVswr2?.Width.Hertz ?? 0,
+            },
+            Sweep = [.. result.SweepFigures.Select(p => new SweepPoint
+            {
+                FrequencyHz = p.Frequency.Hertz,
+                S11 = p.Network.S11,
+                BeamDeg = p.Metrics.BeamDirection.Degrees,
+                PeakSidelobeDb = p.Metrics.PeakSidelobeDb ?? double.NaN,
+                GainDbi = p.GainDbi,
+                HpbwDeg = p.Metrics.HalfPowerBeamwidth.Degrees,
+                CrossPolarDb = p.CrossPolar?.PeakLevelDb,
+            })],
+            Inputs = new InputsSummary
+            {
+                SlotType = SlotTypeName(request.Slots.Type),
+                FeedType = FeedName(request.Feed),
+                TaperDescription = TaperName(request.Taper, result.Taper.Method),
+                SlotModelName = SlotModelName(design.SlotModelName),
+                DatumDescription = DatumName(cut.Datums),
+                CutTolerance = tolerance,
+            },
+            Warnings = warnings,
+            Cautions = Cautions(result),
+            Requirements = requirements,
+            Load = result.TravellingWave is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
+            TravellingWave = result.TravellingWave is { } t ? TravellingWaveOf(result, t) : null,
+        };
+    }
+
+    /// <summary>Cross-polar cut in dB relative to the co-polar peak, floored at <see cref="PatternFloorDb"/>.</summary>
+    private static double[] CrossLevels(Core.Patterns.CrossPolarFigures x, double coPeak) =>
+        [.. x.Pattern.Power.Select(p => p > 0 && coPeak > 0 ? Math.Max(PatternFloorDb, 10 * Math.Log10(p / coPeak)) : PatternFloorDb)];
+
+    private static TravellingWaveReport TravellingWaveOf(ArrayResult result, TravellingWaveDesign tw)
+    {
+        var n = result.AtDesign.Network;
+        // Least-squares slope of the network beam direction against frequency over the sweep.
+        var pts = result.SweepFigures;
+        double slope = double.NaN;
+        if (pts.Count >= 2)
+        {
+            double mf = pts.Average(p => p.Frequency.Hertz), mb = pts.Average(p => p.Metrics.BeamDirection.Degrees);
+            double sxy = pts.Sum(p => (p.Frequency.Hertz - mf) * (p.Metrics.BeamDirection.Degrees - mb));
+            double sxx = pts.Sum(p => (p.Frequency.Hertz - mf) * (p.Frequency.Hertz - mf));
+            slope = sxx > 0 ? sxy / sxx * 1e8 : double.NaN;
+        }
+        return new TravellingWaveReport
+        {
+            SquintDeg = tw.Squint?.Degrees ?? double.NaN,
+            ScanDegPer100MHz = tw.ScanRateDegreesPer100MHz ?? double.NaN,
+            ScanFromSweepDegPer100MHz = slope,
+            Efficiency = n.RadiationEfficiency,
+            WallLossWPerWIn = n.WallLoss,
+            RefinementIterations = tw.Refinement.Iterations,
+            RefinementResidualDb = tw.Refinement.ResidualDb,
+            PhaseErrorDeg = tw.PhaseErrorDegrees,
+        };
+    }
+
+    /// <summary>
+    /// The ± tolerance printed on every cut-list row: the tightest of the spec's offset, length, position and width
+    /// tolerances (a normal σ counts as ±2σ, the 95 % band); without a tolerance block, routine precision CNC milling,
+    /// ±0.025 mm (<see cref="GeneralTolerances.PrecisionMilling"/>, common practice, physics-reference §9.2).
+    /// </summary>
+    /// <param name="tolerance">The spec's tolerance block, or null.</param>
+    public static double CutTolerance(ToleranceRequest? tolerance)
+    {
+        if (tolerance is null) return GeneralTolerances.PrecisionMilling.Meters;
+        var values = new[] { tolerance.Offset, tolerance.Length, tolerance.Position, tolerance.Width }
+            .Select(t => t.Distribution == ErrorDistribution.Normal ? 2 * t.Value.Meters : t.Value.Meters)
+            .Where(v => v > 0).ToArray();
+        return values.Length > 0 ? values.Min() : GeneralTolerances.PrecisionMilling.Meters;
+    }
+
+    private static CutList CutListOf(ArrayRequest request, ArrayDesign design, double tolerance)
+    {
+        var g = design.Guide;
+        bool tilt = design.CouplingKind == SlotCouplingKind.Tilt;
+        var inputs = design.Slots.Select(s => new SlotCutInput(s.Index, s.Position,
+            tilt ? null : Length.FromMeters(s.Coupling), tilt ? Angle.FromRadians(s.Coupling) : null,
+            s.Length, s.Width, request.Slots.Cutter, Length.FromMeters(tolerance))).ToList();
+        // Travelling wave: the matched load sits at z = 0, so the datum is the inner face of the load-end flange.
+        var datums = request.Feed.Type == FeedType.TravellingWave
+            ? Datums.Default with { Longitudinal = LongitudinalDatumKind.LoadFlangeInnerFace }
+            : Datums.Default;
+        return CutList.Build(new CutListGuide(g.BroadWall, g.NarrowWall, g.WallThickness), inputs, datums);
+    }
+
+    private static List<SlotReport> Slots(ArrayResult result, CutList cut)
+    {
+        var design = result.Design;
+        var e = result.AtDesign.Network.Excitations;
+        double targetPeak = design.Slots.Max(s => Math.Abs(s.TargetAmplitude));
+        double achievedPeak = e.Max(x => x.Magnitude);
+        int reference = Enumerable.Range(0, e.Count).First(i => e[i].Magnitude == achievedPeak);
+        double phase0 = e[reference].Phase;
+        var list = new List<SlotReport>(design.Count);
+        for (int i = 0; i < design.Count; i++)
+        {
+            var s = design.Slots[i];
+            var row = cut.Rows[i];
+            double phase = (e[i].Phase - phase0) * 180 / Math.PI;
+            phase = Math.IEEERemainder(phase, 360);
+            list.Add(new SlotReport
+            {
+                Index = s.Index,
+                Position = s.Position.Meters,
+                Offset = row.Offset?.Meters,
+                TiltDeg = row.Tilt?.Degrees,
+                CutDepth = row.Tilt is null ? null : row.DepthOfCut?.Meters ?? 0,
+                Length = s.Length.Meters,
+                OverallLength = row.OverallLength.Meters,
+                Width = s.Width.Meters,
+                EndForm = row.End.Form == Core.Fabrication.SlotEndForm.Round ? SlotEndForm.Round : SlotEndForm.Square,
+                Conductance = s.Conductance,
+                TargetAmplitude = s.TargetAmplitude / targetPeak,
+                AchievedAmplitude = e[i].Magnitude / achievedPeak,
+                AchievedPhaseDeg = phase,
+            });
+        }
+        return list;
+    }
+
+    /// <summary>The taper's design sidelobe level, dB, for the families that have one; null otherwise (cosine-pedestal, given).</summary>
+    /// <param name="taper">The taper request.</param>
+    public static double? DesignSidelobeLevel(TaperRequest taper)
+    {
+        ArgumentNullException.ThrowIfNull(taper);
+        return taper.Type switch
+        {
+            TaperType.Uniform => TaperRequest.Uniform.SidelobeLevelDb,
+            TaperType.CosinePedestal or TaperType.Given => null,
+            _ => taper.SidelobeLevelDb,
+        };
+    }
+
+    private static (List<RequirementResult> Results, List<string> Warnings) Requirements(ArrayResult result)
+    {
+        var request = result.Request;
+        var list = new List<RequirementResult>();
+        var warnings = new List<string>();
+        var band = result.SweepFigures;
+        double? level = request.Requirements.SidelobesDb ?? DesignSidelobeLevel(request.Taper);
+        if (level is { } sll)
+        {
+            string origin = request.Requirements.SidelobesDb is null ? " (the taper's design level)" : "";
+            double atDesign = result.AtDesign.Metrics.PeakSidelobeDb ?? double.NegativeInfinity;
+            list.Add(new RequirementResult
+            {
+                Description = "peak sidelobe at the design frequency",
+                Required = string.Create(Inv, $"≤ {sll:0.0#} dB{origin}"),
+                Achieved = string.Create(Inv, $"{atDesign:0.00} dB at {result.Design.DesignFrequency.Gigahertz:0.####} GHz"),
+                Passed = atDesign <= sll,
+            });
+            if (band.Count > 0)
+            {
+                var worst = band.MaxBy(p => p.Metrics.PeakSidelobeDb ?? double.NegativeInfinity)!;
+                double w = worst.Metrics.PeakSidelobeDb ?? double.NegativeInfinity;
+                list.Add(new RequirementResult
+                {
+                    Description = "peak sidelobe, worst over the analysis band",
+                    Required = string.Create(Inv, $"≤ {sll:0.0#} dB{origin}"),
+                    Achieved = string.Create(Inv, $"{w:0.00} dB at {worst.Frequency.Gigahertz:0.####} GHz ({band.Count} frequencies from {request.BandLow.Gigahertz:0.####} to {request.BandHigh.Gigahertz:0.####} GHz)"),
+                    Passed = w <= sll,
+                });
+            }
+        }
+        if (request.Requirements.Vswr is { } vswr && band.Count > 0)
+        {
+            var worst = band.MaxBy(p => p.Network.S11.Magnitude)!;
+            list.Add(new RequirementResult
+            {
+                Description = "VSWR over the whole analysis band",
+                Required = string.Create(Inv, $"≤ {vswr:0.0##}"),
+                Achieved = string.Create(Inv, $"{worst.Network.Vswr:0.000} worst, at {worst.Frequency.Gigahertz:0.####} GHz ({band.Count} frequencies from {request.BandLow.Gigahertz:0.####} to {request.BandHigh.Gigahertz:0.####} GHz)"),
+                Passed = worst.Network.Vswr <= vswr,
+            });
+        }
+        if (request.Requirements.CrossPolarDb is { } xpol && result.AtDesign.CrossPolar is { } cross)
+        {
+            var worst = band.Count > 0 ? band.MaxBy(p => p.CrossPolar?.PeakLevelDb ?? double.NegativeInfinity)! : result.AtDesign;
+            double w = Math.Max(worst.CrossPolar?.PeakLevelDb ?? double.NegativeInfinity, cross.PeakLevelDb);
+            list.Add(new RequirementResult
+            {
+                Description = "peak cross-polar level, worst over the analysis band",
+                Required = string.Create(Inv, $"≤ {xpol:0.0#} dB"),
+                Achieved = string.Create(Inv, $"{w:0.00} dB worst; {cross.PeakLevelDb:0.00} dB at {cross.PeakDirection.Degrees:0.#} deg at the design frequency (bare slots, no polarisation filter modelled)"),
+                Passed = w <= xpol,
+            });
+        }
+        else if (request.Requirements.CrossPolarDb is { } xp)
+            warnings.Add(string.Create(Inv, $"requirements.cross_polar ({xp:0.0#} dB) is not checked: this analysis has no cross-polar prediction for {SlotTypeName(request.Slots.Type)} slots"));
+        return (list, warnings);
+    }
+
+    /// <summary>
+    /// The standing-wave peak-field factor used for the power-handling check: the largest of the network's peak mode
+    /// voltage <see cref="NetworkSolution.PeakModeVoltage"/> (inside the slotted section) and 1 + |S11| (the feed line's
+    /// own peak) over the design frequency and every sweep frequency, with the frequency where it occurs. It includes
+    /// the reflection at the feed, so the power check applies no separate VSWR factor. Never below 1: the feed guide
+    /// carries the whole incident wave.
+    /// </summary>
+    /// <param name="result">The pipeline's result.</param>
+    public static (double Factor, Frequency At) StandingWavePeak(ArrayResult result)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        var all = result.SweepFigures.Select(p => p.Network).Prepend(result.AtDesign.Network);
+        var worst = all.MaxBy(Peak)!;
+        return (Math.Max(1, Peak(worst)), worst.Frequency);
+        static double Peak(NetworkSolution n) => Math.Max(n.PeakModeVoltage, 1 + n.S11.Magnitude);
+    }
+
+    private static List<string> Cautions(ArrayResult result)
+    {
+        var request = result.Request;
+        var design = result.Design;
+        if (request.Transmitter is not { } tx) return [SafetyCautions.Standard.Message];
+        ExposureAssessment? exposure = null;
+        if (tx.AveragePower is { } avg)
+        {
+            var length = design.Count * design.Spacing;
+            var width = design.Guide.BroadWall + 2 * design.Guide.WallThickness;
+            exposure = ExposureAssessment.Assess(avg, result.AtDesign.GainDbi, design.DesignFrequency, length, width);
+        }
+        PowerHandling? power = null;
+        var extra = new List<string>();
+        if (tx.PeakPower is { } peak)
+        {
+            var (k, at) = StandingWavePeak(result);
+            power = PowerHandling.Assess(design.Guide, design.DesignFrequency, vswr: 1.0, standingWaveFieldFactor: Math.Min(k, 2), peakPower: peak);
+            extra.Add(string.Create(Inv,
+                $"The standing-wave peak-field factor {k:0.###} is this array's own: the largest mode voltage anywhere on the line (slotted section and feed), relative to the incident wave, over the design frequency and the sweep (worst at {at.Gigahertz:0.####} GHz); it includes the reflection at the feed, so no separate VSWR factor is applied, and it replaces the blanket factor 2 of a full standing wave.")
+                + (k > 2 ? " It exceeds 2, the largest factor the power check takes, so the margin above is optimistic: treat the design as over-stressed." : ""));
+        }
+        var list = SafetyCautions.For(exposure, power).Select(c => c.Message).ToList();
+        list.AddRange(extra);
+        if (tx.AveragePower is null)
+            list.Add("No average power was given (transmitter.average_power), so no RF exposure screen was made.");
+        return list;
+    }
+
+    private static string DatumName(Datums d) => d.Longitudinal switch
+    {
+        LongitudinalDatumKind.EndShortInnerFace => "inner face of the end short",
+        LongitudinalDatumKind.LoadFlangeInnerFace => "inner face of the load-end flange (matched load)",
+        _ => "feed flange face",
+    };
+
+    private static string TerminationName(TerminationKind k) => k switch
+    {
+        TerminationKind.Short => "short",
+        TerminationKind.MatchedLoad => "matched-load",
+        _ => "load",
+    };
+
+    private static string SlotTypeName(SlotType t) => t switch
+    {
+        SlotType.Longitudinal => "longitudinal",
+        SlotType.Edge => "edge",
+        _ => "inclined-series",
+    };
+
+    private static string FeedName(FeedRequest f) => f.Type == FeedType.StandingWave
+        ? "standing-wave, " + (f.Position == FeedPosition.Centre ? "centre-fed" : "end-fed")
+        : "travelling-wave";
+
+    private static string SlotModelName(string name) => name switch
+    {
+        "moment-method" => "moment method (finite wall)",
+        "stevenson" => "Stevenson conductance, moment-method resonant length",
+        _ => name,
+    };
+
+    private static string TaperName(TaperRequest t, string method) => t.Type switch
+    {
+        TaperType.Uniform => "uniform",
+        TaperType.Given => string.Create(Inv, $"given ({t.Weights?.Count ?? 0} weights)"),
+        TaperType.CosinePedestal => string.Create(Inv, $"cosine on a pedestal, edge {t.EdgeLevelDb:0.0#} dB, exponent {t.Exponent:0.##}"),
+        TaperType.Taylor or TaperType.Villeneuve or TaperType.Bayliss => string.Create(Inv, $"{method}, {t.SidelobeLevelDb:0.0#} dB, nbar {t.Nbar}"),
+        _ => string.Create(Inv, $"{method}, {t.SidelobeLevelDb:0.0#} dB"),
+    };
+}
