@@ -29,3 +29,25 @@ public class NearUniformArrayFactorTests
             Check.Absolute(0, (zero[j] - nominal[j]).Magnitude / peak, 1e-12, "direct sum at the nominal positions");
     }
 }
+
+/// <summary>Each trial's gain against the Patterns library's half-space directivity of the displaced elements.</summary>
+public class TrialGainTests
+{
+    [Fact]
+    public void Trial_gain_equals_the_half_space_directivity_of_the_displaced_slots_times_the_radiated_power()
+    {
+        var (design, slot) = ToleranceTestArrays.Designed(ToleranceTestArrays.Tapered(32));
+        var options = new ToleranceOptions(EnvelopePoints: 0);
+        var model = ArrayTrialModel.Build(design, slot, ToleranceTestArrays.Factory, ToleranceTestArrays.Typical(), options);
+        var evaluator = new TrialEvaluator(model.Nominal, model.Frequency.FreeSpaceWavenumber, options);
+        for (int i = 0; i < 10; i++)
+        {
+            var r = new TrialRandom(9, i);
+            var t = model.Trial(ref r);
+            var o = evaluator.Evaluate(t, false);
+            var pos = t.Positions.Select(z => -z).ToArray();
+            double d = Directivity.HalfSpace(pos, t.Excitations, model.Frequency.FreeSpaceWavenumber, ElementPatterns.HalfWaveSlotHPlane, o.BeamDirection);
+            Check.Relative(d * t.RadiatedPower, o.Gain, 1e-9, "Directivity.HalfSpace (composite Gauss–Legendre) of the displaced positions");
+        }
+    }
+}
