@@ -11,7 +11,7 @@ namespace SlotArray.Core.Tolerance;
 /// <remarks>
 /// Analytic floor: for independent random relative errors of excitation with variances σ_a² (amplitude) and σ_φ²
 /// (phase), the expected error-pattern power relative to the peak is (σ_a² + σ_φ²) Σ|a_n|²/|Σ a_n|² =
-/// (σ_a² + σ_φ²)/(η_t N), flat in u (J. Ruze, "Antenna tolerance theory — a review", Proc. IEEE 54(4), 633–640, 1966;
+/// (σ_a² + σ_φ²)/(η_t N), flat in u, η_t taken toward the nominal beam (<see cref="TrialEvaluator.TaperEfficiency"/>) (J. Ruze, "Antenna tolerance theory — a review", Proc. IEEE 54(4), 633–640, 1966;
 /// R. C. Hansen, <i>Phased Array Antennas</i>, Wiley 1998, Ch. 7, random errors; both from memory). Position errors add
 /// the mean-square pattern phase k²σ_z² ⟨u²⟩ = k²σ_z²/3 over the visible u (same derivation, from memory). The σ's are
 /// the ones the trials actually produced (<see cref="TrialOutcome"/>), so the comparison tests the error model, not the
@@ -80,7 +80,7 @@ public static class ToleranceMonteCarlo
         }
         double count = (double)trials * n;
         double sa2 = amp / count, sp2 = phase / count, sz2 = pos / count;
-        double eta = PatternMetrics.TaperEfficiency(model.Nominal.Excitations);
+        double eta = evaluator.TaperEfficiency;
         double analytic = 10 * Math.Log10((sa2 + sp2 + sz2) / (eta * n));
         double mcFloor = 10 * Math.Log10(floor / trials);
         var figures = new NominalFigures(nominal.PeakSidelobeDb, nominal.BeamDirection * 180 / Math.PI, nominal.S11Db, nominal.Gain);

@@ -25,11 +25,15 @@ internal readonly record struct TrialOutcome(double PeakSidelobeDb, double BeamD
 /// the nominal network. Same angle convention as <see cref="Network.ArrayFigures"/>: the pattern positions are −z_n.
 /// </summary>
 /// <remarks>
-/// Error-pattern floor: with the trial's excitations scaled by the common factor r̄ = Σ e_t e_n* / Σ |e_n|² (least
+/// <para>Evaluation: the designs have equally spaced nominal slots, so the cut, the floor and the directivity's power
+/// integral are summed about the nominal line with the slots' displacements as a convergent series
+/// (<see cref="NearUniformArrayFactor"/>, <see cref="HalfSpacePowerKernel"/>: the same sums, no sine per element and angle);
+/// a non-uniform nominal line falls back to the direct sums.</para>
+/// <para>Error-pattern floor: with the trial's excitations scaled by the common factor r̄ = Σ e_t e_n* / Σ |e_n|² (least
 /// squares, removing the overall gain and phase that do not change the pattern's shape), the error pattern is
 /// ε(u) = Σ (e_t,n/r̄) e^{jkz′_n u} − Σ e_n e^{jkz_n u}; its power averaged uniformly over the visible u ∈ [−1, 1]
 /// (midpoint rule), relative to the nominal |AF|² at the beam, is the mean sidelobe floor that the random-error theory
-/// predicts as (σ_a² + σ_φ²)/(η_t N) (see <see cref="MonteCarloResult.AnalyticFloorDb"/>).
+/// predicts as (σ_a² + σ_φ²)/(η_t N) (see <see cref="MonteCarloResult.AnalyticFloorDb"/>).</para>
 /// </remarks>
 internal sealed class TrialEvaluator
 {
@@ -83,11 +87,19 @@ internal sealed class TrialEvaluator
         var metrics = PatternOf(nominalPatternPositions, nominal.Excitations, new double[nominal.Excitations.Length], out _);
         var af0 = ArrayFactor.AtSines(nominalPatternPositions, nominal.Excitations, k, [Math.Sin(metrics.BeamDirection.Radians)])[0];
         nominalPeakPower = af0.Real * af0.Real + af0.Imaginary * af0.Imaginary;
+        double sumSquares = nominal.Excitations.Sum(c => c.Real * c.Real + c.Imaginary * c.Imaginary);
+        TaperEfficiency = nominalPeakPower / (nominal.Excitations.Length * sumSquares);
         EnvelopeAngles = envelopeStride == 0 ? [] : Enumerable.Range(0, grid.Count).Where(i => i % envelopeStride == 0).Select(i => grid.Theta[i]).ToArray();
     }
 
     /// <summary>θ of the envelope samples, rad.</summary>
     public double[] EnvelopeAngles { get; }
+
+    /// <summary>
+    /// Taper efficiency toward the nominal beam, η_t = |AF(u_b)|²/(N Σ|e_n|²): the standard |Σ e_n|²/(N Σ|e_n|²)
+    /// (physics-reference §7.4) for a broadside beam, and the same with the phase progression of a squinted beam removed.
+    /// </summary>
+    public double TaperEfficiency { get; }
 
     private static bool IsEquallySpaced(double[] p)
     {
