@@ -8,7 +8,7 @@ using static SlotArray.Core.Tests.ToleranceTests.ToleranceTestArrays;
 namespace SlotArray.Core.Tests.ToleranceTests;
 
 /// <summary>The Monte Carlo engine: exactness at zero tolerance, determinism, thread independence, and the random-error floor.</summary>
-public class ToleranceMonteCarloTests
+public class ToleranceMonteCarloTests(Xunit.Abstractions.ITestOutputHelper output)
 {
     private static readonly ToleranceOptions Fast = new(PatternPoints: 1024, EnvelopePoints: 128);
 
@@ -97,6 +97,7 @@ public class ToleranceMonteCarloTests
         var mc = ToleranceMonteCarlo.Run(model, 400, 11, -20, Fast);
         double eta = Core.Patterns.PatternMetrics.TaperEfficiency(a);
         double expected = 10 * Math.Log10((sa * sa + sp * sp) / (eta * n));
+        output.WriteLine($"floor: formula with the input σ {expected:F2} dB, with the produced σ {mc.AnalyticFloorDb:F2} dB, Monte Carlo {mc.MonteCarloFloorDb:F2} dB");
         Check.Absolute(expected, mc.MonteCarloFloorDb, 1.0, "Ruze 1966 / Hansen 1998 random-error floor with the input σ's");
         Check.Absolute(mc.AnalyticFloorDb, mc.MonteCarloFloorDb, 1.0, "the same formula with the σ's the trials produced");
         Check.Relative(sa, mc.AmplitudeErrorRms, 0.05, "the input σ_a (ln(1 + x) ≈ x; 25 600 draws: ±0.5 % sampling)");
