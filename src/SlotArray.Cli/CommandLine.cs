@@ -22,6 +22,7 @@ public static class CommandLine
             TaperCommand.Build(output, error),
             DesignCommand.Build(output, error),
             SweepCommand.Build(output, error),
+            ToleranceCommand.Build(output, error),
         };
         return root;
     }

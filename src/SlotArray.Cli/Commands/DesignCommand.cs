@@ -56,6 +56,12 @@ public static class DesignCommand
         var clock = Stopwatch.StartNew();
         var result = Analyse(request, cache, error);
         var report = DesignReportBuilder.Build(result);
+        if (request.Tolerance is { } tol)
+        {
+            // The short tolerance summary of issue 7 (the full output is the tolerance command's).
+            error.WriteLine(string.Format(Inv, "tolerance: {0} Monte Carlo trials, seed {1} ...", tol.Trials, tol.Seed));
+            report = report with { Tolerance = Reports.ToleranceSummary.Lines(Core.Tolerance.ToleranceAnalysis.Run(result)) };
+        }
         string folder = outDir ?? DefaultFolder(request.Name);
         error.WriteLine($"writing {OutputFolder.Files.Count} files to {folder}/ ...");
         OutputFolder.WriteAll(report, folder);
@@ -128,6 +134,7 @@ public static class DesignCommand
             o.WriteLine(string.Format(Inv, "  cross-polar peak       {0:0.00} dB at {1:0.0} deg", xpol, p.CrossPolarDirectionDeg ?? double.NaN));
         foreach (var q in r.Requirements)
             o.WriteLine($"  {(q.Passed ? "PASS" : "FAIL")}  {q.Description}: required {q.Required}, achieved {q.Achieved}");
+        if (r.Tolerance.Count > 0) o.WriteLine($"  tolerance              {r.Tolerance[0]}");
         o.WriteLine($"  wrote {folder}/: {string.Join(", ", OutputFolder.Files.Select(f => f.Name))}");
     }
 }

@@ -1,0 +1,80 @@
+using SlotArray.Core.Design;
+
+namespace SlotArray.Core.Tolerance;
+
+/// <summary>Everything the tolerance analysis computes.</summary>
+/// <param name="Tolerance">The tolerances that were applied (trials and seed as run).</param>
+/// <param name="MonteCarlo">Statistics of the trials.</param>
+/// <param name="Sensitivities">Per-slot sensitivities, ranked.</param>
+/// <param name="SurrogateSamples">Real slot-model solves spent on the surrogates' surfaces.</param>
+public sealed record ToleranceResult(ToleranceRequest Tolerance, MonteCarloResult MonteCarlo, IReadOnlyList<SlotSensitivity> Sensitivities,
+    int SurrogateSamples);
+
+/// <summary>
+/// The tolerance stage of the pipeline (architecture.md): the nominal design of <see cref="ArrayPipeline.Run"/> under
+/// the request's machining tolerances, by Monte Carlo with the slot model (through per-slot surrogates,
+/// <see cref="SlotSurrogate"/>) and the line network on every trial, plus per-slot sensitivities.
+/// </summary>
+public static class ToleranceAnalysis
+{
+    /// <summary>The sidelobe target: <c>requirements.sidelobes</c>, else the taper's design level.</summary>
+    public static double TargetDb(ArrayRequest request)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        return request.Requirements.SidelobesDb ?? request.Taper.SidelobeLevelDb;
+    }
+
+    /// <summary>The slot-model factory of a request: the same model kind for a perturbed guide or slot width.</summary>
+    public static SlotModelFactory FactoryFor(ArrayRequest request)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        return (guide, width) => ArrayPipeline.SlotModelFor(request with { Guide = guide, Slots = request.Slots with { Width = width } });
+    }
+
+    /// <summary>
+    /// The nominal design by the pipeline's own stages (taper, slot model, designer: <see cref="ArrayPipeline"/>) without
+    /// its band sweep, which the tolerance analysis at the design frequency does not need.
+    /// </summary>
+    /// <exception cref="InfeasibleDesignException">The request cannot be realised.</exception>
+    public static (ArrayDesign Design, Slots.IShuntSlotModel Slot) Design(ArrayRequest request)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        var taper = Tapers.TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
+        var slot = ArrayPipeline.SlotModelFor(request);
+        return (ArrayPipeline.Synthesise(request, slot, taper), slot);
+    }
+
+    /// <summary>Runs the analysis of a pipeline result.</summary>
+    /// <param name="nominal">The pipeline's result for the request.</param>
+    /// <param name="tolerance">The tolerances; the request's when null.</param>
+    /// <param name="options">Grids, surrogate nodes and threads.</param>
+    /// <param name="progress">Called with the trials done so far (from worker threads), or null.</param>
+    /// <exception cref="ArgumentException">Neither the request nor the caller gives tolerances.</exception>
+    public static ToleranceResult Run(ArrayResult nominal, ToleranceRequest? tolerance = null, ToleranceOptions? options = null,
+        Action<int>? progress = null)
+    {
+        ArgumentNullException.ThrowIfNull(nominal);
+        return Run(nominal.Request, nominal.Design, nominal.SlotModel, tolerance, options, progress);
+    }
+
+    /// <summary>Runs the analysis of a design.</summary>
+    /// <param name="request">The request the design answers (tolerances, sidelobe target, slot-model kind).</param>
+    /// <param name="design">The nominal design.</param>
+    /// <param name="slot">The slot model the design used.</param>
+    /// <param name="tolerance">The tolerances; the request's when null.</param>
+    /// <param name="options">Grids, surrogate nodes and threads.</param>
+    /// <param name="progress">Called with the trials done so far (from worker threads), or null.</param>
+    /// <exception cref="ArgumentException">Neither the request nor the caller gives tolerances.</exception>
+    public static ToleranceResult Run(ArrayRequest request, ArrayDesign design, Slots.IShuntSlotModel slot, ToleranceRequest? tolerance = null,
+        ToleranceOptions? options = null, Action<int>? progress = null)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        var tol = tolerance ?? request.Tolerance
+            ?? throw new ArgumentException("the spec has no tolerance: block; add one (e.g. offset: 0.02 mm, length: 0.02 mm)", nameof(tolerance));
+        options ??= ToleranceOptions.Default;
+        var model = ArrayTrialModel.Build(design, slot, FactoryFor(request), tol, options);
+        var mc = ToleranceMonteCarlo.Run(model, tol.Trials, tol.Seed, TargetDb(request), options, progress);
+        var sens = ToleranceSensitivities.Compute(model, options);
+        return new ToleranceResult(tol, mc, sens, model.SurrogateSamples);
+    }
+}

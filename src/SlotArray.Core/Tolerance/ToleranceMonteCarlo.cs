@@ -1,0 +1,113 @@
+using SlotArray.Core.Patterns;
+
+namespace SlotArray.Core.Tolerance;
+
+/// <summary>
+/// Runs Monte Carlo trials of a <see cref="IToleranceTrialModel"/> and reduces them to statistics. Trial i draws from
+/// <see cref="TrialRandom"/>(seed, i) and is evaluated on its own; the trials run in parallel in fixed chunks, their
+/// outcomes go to slot i of an array, and every reduction (sums, sorts) runs over that array in trial order afterwards,
+/// so the result is identical for any thread count.
+/// </summary>
+/// <remarks>
+/// Analytic floor: for independent random relative errors of excitation with variances σ_a² (amplitude) and σ_φ²
+/// (phase), the expected error-pattern power relative to the peak is (σ_a² + σ_φ²) Σ|a_n|²/|Σ a_n|² =
+/// (σ_a² + σ_φ²)/(η_t N), flat in u, η_t taken toward the nominal beam (<see cref="TrialEvaluator.TaperEfficiency"/>) (J. Ruze, "Antenna tolerance theory — a review", Proc. IEEE 54(4), 633–640, 1966;
+/// R. C. Hansen, <i>Phased Array Antennas</i>, Wiley 1998, Ch. 7, random errors; both from memory). Position errors add
+/// the mean-square pattern phase k²σ_z² ⟨u²⟩ = k²σ_z²/3 over the visible u (same derivation, from memory). The σ's are
+/// the ones the trials actually produced (<see cref="TrialOutcome"/>), so the comparison tests the error model, not the
+/// inputs; errors that are correlated from slot to slot (a guide-width error, a systematic error) break the
+/// independence the formula assumes and make the two differ.
+/// </remarks>
+public static class ToleranceMonteCarlo
+{
+    private const int Chunk = 64;
+
+    /// <summary>Runs <paramref name="trials"/> trials.</summary>
+    /// <param name="model">The trial model.</param>
+    /// <param name="trials">Number of trials, ≥ 1.</param>
+    /// <param name="seed">The seed.</param>
+    /// <param name="targetDb">Sidelobe target, dB.</param>
+    /// <param name="options">Grids and threads.</param>
+    /// <param name="progress">Called with the number of trials done so far (from worker threads; may be null).</param>
+    public static MonteCarloResult Run(IToleranceTrialModel model, int trials, int seed, double targetDb, ToleranceOptions? options = null,
+        Action<int>? progress = null)
+    {
+        ArgumentNullException.ThrowIfNull(model);
+        if (trials < 1) throw new ArgumentOutOfRangeException(nameof(trials), trials, "at least one trial is needed");
+        options ??= ToleranceOptions.Default;
+        options.Validate();
+        var evaluator = new TrialEvaluator(model.Nominal, model.Frequency.FreeSpaceWavenumber, options);
+        var nominal = evaluator.Evaluate(model.Nominal, true);
+        var outcomes = new TrialOutcome[trials];
+        int done = 0;
+        int chunks = (trials + Chunk - 1) / Chunk;
+        Parallel.For(0, chunks, new ParallelOptions { MaxDegreeOfParallelism = options.Threads }, c =>
+        {
+            int end = Math.Min(trials, (c + 1) * Chunk);
+            for (int i = c * Chunk; i < end; i++)
+            {
+                var random = new TrialRandom(seed, i);
+                outcomes[i] = evaluator.Evaluate(model.Trial(ref random), true);
+            }
+            int now = Interlocked.Add(ref done, end - c * Chunk);
+            progress?.Invoke(now);
+        });
+        return Reduce(model, seed, targetDb, evaluator, nominal, outcomes, options.Threads);
+    }
+
+    private static MonteCarloResult Reduce(IToleranceTrialModel model, int seed, double targetDb, TrialEvaluator evaluator,
+        TrialOutcome nominal, TrialOutcome[] outcomes, int threads)
+    {
+        int trials = outcomes.Length, n = model.Nominal.Excitations.Length;
+        var psl = new double[trials];
+        var loss = new double[trials];
+        var point = new double[trials];
+        var s11 = new double[trials];
+        double amp = 0, phase = 0, pos = 0, floor = 0;
+        int meets = 0;
+        for (int i = 0; i < trials; i++)
+        {
+            var o = outcomes[i];
+            psl[i] = o.PeakSidelobeDb;
+            if (o.PeakSidelobeDb <= targetDb) meets++;
+            loss[i] = 10 * Math.Log10(nominal.Gain / o.Gain);
+            point[i] = Math.Abs(o.BeamDirection - nominal.BeamDirection) * 180 / Math.PI;
+            s11[i] = o.S11Db;
+            amp += o.AmplitudeErrorSquares;
+            phase += o.PhaseErrorSquares;
+            pos += o.PositionPhaseSquares;
+            floor += o.FloorPower;
+        }
+        double count = (double)trials * n;
+        double sa2 = amp / count, sp2 = phase / count, sz2 = pos / count;
+        double eta = evaluator.TaperEfficiency;
+        double analytic = 10 * Math.Log10((sa2 + sp2 + sz2) / (eta * n));
+        double mcFloor = 10 * Math.Log10(floor / trials);
+        var figures = new NominalFigures(nominal.PeakSidelobeDb, nominal.BeamDirection * 180 / Math.PI, nominal.S11Db, nominal.Gain);
+        return new MonteCarloResult(trials, seed, targetDb, figures, SampleSummary.Of(psl), (double)meets / trials,
+            SampleSummary.Of(loss), SampleSummary.Of(point), SampleSummary.Of(s11), Math.Sqrt(sa2), Math.Sqrt(sp2), Math.Sqrt(sz2), eta,
+            analytic, mcFloor, Array.AsReadOnly(psl), Envelope(evaluator, nominal, outcomes, threads));
+    }
+
+    private static PatternEnvelope? Envelope(TrialEvaluator evaluator, TrialOutcome nominal, TrialOutcome[] outcomes, int threads)
+    {
+        if (nominal.Envelope is null) return null;
+        int m = nominal.Envelope.Length;
+        var p5 = new double[m];
+        var p50 = new double[m];
+        var p95 = new double[m];
+        var max = new double[m];
+        Parallel.For(0, m, new ParallelOptions { MaxDegreeOfParallelism = threads }, j =>
+        {
+            var column = new double[outcomes.Length];
+            for (int i = 0; i < column.Length; i++) column[i] = outcomes[i].Envelope![j];
+            Array.Sort(column);
+            p5[j] = SampleSummary.Percentile(column, 0.05);
+            p50[j] = SampleSummary.Percentile(column, 0.50);
+            p95[j] = SampleSummary.Percentile(column, 0.95);
+            max[j] = column[^1];
+        });
+        return new PatternEnvelope(evaluator.EnvelopeAngles.Select(t => t * 180 / Math.PI).ToArray(),
+            nominal.Envelope.Select(v => (double)v).ToArray(), p5, p50, p95, max);
+    }
+}

@@ -1,0 +1,28 @@
+namespace SlotArray.Core.Tolerance;
+
+/// <summary>How the tolerance analysis samples and evaluates.</summary>
+/// <param name="PatternPoints">Angles of each trial's pattern cut, uniform in θ over the half-space; ≥ 256, default 2048 (an even count is raised by one so that broadside is a sample).</param>
+/// <param name="SurrogateNodes">Chebyshev nodes per variable of each slot's (coupling, length) surrogate; odd, ≥ 3, default 5.</param>
+/// <param name="MaxThreads">Worker threads; 0 (default) uses every core. Results do not depend on it.</param>
+/// <param name="EnvelopePoints">Angles kept per trial for the percentile envelope (a subsample of the cut); 0 keeps none; default 256.</param>
+/// <param name="FloorPoints">Points in u = sin θ over which the error-pattern floor is averaged; ≥ 16, default 256.</param>
+/// <param name="NormalRange">Half-width of a normal error's surrogate range in σ; beyond it the slot model is solved directly; default 4.</param>
+public sealed record ToleranceOptions(int PatternPoints = 2048, int SurrogateNodes = 5, int MaxThreads = 0, int EnvelopePoints = 256,
+    int FloorPoints = 256, double NormalRange = 4)
+{
+    /// <summary>The defaults.</summary>
+    public static ToleranceOptions Default { get; } = new();
+
+    /// <summary>The thread count to use.</summary>
+    public int Threads => MaxThreads > 0 ? MaxThreads : Environment.ProcessorCount;
+
+    internal void Validate()
+    {
+        if (PatternPoints < 256) throw new ArgumentOutOfRangeException(nameof(PatternPoints), PatternPoints, "a trial pattern needs at least 256 angles");
+        if (SurrogateNodes < 3 || SurrogateNodes % 2 == 0) throw new ArgumentOutOfRangeException(nameof(SurrogateNodes), SurrogateNodes, "the surrogate node count must be odd and at least 3");
+        if (MaxThreads < 0) throw new ArgumentOutOfRangeException(nameof(MaxThreads), MaxThreads, "the thread count must be 0 (all cores) or positive");
+        if (EnvelopePoints < 0 || EnvelopePoints > PatternPoints) throw new ArgumentOutOfRangeException(nameof(EnvelopePoints), EnvelopePoints, "the envelope keeps 0 to PatternPoints angles");
+        if (FloorPoints < 16) throw new ArgumentOutOfRangeException(nameof(FloorPoints), FloorPoints, "the floor average needs at least 16 points");
+        if (!(NormalRange >= 2)) throw new ArgumentOutOfRangeException(nameof(NormalRange), NormalRange, "the normal range must be at least 2σ");
+    }
+}
