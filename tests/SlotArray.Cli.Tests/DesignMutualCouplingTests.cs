@@ -21,6 +21,10 @@ public class DesignMutualCouplingTests
         Assert.Contains("isolated-slot design", output);
         string summary = File.ReadAllText(Path.Combine(outDir, "summary.md"));
         Assert.Contains("Mutual coupling (Elliott's design procedure)", summary);
+        using var json = System.Text.Json.JsonDocument.Parse(File.ReadAllText(Path.Combine(outDir, "design.json")));
+        var mc = json.RootElement.GetProperty("mutual_coupling");
+        Assert.True(mc.GetProperty("coupled_design").GetProperty("s11_db_at_design").GetDouble() < -30);
+        Assert.True(mc.GetProperty("iterations").GetArrayLength() >= 1);
         // The coupled design is matched under the coupled analysis; the isolated-slot design is not
         // (self-consistency, issue 8: S11 below −30 dB at the design frequency).
         var line = output.Split('\n').First(l => l.TrimStart().StartsWith("S11 at design", StringComparison.Ordinal));

@@ -104,6 +104,29 @@ public static class DesignJson
             w.WriteEndObject();
         }
 
+        if (r.Coupling is { } c)
+        {
+            w.WriteStartObject("mutual_coupling");
+            w.WriteString("method", "Elliott's design procedure; both designs analysed with external mutual coupling");
+            WriteCoupledFigures(w, "coupled_design", c.Coupled);
+            WriteCoupledFigures(w, "isolated_slot_design", c.Uncoupled);
+            Num(w, "tolerance_m", c.Tolerance);
+            Num(w, "surrogate_error", c.SurrogateError);
+            w.WriteStartArray("iterations");
+            foreach (var it in c.Iterations)
+            {
+                w.WriteStartObject();
+                w.WriteNumber("index", it.Index);
+                Num(w, "max_offset_change_m", it.MaximumOffsetChange);
+                Num(w, "max_length_change_m", it.MaximumLengthChange);
+                w.WriteNumber("worst_slot", it.WorstSlot);
+                Num(w, "match_error", it.MatchError);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+
         var p = r.Pattern;
         w.WriteStartObject("pattern");
         Num(w, "beam_deg", p.BeamDeg);
@@ -332,4 +355,14 @@ public static class DesignJson
 
     private static string[] StringList(JsonElement e, string key) =>
         [.. e.GetProperty(key).EnumerateArray().Select(v => v.GetString() ?? "")];
+
+    private static void WriteCoupledFigures(Utf8JsonWriter w, string name, CoupledDesignFigures f)
+    {
+        w.WriteStartObject(name);
+        Num(w, "s11_db_at_design", f.S11DbAtDesign);
+        Num(w, "best_match_hz", f.BestMatchHz);
+        Num(w, "s11_db_at_best_match", f.BestMatchS11Db);
+        Num(w, "peak_sidelobe_db", f.PeakSidelobeDb);
+        w.WriteEndObject();
+    }
 }
