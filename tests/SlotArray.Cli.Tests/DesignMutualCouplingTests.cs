@@ -29,4 +29,24 @@ public class DesignMutualCouplingTests
         Assert.True(numbers[0] < -30, line);
         Assert.True(numbers[1] > numbers[0], line);
     }
+
+    [Fact]
+    public void Mutual_coupling_with_a_travelling_wave_feed_prints_the_iterations_and_both_designs()
+    {
+        // The demo's 16 longitudinal slots fed as a travelling wave (0.45 guide-wavelength spacing, 20 % to the load):
+        // design runs the coupled travelling-wave designer (issue 8 item 4) and writes its section of the summary.
+        string yaml = File.ReadAllText(RepoFiles.Demo).Replace("coupling: none", "coupling: mutual")
+            .Replace("  type: standing-wave\n  spacing: 0.5 guide-wavelength\n  position: end\n  short: 0.25 guide-wavelength",
+                "  type: travelling-wave\n  spacing: 0.45 guide-wavelength\n  load: 20 %");
+        Assert.Contains("load: 20 %", yaml);
+        string spec = DesignRuns.Spec("mutual-tw", yaml);
+        string outDir = Path.Combine(DesignRuns.TempFolder("mutual-tw-out"), "out");
+        var (code, output, err) = DesignRuns.Run("design", spec, "-o", outDir, "--cache-dir", DesignRuns.TempFolder("mutual-tw-cache"));
+        Assert.True(code == 0, err);
+        Assert.Contains("travelling-wave design with mutual coupling", output);
+        Assert.Contains("iteration  1:", output);
+        Assert.Contains("isolated-slot design", output);
+        string summary = File.ReadAllText(Path.Combine(outDir, "summary.md"));
+        Assert.Contains("Mutual coupling (travelling-wave design on the coupled network)", summary);
+    }
 }
