@@ -13,13 +13,7 @@ public class DesignMutualCouplingTests
     {
         string yaml = File.ReadAllText(RepoFiles.Demo).Replace("coupling: none", "coupling: mutual");
         Assert.Contains("coupling: mutual", yaml);
-        string spec = DesignRuns.Spec("mutual", yaml);
-        string outDir = Path.Combine(DesignRuns.TempFolder("mutual-out"), "out");
-        var (code, output, err) = DesignRuns.Run("design", spec, "-o", outDir, "--cache-dir", DesignRuns.TempFolder("mutual-cache"));
-        Assert.True(code == 0, err);
-        Assert.Contains("iteration  1:", output);
-        Assert.Contains("isolated-slot design", output);
-        string summary = File.ReadAllText(Path.Combine(outDir, "summary.md"));
+        var (output, summary) = Design("mutual", yaml);
         Assert.Contains("Mutual coupling (Elliott's design procedure)", summary);
         // The coupled design is matched under the coupled analysis; the isolated-slot design is not
         // (self-consistency, issue 8: S11 below −30 dB at the design frequency).
@@ -39,14 +33,20 @@ public class DesignMutualCouplingTests
             .Replace("  type: standing-wave\n  spacing: 0.5 guide-wavelength\n  position: end\n  short: 0.25 guide-wavelength",
                 "  type: travelling-wave\n  spacing: 0.45 guide-wavelength\n  load: 20 %");
         Assert.Contains("load: 20 %", yaml);
-        string spec = DesignRuns.Spec("mutual-tw", yaml);
-        string outDir = Path.Combine(DesignRuns.TempFolder("mutual-tw-out"), "out");
-        var (code, output, err) = DesignRuns.Run("design", spec, "-o", outDir, "--cache-dir", DesignRuns.TempFolder("mutual-tw-cache"));
-        Assert.True(code == 0, err);
+        var (output, summary) = Design("mutual-tw", yaml);
         Assert.Contains("travelling-wave design with mutual coupling", output);
+        Assert.Contains("Mutual coupling (travelling-wave design on the coupled network)", summary);
+    }
+
+    /// <summary>Runs design on the spec text; checks it succeeded and printed iterations and both designs; returns the console output and summary.md.</summary>
+    private static (string Output, string Summary) Design(string name, string yaml)
+    {
+        string spec = DesignRuns.Spec(name, yaml);
+        string outDir = Path.Combine(DesignRuns.TempFolder(name + "-out"), "out");
+        var (code, output, err) = DesignRuns.Run("design", spec, "-o", outDir, "--cache-dir", DesignRuns.TempFolder(name + "-cache"));
+        Assert.True(code == 0, err);
         Assert.Contains("iteration  1:", output);
         Assert.Contains("isolated-slot design", output);
-        string summary = File.ReadAllText(Path.Combine(outDir, "summary.md"));
-        Assert.Contains("Mutual coupling (travelling-wave design on the coupled network)", summary);
+        return (output, File.ReadAllText(Path.Combine(outDir, "summary.md")));
     }
 }
