@@ -13,13 +13,7 @@ public class DesignMutualCouplingTests
     {
         string yaml = File.ReadAllText(RepoFiles.Demo).Replace("coupling: none", "coupling: mutual");
         Assert.Contains("coupling: mutual", yaml);
-        string spec = DesignRuns.Spec("mutual", yaml);
-        string outDir = Path.Combine(DesignRuns.TempFolder("mutual-out"), "out");
-        var (code, output, err) = DesignRuns.Run("design", spec, "-o", outDir, "--cache-dir", DesignRuns.TempFolder("mutual-cache"));
-        Assert.True(code == 0, err);
-        Assert.Contains("iteration  1:", output);
-        Assert.Contains("isolated-slot design", output);
-        string summary = File.ReadAllText(Path.Combine(outDir, "summary.md"));
+        var (output, summary) = Design("mutual", yaml);
         Assert.Contains("Mutual coupling (Elliott's design procedure)", summary);
         using var json = System.Text.Json.JsonDocument.Parse(File.ReadAllText(Path.Combine(outDir, "design.json")));
         var mc = json.RootElement.GetProperty("mutual_coupling");
@@ -32,5 +26,31 @@ public class DesignMutualCouplingTests
             .Select(t => double.Parse(t, System.Globalization.CultureInfo.InvariantCulture)).ToArray();
         Assert.True(numbers[0] < -30, line);
         Assert.True(numbers[1] > numbers[0], line);
+    }
+
+    [Fact]
+    public void Mutual_coupling_with_a_travelling_wave_feed_prints_the_iterations_and_both_designs()
+    {
+        // The demo's 16 longitudinal slots fed as a travelling wave (0.45 guide-wavelength spacing, 20 % to the load):
+        // design runs the coupled travelling-wave designer (issue 8 item 4) and writes its section of the summary.
+        string yaml = File.ReadAllText(RepoFiles.Demo).Replace("coupling: none", "coupling: mutual")
+            .Replace("  type: standing-wave\n  spacing: 0.5 guide-wavelength\n  position: end\n  short: 0.25 guide-wavelength",
+                "  type: travelling-wave\n  spacing: 0.45 guide-wavelength\n  load: 20 %");
+        Assert.Contains("load: 20 %", yaml);
+        var (output, summary) = Design("mutual-tw", yaml);
+        Assert.Contains("travelling-wave design with mutual coupling", output);
+        Assert.Contains("Mutual coupling (travelling-wave design on the coupled network)", summary);
+    }
+
+    /// <summary>Runs design on the spec text; checks it succeeded and printed iterations and both designs; returns the console output and summary.md.</summary>
+    private static (string Output, string Summary) Design(string name, string yaml)
+    {
+        string spec = DesignRuns.Spec(name, yaml);
+        string outDir = Path.Combine(DesignRuns.TempFolder(name + "-out"), "out");
+        var (code, output, err) = DesignRuns.Run("design", spec, "-o", outDir, "--cache-dir", DesignRuns.TempFolder(name + "-cache"));
+        Assert.True(code == 0, err);
+        Assert.Contains("iteration  1:", output);
+        Assert.Contains("isolated-slot design", output);
+        return (output, File.ReadAllText(Path.Combine(outDir, "summary.md")));
     }
 }

@@ -121,7 +121,13 @@ public static class DesignCommand
         }
         if (r.Coupling is { } c)
         {
-            o.WriteLine("  Elliott's design with mutual coupling:");
+            if (c.TravellingWaveResidualsDb is { } res)
+            {
+                o.WriteLine("  travelling-wave design with mutual coupling (coupled network, matched load):");
+                for (int i = 0; i < res.Count; i++)
+                    o.WriteLine(string.Format(Inv, "    iteration {0,2}: largest slot-power error {1:0.000000} dB", i + 1, res[i]));
+            }
+            else o.WriteLine("  Elliott's design with mutual coupling:");
             foreach (var it in c.Iterations)
                 o.WriteLine(string.Format(Inv, "    iteration {0,2}: offsets move ≤ {1:0.00000} mm, lengths ≤ {2:0.00000} mm (slot {3}), match error {4:0.000000}",
                     it.Index, it.MaximumOffsetChange * 1e3, it.MaximumLengthChange * 1e3, it.WorstSlot, it.MatchError));

@@ -52,6 +52,14 @@ public sealed record ArrayResult(
     /// the coupled design and <see cref="Sweep"/>, the figures and the bands come from the coupled analysis.
     /// </summary>
     public ElliottComparison? Coupling { get; init; }
+
+    /// <summary>
+    /// <c>coupling: mutual</c> with a travelling-wave feed: the coupled travelling-wave design
+    /// (<see cref="CoupledTravellingWaveDesigner"/>) and the isolated-slot design side by side under the coupled analysis;
+    /// null otherwise. When set, <see cref="Design"/> is the coupled design and the sweep, figures and bands come from the
+    /// coupled analysis.
+    /// </summary>
+    public CoupledTravellingWaveComparison? CoupledTravellingWave { get; init; }
 }
 
 /// <summary>
@@ -140,9 +148,9 @@ public static class ArrayPipeline
     {
         ArgumentNullException.ThrowIfNull(request);
         options ??= AnalysisOptions.Default;
-        if (request.Coupling == CouplingMode.Mutual && (request.Feed.Type != FeedType.StandingWave || request.Slots.Type != SlotType.Longitudinal))
+        if (request.Coupling == CouplingMode.Mutual && request.Slots.Type != SlotType.Longitudinal)
             throw new InfeasibleDesignException(
-                $"coupling: mutual is implemented for standing-wave arrays of longitudinal slots only; a {request.Feed.Type} feed with {request.Slots.Type} slots has no coupled designer yet: use coupling: none");
+                $"coupling: mutual is implemented for arrays of longitudinal slots only; {request.Slots.Type} slots have no coupled designer yet: use coupling: none");
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
         var slot = SlotModelFor(request);
         if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
@@ -166,6 +174,7 @@ public static class ArrayPipeline
     /// </summary>
     private static ArrayResult RunCoupled(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
     {
+        if (request.Feed.Type == FeedType.TravellingWave) return RunCoupledTravelling(request, options, taper, slot);
         var elliott = ElliottDesigner.Design(request, slot, taper.Weights);
         var design = elliott.Design;
         var analysis = AnalysisModel(request, design, slot, options);
@@ -177,6 +186,29 @@ public static class ArrayPipeline
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
         {
             Coupling = comparison,
+        };
+    }
+
+    /// <summary>
+    /// <c>coupling: mutual</c> with a travelling-wave feed: <see cref="CoupledTravellingWaveDesigner"/>, the band analysed
+    /// with the coupled network (matched load), VSWR bands from that sweep, and the comparison with the isolated-slot
+    /// design. <see cref="ArrayResult.TravellingWave"/> carries the isolated-slot designer's layout figures (targets,
+    /// squint, scan rate) with its design replaced by the coupled one.
+    /// </summary>
+    private static ArrayResult RunCoupledTravelling(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
+    {
+        var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights);
+        var design = result.Design;
+        var analysis = AnalysisModel(request, design, slot, options);
+        var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
+        var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
+        var comparison = CoupledTravellingWaveComparison.Of(result, analysis, AnalysisModel(request, result.Uncoupled.Design, slot, options),
+            request.BandLow, request.BandHigh);
+        var warnings = taper.Warnings.Concat(design.Warnings).DistinctBy(w => w.Message).ToList();
+        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
+        {
+            TravellingWave = result.Uncoupled with { Design = design },
+            CoupledTravellingWave = comparison,
         };
     }
 }

@@ -41,10 +41,36 @@ public sealed record ElliottComparison(ElliottResult Elliott, CoupledFigures Cou
         return new ElliottComparison(elliott, Figures(elliott.Design, coupledSlot, low, high), Figures(elliott.Uncoupled, uncoupledSlot, low, high));
     }
 
-    private static CoupledFigures Figures(ArrayDesign d, IShuntSlotModel slot, Quantities.Frequency low, Quantities.Frequency high)
+    /// <summary>One design's figures under the coupled analysis: at the design frequency, at best match in [low, high], peak sidelobe.</summary>
+    internal static CoupledFigures Figures(ArrayDesign d, IShuntSlotModel slot, Quantities.Frequency low, Quantities.Frequency high,
+        MutualImpedanceModel? coupling = null)
     {
-        var at = CoupledArrayNetwork.Solve(d, slot, d.DesignFrequency);
-        var best = CoupledArrayNetwork.BestMatch(d, slot, low, high, BestMatchSamples);
+        var at = CoupledArrayNetwork.Solve(d, slot, d.DesignFrequency, coupling);
+        var best = CoupledArrayNetwork.BestMatch(d, slot, low, high, BestMatchSamples, coupling);
         return new CoupledFigures(at, best, ArrayFigures.At(d, at).Metrics.PeakSidelobeDb);
+    }
+}
+
+/// <summary>
+/// What the coupled travelling-wave design bought (<c>coupling: mutual</c> with a travelling-wave feed): the coupled and
+/// isolated-slot designs of the same request, both analysed with the mutual coupling included.
+/// </summary>
+/// <param name="Result">The coupled design, its iteration history and the isolated-slot design it started from.</param>
+/// <param name="Coupled">The coupled design under the coupled analysis.</param>
+/// <param name="Uncoupled">The isolated-slot design under the coupled analysis.</param>
+public sealed record CoupledTravellingWaveComparison(CoupledTravellingWaveDesign Result, CoupledFigures Coupled, CoupledFigures Uncoupled)
+{
+    /// <summary>Analyses both designs of <paramref name="result"/> over [low, high] with the coupled network.</summary>
+    /// <param name="result">The coupled design and the isolated-slot design it started from.</param>
+    /// <param name="coupledSlot">The slot model evaluated for the coupled design.</param>
+    /// <param name="uncoupledSlot">The slot model evaluated for the isolated-slot design.</param>
+    /// <param name="low">Lower edge of the best-match search.</param>
+    /// <param name="high">Upper edge of the best-match search.</param>
+    public static CoupledTravellingWaveComparison Of(CoupledTravellingWaveDesign result, IShuntSlotModel coupledSlot, IShuntSlotModel uncoupledSlot,
+        Quantities.Frequency low, Quantities.Frequency high)
+    {
+        ArgumentNullException.ThrowIfNull(result);
+        return new CoupledTravellingWaveComparison(result, ElliottComparison.Figures(result.Design, coupledSlot, low, high),
+            ElliottComparison.Figures(result.Uncoupled.Design, uncoupledSlot, low, high));
     }
 }

@@ -14,7 +14,13 @@ public sealed record CouplingReport
     /// <summary>Figures of the isolated-slot design under the same coupled analysis.</summary>
     public required CoupledDesignFigures Uncoupled { get; init; }
 
-    /// <summary>The iteration history, in order.</summary>
+    /// <summary>
+    /// Travelling-wave feed: the coupled designer's residual after each coupled solution, power dB (largest
+    /// |10 log10(P̃_n/T_n)|), first to last; null for Elliott's standing-wave design.
+    /// </summary>
+    public IReadOnlyList<double>? TravellingWaveResidualsDb { get; init; }
+
+    /// <summary>The iteration history, in order (Elliott's standing-wave design; empty for a travelling-wave feed).</summary>
     public required IReadOnlyList<ElliottIteration> Iterations { get; init; }
 
     /// <summary>The tolerance on offsets and lengths the iteration met, m.</summary>
@@ -32,6 +38,16 @@ public sealed record CouplingReport
     public static CouplingReport? Of(ArrayResult result)
     {
         ArgumentNullException.ThrowIfNull(result);
+        if (result.CoupledTravellingWave is { } t)
+            return new CouplingReport
+            {
+                Coupled = CoupledDesignFigures.Of(t.Coupled),
+                Uncoupled = CoupledDesignFigures.Of(t.Uncoupled),
+                Iterations = [],
+                Tolerance = 0,
+                SurrogateError = double.NaN,
+                TravellingWaveResidualsDb = t.Result.History,
+            };
         if (result.Coupling is not { } c) return null;
         return new CouplingReport
         {

@@ -10,7 +10,8 @@ public static class CouplingSummary
     {
         ArgumentNullException.ThrowIfNull(c);
         ArgumentNullException.ThrowIfNull(line);
-        line("## Mutual coupling (Elliott's design procedure)");
+        var tw = c.TravellingWaveResidualsDb;
+        line(tw is null ? "## Mutual coupling (Elliott's design procedure)" : "## Mutual coupling (travelling-wave design on the coupled network)");
         line("");
         line($"Both designs analysed with the mutual coupling included ({CouplingReport.NeglectedNote}).");
         line("");
@@ -21,6 +22,16 @@ public static class CouplingSummary
         Row("S11 at best match", x => Invariant.Fixed(x.BestMatchS11Db, 2), "dB");
         Row("peak sidelobe at the design frequency", x => Invariant.Fixed(x.PeakSidelobeDb, 2), "dB");
         line("");
+        if (tw is not null)
+        {
+            line("Iterations (stop when every slot voltage's share of the radiated power is within 0.0001 dB of the taper's):");
+            line("");
+            line("| iteration | largest slot-power error (dB) |");
+            line("| ---: | ---: |");
+            for (int i = 0; i < tw.Count; i++) line($"| {Invariant.Int(i + 1)} | {Invariant.Fixed(tw[i], 6)} |");
+            line("");
+            return;
+        }
         line($"Iterations (stop when no offset or length changes by more than {Invariant.Fixed(c.Tolerance * 1e3, 4)} mm; surrogate error at the final slots {Invariant.Fixed(c.SurrogateError * 100, 2)} %):");
         line("");
         line("| iteration | largest offset change (mm) | largest length change (mm) | at slot | match error Σ y^a − 1 |");
