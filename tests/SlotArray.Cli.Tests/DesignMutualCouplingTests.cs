@@ -13,7 +13,7 @@ public class DesignMutualCouplingTests
     {
         string yaml = File.ReadAllText(RepoFiles.Demo).Replace("coupling: none", "coupling: mutual");
         Assert.Contains("coupling: mutual", yaml);
-        var (output, summary) = Design("mutual", yaml);
+        var (output, summary, outDir) = Design("mutual", yaml);
         Assert.Contains("Mutual coupling (Elliott's design procedure)", summary);
         using var json = System.Text.Json.JsonDocument.Parse(File.ReadAllText(Path.Combine(outDir, "design.json")));
         var mc = json.RootElement.GetProperty("mutual_coupling");
@@ -37,13 +37,13 @@ public class DesignMutualCouplingTests
             .Replace("  type: standing-wave\n  spacing: 0.5 guide-wavelength\n  position: end\n  short: 0.25 guide-wavelength",
                 "  type: travelling-wave\n  spacing: 0.45 guide-wavelength\n  load: 20 %");
         Assert.Contains("load: 20 %", yaml);
-        var (output, summary) = Design("mutual-tw", yaml);
+        var (output, summary, _) = Design("mutual-tw", yaml);
         Assert.Contains("travelling-wave design with mutual coupling", output);
         Assert.Contains("Mutual coupling (travelling-wave design on the coupled network)", summary);
     }
 
-    /// <summary>Runs design on the spec text; checks it succeeded and printed iterations and both designs; returns the console output and summary.md.</summary>
-    private static (string Output, string Summary) Design(string name, string yaml)
+    /// <summary>Runs design on the spec text; checks it succeeded and printed iterations and both designs; returns the console output, summary.md and the output folder.</summary>
+    private static (string Output, string Summary, string OutDir) Design(string name, string yaml)
     {
         string spec = DesignRuns.Spec(name, yaml);
         string outDir = Path.Combine(DesignRuns.TempFolder(name + "-out"), "out");
@@ -51,6 +51,6 @@ public class DesignMutualCouplingTests
         Assert.True(code == 0, err);
         Assert.Contains("iteration  1:", output);
         Assert.Contains("isolated-slot design", output);
-        return (output, File.ReadAllText(Path.Combine(outDir, "summary.md")));
+        return (output, File.ReadAllText(Path.Combine(outDir, "summary.md")), outDir);
     }
 }
