@@ -138,25 +138,18 @@ public static class SineCosineIntegrals
     }
 
     /// <summary>Si series, A&amp;S 5.2.14, summed until the term is below 1e-17 of the sum.</summary>
-    private static double SiSeries(double x)
-    {
-        double x2 = x * x, power = x, sum = 0;
-        for (int n = 0; n < SiC.Length; n++, power *= x2)
-        {
-            double add = SiC[n] * power;
-            sum += add;
-            if (Math.Abs(add) < Epsilon * Math.Abs(sum)) break;
-        }
-        return sum;
-    }
+    private static double SiSeries(double x) => PowerSeries(SiC, 0, x, x * x);
 
     /// <summary>Cin series from A&amp;S 5.2.16: Cin(x) = −Σ_{n≥1} (−1)ⁿ x^(2n) / (2n (2n)!).</summary>
-    private static double CinSeries(double x)
+    private static double CinSeries(double x) => PowerSeries(CinC, 1, x * x, x * x);
+
+    /// <summary>Σ_{n≥first} c[n]·p·x2^(n−first), p the first power, stopped once a term is below 1e-17 of the sum.</summary>
+    private static double PowerSeries(double[] c, int first, double firstPower, double x2)
     {
-        double x2 = x * x, power = x2, sum = 0;
-        for (int n = 1; n < CinC.Length; n++, power *= x2)
+        double power = firstPower, sum = 0;
+        for (int n = first; n < c.Length; n++, power *= x2)
         {
-            double add = CinC[n] * power;
+            double add = c[n] * power;
             sum += add;
             if (Math.Abs(add) < Epsilon * Math.Abs(sum)) break;
         }

@@ -12,7 +12,7 @@ public delegate IShuntSlotModel SlotModelFactory(RectangularWaveguide guide, Len
 
 /// <summary>
 /// The slot model of one designed slot at the design frequency, made cheap for the Monte Carlo: a barycentric
-/// Chebyshev surface of y(|c|, L) over the tolerance range of the coupling |c| and the length L (built once from the
+/// Chebyshev surface (J.-P. Berrut and L. N. Trefethen, "Barycentric Lagrange interpolation", SIAM Review 46(3), 2004; from memory) of y(|c|, L) over the tolerance range of the coupling |c| and the length L (built once from the
 /// real model), plus first-order terms for the slot width w, the wall thickness t and the guide's inside width a.
 /// </summary>
 /// <remarks>
