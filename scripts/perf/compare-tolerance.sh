@@ -1,0 +1,45 @@
+#!/usr/bin/env bash
+# Process-level speed comparison of the tolerance Monte Carlo: `slotarray tolerance` on a 64-slot standing-wave
+# WR-90 array (10,000 trials, +-0.025 mm on offset, length and position; scripts/perf/wr90-64-taylor30.yaml) against
+# its numpy peer (scripts/perf/tolerance_numpy.py, the same trials vectorised over the trials), run alternately in
+# the same session so that both see the same machine load. Prints each run's wall time, the medians and the ratio.
+#
+#   bash scripts/perf/compare-tolerance.sh [ROUNDS]      (default 3 rounds; needs python3-numpy)
+#
+# The tool runs from a Release build (built here if missing) with a warm slot cache of its own under the output
+# folder (the first, untimed run fills it); `--cold` as the second argument clears that cache before every run.
+set -euo pipefail
+here="$(cd "$(dirname "$0")" && pwd)"
+repo="$(cd "$here/../.." && pwd)"
+rounds="${1:-3}"
+cold="${2:-}"
+work="$(mktemp -d)"
+trap 'rm -rf "$work"' EXIT
+export XDG_CACHE_HOME="$work/xdg"
+tool="$repo/src/SlotArray.Cli/bin/Release/net10.0/slotarray"
+if [[ ! -x "$tool" ]]; then
+  dotnet build "$repo/src/SlotArray.Cli" -c Release -v q -nologo >/dev/null
+fi
+spec="$here/wr90-64-taylor30.yaml"
+python3 -c 'import numpy' 2>/dev/null || { echo "python3-numpy is missing (apt-get install python3-numpy)" >&2; exit 2; }
+
+now() { date +%s%N; }
+run_tool() { "$tool" tolerance "$spec" -o "$work/out" >"$work/tool.txt" 2>&1; }
+run_numpy() { python3 "$here/tolerance_numpy.py" --trials 10000 --slots 64 >"$work/numpy.txt" 2>&1; }
+
+echo "load before: $(uptime)"
+[[ "$cold" == "--cold" ]] || run_tool   # fills the slot cache (untimed)
+tool_ms=(); numpy_ms=()
+for ((r = 1; r <= rounds; r++)); do
+  [[ "$cold" == "--cold" ]] && rm -rf "$XDG_CACHE_HOME"
+  t0=$(now); run_tool; t1=$(now)
+  run_numpy; t2=$(now)
+  tool_ms+=($(((t1 - t0) / 1000000))); numpy_ms+=($(((t2 - t1) / 1000000)))
+  printf 'round %d: slotarray tolerance %6d ms   numpy %6d ms\n' "$r" "${tool_ms[-1]}" "${numpy_ms[-1]}"
+done
+echo "load after:  $(uptime)"
+median() { printf '%s\n' "$@" | sort -n | awk '{v[NR]=$1} END {print (NR % 2) ? v[(NR+1)/2] : (v[NR/2]+v[NR/2+1])/2}'; }
+mt=$(median "${tool_ms[@]}"); mn=$(median "${numpy_ms[@]}")
+echo "tool:  $(head -n 2 "$work/tool.txt" | tail -n 1)"
+echo "numpy: $(cat "$work/numpy.txt")"
+awk -v t="$mt" -v n="$mn" 'BEGIN { printf "median wall: slotarray %.3f s, numpy %.3f s; numpy/slotarray = %.2f (>1: the tool is faster)\n", t/1000, n/1000, n/t }'

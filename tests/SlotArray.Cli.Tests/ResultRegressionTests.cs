@@ -1,0 +1,74 @@
+using System.Security.Cryptography;
+using System.Text;
+using SlotArray.Core.Design;
+using SlotArray.Core.Tolerance;
+using SlotArray.Reports;
+using SlotArray.Reports.Model;
+using SlotArray.Spec;
+using SlotArray.Tests.Shared;
+
+namespace SlotArray.Cli.Tests;
+
+/// <summary>
+/// The speed work (issue 12) must not change any figure where the method is unchanged: digests of the full-precision
+/// results of the example specs, recorded from the code before that work (commit 82b3090 of main), and the same
+/// digests for every thread count. A digest covers design.json (doubles in shortest round-trip form) or every double
+/// of the Monte Carlo result bit for bit; the reference is the earlier program itself, so a change here means a
+/// changed result, to be explained or reverted.
+/// </summary>
+public class ResultRegressionTests
+{
+    private static ArrayRequest Load(string path)
+    {
+        var loaded = SpecLoader.LoadFile(path);
+        Assert.True(loaded.IsValid, string.Join("\n", loaded.Errors));
+        return loaded.Request!;
+    }
+
+    private static string Hex(byte[] bytes) => Convert.ToHexStringLower(SHA256.HashData(bytes))[..32];
+
+    /// <summary>SHA-256 of every double of a Monte Carlo result and of the sensitivities, bit for bit.</summary>
+    internal static string Digest(ToleranceResult r)
+    {
+        var bits = new List<double>();
+        var mc = r.MonteCarlo;
+        bits.AddRange([mc.Nominal.PeakSidelobeDb, mc.Nominal.BeamDirectionDeg, mc.Nominal.S11Db, mc.Nominal.Gain, mc.ProbabilityMeetsTarget,
+            mc.AmplitudeErrorRms, mc.PhaseErrorRms, mc.PositionPhaseRms, mc.TaperEfficiency, mc.AnalyticFloorDb, mc.MonteCarloFloorDb]);
+        foreach (var s in new[] { mc.PeakSidelobeDb, mc.GainLossDb, mc.PointingErrorDeg, mc.S11Db })
+            bits.AddRange([s.Mean, s.P50, s.P90, s.P95, s.P99, s.Minimum, s.Maximum]);
+        bits.AddRange(mc.PeakSidelobeSamples);
+        if (mc.Envelope is { } e)
+            foreach (var list in new[] { e.AnglesDeg, e.NominalDb, e.P5Db, e.P50Db, e.P95Db, e.MaximumDb }) bits.AddRange(list);
+        foreach (var s in r.Sensitivities) bits.AddRange([s.Slot, (int)s.Quantity, s.DsllDbPerMm, s.Ds11DbPerMm]);
+        var bytes = new byte[bits.Count * 8];
+        for (int i = 0; i < bits.Count; i++) BitConverter.TryWriteBytes(bytes.AsSpan(8 * i), BitConverter.DoubleToInt64Bits(bits[i]));
+        return Hex(bytes);
+    }
+
+    [Theory]
+    [InlineData("harbour-surveillance-16.yaml", "4d5bc6d9e4bff9cac882aace3131ddf2")]
+    [InlineData("marine-xband-edge-1m3.yaml", "b2a11669b06ea44a18f200c7a237ccb8")]
+    [InlineData("sector-5g8-tube.yaml", "4e1fc48f4d1d6c0da895ddb6f96b387e")]
+    public void Design_json_of_the_examples_is_unchanged(string spec, string expected)
+    {
+        var result = ArrayPipeline.Run(Load(Path.Combine(RepoFiles.Root, "arrays", spec)));
+        string digest = Hex(Encoding.UTF8.GetBytes(DesignJson.ToText(DesignReportBuilder.Build(result))));
+        Assert.True(expected == digest, $"{spec}: design.json digest {digest}, recorded {expected}");
+    }
+
+    [Theory]
+    [InlineData("arrays/harbour-surveillance-16.yaml", 300, "79db4412008e6aaaa5b3f8ff224ede75")]
+    [InlineData("scripts/perf/wr90-64-taylor30.yaml", 200, "81021f36f872c25958c311488b8c1a10")]
+    public void Tolerance_results_are_unchanged_and_the_same_on_1_2_and_3_threads(string spec, int trials, string expected)
+    {
+        var request = Load(Path.Combine(RepoFiles.Root, spec));
+        var (design, slot) = ToleranceAnalysis.Design(request);
+        var tol = request.Tolerance! with { Trials = trials };
+        foreach (int threads in new[] { 1, 2, 3 })
+        {
+            var r = ToleranceAnalysis.Run(request, design, slot, tol, new ToleranceOptions(MaxThreads: threads));
+            string digest = Digest(r);
+            Assert.True(expected == digest, $"{spec} on {threads} thread(s): digest {digest}, recorded {expected}");
+        }
+    }
+}
