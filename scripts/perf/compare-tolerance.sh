@@ -21,11 +21,12 @@ if [[ ! -x "$tool" ]]; then
   dotnet build "$repo/src/SlotArray.Cli" -c Release -v q -nologo >/dev/null
 fi
 spec="$here/wr90-64-taylor30.yaml"
-python3 -c 'import numpy' 2>/dev/null || { echo "python3-numpy is missing (apt-get install python3-numpy)" >&2; exit 2; }
+py="${PYTHON:-/usr/bin/python3}"   # Debian python3-numpy; PYTHON=... to use another interpreter
+"$py" -c "import numpy" 2>/dev/null || { echo "$py has no numpy (apt-get install python3-numpy)" >&2; exit 2; }
 
 now() { date +%s%N; }
 run_tool() { "$tool" tolerance "$spec" -o "$work/out" >"$work/tool.txt" 2>&1; }
-run_numpy() { python3 "$here/tolerance_numpy.py" --trials 10000 --slots 64 >"$work/numpy.txt" 2>&1; }
+run_numpy() { "$py" "$here/tolerance_numpy.py" --trials 10000 --slots 64 >"$work/numpy.txt" 2>&1; }
 
 echo "load before: $(uptime)"
 [[ "$cold" == "--cold" ]] || run_tool   # fills the slot cache (untimed)

@@ -35,8 +35,9 @@ public sealed record SlotCache(string Directory)
 
     /// <summary>
     /// Preloads every stored table that matches the request's guide and slot width (default moment-method options,
-    /// as the spec's slot models use) into Core's in-memory cache. Returns the number preloaded; reasons for ignored
-    /// files go to <paramref name="log"/>.
+    /// as the spec's slot models use) into Core's in-memory cache, and the family's stored moment-method solves
+    /// (<see cref="SlotAdmittanceStore"/>). Returns the number of tables preloaded; reasons for ignored files go to
+    /// <paramref name="log"/>.
     /// </summary>
     public int Load(ArrayRequest request, TextWriter log)
     {
@@ -44,8 +45,9 @@ public sealed record SlotCache(string Directory)
         ArgumentNullException.ThrowIfNull(log);
         if (request.Slots.Type != SlotType.Longitudinal || !System.IO.Directory.Exists(Directory)) return 0;
         var solver = new LongitudinalSlotMomentMethod(request.Guide, request.Slots.Width);
+        SlotAdmittanceStore.Load(Directory, request, log);
         int loaded = 0;
-        foreach (string file in System.IO.Directory.EnumerateFiles(Directory, "*.json").Order(StringComparer.Ordinal))
+        foreach (string file in System.IO.Directory.EnumerateFiles(Directory, "characterisation-*.json").Order(StringComparer.Ordinal))
         {
             try
             {
@@ -56,7 +58,7 @@ public sealed record SlotCache(string Directory)
                 ResonantCharacterisation.Preload(solver, table);
                 loaded++;
             }
-            catch (Exception e) when (e is IOException or UnauthorizedAccessException or JsonException or ArgumentException or InvalidOperationException)
+            catch (Exception e) when (IsUnreadable(e))
             {
                 log.WriteLine($"slot cache: ignored {file} ({e.Message})");
             }
@@ -64,10 +66,15 @@ public sealed record SlotCache(string Directory)
         return loaded;
     }
 
-    /// <summary>Stores every table Core holds in memory that the cache lacks. Write failures are reported to <paramref name="log"/>, never thrown.</summary>
-    public int Save(TextWriter log)
+    /// <summary>
+    /// Stores every table Core holds in memory that the cache lacks, and the request family's moment-method solves
+    /// (<see cref="SlotAdmittanceStore"/>). Write failures are reported to <paramref name="log"/>, never thrown.
+    /// </summary>
+    public int Save(ArrayRequest request, TextWriter log)
     {
+        ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(log);
+        SlotAdmittanceStore.Save(Directory, request, log);
         int saved = 0;
         foreach (var table in ResonantCharacterisation.CachedTables())
         {
@@ -103,7 +110,7 @@ public sealed record SlotCache(string Directory)
         try
         {
             var f = JsonSerializer.Deserialize<CacheFile>(File.ReadAllText(file), Json);
-            if (f is null || f.Version != FileVersion) return null;
+            if (f is null || f.Version != FileVersion || f.Sha256 is null || f.Table.ValueKind != JsonValueKind.Object) return null;
             string body = f.Table.GetRawText();
             if (Checksum(body) != f.Sha256) return null;
             var t = JsonSerializer.Deserialize<ResonantCharacterisationTable>(body, Json);
@@ -114,11 +121,18 @@ public sealed record SlotCache(string Directory)
             if (n < 4 || t.ResonantLengthsMeters.Count != n || t.Conductances.Count != n || t.ShuntAsymmetries.Count != n) return null;
             return t;
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or JsonException or NotSupportedException)
+        catch (Exception e) when (IsUnreadable(e))
         {
             return null;
         }
     }
+
+    /// <summary>
+    /// Whatever reading a damaged or foreign cache file can throw (I/O, JSON, a missing member read as an undefined
+    /// element, a wrong shape): such a file is ignored and rewritten, never fatal.
+    /// </summary>
+    private static bool IsUnreadable(Exception e) => e is IOException or UnauthorizedAccessException or JsonException or NotSupportedException
+        or InvalidOperationException or ArgumentException or FormatException or OverflowException;
 
     private static string Checksum(string body) => Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(body)));
 

@@ -32,6 +32,22 @@ internal static class DesignRuns
         return path;
     }
 
+    /// <summary>
+    /// A small fast spec (8 longitudinal slots in WR-90, Chebyshev −20 dB, standing-wave) named <paramref name="tag"/>,
+    /// with <paramref name="extra"/> YAML lines appended; written into a fresh folder, its path returned.
+    /// </summary>
+    public static string SmallSpec(string tag, string extra = "") => Spec(tag, $"""
+        spec: 1
+        name: {tag}
+        frequency: 9.375 GHz
+        band: [9.35 GHz, 9.40 GHz]
+        guide: {{size: WR-90, wall: 1.27 mm, metal: aluminium}}
+        feed: {{type: standing-wave}}
+        slots: {{type: longitudinal, count: 8, width: 1.6 mm, cutter: 1.6 mm}}
+        taper: {{type: chebyshev, sidelobes: -20 dB}}
+
+        """ + extra);
+
     /// <summary>The data records of cutlist.csv (RFC 4180, CRLF, no quoted fields in data rows): header row, then one per slot.</summary>
     public static List<string[]> CsvRecords(string path) =>
         [.. File.ReadAllText(path).Split("\r\n", StringSplitOptions.RemoveEmptyEntries)

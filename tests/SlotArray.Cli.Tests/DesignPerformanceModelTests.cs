@@ -69,16 +69,7 @@ public class DesignPerformanceModelTests
         string dll = Path.Combine(AppContext.BaseDirectory, "slotarray.dll");
         string cache = DesignRuns.TempFolder("xcache");
         File.WriteAllText(Path.Combine(cache, "characterisation-000000000000000000000000.json"), "garbage");
-        string spec = DesignRuns.Spec("coldwarm", """
-            spec: 1
-            name: coldwarm
-            frequency: 9.375 GHz
-            band: [9.35 GHz, 9.40 GHz]
-            guide: {size: WR-90, wall: 1.27 mm, metal: aluminium}
-            feed: {type: standing-wave}
-            slots: {type: longitudinal, count: 8, width: 1.6 mm, cutter: 1.6 mm}
-            taper: {type: chebyshev, sidelobes: -20 dB}
-            """);
+        string spec = DesignRuns.SmallSpec("coldwarm");
         string root = Path.GetDirectoryName(spec)!;
         var cold = Process(dll, "design", spec, "-o", Path.Combine(root, "cold"), "--cache-dir", cache);
         var warm = Process(dll, "design", spec, "-o", Path.Combine(root, "warm"), "--cache-dir", cache);

@@ -100,7 +100,7 @@ public static class DesignCommand
             request.Name, request.Slots.Count, request.DesignFrequency.Gigahertz, request.BandLow.Gigahertz, request.BandHigh.Gigahertz,
             cache is null ? "" : string.Format(Inv, " ({0} slot table(s) from the cache)", loaded)));
         var result = ArrayPipeline.Run(request);
-        cache?.Save(error);
+        cache?.Save(request, error);
         return result;
     }
 

@@ -10,7 +10,8 @@ using Spectre.Console;
 namespace SlotArray.Cli.Commands;
 
 /// <summary>
-/// <c>slotarray tolerance SPEC [-o DIR] [--trials N] [--seed S] [--json]</c>: designs the array, runs the Monte Carlo of
+/// <c>slotarray tolerance SPEC [-o DIR] [--trials N] [--seed S] [--json] [--cache-dir DIR] [--no-cache]</c>: designs the
+/// array (with the slot characterisation cache of <c>design</c>), runs the Monte Carlo of
 /// the spec's <c>tolerance:</c> block and writes <c>tolerance.json</c>, <c>tolerance.png</c> and <c>sensitivity.csv</c>
 /// (each atomically) into DIR. Prints the percentiles, the probability of meeting the target and the most sensitive
 /// dimensions; with <c>--json</c> the JSON document instead. A progress bar shows on an interactive terminal only.
@@ -33,12 +34,17 @@ public static class ToleranceCommand
         });
         var seed = new Option<int?>("--seed") { Description = "Random seed (overrides tolerance.seed)" };
         var json = new Option<bool>("--json") { Description = "Print tolerance.json on stdout" };
-        var cmd = new Command("tolerance", "Monte Carlo of machining errors: sidelobes, gain, pointing and match; ranked per-slot sensitivities") { spec, outDir, trials, seed, json };
-        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir)!, pr.GetValue(trials), pr.GetValue(seed), pr.GetValue(json), output, error));
+        var (cacheDir, noCache) = DesignCommand.CacheOptions();
+        var cmd = new Command("tolerance", "Monte Carlo of machining errors: sidelobes, gain, pointing and match; ranked per-slot sensitivities")
+        {
+            spec, outDir, trials, seed, json, cacheDir, noCache,
+        };
+        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir)!, pr.GetValue(trials), pr.GetValue(seed), pr.GetValue(json),
+            DesignCommand.CacheOf(pr, cacheDir, noCache), output, error));
         return cmd;
     }
 
-    private static int Run(string path, string dir, int? trials, int? seed, bool json, TextWriter output, TextWriter error)
+    private static int Run(string path, string dir, int? trials, int? seed, bool json, SlotCache? cache, TextWriter output, TextWriter error)
     {
         if (!File.Exists(path)) throw new UserInputException($"spec file not found: {path}");
         var loaded = SpecLoader.LoadFile(path);
@@ -54,10 +60,12 @@ public static class ToleranceCommand
             $"{path}: the spec has no tolerance: block; add one, e.g. 'tolerance: {{offset: 0.02 mm, length: 0.02 mm, trials: 2000, seed: 1}}'");
         tol = tol with { Trials = trials ?? tol.Trials, Seed = seed ?? tol.Seed };
 
+        cache?.Load(request, error);
         var (design, slot) = ToleranceAnalysis.Design(request);
         foreach (var w in design.Warnings) error.WriteLine($"warning: {w.Message}");
         var result = Analyse(request, design, slot, tol, interactive: !json && !Console.IsOutputRedirected && AnsiConsole.Profile.Capabilities.Interactive);
 
+        cache?.Save(request, error);
         Write(dir, request, result);
         if (json) output.Write(ToleranceJson.ToText(request.Name, request.DesignFrequency.Hertz, result));
         else

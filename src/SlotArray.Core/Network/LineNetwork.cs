@@ -58,14 +58,19 @@ internal sealed class LineNetwork
     public int Count => position.Length;
 
     /// <summary>Solves the line at frequency f with the given slot admittances; <paramref name="couplingSigns"/> give the slots' sides.</summary>
-    public NetworkSolution Solve(Frequency f, Complex[] y, double[] couplingSigns)
+    /// <param name="f">Frequency.</param>
+    /// <param name="y">Slot admittances y_n = Y_n/G0.</param>
+    /// <param name="couplingSigns">Sign of each slot's coupling (its side).</param>
+    /// <param name="peakVoltage">Whether to search the sections for the peak line voltage (breakdown); false leaves it 0
+    /// and every other figure unchanged (the tolerance trials do not need it).</param>
+    public NetworkSolution Solve(Frequency f, Complex[] y, double[] couplingSigns, bool peakVoltage = true)
     {
         if (y.Length != position.Length) throw new ArgumentException("one admittance per slot is needed", nameof(y));
         var gamma = guide.PropagationConstant(f);
         var v = new Complex[y.Length];
         if (far is null)
         {
-            var arm = SolveArm(gamma, near, LeftDistances(), y, 0, v, feedPlane - position[0] + near.Distance.Meters);
+            var arm = SolveArm(gamma, near, LeftDistances(), y, 0, v, feedPlane - position[0] + near.Distance.Meters, peakVoltage);
             // Feed: incident V+ = (V + I)/2 at the feed plane; scale the arm to V+ = 1.
             Complex vPlus = (arm.V + arm.I) / 2;
             Complex s11 = (arm.V - arm.I) / (arm.V + arm.I);
@@ -75,8 +80,8 @@ internal sealed class LineNetwork
         }
         else
         {
-            var left = SolveArm(gamma, near, LeftDistances(), y, 0, v, feedPlane - position[0] + near.Distance.Meters);
-            var right = SolveArm(gamma, far, RightDistances(), y, leftCount, v, position[^1] + far.Distance.Meters - feedPlane);
+            var left = SolveArm(gamma, near, LeftDistances(), y, 0, v, feedPlane - position[0] + near.Distance.Meters, peakVoltage);
+            var right = SolveArm(gamma, far, RightDistances(), y, leftCount, v, position[^1] + far.Distance.Meters - feedPlane, peakVoltage);
             // Series junction: the same current through both halves. Scale each half to unit junction current.
             Complex kl = 1 / left.I, kr = 1 / right.I;
             for (int i = 0; i < leftCount; i++) v[i] *= kl;
@@ -126,7 +131,7 @@ internal sealed class LineNetwork
     /// arm: the far arm's element order is reversed). Writes unscaled mode voltages into v.
     /// </summary>
     private static ArmResult SolveArm(Complex gamma, Termination t, double[] distances, Complex[] y, int offset, Complex[] v,
-        double inputDistance)
+        double inputDistance, bool peakVoltage)
     {
         int n = distances.Length;
         bool reversed = offset > 0;
@@ -143,7 +148,7 @@ internal sealed class LineNetwork
         {
             int k = reversed ? n - 1 - step : step;              // element index within the arm, nearest the termination first
             double next = step < n ? distances[k] : inputDistance;
-            SectionPeak(gamma, vv, ii, next - at, at, ref peak, ref peakAt);
+            if (peakVoltage) SectionPeak(gamma, vv, ii, next - at, at, ref peak, ref peakAt);
             Propagate(gamma, next - at, ref vv, ref ii, ref wall);
             at = next;
             if (step == n) break;

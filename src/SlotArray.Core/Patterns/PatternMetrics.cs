@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using SlotArray.Core.Quantities;
 
 namespace SlotArray.Core.Patterns;
@@ -47,16 +48,7 @@ public sealed record PatternMetrics(
             first = Math.Max(first ?? double.MinValue, pw);
         }
 
-        double? psl = null, pslDir = null;
-        void Consider(int i)
-        {
-            var (t, pw) = LobeSearch.RefineMaximum(th, p, i);
-            if (psl is null || pw > psl) { psl = pw; pslDir = t; }
-        }
-        for (int i = 0; i < iL; i++)
-            if ((i == 0 || p[i] >= p[i - 1]) && p[i] >= p[i + 1]) Consider(i);
-        for (int i = iR + 1; i < p.Length; i++)
-            if (p[i] >= p[i - 1] && (i == p.Length - 1 || p[i] >= p[i + 1])) Consider(i);
+        var (psl, pslDir) = PeakSidelobe(th, p, iL, iR);
 
         double? islr = null;
         if (iL > 0 || iR < p.Length - 1)
@@ -75,6 +67,38 @@ public sealed record PatternMetrics(
             psl is null ? null : LobeSearch.Db(psl.Value / peak),
             pslDir is null ? null : Angle.FromRadians(pslDir.Value),
             islr);
+    }
+
+    /// <summary>
+    /// The beam direction (rad) and the peak sidelobe (dB) of <see cref="Measure"/> alone, by the same steps (same values
+    /// to the bit), for loops that need no other figure (the tolerance trials).
+    /// </summary>
+    internal static (double BeamDirection, double? PeakSidelobeDb) BeamAndPeakSidelobe(Pattern pattern)
+    {
+        if (!(pattern.PeakPower > 0)) throw new ArgumentException("The pattern is zero everywhere: check the excitations.", nameof(pattern));
+        var th = pattern.Theta;
+        var p = pattern.Power;
+        int i0 = p.IndexOf(pattern.PeakPower);
+        var (beam, peak) = LobeSearch.RefineMaximum(th, p, i0);
+        int iL = LobeSearch.DescendTo(p, i0, -1), iR = LobeSearch.DescendTo(p, i0, +1);
+        var (psl, _) = PeakSidelobe(th, p, iL, iR);
+        return (beam, psl is null ? null : LobeSearch.Db(psl.Value / peak));
+    }
+
+    /// <summary>The highest refined local maximum outside the main beam [iL, iR] and its direction; nulls when there is none.</summary>
+    private static (double? Power, double? Direction) PeakSidelobe(ImmutableArray<double> th, ImmutableArray<double> p, int iL, int iR)
+    {
+        double? psl = null, pslDir = null;
+        void Consider(int i)
+        {
+            var (t, pw) = LobeSearch.RefineMaximum(th, p, i);
+            if (psl is null || pw > psl) { psl = pw; pslDir = t; }
+        }
+        for (int i = 0; i < iL; i++)
+            if ((i == 0 || p[i] >= p[i - 1]) && p[i] >= p[i + 1]) Consider(i);
+        for (int i = iR + 1; i < p.Length; i++)
+            if (p[i] >= p[i - 1] && (i == p.Length - 1 || p[i] >= p[i + 1])) Consider(i);
+        return (psl, pslDir);
     }
 
     /// <summary>

@@ -16,7 +16,12 @@ public sealed class MomentMethodSlotModel : IShuntSlotModel
 
     /// <summary>A model for slots of the given width in the given guide (its wall thickness is used).</summary>
     public MomentMethodSlotModel(RectangularWaveguide guide, Length width, MomentMethodOptions? options = null)
-        => Solver = new LongitudinalSlotMomentMethod(guide, width, options);
+    {
+        Solver = new LongitudinalSlotMomentMethod(guide, width, options);
+        memoKey = SlotAdmittanceMemo.KeyOf(Solver);
+    }
+
+    private readonly string memoKey;
 
     /// <summary>The moment-method solver.</summary>
     public LongitudinalSlotMomentMethod Solver { get; }
@@ -40,7 +45,7 @@ public sealed class MomentMethodSlotModel : IShuntSlotModel
     public ResonantCharacterisation Characterisation(Frequency f) => ResonantCharacterisation.For(Solver, f);
 
     /// <inheritdoc />
-    public Complex Admittance(double coupling, Length length, Frequency f) => Solver.Solve(Length.FromMeters(coupling), length, f).Admittance;
+    public Complex Admittance(double coupling, Length length, Frequency f) => SlotAdmittanceMemo.Admittance(Solver, memoKey, coupling, length, f);
 
     /// <inheritdoc />
     public SlotResonance Resonance(double coupling, Frequency f)

@@ -148,7 +148,7 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
         // millimetre-fraction shift, up to the wall loss over it).
         double feed = far is null ? Math.Max(design.FeedPlane.Meters, slotPositions[^1]) : design.FeedPlane.Meters;
         var line = new LineNetwork(guide, slotPositions, near, far, feed, design.JunctionRatio);
-        var sol = line.Solve(design.DesignFrequency, admittances, signs);
+        var sol = line.Solve(design.DesignFrequency, admittances, signs, peakVoltage: false);
         Complex s11 = sol.S11;
         if (guideWidthError != 0)
         {

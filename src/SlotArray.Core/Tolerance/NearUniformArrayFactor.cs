@@ -78,33 +78,10 @@ internal sealed class NearUniformArrayFactor
         int lanes = Vector256<double>.Count, jv = 0;
         if (Vector256.IsHardwareAccelerated)
         {
-            for (; jv + lanes <= m; jv += lanes)
-            {
-                var vr = Vector256.Create(wr, jv);
-                var vi = Vector256.Create(wi, jv);
-                var vk = Vector256.Create(ku, jv);
-                Vector256<double> accR = Vector256<double>.Zero, accI = accR;
-                // Highest set first: acc ← acc·(j ku) + S_s, so the series is summed by Horner's rule in (j ku) as well.
-                for (int s = sets - 1; s >= 0; s--)
-                {
-                    Vector256<double> r = Vector256<double>.Zero, im = r;
-                    int b = s * n;
-                    for (int e = n - 1; e >= 0; e--)
-                    {
-                        var t = r * vr - im * vi + Vector256.Create(ar[b + e]);
-                        im = r * vi + im * vr + Vector256.Create(ai[b + e]);
-                        r = t;
-                    }
-                    var nr = r - accI * vk;
-                    accI = im + accR * vk;
-                    accR = nr;
-                }
-                var pr = Vector256.Create(cr, jv);
-                var pi = Vector256.Create(ci, jv);
-                var fr = accR * pr - accI * pi;
-                var fi = accR * pi + accI * pr;
-                for (int l = 0; l < lanes; l++) field[jv + l] = new Complex(fr[l], fi[l]);
-            }
+            // Four lane groups at once: four independent Horner chains hide the multiply-add latency. Each lane's
+            // arithmetic is the same as one group alone, so the result does not depend on the grouping.
+            for (; jv + 4 * lanes <= m; jv += 4 * lanes) Horner4(ar, ai, n, sets, jv, field);
+            for (; jv + lanes <= m; jv += lanes) Horner1(ar, ai, n, sets, jv, field);
         }
         for (int j = jv; j < m; j++)
         {
@@ -125,5 +102,75 @@ internal sealed class NearUniformArrayFactor
             field[j] = acc * new Complex(cr[j], ci[j]);
         }
         return field;
+    }
+
+    /// <summary>Σ_s (jku)^s Σ_n c[s][n] w^n at the four lanes from <paramref name="j"/>, times the phase of p0.</summary>
+    private void Horner1(double[] ar, double[] ai, int n, int sets, int j, Complex[] field)
+    {
+        var vr = Vector256.Create(wr, j);
+        var vi = Vector256.Create(wi, j);
+        var vk = Vector256.Create(ku, j);
+        Vector256<double> accR = Vector256<double>.Zero, accI = accR;
+        // Highest set first: acc ← acc·(j ku) + S_s, so the series is summed by Horner's rule in (j ku) as well.
+        for (int s = sets - 1; s >= 0; s--)
+        {
+            Vector256<double> r = Vector256<double>.Zero, im = r;
+            int b = s * n;
+            for (int e = n - 1; e >= 0; e--)
+            {
+                var t = r * vr - im * vi + Vector256.Create(ar[b + e]);
+                im = r * vi + im * vr + Vector256.Create(ai[b + e]);
+                r = t;
+            }
+            var nr = r - accI * vk;
+            accI = im + accR * vk;
+            accR = nr;
+        }
+        Store(accR, accI, j, field);
+    }
+
+    /// <summary><see cref="Horner1"/> at sixteen lanes from <paramref name="j"/>, as four interleaved chains.</summary>
+    private void Horner4(double[] ar, double[] ai, int n, int sets, int j, Complex[] field)
+    {
+        int l = Vector256<double>.Count;
+        Vector256<double> vr0 = Vector256.Create(wr, j), vr1 = Vector256.Create(wr, j + l), vr2 = Vector256.Create(wr, j + 2 * l), vr3 = Vector256.Create(wr, j + 3 * l);
+        Vector256<double> vi0 = Vector256.Create(wi, j), vi1 = Vector256.Create(wi, j + l), vi2 = Vector256.Create(wi, j + 2 * l), vi3 = Vector256.Create(wi, j + 3 * l);
+        Vector256<double> aR0 = Vector256<double>.Zero, aR1 = aR0, aR2 = aR0, aR3 = aR0, aI0 = aR0, aI1 = aR0, aI2 = aR0, aI3 = aR0;
+        for (int s = sets - 1; s >= 0; s--)
+        {
+            Vector256<double> r0 = Vector256<double>.Zero, r1 = r0, r2 = r0, r3 = r0, i0 = r0, i1 = r0, i2 = r0, i3 = r0;
+            int b = s * n;
+            for (int e = n - 1; e >= 0; e--)
+            {
+                var sr = Vector256.Create(ar[b + e]);
+                var si = Vector256.Create(ai[b + e]);
+                var t0 = r0 * vr0 - i0 * vi0 + sr; i0 = r0 * vi0 + i0 * vr0 + si; r0 = t0;
+                var t1 = r1 * vr1 - i1 * vi1 + sr; i1 = r1 * vi1 + i1 * vr1 + si; r1 = t1;
+                var t2 = r2 * vr2 - i2 * vi2 + sr; i2 = r2 * vi2 + i2 * vr2 + si; r2 = t2;
+                var t3 = r3 * vr3 - i3 * vi3 + sr; i3 = r3 * vi3 + i3 * vr3 + si; r3 = t3;
+            }
+            var k0 = Vector256.Create(ku, j);
+            var n0 = r0 - aI0 * k0; aI0 = i0 + aR0 * k0; aR0 = n0;
+            var k1 = Vector256.Create(ku, j + l);
+            var n1 = r1 - aI1 * k1; aI1 = i1 + aR1 * k1; aR1 = n1;
+            var k2 = Vector256.Create(ku, j + 2 * l);
+            var n2 = r2 - aI2 * k2; aI2 = i2 + aR2 * k2; aR2 = n2;
+            var k3 = Vector256.Create(ku, j + 3 * l);
+            var n3 = r3 - aI3 * k3; aI3 = i3 + aR3 * k3; aR3 = n3;
+        }
+        Store(aR0, aI0, j, field);
+        Store(aR1, aI1, j + l, field);
+        Store(aR2, aI2, j + 2 * l, field);
+        Store(aR3, aI3, j + 3 * l, field);
+    }
+
+    /// <summary>field[j..] = acc × e^{jk p0 u}.</summary>
+    private void Store(Vector256<double> accR, Vector256<double> accI, int j, Complex[] field)
+    {
+        var pr = Vector256.Create(cr, j);
+        var pi = Vector256.Create(ci, j);
+        var fr = accR * pr - accI * pi;
+        var fi = accR * pi + accI * pr;
+        for (int l = 0; l < Vector256<double>.Count; l++) field[j + l] = new Complex(fr[l], fi[l]);
     }
 }

@@ -84,8 +84,8 @@ internal sealed class TrialEvaluator
             powerKernel = new HalfSpacePowerKernel(nominalPatternPositions, k, e);
             nominalFloorField = floorSum.Evaluate(nominal.Excitations, new double[nominal.Excitations.Length]);
         }
-        var metrics = PatternOf(nominalPatternPositions, nominal.Excitations, new double[nominal.Excitations.Length], out _);
-        var af0 = ArrayFactor.AtSines(nominalPatternPositions, nominal.Excitations, k, [Math.Sin(metrics.BeamDirection.Radians)])[0];
+        var (nominalBeam, _) = PatternOf(nominalPatternPositions, nominal.Excitations, new double[nominal.Excitations.Length], out _);
+        var af0 = ArrayFactor.AtSines(nominalPatternPositions, nominal.Excitations, k, [Math.Sin(nominalBeam)])[0];
         nominalPeakPower = af0.Real * af0.Real + af0.Imaginary * af0.Imaginary;
         double sumSquares = nominal.Excitations.Sum(c => c.Real * c.Real + c.Imaginary * c.Imaginary);
         TaperEfficiency = nominalPeakPower / (nominal.Excitations.Length * sumSquares);
@@ -110,12 +110,13 @@ internal sealed class TrialEvaluator
     }
 
     /// <summary>The cut for excitations at the pattern positions <paramref name="patternPositions"/> = nominal + <paramref name="offsets"/>.</summary>
-    private PatternMetrics PatternOf(double[] patternPositions, Complex[] excitations, double[] offsets, out Pattern pattern)
+    /// <returns>The beam direction (rad) and the peak sidelobe (dB) of <see cref="PatternMetrics.Measure"/>.</returns>
+    private (double Beam, double? PeakSidelobeDb) PatternOf(double[] patternPositions, Complex[] excitations, double[] offsets, out Pattern pattern)
     {
         var af = gridSum is not null ? gridSum.Evaluate(excitations, offsets) : ArrayFactor.AtSines(patternPositions, excitations, k, grid.Sines.AsSpan());
         for (int i = 0; i < af.Length; i++) af[i] *= element[i];
         pattern = new Pattern(grid, System.Runtime.InteropServices.ImmutableCollectionsMarshal.AsImmutableArray(af));   // af is not used again: no copy
-        return PatternMetrics.Measure(pattern);
+        return PatternMetrics.BeamAndPeakSidelobe(pattern);
     }
 
     public TrialOutcome Evaluate(TrialNetwork t, bool keepEnvelope)
@@ -128,8 +129,7 @@ internal sealed class TrialEvaluator
             pos[i] = -t.Positions[i];
             offsets[i] = pos[i] - nominalPatternPositions[i];
         }
-        var metrics = PatternOf(pos, t.Excitations, offsets, out var pattern);
-        double beam = metrics.BeamDirection.Radians;
+        var (beam, peakSidelobeDb) = PatternOf(pos, t.Excitations, offsets, out var pattern);
 
         // Half-space directivity D = 4 |E·AF|²(θb) / ∫ |E·AF|² du (Directivity.HalfSpace, same rule).
         var afBeam = ArrayFactor.AtSines(pos, t.Excitations, k, [Math.Sin(beam)])[0];
@@ -192,7 +192,7 @@ internal sealed class TrialEvaluator
             }
         }
         double s11 = t.S11.Magnitude;
-        return new TrialOutcome(metrics.PeakSidelobeDb ?? -300, beam, s11 > 0 ? 20 * Math.Log10(s11) : -300,
+        return new TrialOutcome(peakSidelobeDb ?? -300, beam, s11 > 0 ? 20 * Math.Log10(s11) : -300,
             directivity * t.RadiatedPower, floor, amp2, phase2, pos2, envelope);
     }
 }
