@@ -36,15 +36,15 @@ internal static class DesignRuns
     /// A small fast spec (8 longitudinal slots in WR-90, Chebyshev −20 dB, standing-wave) named <paramref name="tag"/>,
     /// with <paramref name="extra"/> YAML lines appended; written into a fresh folder, its path returned.
     /// </summary>
-    public static string SmallSpec(string tag, string extra = "") => Spec(tag, $"""
+    public static string SmallSpec(string tag, string extra = "") => Spec(tag, $$"""
         spec: 1
-        name: {tag}
+        name: {{tag}}
         frequency: 9.375 GHz
         band: [9.35 GHz, 9.40 GHz]
-        guide: {{size: WR-90, wall: 1.27 mm, metal: aluminium}}
-        feed: {{type: standing-wave}}
-        slots: {{type: longitudinal, count: 8, width: 1.6 mm, cutter: 1.6 mm}}
-        taper: {{type: chebyshev, sidelobes: -20 dB}}
+        guide: {size: WR-90, wall: 1.27 mm, metal: aluminium}
+        feed: {type: standing-wave}
+        slots: {type: longitudinal, count: 8, width: 1.6 mm, cutter: 1.6 mm}
+        taper: {type: chebyshev, sidelobes: -20 dB}
 
         """ + extra);
 
