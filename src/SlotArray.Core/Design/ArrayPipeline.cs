@@ -83,6 +83,22 @@ public static class ArrayPipeline
         };
     }
 
+    /// <summary>
+    /// The design <see cref="Run"/> delivers, without its band analysis: with <c>coupling: mutual</c> the coupled design
+    /// (Elliott's for a standing-wave feed, <see cref="CoupledTravellingWaveDesigner"/> for a travelling-wave feed), else
+    /// <see cref="Synthesise"/>'s. The tolerance analysis perturbs this design, so that its nominal figures are the key figures.
+    /// </summary>
+    /// <exception cref="InfeasibleDesignException">The request cannot be realised.</exception>
+    public static ArrayDesign DeliveredDesign(ArrayRequest request, IShuntSlotModel slot, TaperResult taper)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(taper);
+        if (request.Coupling != CouplingMode.Mutual) return Synthesise(request, slot, taper);
+        return request.Feed.Type == FeedType.TravellingWave
+            ? CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights).Design
+            : ElliottDesigner.Design(request, slot, taper.Weights).Design;
+    }
+
     /// <summary>The designer the feed type calls for.</summary>
     public static ArrayDesign Synthesise(ArrayRequest request, IShuntSlotModel slot, TaperResult taper)
         => SynthesiseWithFigures(request, slot, taper).Design;

@@ -51,6 +51,24 @@ public static class CoupledArrayNetwork
     public static NetworkSolution Solve(ArrayDesign design, IShuntSlotModel slot, Frequency f, MutualImpedanceModel? coupling = null)
         => new CoupledSystem(design, slot, coupling).Solve(f);
 
+    /// <summary>
+    /// The coupled network at f with each slot's self admittance given (<paramref name="admittances"/>, y_n = Y_n/G0, for
+    /// example a tolerance trial's perturbed slots) and the mutual impedances given (<paramref name="mutual"/>, e.g. the
+    /// nominal design's from <see cref="MutualImpedances"/>); otherwise the same equations as
+    /// <see cref="Solve(ArrayDesign, IShuntSlotModel, Frequency, MutualImpedanceModel?)"/>.
+    /// </summary>
+    public static NetworkSolution Solve(ArrayDesign design, IReadOnlyList<Complex> admittances, CouplingMatrix mutual, Frequency f)
+    {
+        ArgumentNullException.ThrowIfNull(admittances);
+        ArgumentNullException.ThrowIfNull(mutual);
+        if (admittances.Count != design.Count) throw new ArgumentException("one admittance per slot is needed", nameof(admittances));
+        return new CoupledSystem(design, null, (_, _, _) => mutual, admittances).Solve(f);
+    }
+
+    /// <summary>The mutual impedances of the design's slots at f (the model of <see cref="Solve(ArrayDesign, IShuntSlotModel, Frequency, MutualImpedanceModel?)"/>).</summary>
+    public static CouplingMatrix MutualImpedances(ArrayDesign design, Frequency f, MutualImpedanceModel? coupling = null)
+        => new CoupledSystem(design, null, coupling, null).Mutual(f);
+
     /// <summary>Solves at <paramref name="points"/> equally spaced frequencies from low to high and at the design frequency.</summary>
     public static FrequencySweep Sweep(ArrayDesign design, IShuntSlotModel slot, Frequency low, Frequency high, int points,
         MutualImpedanceModel? coupling = null)
@@ -112,17 +130,23 @@ public static class CoupledArrayNetwork
     private sealed class CoupledSystem
     {
         private readonly ArrayDesign design;
-        private readonly IShuntSlotModel slot;
+        private readonly IShuntSlotModel? slot;
         private readonly MutualImpedanceModel coupling;
         private readonly LineNetwork line;
         private readonly double[] signs;
         private readonly LongitudinalSlotPlacement[] placements;
         private readonly int leftCount;
 
-        public CoupledSystem(ArrayDesign design, IShuntSlotModel slot, MutualImpedanceModel? coupling)
+        private readonly IReadOnlyList<Complex>? admittances;
+
+        /// <param name="design">The design.</param>
+        /// <param name="slot">The slot model of the self admittances; may be null when <paramref name="admittances"/> gives them.</param>
+        /// <param name="coupling">The mutual-impedance model (default: half-cosine, centre-referred).</param>
+        /// <param name="admittances">Fixed self admittances y_n, or null to ask the slot model.</param>
+        public CoupledSystem(ArrayDesign design, IShuntSlotModel? slot, MutualImpedanceModel? coupling, IReadOnlyList<Complex>? admittances = null)
         {
             ArgumentNullException.ThrowIfNull(design);
-            ArgumentNullException.ThrowIfNull(slot);
+            this.admittances = admittances;
             if (design.CouplingKind != SlotCouplingKind.Offset)
                 throw new ArgumentException("the coupled analysis is for longitudinal (offset) slots; edge slots have no equivalent-dipole model here", nameof(design));
             this.design = design;
@@ -138,11 +162,14 @@ public static class CoupledArrayNetwork
         }
 
         /// <summary>f_n, D + M and Γ0 at frequency f.</summary>
+        /// <summary>The mutual impedances of the slots at f.</summary>
+        public CouplingMatrix Mutual(Frequency f) => coupling(placements, design.Slots[0].Width, f);
+
         public (double[] F, Matrix<Complex> DM, double Gamma0) SlotBlocks(Frequency f)
         {
             int n = design.Count;
             double gamma0 = ElliottDesignEquations.Gamma0(design.Guide, f);
-            var z = coupling(placements, design.Slots[0].Width, f);
+            var z = Mutual(f);
             double scale = 1 / (gamma0 * PhysicalConstants.HalfWaveDipoleResistance);
             var fn = new double[n];
             var dm = Matrix<Complex>.Build.Dense(n, n);
@@ -150,7 +177,7 @@ public static class CoupledArrayNetwork
             {
                 var s = design.Slots[i];
                 fn[i] = ElliottDesignEquations.CouplingFunction(design.Guide, f, Length.FromMeters(s.Coupling), 0.5 * s.Length);
-                var y = slot.Admittance(s.Coupling, s.Length, f);
+                var y = admittances is null ? slot!.Admittance(s.Coupling, s.Length, f) : admittances[i];
                 for (int j = 0; j < n; j++)
                     dm[i, j] = i == j ? fn[i] * fn[i] / y : scale * z[i, j];
             }

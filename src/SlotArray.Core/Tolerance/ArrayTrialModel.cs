@@ -21,6 +21,11 @@ namespace SlotArray.Core.Tolerance;
 /// every slot toward +x (a fixture offset), the systematic length the same extra length on every slot.</para>
 /// <para>Datums: positions are from the inner face of the end short (z = 0), which stays put; a centre feed's junction and
 /// far short stay at their nominal places.</para>
+/// <para>Coupled designs (<c>coupling: mutual</c>): each trial is solved on the coupled network of the pipeline
+/// (<see cref="CoupledArrayNetwork"/>: the perturbed self admittances and positions on the line, the external mutual
+/// impedances of the nominal slots). Holding the mutual impedances at their nominal values is a first-order
+/// approximation: a machining error of a few hundredths of a millimetre changes a slot-to-slot distance of about λg/2 by
+/// less than 0.1 %, while it moves the slot's own resonance (its self admittance) by far more.</para>
 /// <para>S11 is referred to the nominal guide's TE10 wave impedance Z: a trial whose tube has wave impedance Z' presents
 /// z_in Z'/Z at the feed flange (an impedance step between equal-height guides, the usual first approximation; D. M. Pozar,
 /// <i>Microwave Engineering</i>, 4th ed., Wiley 2012, Sec. 3.3 for Z_TE, from memory).</para>
@@ -33,9 +38,12 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
     private readonly double[] positions, signs, couplingPerOffset;
     private readonly double nominalImpedance;
 
-    private ArrayTrialModel(ArrayDesign design, ToleranceRequest tolerance, SlotSurrogate[] surrogates)
+    private readonly Coupling.CouplingMatrix? mutual;
+
+    private ArrayTrialModel(ArrayDesign design, ToleranceRequest tolerance, SlotSurrogate[] surrogates, bool coupled)
     {
         this.design = design;
+        mutual = coupled ? CoupledArrayNetwork.MutualImpedances(design, design.DesignFrequency) : null;
         this.tolerance = tolerance;
         this.surrogates = surrogates;
         positions = design.Slots.Select(s => s.Position.Meters).ToArray();
@@ -56,8 +64,10 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
     /// <param name="factory">Builds the slot model for a perturbed guide or width.</param>
     /// <param name="tolerance">The machining tolerances.</param>
     /// <param name="options">Surrogate nodes, threads, normal range.</param>
+    /// <param name="coupled">Solve every trial on the coupled network (<c>coupling: mutual</c>, <see cref="CoupledArrayNetwork"/>),
+    /// as the pipeline analyses such a design; else on the line network of isolated slots.</param>
     public static ArrayTrialModel Build(ArrayDesign design, IShuntSlotModel slot, SlotModelFactory factory, ToleranceRequest tolerance,
-        ToleranceOptions? options = null)
+        ToleranceOptions? options = null, bool coupled = false)
     {
         ArgumentNullException.ThrowIfNull(design);
         ArgumentNullException.ThrowIfNull(slot);
@@ -79,7 +89,7 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
                 options.SurrogateNodes);
         });
         var index = distinct.Select((k, i) => (k, i)).ToDictionary(p => p.k, p => p.i);
-        return new ArrayTrialModel(design, tolerance, keys.Select(k => built[index[k]]).ToArray());
+        return new ArrayTrialModel(design, tolerance, keys.Select(k => built[index[k]]).ToArray(), coupled);
     }
 
     /// <summary>Coupling change per metre of offset error: 1 for an offset, 1/(L/2) rad/m for a tilt (error at the slot end).</summary>
@@ -147,8 +157,15 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
         // An end feed's reference plane is the last slot's centre: it moves with that slot (|S11| is unchanged by the
         // millimetre-fraction shift, up to the wall loss over it).
         double feed = far is null ? Math.Max(design.FeedPlane.Meters, slotPositions[^1]) : design.FeedPlane.Meters;
-        var line = new LineNetwork(guide, slotPositions, near, far, feed, design.JunctionRatio);
-        var sol = line.Solve(design.DesignFrequency, admittances, signs, peakVoltage: false);
+        NetworkSolution sol;
+        if (mutual is null)
+            sol = new LineNetwork(guide, slotPositions, near, far, feed, design.JunctionRatio).Solve(design.DesignFrequency, admittances, signs, peakVoltage: false);
+        else
+        {
+            var slots = design.Slots.Select((s, i) => s with { Position = Length.FromMeters(slotPositions[i]) }).ToArray();
+            var trial = design with { Guide = guide, Slots = slots, NearTermination = near, FarTermination = far, FeedPlane = Length.FromMeters(feed) };
+            sol = CoupledArrayNetwork.Solve(trial, admittances, mutual, design.DesignFrequency);
+        }
         Complex s11 = sol.S11;
         if (guideWidthError != 0)
         {

@@ -33,7 +33,8 @@ public static class ToleranceAnalysis
 
     /// <summary>
     /// The nominal design by the pipeline's own stages (taper, slot model, designer: <see cref="ArrayPipeline"/>) without
-    /// its band sweep, which the tolerance analysis at the design frequency does not need.
+    /// its band sweep, which the tolerance analysis at the design frequency does not need: the design <c>design</c>
+    /// delivers (<see cref="ArrayPipeline.DeliveredDesign"/>, the coupled one with <c>coupling: mutual</c>).
     /// </summary>
     /// <exception cref="InfeasibleDesignException">The request cannot be realised.</exception>
     public static (ArrayDesign Design, Slots.IShuntSlotModel Slot) Design(ArrayRequest request)
@@ -41,7 +42,7 @@ public static class ToleranceAnalysis
         ArgumentNullException.ThrowIfNull(request);
         var taper = Tapers.TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
         var slot = ArrayPipeline.SlotModelFor(request);
-        return (ArrayPipeline.Synthesise(request, slot, taper), slot);
+        return (ArrayPipeline.DeliveredDesign(request, slot, taper), slot);
     }
 
     /// <summary>Runs the analysis of a pipeline result.</summary>
@@ -72,7 +73,7 @@ public static class ToleranceAnalysis
         var tol = tolerance ?? request.Tolerance
             ?? throw new ArgumentException("the spec has no tolerance: block; add one (e.g. offset: 0.02 mm, length: 0.02 mm)", nameof(tolerance));
         options ??= ToleranceOptions.Default;
-        var model = ArrayTrialModel.Build(design, slot, FactoryFor(request), tol, options);
+        var model = ArrayTrialModel.Build(design, slot, FactoryFor(request), tol, options, request.Coupling == CouplingMode.Mutual);
         var mc = ToleranceMonteCarlo.Run(model, tol.Trials, tol.Seed, TargetDb(request), options, progress);
         var sens = ToleranceSensitivities.Compute(model, options);
         return new ToleranceResult(tol, mc, sens, model.SurrogateSamples);
