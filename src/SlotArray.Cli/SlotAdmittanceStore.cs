@@ -9,7 +9,7 @@ using SlotArray.Reports;
 namespace SlotArray.Cli;
 
 /// <summary>
-/// The disk side of Core's <see cref="SlotAdmittanceMemo"/>: one JSON file per spec family (guide, wall, slot width,
+/// The disk side of the run cache's moment-method solves (<see cref="ResonantCharacterisationCache.Admittance"/>): one JSON file per spec family (guide, wall, slot width,
 /// design frequency) holding every moment-method solve a run made (the design's frequency nodes, the tolerance
 /// surrogates and sensitivities), with a SHA-256 checksum. Doubles are stored in their shortest round-trip form, so a
 /// warm run uses the very numbers a cold run computes: results are identical. A file that cannot be read, has another
@@ -24,12 +24,12 @@ internal static class SlotAdmittanceStore
     public static string FileFor(string directory, ArrayRequest request)
     {
         var solver = new LongitudinalSlotMomentMethod(request.Guide, request.Slots.Width);
-        string key = string.Create(CultureInfo.InvariantCulture, $"admittances;v{FileVersion};{SlotAdmittanceMemo.KeyOf(solver)};f={request.DesignFrequency.Hertz:R}");
+        string key = string.Create(CultureInfo.InvariantCulture, $"admittances;v{FileVersion};{ResonantCharacterisationCache.AdmittanceKeyOf(solver)};f={request.DesignFrequency.Hertz:R}");
         return Path.Combine(directory, "admittances-" + Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(key)))[..24] + ".json");
     }
 
     /// <summary>Preloads the request family's stored solves; returns how many (0 when there is no valid file).</summary>
-    public static int Load(string directory, ArrayRequest request, TextWriter log)
+    public static int Load(string directory, ArrayRequest request, ResonantCharacterisationCache memory, TextWriter log)
     {
         if (request.Slots.Type != SlotType.Longitudinal) return 0;
         string file = FileFor(directory, request);
@@ -40,15 +40,15 @@ internal static class SlotAdmittanceStore
             log.WriteLine($"slot cache: ignored {file} (unreadable, another version or a bad checksum); it is rewritten");
             return 0;
         }
-        return SlotAdmittanceMemo.Preload(entries);
+        return memory.PreloadAdmittances(entries);
     }
 
-    /// <summary>Stores every solve Core remembers when the file lacks some (write failures go to <paramref name="log"/>).</summary>
-    public static void Save(string directory, ArrayRequest request, TextWriter log)
+    /// <summary>Stores every solve the run remembers when the file lacks some (write failures go to <paramref name="log"/>).</summary>
+    public static void Save(string directory, ArrayRequest request, ResonantCharacterisationCache memory, TextWriter log)
     {
-        if (request.Slots.Type != SlotType.Longitudinal || SlotAdmittanceMemo.Count == 0) return;
+        if (request.Slots.Type != SlotType.Longitudinal || memory.AdmittanceCount == 0) return;
         string file = FileFor(directory, request);
-        var entries = SlotAdmittanceMemo.Entries();
+        var entries = memory.Admittances();
         if (File.Exists(file) && Read(file)?.Count == entries.Count) return;
         try
         {
@@ -89,8 +89,7 @@ internal static class SlotAdmittanceStore
             }
             return list;
         }
-        catch (Exception e) when (e is IOException or UnauthorizedAccessException or JsonException or NotSupportedException
-            or InvalidOperationException or ArgumentException)
+        catch (Exception e) when (SlotCache.IsUnreadable(e))
         {
             return null;
         }
@@ -105,7 +104,7 @@ internal static class SlotAdmittanceStore
     private sealed record StoreFile(int Version, string Sha256, JsonElement Body);
 
     /// <summary>The stored solves.</summary>
-    /// <param name="Solvers">Solver keys (<see cref="SlotAdmittanceMemo.KeyOf"/>).</param>
+    /// <param name="Solvers">Solver keys (<see cref="ResonantCharacterisationCache.AdmittanceKeyOf"/>).</param>
     /// <param name="Rows">[solver index, x (m), L (m), f (Hz), Re y, Im y].</param>
     private sealed record Body(List<string> Solvers, List<double[]> Rows);
 }

@@ -35,17 +35,18 @@ public sealed record SlotCache(string Directory)
 
     /// <summary>
     /// Preloads every stored table that matches the request's guide and slot width (default moment-method options,
-    /// as the spec's slot models use) into Core's in-memory cache, and the family's stored moment-method solves
+    /// as the spec's slot models use) into the run's in-memory cache, and the spec family's stored moment-method solves
     /// (<see cref="SlotAdmittanceStore"/>). Returns the number of tables preloaded; reasons for ignored files go to
     /// <paramref name="log"/>.
     /// </summary>
-    public int Load(ArrayRequest request, TextWriter log)
+    public int Load(ArrayRequest request, ResonantCharacterisationCache memory, TextWriter log)
     {
         ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(memory);
         ArgumentNullException.ThrowIfNull(log);
         if (request.Slots.Type != SlotType.Longitudinal || !System.IO.Directory.Exists(Directory)) return 0;
         var solver = new LongitudinalSlotMomentMethod(request.Guide, request.Slots.Width);
-        SlotAdmittanceStore.Load(Directory, request, log);
+        SlotAdmittanceStore.Load(Directory, request, memory, log);
         int loaded = 0;
         foreach (string file in System.IO.Directory.EnumerateFiles(Directory, "characterisation-*.json").Order(StringComparer.Ordinal))
         {
@@ -55,7 +56,7 @@ public sealed record SlotCache(string Directory)
                 if (table is null) { log.WriteLine($"slot cache: ignored {file} (unreadable, another version or a bad checksum)"); continue; }
                 string key = ResonantCharacterisation.KeyOf(solver, Core.Quantities.Frequency.FromHertz(table.FrequencyHertz), table.OffsetsMeters.Count);
                 if (key != table.Key) continue;   // another guide, width or frequency: not this run's
-                ResonantCharacterisation.Preload(solver, table);
+                memory.Preload(solver, table);
                 loaded++;
             }
             catch (Exception e) when (IsUnreadable(e))
@@ -67,16 +68,17 @@ public sealed record SlotCache(string Directory)
     }
 
     /// <summary>
-    /// Stores every table Core holds in memory that the cache lacks, and the request family's moment-method solves
-    /// (<see cref="SlotAdmittanceStore"/>). Write failures are reported to <paramref name="log"/>, never thrown.
+    /// Stores every table the run's in-memory cache holds that the disk cache lacks, and the run's moment-method solves
+    /// in the request family's file (<see cref="SlotAdmittanceStore"/>). Write failures are reported to <paramref name="log"/>, never thrown.
     /// </summary>
-    public int Save(ArrayRequest request, TextWriter log)
+    public int Save(ArrayRequest request, ResonantCharacterisationCache memory, TextWriter log)
     {
         ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(memory);
         ArgumentNullException.ThrowIfNull(log);
-        SlotAdmittanceStore.Save(Directory, request, log);
+        SlotAdmittanceStore.Save(Directory, request, memory, log);
         int saved = 0;
-        foreach (var table in ResonantCharacterisation.CachedTables())
+        foreach (var table in memory.Tables())
         {
             string file = FileFor(table.Key);
             if (File.Exists(file) && Read(file)?.Key == table.Key) continue;
@@ -131,7 +133,7 @@ public sealed record SlotCache(string Directory)
     /// Whatever reading a damaged or foreign cache file can throw (I/O, JSON, a missing member read as an undefined
     /// element, a wrong shape): such a file is ignored and rewritten, never fatal.
     /// </summary>
-    private static bool IsUnreadable(Exception e) => e is IOException or UnauthorizedAccessException or JsonException or NotSupportedException
+    internal static bool IsUnreadable(Exception e) => e is IOException or UnauthorizedAccessException or JsonException or NotSupportedException
         or InvalidOperationException or ArgumentException or FormatException or OverflowException;
 
     private static string Checksum(string body) => Convert.ToHexStringLower(SHA256.HashData(Encoding.UTF8.GetBytes(body)));
