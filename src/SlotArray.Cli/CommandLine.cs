@@ -24,6 +24,7 @@ public static class CommandLine
             SweepCommand.Build(output, error),
             ToleranceCommand.Build(output, error),
             SchemaCommand.Build(output, error),
+            InitCommand.Build(output, error),
         };
         return root;
     }
