@@ -51,8 +51,8 @@ public static class DesignCommand
 
     private static int Run(string path, string? outDir, bool json, SlotCache? cache, TextWriter output, TextWriter error)
     {
-        var request = Load(path, error, out int code);
-        if (request is null) return code;
+        var request = Load(path, error);
+        string folder = OutputFolderCheck.Prepare(outDir ?? DefaultFolder(request.Name), replacesWhole: true);
         var clock = Stopwatch.StartNew();
         var result = Analyse(request, cache, error);
         var report = DesignReportBuilder.Build(result);
@@ -62,7 +62,6 @@ public static class DesignCommand
             error.WriteLine(string.Format(Inv, "tolerance: {0} Monte Carlo trials, seed {1} ...", tol.Trials, tol.Seed));
             report = report with { Tolerance = Reports.ToleranceSummary.Lines(Core.Tolerance.ToleranceAnalysis.Run(result)) };
         }
-        string folder = outDir ?? DefaultFolder(request.Name);
         error.WriteLine($"writing {OutputFolder.Files.Count} files to {folder}/ ...");
         OutputFolder.WriteAll(report, folder);
         foreach (string w in report.Warnings) error.WriteLine($"warning: {w}");
@@ -78,18 +77,22 @@ public static class DesignCommand
         return ExitCodes.Ok;
     }
 
-    /// <summary>Loads and validates a spec; prints its warnings and errors to <paramref name="error"/>. Null with the exit code on failure.</summary>
-    internal static ArrayRequest? Load(string path, TextWriter error, out int code)
+    /// <summary>Loads and validates a spec; prints its warnings to <paramref name="error"/>.</summary>
+    /// <param name="path">The spec file.</param>
+    /// <param name="error">Where the warnings go.</param>
+    /// <param name="nothing">The end of the failure message: what was not done, e.g. "nothing designed".</param>
+    /// <exception cref="SpecErrorsException">The file is missing or the spec has errors (exit 2; printed by <see cref="CommandLine.Run"/>).</exception>
+    internal static ArrayRequest Load(string path, TextWriter error, string nothing = "nothing designed") => Load(path, error, out _, nothing);
+
+    /// <summary>As <see cref="Load(string, TextWriter, string)"/>, also returning the spec's warnings.</summary>
+    internal static ArrayRequest Load(string path, TextWriter error, out IReadOnlyList<SpecWarning> warnings, string nothing = "nothing designed")
     {
-        code = ExitCodes.Ok;
         if (!File.Exists(path)) throw new UserInputException($"spec file not found: {path}");
         var result = SpecLoader.LoadFile(path);
+        warnings = result.Warnings;
         foreach (var w in result.Warnings) error.WriteLine(w);
-        foreach (var e in result.Errors) error.WriteLine(e);
-        if (result.IsValid) return result.Request;
-        error.WriteLine(string.Format(Inv, "{0}: {1} error(s); nothing designed", path, result.Errors.Count));
-        code = ExitCodes.BadInput;
-        return null;
+        if (result.IsValid) return result.Request!;
+        throw new SpecErrorsException(string.Format(Inv, "{0}: {1} error(s); {2}", path, result.Errors.Count, nothing), result.Errors);
     }
 
     /// <summary>Runs the pipeline with the slot cache (when given), printing progress to <paramref name="error"/>.</summary>
