@@ -12,7 +12,8 @@ namespace SlotArray.Cli.Commands;
 /// <c>slotarray design SPEC [-o DIR] [--json]</c>: the main job. Loads the spec (exit 2 with positioned errors), runs
 /// the pipeline (synthesis, network analysis across the band, pattern and figures), writes every output file
 /// atomically into DIR (default <c>out/&lt;name&gt;</c>, the spec's name) and prints a short summary. An infeasible
-/// design exits 1 with the reason and writes nothing. Progress, warnings and errors go to stderr; with
+/// design exits 1 with the reason and writes nothing; a design that misses a stated requirement (a FAIL verdict) is
+/// written and exits 4. Progress, warnings and errors go to stderr; with
 /// <c>--json</c> stdout carries the content of design.json and nothing else.
 /// </summary>
 public static class DesignCommand
@@ -74,7 +75,10 @@ public static class DesignCommand
             PrintSummary(output, report, folder);
         }
         error.WriteLine(string.Format(Inv, "done in {0:0.0} s", clock.Elapsed.TotalSeconds));
-        return ExitCodes.Ok;
+        var failed = report.Requirements.Where(q => !q.Passed).ToList();
+        if (failed.Count == 0) return ExitCodes.Ok;
+        error.WriteLine($"requirements not met ({failed.Count} of {report.Requirements.Count}): {string.Join("; ", failed.Select(q => $"{q.Description}: required {q.Required}, achieved {q.Achieved}"))}. The design was written; exit code {ExitCodes.RequirementsNotMet}.");
+        return ExitCodes.RequirementsNotMet;
     }
 
     /// <summary>Loads and validates a spec; prints its warnings to <paramref name="error"/>.</summary>
