@@ -72,6 +72,12 @@ public static class CommandLine
             error.WriteLine(e.Message);
             return Fail(ExitCodes.BadInput, JsonError.BadInput, e.Message, e.Errors);
         }
+        catch (Core.Slots.Tables.SlotTableException e)
+        {
+            string message = e.Line > 0 ? $"slot table, line {e.Line}: {e.Message}" : $"slot table: {e.Message}";
+            error.WriteLine(message);
+            return Fail(ExitCodes.BadInput, JsonError.BadInput, message);
+        }
         catch (Exception e) when (e is UserInputException or OutputFolderException)
         {
             error.WriteLine(e.Message);
