@@ -13,12 +13,21 @@ public static class CommandLine
     /// <summary>Shows the stack trace of an internal error.</summary>
     public static readonly Option<bool> Verbose = new("--verbose") { Description = "Show the stack trace of an internal error", Recursive = true };
 
+    /// <summary>No progress bar (it shows only on a terminal anyway).</summary>
+    public static readonly Option<bool> Quiet = new("--quiet", "-q") { Description = "Show no progress bar", Recursive = true };
+
+    /// <summary>Cancelled by Ctrl-C while <see cref="Run"/> runs (never in-process callers that pass none).</summary>
+    internal static CancellationToken Cancellation => s_cancellation.Value;
+
+    private static readonly AsyncLocal<CancellationToken> s_cancellation = new();
+
     /// <summary>Builds the root command with every sub-command, writing to the given writers.</summary>
     public static RootCommand Build(TextWriter output, TextWriter error)
     {
         var root = new RootCommand("SlotArray: design slotted-waveguide antenna arrays from a YAML spec to a cut list.")
         {
             Verbose,
+            Quiet,
             GuidesCommand.Build(output, error),
             CheckCommand.Build(output, error),
             SlotCommand.Build(output, error),
@@ -27,17 +36,20 @@ public static class CommandLine
             SweepCommand.Build(output, error),
             ToleranceCommand.Build(output, error),
             SchemaCommand.Build(output, error),
+            InitCommand.Build(output, error),
         };
         return root;
     }
 
     /// <summary>
-    /// Parses and runs; maps exceptions to the architecture's exit codes. A failure always prints a readable message on
-    /// <paramref name="error"/>; when the command was given <c>--json</c> and wrote nothing on <paramref name="output"/>,
-    /// it also prints one JSON error object there (<see cref="JsonError"/>), so a script reading stdout always gets JSON.
+    /// Parses and runs; maps exceptions to the architecture's exit codes (130 when <paramref name="cancel"/> stops the
+    /// run). A failure always prints a readable message on <paramref name="error"/>; when the command was given
+    /// <c>--json</c> and wrote nothing on <paramref name="output"/>, it also prints one JSON error object there
+    /// (<see cref="JsonError"/>), so a script reading stdout always gets JSON.
     /// </summary>
-    public static int Run(string[] args, TextWriter output, TextWriter error)
+    public static int Run(string[] args, TextWriter output, TextWriter error, CancellationToken cancel = default)
     {
+        s_cancellation.Value = cancel;
         var stdout = new RecordingWriter(output);
         var stderr = new RecordingWriter(error);
         var root = Build(stdout, stderr);
@@ -78,6 +90,11 @@ public static class CommandLine
             error.WriteLine(message);
             return Fail(ExitCodes.BadInput, JsonError.BadInput, message);
         }
+        catch (Exception e) when (cancel.IsCancellationRequested && IsCancellation(e))
+        {
+            error.WriteLine("interrupted: nothing written");
+            return ExitCodes.Interrupted;
+        }
         catch (Exception e) when (e is UserInputException or OutputFolderException)
         {
             error.WriteLine(e.Message);
@@ -96,6 +113,9 @@ public static class CommandLine
     private static bool WantsJson(ParseResult parse) =>
         parse.CommandResult.Command.Options.Any(o => o.Name == "--json")
         && parse.Tokens.Any(t => t.Type == TokenType.Option && t.Value == "--json");
+
+    private static bool IsCancellation(Exception e) => e is OperationCanceledException
+        || (e is AggregateException a && a.Flatten().InnerExceptions.All(i => i is OperationCanceledException));
 }
 
 /// <summary>Bad input found by a command (not by the parser): printed as one line, exit code 2.</summary>
