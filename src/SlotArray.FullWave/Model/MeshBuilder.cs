@@ -1,0 +1,66 @@
+namespace SlotArray.FullWave.Model;
+
+/// <summary>
+/// One axis of a graded rectilinear mesh: lines on every geometry edge (so slot lengths, offsets and walls are
+/// exact on the grid), cells no larger than the local size asked at each edge near it, growing away from it by at
+/// most the grading ratio and never above the largest cell. Grading of 1.3–1.5 between neighbouring FDTD cells
+/// is common practice (no source).
+/// </summary>
+public static class MeshBuilder
+{
+    /// <summary>Mesh lines, mm, ascending, from the anchors (edge position and local cell size there, mm).</summary>
+    /// <param name="anchors">Geometry edges with the cell size wanted at each, mm; at least two distinct positions.</param>
+    /// <param name="largestCellMm">Largest cell anywhere, mm, &gt; 0.</param>
+    /// <param name="grading">Largest ratio of neighbouring cells, &gt; 1; default 1.4.</param>
+    public static IReadOnlyList<double> Lines(IEnumerable<(double AtMm, double CellMm)> anchors, double largestCellMm, double grading = 1.4)
+    {
+        if (!(largestCellMm > 0)) throw new ArgumentOutOfRangeException(nameof(largestCellMm), largestCellMm, "the largest cell must be positive");
+        if (!(grading > 1)) throw new ArgumentOutOfRangeException(nameof(grading), grading, "the grading ratio must be above 1");
+        // Merge anchors closer than a micrometre, keeping the finer cell.
+        var sorted = anchors.OrderBy(a => a.AtMm).ToList();
+        var fixedLines = new List<(double At, double Cell)>();
+        foreach (var a in sorted)
+        {
+            double cell = Math.Min(a.CellMm, largestCellMm);
+            if (fixedLines.Count > 0 && a.AtMm - fixedLines[^1].At < 1e-3)
+                fixedLines[^1] = (fixedLines[^1].At, Math.Min(fixedLines[^1].Cell, cell));
+            else fixedLines.Add((a.AtMm, cell));
+        }
+        if (fixedLines.Count < 2) throw new ArgumentException("a mesh axis needs at least two distinct edges", nameof(anchors));
+        // The finest cell an anchor asks also limits its neighbours' graded reach.
+        var result = new List<double> { fixedLines[0].At };
+        for (int i = 0; i + 1 < fixedLines.Count; i++)
+        {
+            var (p, hp) = fixedLines[i];
+            var (q, hq) = fixedLines[i + 1];
+            result.AddRange(Fill(p, q, hp, hq, largestCellMm, grading));
+            result.Add(q);
+        }
+        return result;
+    }
+
+    /// <summary>Interior lines of the gap (p, q): cells start at hp from p and hq from q, grow by the ratio, cap at hmax.</summary>
+    private static IEnumerable<double> Fill(double p, double q, double hp, double hq, double hmax, double r)
+    {
+        var left = new List<double>();
+        var right = new List<double>();
+        double x = p, y = q, hl = hp, hr = hq;
+        while (true)
+        {
+            double gap = y - x;
+            if (gap <= Math.Max(hl, hr) * 1.0000001) break;
+            if (hl <= hr) { x += hl; left.Add(x); hl = Math.Min(hl * r, hmax); }
+            else { y -= hr; right.Add(y); hr = Math.Min(hr * r, hmax); }
+        }
+        // A sliver left in the middle: drop the line beside it so the two cells merge.
+        double last = y - x;
+        double neighbour = Math.Min(left.Count > 0 ? hl / r : hp, right.Count > 0 ? hr / r : hq);
+        if (last < 0.5 * neighbour)
+        {
+            if (left.Count > 0 && (right.Count == 0 || hl <= hr)) left.RemoveAt(left.Count - 1);
+            else if (right.Count > 0) right.RemoveAt(right.Count - 1);
+        }
+        right.Reverse();
+        return left.Concat(right);
+    }
+}
