@@ -23,6 +23,8 @@ public static class CommandLine
             DesignCommand.Build(output, error),
             SweepCommand.Build(output, error),
             ToleranceCommand.Build(output, error),
+            CharacteriseCommand.Build(output, error),
+            VerifyCommand.Build(output, error),
         };
         return root;
     }

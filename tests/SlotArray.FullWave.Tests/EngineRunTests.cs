@@ -23,11 +23,8 @@ public sealed class EngineRunTests(ITestOutputHelper log)
 
     private static TubeLayout Plain(double portZ) => new(Wr90, [], false, null, -portZ, portZ, F0, 1.4e9, MeshDensity.Coarse, false);
 
-    private static double Beta(double fHz) // TE10 of the air-filled guide: β = √(k² − (π/a)²) (Pozar 2012, eq. 3.84, from memory)
-    {
-        double k = 2 * Math.PI * fHz / Core.Quantities.PhysicalConstants.SpeedOfLight, kc = Math.PI / (Wr90.AMm * 1e-3);
-        return Math.Sqrt(k * k - kc * kc);
-    }
+    // TE10 of the air-filled guide: β = √(k² − (π/a)²) (Pozar 2012, eq. 3.84, from memory).
+    private static double Beta(double fHz) => Results.PortWaves.Te10PhaseConstant(fHz, Wr90.AMm * 1e-3);
 
     [Fact]
     public async Task A_plain_guide_section_transmits_fully_with_the_phase_beta_L()

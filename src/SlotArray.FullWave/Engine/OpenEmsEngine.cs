@@ -58,11 +58,11 @@ public sealed class OpenEmsEngine
     }
 
     /// <summary>
-    /// Runs the engine on <paramref name="xmlFile"/> in its folder with one thread, writing its console output to
-    /// <c>engine.log</c> there. Cancelling kills the process.
+    /// Runs the engine on <paramref name="xmlFile"/> in its folder with <paramref name="threads"/> threads, writing its
+    /// console output to <c>engine.log</c> there. Cancelling kills the process.
     /// </summary>
     /// <exception cref="EngineRunException">The engine exited with an error.</exception>
-    public async Task<EngineRunStats> RunAsync(string xmlFile, CancellationToken cancel)
+    public async Task<EngineRunStats> RunAsync(string xmlFile, CancellationToken cancel, int threads = 1)
     {
         string folder = Path.GetDirectoryName(Path.GetFullPath(xmlFile))!;
         var psi = new ProcessStartInfo(ExecutablePath)
@@ -73,7 +73,7 @@ public sealed class OpenEmsEngine
             UseShellExecute = false,
         };
         psi.ArgumentList.Add(Path.GetFileName(xmlFile));
-        psi.ArgumentList.Add("--numThreads=1");
+        psi.ArgumentList.Add(FormattableString.Invariant($"--numThreads={Math.Max(1, threads)}"));
         var clock = Stopwatch.StartNew();
         using var process = Process.Start(psi) ?? throw new EngineRunException($"could not start {ExecutablePath}");
         var stdout = process.StandardOutput.ReadToEndAsync(cancel);

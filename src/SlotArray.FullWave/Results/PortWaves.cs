@@ -23,11 +23,15 @@ public readonly record struct PortWaves(Complex Incident, Complex Reflected)
     /// The TE10 wave impedance of an air-filled guide of broad dimension a: Z = η0 k/β, β = √(k² − (π/a)²)
     /// (Pozar 2012, eq. 3.86, from memory); the same analytic impedance the engine's own port post-processing uses.
     /// </summary>
-    public static double Te10WaveImpedance(double frequencyHz, double broadWallMeters)
+    public static double Te10WaveImpedance(double frequencyHz, double broadWallMeters) =>
+        Core.Quantities.PhysicalConstants.Eta0 * 2 * Math.PI * frequencyHz / Core.Quantities.PhysicalConstants.SpeedOfLight / Te10PhaseConstant(frequencyHz, broadWallMeters);
+
+    /// <summary>The TE10 phase constant of an air-filled guide, β = √(k² − (π/a)²), rad/m (Pozar 2012, eq. 3.84, from memory).</summary>
+    public static double Te10PhaseConstant(double frequencyHz, double broadWallMeters)
     {
         double k = 2 * Math.PI * frequencyHz / Core.Quantities.PhysicalConstants.SpeedOfLight;
         double kc = Math.PI / broadWallMeters;
         if (k <= kc) throw new ArgumentOutOfRangeException(nameof(frequencyHz), frequencyHz, "below the TE10 cutoff");
-        return Core.Quantities.PhysicalConstants.Eta0 * k / Math.Sqrt(k * k - kc * kc);
+        return Math.Sqrt(k * k - kc * kc);
     }
 }

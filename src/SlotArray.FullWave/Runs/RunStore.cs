@@ -68,19 +68,46 @@ public sealed class RunStore(string root)
     }
 
     /// <summary>Runs a request with the engine (clearing an unfinished folder first) and stores its outcome.</summary>
-    public async Task<RunOutcome> RunAsync(OpenEmsEngine engine, RunRequest r, CancellationToken cancel)
+    public async Task<RunOutcome> RunAsync(OpenEmsEngine engine, RunRequest r, CancellationToken cancel, int threads = 1)
     {
         string folder = FolderOf(r);
         if (Directory.Exists(folder)) Directory.Delete(folder, recursive: true);
         Directory.CreateDirectory(folder);
         string xml = Path.Combine(folder, "model.xml");
         await File.WriteAllTextAsync(xml, r.Xml, cancel);
-        var stats = await engine.RunAsync(xml, cancel);
+        var stats = await engine.RunAsync(xml, cancel, threads);
         int ports = r.Model.Ports.Count;
         var response = TwoPortResponse.FromProbes(folder, r.BroadWallMeters, r.FrequenciesHz, ports, r.Model.Probes.Select(p => p.Name).ToList());
         WriteAtomic(Path.Combine(folder, "stats.txt"), string.Create(CultureInfo.InvariantCulture, $"{stats.Cells} {stats.Timesteps} {stats.Seconds:R}\n"));
         WriteAtomic(Path.Combine(folder, "response.csv"), response.ToCsv());
         return new RunOutcome(r, response, stats, false);
+    }
+
+    /// <summary>Mean throughput of the finished runs in the store, cell updates per second per run, or null when none has finished.</summary>
+    public double? MeasuredThroughput()
+    {
+        if (!Directory.Exists(Root)) return null;
+        var rates = new List<double>();
+        foreach (string f in Directory.GetFiles(Root, "stats.txt", SearchOption.AllDirectories))
+        {
+            var s = File.ReadAllText(f).Trim().Split(' ');
+            if (s.Length == 3 && double.TryParse(s[0], CultureInfo.InvariantCulture, out double c) && double.TryParse(s[1], CultureInfo.InvariantCulture, out double n)
+                && double.TryParse(s[2], CultureInfo.InvariantCulture, out double t) && t > 0 && c * n > 0) rates.Add(c * n / t);
+        }
+        return rates.Count > 0 ? rates.Average() : null;
+    }
+
+    /// <summary>The engine version its log states ("openEMS v0.0.35"), from the first of <paramref name="runs"/> that has a log; "unknown" otherwise.</summary>
+    public string EngineVersion(IEnumerable<RunRequest> runs)
+    {
+        foreach (var r in runs)
+        {
+            string log = Path.Combine(FolderOf(r), "engine.log");
+            if (!File.Exists(log)) continue;
+            var m = System.Text.RegularExpressions.Regex.Match(File.ReadAllText(log), @"openEMS\s+\S*\s*-- version (v[0-9.]+)");
+            if (m.Success) return m.Groups[1].Value;
+        }
+        return "version unknown";
     }
 
     private static void WriteAtomic(string path, string text)
