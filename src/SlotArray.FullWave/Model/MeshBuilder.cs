@@ -52,13 +52,21 @@ public static class MeshBuilder
             if (hl <= hr) { x += hl; left.Add(x); hl = Math.Min(hl * r, hmax); }
             else { y -= hr; right.Add(y); hr = Math.Min(hr * r, hmax); }
         }
-        // A sliver left in the middle: drop the line beside it so the two cells merge.
+        // A sliver left in the middle: move the line beside it to halve the last two cells instead.
         double last = y - x;
         double neighbour = Math.Min(left.Count > 0 ? hl / r : hp, right.Count > 0 ? hr / r : hq);
         if (last < 0.5 * neighbour)
         {
-            if (left.Count > 0 && (right.Count == 0 || hl <= hr)) left.RemoveAt(left.Count - 1);
-            else if (right.Count > 0) right.RemoveAt(right.Count - 1);
+            if (left.Count > 0 && (right.Count == 0 || hl <= hr))
+            {
+                double before = left.Count > 1 ? left[^2] : p;
+                left[^1] = 0.5 * (before + y);
+            }
+            else if (right.Count > 0)
+            {
+                double before = right.Count > 1 ? right[^2] : q;
+                right[^1] = 0.5 * (before + x);
+            }
         }
         right.Reverse();
         return left.Concat(right);
