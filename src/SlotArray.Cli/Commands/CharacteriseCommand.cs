@@ -76,8 +76,18 @@ public static class CharacteriseCommand
         error.WriteLine(string.Format(Inv, "{0} runs ({1} geometries and their plain-tube calibrations), {2} mesh, {3:0.00} to {4:0.00} Mcells, {5} at a time; cache {6}",
             runs.Count, plan.Samples.Count, density.ToString().ToLowerInvariant(), runs.Min(r => r.Model.Mesh.Cells) / 1e6, runs.Max(r => r.Model.Mesh.Cells) / 1e6,
             jobs, store.Root));
-        var outcomes = RunQueue.RunAllAsync(engine, store, runs, jobs, new RunProgressPrinter(error, RunProgressPrinter.StderrIsTerminal(error)), CancellationToken.None)
-            .GetAwaiter().GetResult();
+        using var stop = new StopSignal();
+        IReadOnlyList<RunOutcome> outcomes;
+        try
+        {
+            outcomes = RunQueue.RunAllAsync(engine, store, runs, jobs, new RunProgressPrinter(error, RunProgressPrinter.StderrIsTerminal(error)), stop.Token)
+                .GetAwaiter().GetResult();
+        }
+        catch (OperationCanceledException)
+        {
+            error.WriteLine($"stopped: the finished runs are kept in {store.Root}; run the same command again to resume");
+            return StopSignal.ExitCode;
+        }
         var results = plan.Reduce(outcomes);
         string table = SlotTableCsv.ToText(results, Provenance(plan, runs, results, store.EngineVersion(runs)), plan.IsEdge);
         Directory.CreateDirectory(outDir);

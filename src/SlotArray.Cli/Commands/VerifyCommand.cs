@@ -63,7 +63,16 @@ public static class VerifyCommand
             error.WriteLine($"running the engine in {store.FolderOf(plan.Run)} ...");
             var progress = new RunProgressPrinter(error, RunProgressPrinter.StderrIsTerminal(error));
             progress.Report(new RunProgress(0, 1, estimate, null));
-            outcome = store.RunAsync(engine, plan.Run, CancellationToken.None, jobs).GetAwaiter().GetResult();
+            using var stop = new StopSignal();
+            try
+            {
+                outcome = store.RunAsync(engine, plan.Run, stop.Token, jobs).GetAwaiter().GetResult();
+            }
+            catch (OperationCanceledException)
+            {
+                error.WriteLine("stopped: the unfinished run is started again by the next verify");
+                return StopSignal.ExitCode;
+            }
             progress.Report(new RunProgress(1, 1, 0, outcome));
         }
         else error.WriteLine($"using the finished run in {store.FolderOf(plan.Run)}");

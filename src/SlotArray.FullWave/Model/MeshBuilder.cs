@@ -12,20 +12,23 @@ public static class MeshBuilder
     /// <param name="anchors">Geometry edges with the cell size wanted at each, mm; at least two distinct positions.</param>
     /// <param name="largestCellMm">Largest cell anywhere, mm, &gt; 0.</param>
     /// <param name="grading">Largest ratio of neighbouring cells, &gt; 1; default 1.4.</param>
-    public static IReadOnlyList<double> Lines(IEnumerable<(double AtMm, double CellMm)> anchors, double largestCellMm, double grading = 1.4)
+    /// <param name="mergeMm">Edges closer than this share one line (at their mean), mm; default 0.001. Near-coincident
+    /// edges (e.g. slots at 2.825 and 2.852 mm offsets) would otherwise force a sliver cell that sets a tiny time step.</param>
+    public static IReadOnlyList<double> Lines(IEnumerable<(double AtMm, double CellMm)> anchors, double largestCellMm, double grading = 1.4,
+        double mergeMm = 1e-3)
     {
         if (!(largestCellMm > 0)) throw new ArgumentOutOfRangeException(nameof(largestCellMm), largestCellMm, "the largest cell must be positive");
         if (!(grading > 1)) throw new ArgumentOutOfRangeException(nameof(grading), grading, "the grading ratio must be above 1");
-        // Merge anchors closer than a micrometre, keeping the finer cell.
+        // Merge anchors closer than mergeMm into their mean, keeping the finer cell; the outermost stay where they are.
         var sorted = anchors.OrderBy(a => a.AtMm).ToList();
-        var fixedLines = new List<(double At, double Cell)>();
+        var groups = new List<List<(double At, double Cell)>>();
         foreach (var a in sorted)
         {
-            double cell = Math.Min(a.CellMm, largestCellMm);
-            if (fixedLines.Count > 0 && a.AtMm - fixedLines[^1].At < 1e-3)
-                fixedLines[^1] = (fixedLines[^1].At, Math.Min(fixedLines[^1].Cell, cell));
-            else fixedLines.Add((a.AtMm, cell));
+            if (groups.Count > 0 && a.AtMm - groups[^1][0].At < Math.Max(mergeMm, 1e-3)) groups[^1].Add((a.AtMm, a.CellMm));
+            else groups.Add([(a.AtMm, a.CellMm)]);
         }
+        var fixedLines = groups.Select((g, i) => (At: i == 0 ? g[0].At : i == groups.Count - 1 ? g[^1].At : g.Average(x => x.At),
+            Cell: Math.Min(g.Min(x => x.Cell), largestCellMm))).ToList();
         if (fixedLines.Count < 2) throw new ArgumentException("a mesh axis needs at least two distinct edges", nameof(anchors));
         // The finest cell an anchor asks also limits its neighbours' graded reach.
         var result = new List<double> { fixedLines[0].At };
