@@ -95,10 +95,9 @@ public static class TubeModel
         else zStart = zLo - margin - pml;
         zs.Add((zStart, hMax));
         zs.Add((zEnd, hMax));
-        // Edges closer than a quarter of the finest cell share a line (the aperture then sits on the nearest line, at
-        // most that far from its drawn edge; single-slot runs have no such pairs).
-        double merge = (l.Slots.Count > 0 ? l.Slots.Min(p => p.Cut.WidthMm) / s.CellsAcrossSlot : hWall) / 4;
-        var mesh = new MeshLines(MeshBuilder.Lines(xs, hMax, mergeMm: merge), MeshBuilder.Lines(ys, hMax, mergeMm: merge), MeshBuilder.Lines(zs, hMax, mergeMm: merge));
+        // Every edge keeps its own line, so each aperture is exactly where the cut list puts it (near-coincident edges of
+        // neighbouring slots then cost small cells and a short time step).
+        var mesh = new MeshLines(MeshBuilder.Lines(xs, hMax), MeshBuilder.Lines(ys, hMax), MeshBuilder.Lines(zs, hMax));
 
         // The tube: four metal walls (a metal box owns its faces, so the inner faces at x = ±a/2, y = ±b/2 are PEC
         // exactly); free space (the background) inside and around; guide ends without a short run through the PML.
