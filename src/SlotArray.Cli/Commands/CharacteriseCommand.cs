@@ -59,8 +59,7 @@ public static class CharacteriseCommand
     private static int Run(string specPath, string outDir, MeshDensity density, string? enginePath, int jobs, int couplings, int lengths, int freqs,
         TextWriter output, TextWriter error)
     {
-        var request = DesignCommand.Load(specPath, error, out int code);
-        if (request is null) return code;
+        var request = DesignCommand.Load(specPath, error, "nothing characterised");
         if (request.Slots.Type == SlotType.InclinedSeries)
             throw new UserInputException($"{specPath}: characterise builds longitudinal and edge slots; inclined series slots are not built yet");
         if (couplings < 1 || lengths < 1 || freqs < 1) throw new UserInputException("--offsets, --lengths and --frequencies must be at least 1");
