@@ -158,11 +158,11 @@ public class DesignCommandTests(DemoRuns demo) : IClassFixture<DemoRuns>
     [Fact]
     public void Pngs_decode_and_carry_text_and_the_svg_names_its_font()
     {
-        foreach (string name in new[] { "pattern.png", "taper.png", "slots.png", "sweep.png" })
+        foreach (var (name, height) in new[] { ("pattern.png", 520), ("taper.png", 520), ("slots.png", 520), ("sweep.png", Reports.Plots.DesignPlots.SweepHeight) })
         {
             using var bmp = SKBitmap.Decode(Path.Combine(demo.First, name));
             Assert.NotNull(bmp);
-            Assert.Equal((900, 520), (bmp.Width, bmp.Height));
+            Assert.Equal((900, height), (bmp.Width, bmp.Height));
             // The title is drawn in the top 40 px, centred: dark glyph pixels there mean text was rendered (fonts found).
             int dark = 0;
             for (int y = 0; y < 40; y++)
@@ -232,20 +232,42 @@ public class DesignCommandFailureTests
     }
 
     [Fact]
-    public void Sweep_writes_the_plot_and_touchstone_and_prints_one_row_per_frequency()
+    public void Sweep_writes_the_plot_and_touchstone_and_by_default_spans_past_the_vswr_band_edges()
     {
         string spec = DesignRuns.Spec("sweep", Wr90Head + "\nslots: {type: longitudinal, count: 8, width: 1.6 mm}\ntaper: {type: uniform}\n");
         string outDir = Path.Combine(Path.GetDirectoryName(spec)!, "out");
         var (code, output, err) = DesignRuns.Run("sweep", spec, "-o", outDir, "--no-cache");
         Assert.True(code == ExitCodes.Ok, err);
         Assert.Equal(["input.s1p", "sweep.png"], Directory.GetFiles(outDir).Select(Path.GetFileName).Order(StringComparer.Ordinal));
-        var rows = output.Split('\n').Select(l => l.Trim()).Where(l => l.StartsWith("9.", StringComparison.Ordinal)).ToList();
-        Assert.Equal(201, rows.Count);   // AnalysisOptions.Default.SweepPoints
-        Assert.StartsWith("9.350000 ", rows[0]);
-        Assert.StartsWith("9.400000 ", rows[^1]);
-        // Touchstone 1.1: option line and 201 data lines
+        var rows = output.Split('\n').Select(l => l.Trim()).Where(l => l.Length > 0 && char.IsDigit(l[0])).Select(l => l.Split(' ', StringSplitOptions.RemoveEmptyEntries)).ToList();
+        Assert.Equal(401, rows.Count);   // MatchSpan.DefaultPoints
+        // The default span shows where the VSWR leaves 2 on both sides (issue 13): both end rows read VSWR > 2, the best < 1.5.
+        double V(string[] row) => double.Parse(row[3], CultureInfo.InvariantCulture);
+        Assert.True(V(rows[0]) > 2 && V(rows[^1]) > 2, $"VSWR at the span ends {V(rows[0])}, {V(rows[^1])}");
+        Assert.True(rows.Min(V) < 1.5);
         var s1p = File.ReadAllLines(Path.Combine(outDir, "input.s1p"));
-        Assert.Single(s1p, l => l.StartsWith("# Hz S RI R ", StringComparison.Ordinal));
-        Assert.Equal(201, s1p.Count(l => l.Length > 0 && char.IsDigit(l[0])));
+        Assert.Single(s1p, l => l == "# Hz S RI R 1");
+        Assert.Equal(401, s1p.Count(l => l.Length > 0 && char.IsDigit(l[0])));
+    }
+
+    [Fact]
+    public void Sweep_takes_from_to_and_points_and_prints_json()
+    {
+        string spec = DesignRuns.Spec("sweepjson", Wr90Head + "\nslots: {type: longitudinal, count: 8, width: 1.6 mm}\ntaper: {type: uniform}\n");
+        string outDir = Path.Combine(Path.GetDirectoryName(spec)!, "out");
+        var (code, output, err) = DesignRuns.Run("sweep", spec, "-o", outDir, "--no-cache", "--from", "9.2 GHz", "--to", "9.6GHz", "--points", "5", "--json");
+        Assert.True(code == ExitCodes.Ok, err);
+        using var doc = System.Text.Json.JsonDocument.Parse(output);
+        var pts = doc.RootElement.GetProperty("points").EnumerateArray().ToList();
+        Assert.Equal([9.2e9, 9.3e9, 9.4e9, 9.5e9, 9.6e9], pts.Select(p => Math.Round(p.GetProperty("frequency_hz").GetDouble())));
+        foreach (var p in pts)
+        {
+            double mag = Math.Sqrt(Math.Pow(p.GetProperty("s11_re").GetDouble(), 2) + Math.Pow(p.GetProperty("s11_im").GetDouble(), 2));
+            // VSWR = (1 + |Γ|)/(1 − |Γ|), standard definition (Pozar, Microwave Engineering, eq. 2.41, from memory)
+            Check.Relative((1 + mag) / (1 - mag), p.GetProperty("vswr").GetDouble(), 1e-12, "VSWR from S11");
+        }
+        var bad = DesignRuns.Run("sweep", spec, "-o", outDir, "--no-cache", "--from", "9.6 GHz", "--to", "9.2 GHz");
+        Assert.Equal(ExitCodes.BadInput, bad.Code);
+        Assert.Contains("upper frequency above its lower", bad.Err);
     }
 }

@@ -69,6 +69,7 @@ public static class DesignCommand
         if (json)
         {
             output.Write(DesignJson.ToText(report));
+            foreach (string c in report.Cautions) error.WriteLine($"caution: {c}");
         }
         else
         {
@@ -93,13 +94,13 @@ public static class DesignCommand
     }
 
     /// <summary>Runs the pipeline with the slot cache (when given), printing progress to <paramref name="error"/>.</summary>
-    internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error)
+    internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error, AnalysisOptions? options = null)
     {
         int loaded = cache?.Load(request, error) ?? 0;
         error.WriteLine(string.Format(Inv, "designing '{0}': {1} slots at {2:0.####} GHz, analysing {3:0.####} to {4:0.####} GHz{5} ...",
             request.Name, request.Slots.Count, request.DesignFrequency.Gigahertz, request.BandLow.Gigahertz, request.BandHigh.Gigahertz,
             cache is null ? "" : string.Format(Inv, " ({0} slot table(s) from the cache)", loaded)));
-        var result = ArrayPipeline.Run(request);
+        var result = ArrayPipeline.Run(request, options);
         cache?.Save(error);
         return result;
     }
@@ -109,6 +110,8 @@ public static class DesignCommand
         var p = r.Pattern;
         var m = r.Match;
         o.WriteLine($"{r.Name}: {r.Slots.Count} slots, {r.Inputs.FeedType}, {r.Inputs.TaperDescription}, {r.Inputs.SlotModelName}");
+        o.WriteLine("  " + SummaryMarkdown.VerdictLine(r).Replace("**", "", StringComparison.Ordinal));
+        foreach (string x in r.SafetyExceedances) o.WriteLine($"  SAFETY LIMIT EXCEEDED: {x}");
         o.WriteLine(string.Format(Inv, "  S11 at {0:0.####} GHz     {1:0.00} dB (VSWR {2:0.000})", r.FrequencyHz * 1e-9, m.S11DbAtDesign, m.VswrAtDesign));
         o.WriteLine(string.Format(Inv, "  VSWR <= 1.5 / 2 band   {0:0.0} / {1:0.0} MHz", m.BandwidthVswr15Hz * 1e-6, m.BandwidthVswr2Hz * 1e-6));
         o.WriteLine(string.Format(Inv, "  beam, HPBW             {0:0.00} deg, {1:0.00} deg", Math.Round(p.BeamDeg, 2) + 0.0, p.HpbwDeg));
@@ -141,6 +144,12 @@ public static class DesignCommand
         foreach (var q in r.Requirements)
             o.WriteLine($"  {(q.Passed ? "PASS" : "FAIL")}  {q.Description}: required {q.Required}, achieved {q.Achieved}");
         if (r.Tolerance.Count > 0) o.WriteLine($"  tolerance              {r.Tolerance[0]}");
+        if (r.Eirp is { } eirp)
+        {
+            if (eirp.PeakW is { } pk) o.WriteLine(string.Format(Inv, "  EIRP peak, beam axis   {0:0.00} dBW", 10 * Math.Log10(pk)));
+            if (eirp.AverageW is { } av) o.WriteLine(string.Format(Inv, "  EIRP average           {0:0.00} dBW", 10 * Math.Log10(av)));
+        }
+        foreach (string caution in r.Cautions) o.WriteLine($"  caution: {caution}");
         o.WriteLine($"  wrote {folder}/: {string.Join(", ", OutputFolder.Files.Select(f => f.Name))}");
     }
 }

@@ -38,6 +38,12 @@ public sealed record DesignReport
     /// <summary>Figures at each frequency of the band, in increasing frequency.</summary>
     public required IReadOnlyList<SweepPoint> Sweep { get; init; }
 
+    /// <summary>
+    /// The input match alone over the match span (wide enough to show the VSWR band edges unless a span was asked for),
+    /// in increasing frequency; empty when not computed (the writers then use <see cref="Sweep"/>).
+    /// </summary>
+    public IReadOnlyList<MatchPoint> MatchSweep { get; init; } = [];
+
     /// <summary>What the user asked for, in words, for the report's inputs section.</summary>
     public required InputsSummary Inputs { get; init; }
 
@@ -46,6 +52,12 @@ public sealed record DesignReport
 
     /// <summary>Safety cautions, one paragraph each; when empty the summary prints the standard caution.</summary>
     public IReadOnlyList<string> Cautions { get; init; } = [];
+
+    /// <summary>Safety limits exceeded (e.g. the peak power above the derated waveguide handling), one sentence each; printed first. May be empty.</summary>
+    public IReadOnlyList<string> SafetyExceedances { get; init; } = [];
+
+    /// <summary>EIRP on the beam axis at the design frequency for the transmitter's powers; null without a transmitter.</summary>
+    public EirpReport? Eirp { get; init; }
 
     /// <summary>One pass/fail result per requirement of the spec; may be empty.</summary>
     public IReadOnlyList<RequirementResult> Requirements { get; init; } = [];
@@ -61,6 +73,16 @@ public sealed record DesignReport
 
     /// <summary><c>coupling: mutual</c>: the coupled and isolated-slot designs side by side; null otherwise.</summary>
     public CouplingReport? Coupling { get; init; }
+}
+
+/// <summary>EIRP = P G on the beam axis at the design frequency (IEEE Std 145-2013 definition, from memory).</summary>
+public sealed record EirpReport
+{
+    /// <summary>EIRP at the peak transmitter power, W; null when no peak power was given.</summary>
+    public double? PeakW { get; init; }
+
+    /// <summary>EIRP at the average transmitter power, W; null when no average power was given.</summary>
+    public double? AverageW { get; init; }
 }
 
 /// <summary>The matched load of a travelling-wave array.</summary>
@@ -278,6 +300,16 @@ public sealed record SweepPoint
 
     /// <summary>Edge slots: peak cross-polarised level relative to the co-polar peak, dB; null otherwise.</summary>
     public double? CrossPolarDb { get; init; }
+}
+
+/// <summary>The input reflection at one frequency of the match sweep.</summary>
+public sealed record MatchPoint
+{
+    /// <summary>Frequency, Hz.</summary>
+    public required double FrequencyHz { get; init; }
+
+    /// <summary>Input reflection coefficient at the feed port, normalised to the guide's TE10 wave impedance.</summary>
+    public required System.Numerics.Complex S11 { get; init; }
 }
 
 /// <summary>The outcome of one requirement of the spec.</summary>

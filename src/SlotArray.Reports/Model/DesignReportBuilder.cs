@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Numerics;
+using SlotArray.Core;
 using SlotArray.Core.Design;
 using SlotArray.Core.Fabrication;
 using SlotArray.Core.Network;
@@ -65,6 +66,7 @@ public static class DesignReportBuilder
             if (b is { } band && (band.LowLimited || band.HighLimited))
                 warnings.Add(string.Create(Inv, $"the VSWR ≤ {band.VswrLimit:0.0#} band reaches the edge of the search range ({band.Low} to {band.High}): it is at least as wide as reported"));
         var (requirements, requirementWarnings) = Requirements(result);
+        var cautions = Cautions(result);
         warnings.AddRange(requirementWarnings);
 
         return new DesignReport
@@ -125,6 +127,9 @@ public static class DesignReportBuilder
                 HpbwDeg = p.Metrics.HalfPowerBeamwidth.Degrees,
                 CrossPolarDb = p.CrossPolar?.PeakLevelDb,
             })],
+            MatchSweep = result.MatchSweep is { } ms
+                ? [.. ms.Points.Select(n => new MatchPoint { FrequencyHz = n.Frequency.Hertz, S11 = n.S11 })]
+                : [],
             Inputs = new InputsSummary
             {
                 SlotType = SlotTypeName(request.Slots.Type),
@@ -135,7 +140,13 @@ public static class DesignReportBuilder
                 CutTolerance = tolerance,
             },
             Warnings = warnings,
-            Cautions = Cautions(result),
+            Cautions = cautions.Select(c => c.Message).ToList(),
+            SafetyExceedances = [.. cautions.Where(c => c.Code.EndsWith("-exceeded", StringComparison.Ordinal)).Select(c => c.Message)],
+            Eirp = request.Transmitter is { } tx ? new EirpReport
+            {
+                PeakW = tx.PeakPower is { } pk ? EffectiveRadiatedPower.Watts(pk, atDesign.GainDbi) : null,
+                AverageW = tx.AveragePower is { } av ? EffectiveRadiatedPower.Watts(av, atDesign.GainDbi) : null,
+            } : null,
             Requirements = requirements,
             Load = result.TravellingWave is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
             TravellingWave = result.TravellingWave is { } t ? TravellingWaveOf(result, t) : null,
@@ -326,11 +337,11 @@ public static class DesignReportBuilder
         static double Peak(NetworkSolution n) => Math.Max(n.PeakModeVoltage, 1 + n.S11.Magnitude);
     }
 
-    private static List<string> Cautions(ArrayResult result)
+    private static List<DesignWarning> Cautions(ArrayResult result)
     {
         var request = result.Request;
         var design = result.Design;
-        if (request.Transmitter is not { } tx) return [SafetyCautions.Standard.Message];
+        if (request.Transmitter is not { } tx) return [SafetyCautions.Standard];
         ExposureAssessment? exposure = null;
         if (tx.AveragePower is { } avg)
         {
@@ -339,19 +350,19 @@ public static class DesignReportBuilder
             exposure = ExposureAssessment.Assess(avg, result.AtDesign.GainDbi, design.DesignFrequency, length, width);
         }
         PowerHandling? power = null;
-        var extra = new List<string>();
+        var extra = new List<DesignWarning>();
         if (tx.PeakPower is { } peak)
         {
             var (k, at) = StandingWavePeak(result);
             power = PowerHandling.Assess(design.Guide, design.DesignFrequency, vswr: 1.0, standingWaveFieldFactor: Math.Min(k, 2), peakPower: peak);
-            extra.Add(string.Create(Inv,
+            extra.Add(new DesignWarning("standing-wave-peak", string.Create(Inv,
                 $"The standing-wave peak-field factor {k:0.###} is this array's own: the largest mode voltage anywhere on the line (slotted section and feed), relative to the incident wave, over the design frequency and the sweep (worst at {at.Gigahertz:0.####} GHz); it includes the reflection at the feed, so no separate VSWR factor is applied, and it replaces the blanket factor 2 of a full standing wave.")
-                + (k > 2 ? " It exceeds 2, the largest factor the power check takes, so the margin above is optimistic: treat the design as over-stressed." : ""));
+                + (k > 2 ? " It exceeds 2, the largest factor the power check takes, so the margin above is optimistic: treat the design as over-stressed." : "")));
         }
-        var list = SafetyCautions.For(exposure, power).Select(c => c.Message).ToList();
+        var list = SafetyCautions.For(exposure, power).ToList();
         list.AddRange(extra);
         if (tx.AveragePower is null)
-            list.Add("No average power was given (transmitter.average_power), so no RF exposure screen was made.");
+            list.Add(new DesignWarning("exposure-not-screened", "No average power was given (transmitter.average_power), so no RF exposure screen was made."));
         return list;
     }
 

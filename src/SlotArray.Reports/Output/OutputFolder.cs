@@ -30,8 +30,8 @@ public static class OutputFolder
         new("pattern.svg", (r, s) => PlotExport.Write(DesignPlots.Pattern(r), s, "svg")),
         new("taper.png", (r, s) => PlotExport.Write(DesignPlots.Taper(r), s, "png")),
         new("slots.png", (r, s) => PlotExport.Write(DesignPlots.Slots(r), s, "png")),
-        new("sweep.png", (r, s) => PlotExport.Write(DesignPlots.Sweep(r), s, "png")),
-        new("scan.png", (r, s) => PlotExport.Write(ScanPlot.Build(r), s, "png")),
+        new("sweep.png", (r, s) => PlotExport.Write(DesignPlots.Sweep(r), s, "png", 900, DesignPlots.SweepHeight)),
+        new("scan.png", (r, s) => PlotExport.Write(ScanPlot.Build(r), s, "png", 900, ScanPlot.Height(r))),
         new("input.s1p", Text(TouchstoneWriter.Write)),
         new("summary.md", Text(SummaryMarkdown.Write)),
     ];

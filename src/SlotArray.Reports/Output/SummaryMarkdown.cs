@@ -23,6 +23,11 @@ public static class SummaryMarkdown
 
         L($"# {Escape(report.Name)}: slotted-waveguide array design");
         L();
+        L(VerdictLine(report));
+        foreach (var q in report.Requirements.Where(q => !q.Passed))
+            L($"- not met: {Escape(q.Description)}: required {Escape(q.Required)}, achieved {Escape(q.Achieved)}");
+        foreach (string x in report.SafetyExceedances) L($"- **SAFETY LIMIT EXCEEDED**: {Escape(x)}");
+        L();
         L("## Inputs");
         L();
         L("| item | value |");
@@ -63,6 +68,11 @@ public static class SummaryMarkdown
         {
             double worst = report.Sweep.Max(s => Complex.Abs(s.S11));
             L($"| worst VSWR over the sweep ({Invariant.Ghz(report.Sweep[0].FrequencyHz)} to {Invariant.Ghz(report.Sweep[^1].FrequencyHz)} GHz) | {Invariant.Fixed((1 + worst) / (1 - worst), 3)} | |");
+        }
+        if (report.Eirp is { } eirp)
+        {
+            if (eirp.PeakW is { } pk) L($"| EIRP on the beam axis at the peak transmitter power (P G) | {Invariant.Fixed(Dbw(pk), 2)} | dBW ({Watts(pk)}) |");
+            if (eirp.AverageW is { } av) L($"| EIRP on the beam axis at the average transmitter power (P G) | {Invariant.Fixed(Dbw(av), 2)} | dBW ({Watts(av)}) |");
         }
         if (p.CrossPolarDb is { } xpol)
             L($"| peak cross-polar level (edge-slot tilts, no polarisation filter) at {Invariant.Fixed(p.CrossPolarDirectionDeg ?? double.NaN, 1)} deg | {Invariant.Fixed(xpol, 2)} | dB |");
@@ -131,6 +141,22 @@ public static class SummaryMarkdown
             L(Escape(cautions[k]));
         }
     }
+
+    /// <summary>
+    /// The verdict line that opens the summary: "**Requirements: PASS** (n of n met)", "**Requirements: FAIL** (k of n
+    /// met)", or "Requirements: none given".
+    /// </summary>
+    public static string VerdictLine(DesignReport report)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        int n = report.Requirements.Count, met = report.Requirements.Count(q => q.Passed);
+        if (n == 0) return "**Requirements: none given** (no pass/fail verdict).";
+        return $"**Requirements: {(met == n ? "PASS" : "FAIL")}** ({Invariant.Int(met)} of {Invariant.Int(n)} met).";
+    }
+
+    private static double Dbw(double watts) => watts > 0 ? 10 * Math.Log10(watts) : double.NegativeInfinity;
+
+    private static string Watts(double w) => w >= 1e6 ? $"{Invariant.Fixed(w * 1e-6, 3)} MW" : w >= 1e3 ? $"{Invariant.Fixed(w * 1e-3, 3)} kW" : $"{Invariant.Fixed(w, 3)} W";
 
     /// <summary>Most rows of the frequency-scan table (evenly spaced over the sweep, both ends included).</summary>
     public const int ScanRows = 11;
