@@ -26,10 +26,46 @@ public static class DesignCommand
         var outDir = OutputOption();
         var json = new Option<bool>("--json") { Description = "Print design.json on stdout (messages stay on stderr)" };
         var (cacheDir, noCache) = CacheOptions();
-        var cmd = new Command("design", "Synthesise the array, analyse it across the band and write every output file") { spec, outDir, json, cacheDir, noCache };
-        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), pr.GetValue(json), CacheOf(pr, cacheDir, noCache), output, error));
+        var (drawing, revision, date, sheet) = DocumentOptions();
+        var cmd = new Command("design", "Synthesise the array, analyse it across the band and write every output file")
+        {
+            spec, outDir, json, cacheDir, noCache, drawing, revision, date, sheet,
+        };
+        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), pr.GetValue(json), CacheOf(pr, cacheDir, noCache),
+            DocumentOf(pr, pr.GetValue(spec)!, drawing, revision, date, sheet), output, error));
         return cmd;
     }
+
+    /// <summary>The fabrication-document options: <c>--drawing-number</c>, <c>--revision</c>, <c>--date</c>, <c>--sheet</c>.</summary>
+    internal static (Option<string?> Drawing, Option<string> Revision, Option<string?> Date, Option<string> Sheet) DocumentOptions()
+    {
+        var drawing = new Option<string?>("--drawing-number") { Description = "Drawing number on the cut list, drawing and DXF files (default: the spec's name)" };
+        var revision = new Option<string>("--revision") { Description = "Revision letter(s), A to ZZ (default A)", DefaultValueFactory = _ => "A" };
+        revision.Validators.Add(r =>
+        {
+            if (r.Tokens.Count == 1 && !System.Text.RegularExpressions.Regex.IsMatch(r.Tokens[0].Value, "^[A-Z]{1,2}$"))
+                r.AddError($"--revision must be one or two capital letters (A, B, ... AA), got '{r.Tokens[0].Value}'");
+        });
+        var date = new Option<string?>("--date") { Description = "Issue date printed on the documents, YYYY-MM-DD (never read from the clock: runs stay byte-identical)" };
+        date.Validators.Add(r =>
+        {
+            if (r.Tokens.Count == 1 && !DateOnly.TryParseExact(r.Tokens[0].Value, "yyyy-MM-dd", Inv, DateTimeStyles.None, out _))
+                r.AddError($"--date must be a date YYYY-MM-DD, got '{r.Tokens[0].Value}'");
+        });
+        var sheet = new Option<string>("--sheet") { Description = "Drawing sheet size (ISO 216, landscape)", DefaultValueFactory = _ => "A3" };
+        sheet.AcceptOnlyFromAmong("A4", "A3", "A1", "A0");
+        return (drawing, revision, date, sheet);
+    }
+
+    /// <summary>The document details the options give, with the spec file's SHA-256 (none when the file is missing).</summary>
+    internal static DocumentInfo DocumentOf(ParseResult pr, string specPath, Option<string?> drawing, Option<string> revision, Option<string?> date, Option<string> sheet) => new()
+    {
+        DrawingNumber = pr.GetValue(drawing),
+        Revision = pr.GetValue(revision) ?? "A",
+        Date = pr.GetValue(date),
+        Sheet = pr.GetValue(sheet) ?? "A3",
+        SpecSha256 = File.Exists(specPath) ? Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(File.ReadAllBytes(specPath))) : null,
+    };
 
     /// <summary>The slot-cache options shared with <c>sweep</c>: <c>--cache-dir DIR</c> and <c>--no-cache</c>.</summary>
     internal static (Option<string?> Dir, Option<bool> Off) CacheOptions() => (
@@ -49,13 +85,13 @@ public static class DesignCommand
     /// <summary>The default output folder of a spec named <paramref name="name"/>: <c>out/&lt;name&gt;</c>.</summary>
     internal static string DefaultFolder(string name) => Path.Combine("out", name);
 
-    private static int Run(string path, string? outDir, bool json, SlotCache? cache, TextWriter output, TextWriter error)
+    private static int Run(string path, string? outDir, bool json, SlotCache? cache, DocumentInfo document, TextWriter output, TextWriter error)
     {
         var request = Load(path, error, out int code);
         if (request is null) return code;
         var clock = Stopwatch.StartNew();
         var result = Analyse(request, cache, error);
-        var report = DesignReportBuilder.Build(result);
+        var report = DesignReportBuilder.Build(result, document);
         if (request.Tolerance is { } tol)
         {
             // The short tolerance summary of issue 7 (the full output is the tolerance command's).
@@ -63,7 +99,7 @@ public static class DesignCommand
             report = report with { Tolerance = Reports.ToleranceSummary.Lines(Core.Tolerance.ToleranceAnalysis.Run(result)) };
         }
         string folder = outDir ?? DefaultFolder(request.Name);
-        error.WriteLine($"writing {OutputFolder.Files.Count} files to {folder}/ ...");
+        error.WriteLine($"writing {OutputFolder.NamesFor(report).Count} files to {folder}/ ...");
         OutputFolder.WriteAll(report, folder);
         foreach (string w in report.Warnings) error.WriteLine($"warning: {w}");
         if (json)
@@ -150,6 +186,6 @@ public static class DesignCommand
             if (eirp.AverageW is { } av) o.WriteLine(string.Format(Inv, "  EIRP average           {0:0.00} dBW", 10 * Math.Log10(av)));
         }
         foreach (string caution in r.Cautions) o.WriteLine($"  caution: {caution}");
-        o.WriteLine($"  wrote {folder}/: {string.Join(", ", OutputFolder.Files.Select(f => f.Name))}");
+        o.WriteLine($"  wrote {folder}/: {string.Join(", ", OutputFolder.NamesFor(r))}");
     }
 }

@@ -53,6 +53,13 @@ public sealed record DesignReport
     /// <summary>Safety cautions, one paragraph each; when empty the summary prints the standard caution.</summary>
     public IReadOnlyList<string> Cautions { get; init; } = [];
 
+    /// <summary>The fabrication plan (datum A on the tube's end face, features, per-dimension tolerances, thermal
+    /// expansion) the cut list, drawing and DXF files print; null in reports built without one (those writers then refuse).</summary>
+    public Core.Fabrication.FabricationPlan? Fabrication { get; init; }
+
+    /// <summary>Drawing number, revision, date, tool version and spec checksum printed on the cut list and the drawing.</summary>
+    public DocumentInfo Document { get; init; } = DocumentInfo.Unnamed;
+
     /// <summary>Safety limits exceeded (e.g. the peak power above the derated waveguide handling), one sentence each; printed first. May be empty.</summary>
     public IReadOnlyList<string> SafetyExceedances { get; init; } = [];
 
@@ -73,6 +80,36 @@ public sealed record DesignReport
 
     /// <summary><c>coupling: mutual</c>: the coupled and isolated-slot designs side by side; null otherwise.</summary>
     public CouplingReport? Coupling { get; init; }
+}
+
+/// <summary>
+/// What identifies the fabrication documents: drawing number, revision, date (given by the user, never read from the
+/// clock, so runs stay byte-identical), tool version and the spec's SHA-256.
+/// </summary>
+public sealed record DocumentInfo
+{
+    /// <summary>No drawing number, revision A, no date, no spec checksum.</summary>
+    public static DocumentInfo Unnamed { get; } = new();
+
+    /// <summary>Drawing number; null: the writers use the array name.</summary>
+    public string? DrawingNumber { get; init; }
+
+    /// <summary>Revision letter, "A" for the first issue; a revised cut list advances it and flags the changed rows.</summary>
+    public string Revision { get; init; } = "A";
+
+    /// <summary>Issue date as given on the command line (e.g. 2026-12-05); null: "not dated".</summary>
+    public string? Date { get; init; }
+
+    /// <summary>The tool's version (the assembly's informational version).</summary>
+    public string ToolVersion { get; init; } = typeof(DocumentInfo).Assembly
+        .GetCustomAttributes(typeof(System.Reflection.AssemblyInformationalVersionAttribute), false)
+        .OfType<System.Reflection.AssemblyInformationalVersionAttribute>().FirstOrDefault()?.InformationalVersion ?? "unknown";
+
+    /// <summary>SHA-256 of the spec file's bytes, lower-case hex; null when the report was not built from a file.</summary>
+    public string? SpecSha256 { get; init; }
+
+    /// <summary>Sheet size of the drawing: "A4", "A3" (default), "A1" or "A0" (ISO 216, landscape).</summary>
+    public string Sheet { get; init; } = "A3";
 }
 
 /// <summary>EIRP = P G on the beam axis at the design frequency (IEEE Std 145-2013 definition, from memory).</summary>

@@ -19,7 +19,7 @@ namespace SlotArray.Reports.Model;
 /// <item>Positions: slot centres from the longitudinal datum, the inner face of the end short at z = 0 (the designer's
 /// z axis, architecture.md "Axes"); offsets signed, positive toward the +x side wall.</item>
 /// <item>Lengths: the equivalent rectangular length the slot model resonated, and the overall tip-to-tip length by
-/// <see cref="CutList.Build"/> (round ends from the spec's cutter by the equal-area rule of <see cref="RoundEndedSlot"/>,
+/// <see cref="FabricationPlan.Build"/> (round ends from the spec's cutter by the equal-area rule of <see cref="RoundEndedSlot"/>,
 /// physics-reference §9.1; square ends without a cutter).</item>
 /// <item>Amplitudes: the target is the taper weight, the achieved one the magnitude of the network's slot excitation
 /// <see cref="NetworkSolution.Excitations"/> at the design frequency; both are normalised so that their largest
@@ -46,8 +46,9 @@ public static class DesignReportBuilder
 
     /// <summary>Builds the report of one pipeline run.</summary>
     /// <param name="result">The pipeline's result.</param>
+    /// <param name="document">Drawing number, revision, date and spec checksum for the fabrication documents; null: <see cref="DocumentInfo.Unnamed"/>.</param>
     /// <exception cref="Core.InfeasibleDesignException">A slot cannot be cut as designed (it reaches the side wall, or the cutter is wider than the slot).</exception>
-    public static DesignReport Build(ArrayResult result)
+    public static DesignReport Build(ArrayResult result, DocumentInfo? document = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         var request = result.Request;
@@ -55,12 +56,12 @@ public static class DesignReportBuilder
         var guide = design.Guide;
         var f0 = design.DesignFrequency;
         double tolerance = CutTolerance(request.Tolerance);
-        var cut = CutListOf(request, design, tolerance);
+        var plan = FabricationPlan.Build(request, design);
         var atDesign = result.AtDesign;
-        var slots = Slots(result, cut);
+        var slots = Slots(result, plan);
 
         var warnings = result.Warnings.Select(w => w.Message).ToList();
-        warnings.AddRange(cut.Notes.Where(n => n.Code != "cutlist-datum").Select(n => n.Message));
+        warnings.AddRange(plan.Notes.Select(n => n.Message));
         if (request.Coupling == CouplingMode.None) warnings.Add(NoMutualCouplingNote);
         foreach (var b in new[] { result.BandVswr15, result.BandVswr2 })
             if (b is { } band && (band.LowLimited || band.HighLimited))
@@ -136,10 +137,12 @@ public static class DesignReportBuilder
                 FeedType = FeedName(request.Feed),
                 TaperDescription = TaperName(request.Taper, result.Taper.Method),
                 SlotModelName = SlotModelName(design.SlotModelName),
-                DatumDescription = DatumName(cut.Datums),
+                DatumDescription = DatumName(request.Feed.Type),
                 CutTolerance = tolerance,
             },
             Warnings = warnings,
+            Fabrication = plan,
+            Document = document ?? DocumentInfo.Unnamed,
             Cautions = cautions.Select(c => c.Message).ToList(),
             SafetyExceedances = [.. cautions.Where(c => c.Code.EndsWith("-exceeded", StringComparison.Ordinal)).Select(c => c.Message)],
             Eirp = request.Transmitter is { } tx ? new EirpReport
@@ -199,21 +202,7 @@ public static class DesignReportBuilder
         return values.Length > 0 ? values.Min() : GeneralTolerances.PrecisionMilling.Meters;
     }
 
-    private static CutList CutListOf(ArrayRequest request, ArrayDesign design, double tolerance)
-    {
-        var g = design.Guide;
-        bool tilt = design.CouplingKind == SlotCouplingKind.Tilt;
-        var inputs = design.Slots.Select(s => new SlotCutInput(s.Index, s.Position,
-            tilt ? null : Length.FromMeters(s.Coupling), tilt ? Angle.FromRadians(s.Coupling) : null,
-            s.Length, s.Width, request.Slots.Cutter, Length.FromMeters(tolerance))).ToList();
-        // Travelling wave: the matched load sits at z = 0, so the datum is the inner face of the load-end flange.
-        var datums = request.Feed.Type == FeedType.TravellingWave
-            ? Datums.Default with { Longitudinal = LongitudinalDatumKind.LoadFlangeInnerFace }
-            : Datums.Default;
-        return CutList.Build(new CutListGuide(g.BroadWall, g.NarrowWall, g.WallThickness), inputs, datums);
-    }
-
-    private static List<SlotReport> Slots(ArrayResult result, CutList cut)
+    private static List<SlotReport> Slots(ArrayResult result, FabricationPlan plan)
     {
         var design = result.Design;
         var e = result.AtDesign.Network.Excitations;
@@ -225,7 +214,7 @@ public static class DesignReportBuilder
         for (int i = 0; i < design.Count; i++)
         {
             var s = design.Slots[i];
-            var row = cut.Rows[i];
+            var row = plan.Slots[i].Row;
             double phase = (e[i].Phase - phase0) * 180 / Math.PI;
             phase = Math.IEEERemainder(phase, 360);
             list.Add(new SlotReport
@@ -366,12 +355,9 @@ public static class DesignReportBuilder
         return list;
     }
 
-    private static string DatumName(Datums d) => d.Longitudinal switch
-    {
-        LongitudinalDatumKind.EndShortInnerFace => "inner face of the end short",
-        LongitudinalDatumKind.LoadFlangeInnerFace => "inner face of the load-end flange (matched load)",
-        _ => "feed flange face",
-    };
+    private static string DatumName(FeedType feed) => feed == FeedType.TravellingWave
+        ? "inner face of the load-end flange (matched load)"
+        : "inner face of the end short";
 
     private static string TerminationName(TerminationKind k) => k switch
     {
