@@ -23,6 +23,7 @@ public static class CommandLine
             DesignCommand.Build(output, error),
             SweepCommand.Build(output, error),
             ToleranceCommand.Build(output, error),
+            SchemaCommand.Build(output, error),
         };
         return root;
     }
