@@ -44,6 +44,11 @@ public static class CommandLine
             error.WriteLine($"infeasible: {e.Message}");
             return ExitCodes.Infeasible;
         }
+        catch (Core.Slots.Tables.SlotTableException e)
+        {
+            error.WriteLine(e.Line > 0 ? $"slot table, line {e.Line}: {e.Message}" : $"slot table: {e.Message}");
+            return ExitCodes.BadInput;
+        }
         catch (UserInputException e)
         {
             error.WriteLine(e.Message);
