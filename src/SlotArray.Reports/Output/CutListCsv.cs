@@ -28,6 +28,9 @@ public static class CutListCsv
     public const string TiltSignRule =
         "tilt_deg is measured from the direction across the narrow face (square to the tube axis); + when the slot's end in the upper broad wall lies farther from datum A than its end in the lower broad wall (narrow face seen from outside, datum A on the left, upper broad wall at the top: + turns clockwise)";
 
+    /// <summary>Column added when the design comes from a user's slot table: "in table" or "outside" (extrapolated).</summary>
+    public const string SlotTableColumn = "slot_table";
+
     /// <summary>Writes the cut list of <paramref name="report"/>.</summary>
     /// <exception cref="ArgumentException">The report has no fabrication plan, or its slots mix offsets and tilts.</exception>
     public static void Write(DesignReport report, TextWriter writer)
@@ -35,6 +38,7 @@ public static class CutListCsv
         bool tilt = UsesTilt(report);
         var plan = PlanOf(report);
         var columns = tilt ? TiltColumns : OffsetColumns;
+        if (report.SlotData is not null) columns = [.. columns.Take(columns.Count - 1), SlotTableColumn, columns[^1]];   // "changed" stays last
         var g = report.Guide;
         var d = report.Document;
         var t = plan.Tolerances;
@@ -64,6 +68,11 @@ public static class CutListCsv
         }
         comments.Add($"# changed: yes where the row differs from the previous revision ({(plan.Changed.Count == 0 ? "none: first issue or no change" : Invariant.Int(plan.Changed.Count) + " changed")})");
         comments.Add($"# normalisation: {Invariant.Normalisation}");
+        if (report.SlotData is { } sd)
+        {
+            comments.Add($"# slot data: {sd.File} (SHA-256 {sd.Sha256}); {sd.Range}; {SlotTableColumn}: \"outside\" marks a slot extrapolated beyond the table");
+            comments.AddRange(sd.Provenance.Select(p => $"# slot data provenance: {p}"));
+        }
 
         foreach (string c in comments) Record(writer, [c, .. Enumerable.Repeat("", columns.Count - 1)]);
         Record(writer, columns);
@@ -92,13 +101,14 @@ public static class CutListCsv
         [
             Invariant.Mm(r.OverallLength.Meters), Invariant.Mm(s.LengthTolerance.Value), Invariant.Mm(r.Width.Meters), Invariant.Mm(s.WidthTolerance.Value),
             r.End.Form == Core.Fabrication.SlotEndForm.Round ? "round" : "square", r.EndRadius is { } er ? Invariant.Mm(er.Meters) : "",
-            plan.Changed.Contains(s.Key) ? "yes" : "no",
         ];
+        string[] flag = report.SlotData is null ? [] : [report.Slots.FirstOrDefault(x => x.Index == r.Slot)?.OutsideSlotTable == true ? "outside" : "in table"];
+        string[] changed = [plan.Changed.Contains(s.Key) ? "yes" : "no"];
         string depth = Invariant.Mm(r.DepthOfCut?.Meters ?? 0);
         string[] middle = tilt
             ? [Invariant.Fixed(r.Tilt!.Value.Degrees, 3), Invariant.Fixed(s.TiltTolerance!.Value * 180 / Math.PI, 3), depth, depth, Invariant.Mm(s.CutDepthTolerance!.Value)]
             : [Invariant.Mm(r.Offset!.Value.Meters), Invariant.Mm(s.OffsetTolerance!.Value), Side(r.Offset.Value.Meters), Invariant.Mm(g.Wall + g.A / 2 + r.Offset.Value.Meters)];
-        return [.. head, .. middle, .. tail];
+        return [.. head, .. middle, .. tail, .. flag, .. changed];
     }
 
     private static string Thermal(FabricationPlan plan) =>
