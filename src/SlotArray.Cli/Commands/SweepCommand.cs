@@ -51,25 +51,27 @@ public static class SweepCommand
             };
             if (options.MatchLow is { } lo && options.MatchHigh is { } hi && !(hi > lo))
                 throw new UserInputException($"--from {lo} --to {hi}: the match sweep needs its upper frequency above its lower one");
-            return Run(pr.GetValue(spec)!, pr.GetValue(outDir), options, pr.GetValue(json), DesignCommand.CacheOf(pr, cacheDir, noCache), output, error);
+            return Run(pr.GetValue(spec)!, pr.GetValue(outDir), options, pr.GetValue(json), DesignCommand.CacheOf(pr, cacheDir, noCache), output, error,
+                pr.GetValue(CommandLine.Quiet) || pr.GetValue(json));
         });
         return cmd;
     }
 
-    private static int Run(string path, string? outDir, AnalysisOptions options, bool json, SlotCache? cache, TextWriter output, TextWriter error)
+    private static int Run(string path, string? outDir, AnalysisOptions options, bool json, SlotCache? cache, TextWriter output, TextWriter error, bool quiet)
     {
         var request = DesignCommand.Load(path, error, out int code);
         if (request is null) return code;
         ArrayResult result;
         try
         {
-            result = DesignCommand.Analyse(request, cache, error, options);
+            result = DesignCommand.Analyse(request, cache, error, ProgressDisplay.Allowed(error, quiet), options);
         }
         catch (ArgumentOutOfRangeException e) when (e.ParamName == "options")
         {
             throw new UserInputException(e.Message.Split(" (Parameter", 2)[0]);
         }
         var report = DesignReportBuilder.Build(result);
+        CommandLine.Cancellation.ThrowIfCancellationRequested();
         string folder = outDir ?? DesignCommand.DefaultFolder(request.Name);
         AtomicFile.Write(Path.Combine(folder, "sweep.png"), s => PlotExport.Write(DesignPlots.Sweep(report), s, "png", 900, DesignPlots.SweepHeight));
         AtomicFile.Write(Path.Combine(folder, "input.s1p"), s =>
