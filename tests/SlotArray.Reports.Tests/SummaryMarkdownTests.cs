@@ -56,6 +56,16 @@ public class SummaryMarkdownTests
     }
 
     [Fact]
+    public void Summary_names_datum_A_and_the_tube_length_of_the_fabrication_plan()
+    {
+        var r = ReportFixture.Eight();
+        string md = Text(r);
+        Assert.Contains($"| datum A | {r.Fabrication!.Datum} |", md);
+        Assert.Contains($"| tube length, datum A (the tube's machined end face) to its far end | {(r.Fabrication.TubeLength.Meters * 1e3).ToString("0.000", CultureInfo.InvariantCulture)} | mm |", md);
+        Assert.Contains("| datum A to z = 0 (cutlist.csv, layout and DXF positions are z + this) | 1.270 | mm |", md);   // the end-short plate, as thick as the 1.27 mm wall
+    }
+
+    [Fact]
     public void Summary_has_one_pass_fail_line_per_requirement()
     {
         var r = ReportFixture.Eight();

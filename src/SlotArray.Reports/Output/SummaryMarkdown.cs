@@ -40,7 +40,7 @@ public static class SummaryMarkdown
         L($"| feed | {Escape(i.FeedType)} |");
         L($"| taper | {Escape(i.TaperDescription)} |");
         L($"| slot model | {Escape(i.SlotModelName)} |");
-        L($"| datum | {Escape(i.DatumDescription)} |");
+        L($"| datum A | {Escape(report.Fabrication?.Datum ?? i.DatumDescription)} |");
         L($"| cut tolerance | ± {Invariant.Mm(i.CutTolerance)} mm |");
         L();
         if (report.SlotData is { } sd)
@@ -66,9 +66,14 @@ public static class SummaryMarkdown
         L("| --- | ---: | --- |");
         L($"| guide wavelength at the design frequency | {Invariant.Mm(g.GuideWavelength)} | mm |");
         L($"| TE10 wave impedance | {Invariant.Fixed(g.WaveImpedanceOhm, 2)} | Ω |");
-        L($"| termination: {Escape(report.Termination.Type)}, its inner face (datum A) to the centre of slot 1 | {Invariant.Mm(report.Termination.Distance)} | mm |");
-        if (report.Termination.FeedPosition is { } feed) L($"| feed reference plane from datum A | {Invariant.Mm(feed)} | mm |");
-        if (report.Termination.FarShortPosition is { } far) L($"| second end short (inner face) from datum A | {Invariant.Mm(far)} | mm |");
+        L($"| termination: {Escape(report.Termination.Type)}, its plane (z = 0) to the centre of slot 1 | {Invariant.Mm(report.Termination.Distance)} | mm |");
+        if (report.Termination.FeedPosition is { } feed) L($"| feed reference plane from z = 0 | {Invariant.Mm(feed)} | mm |");
+        if (report.Termination.FarShortPosition is { } far) L($"| second end short (inner face) from z = 0 | {Invariant.Mm(far)} | mm |");
+        if (report.Fabrication is { } plan)
+        {
+            L($"| tube length, datum A (the tube's machined end face) to its far end | {Invariant.Mm(plan.TubeLength.Meters)} | mm |");
+            L($"| datum A to z = 0 (cutlist.csv, layout and DXF positions are z + this) | {Invariant.Mm(plan.DesignOrigin.Meters)} | mm |");
+        }
         L($"| beam direction from broadside | {Invariant.Fixed(p.BeamDeg, 2)} | deg |");
         L($"| half-power beamwidth | {Invariant.Fixed(p.HpbwDeg, 2)} | deg |");
         L($"| peak sidelobe (design level {Invariant.Fixed(p.DesignSidelobeDb, 1)} dB) | {Invariant.Fixed(p.PeakSidelobeDb, 2)} | dB |");
@@ -115,7 +120,7 @@ public static class SummaryMarkdown
         L();
         L("## Slots");
         L();
-        L($"Positions from datum A ({Escape(i.DatumDescription)}); {Invariant.Normalisation}; amplitudes linear, each normalised to its largest value; phase in degrees.");
+        L($"Positions z from the {Escape(i.DatumDescription)} (z = 0; the cut list gives them from datum A, the tube's end face); {Invariant.Normalisation}; amplitudes linear, each normalised to its largest value; phase in degrees.");
         L();
         if (tilt)
         {
