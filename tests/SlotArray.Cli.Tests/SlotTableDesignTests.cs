@@ -81,8 +81,8 @@ public class SlotTableDesignTests
         var rows = DesignRuns.CsvRecords(Path.Combine(dir, "out2", "cutlist.csv"));
         int tilt = Array.IndexOf(rows[0], "tilt_deg");
         foreach (var r in rows.Skip(1))
-            Assert.Equal(Math.Abs(double.Parse(r[tilt], System.Globalization.CultureInfo.InvariantCulture)) < 12 - 1e-9 ? "outside" : "in table", r[^1]);
-        Assert.Contains(rows.Skip(1), r => r[^1] == "outside");
+            Assert.Equal(Math.Abs(double.Parse(r[tilt], System.Globalization.CultureInfo.InvariantCulture)) < 12 - 1e-9 ? "outside" : "in table", r[^2]);   // before the revision flag
+        Assert.Contains(rows.Skip(1), r => r[^2] == "outside");
         Assert.Contains("(outside table)", File.ReadAllText(Path.Combine(dir, "out2", "summary.md")));
     }
 
