@@ -59,8 +59,8 @@ public static class SweepCommand
 
     private static int Run(string path, string? outDir, AnalysisOptions options, bool json, SlotCache? cache, TextWriter output, TextWriter error, bool quiet)
     {
-        var request = DesignCommand.Load(path, error, out int code);
-        if (request is null) return code;
+        var request = DesignCommand.Load(path, error);
+        string folder = OutputFolderCheck.Prepare(outDir ?? DesignCommand.DefaultFolder(request.Name), replacesWhole: false);
         ArrayResult result;
         try
         {
@@ -72,7 +72,6 @@ public static class SweepCommand
         }
         var report = DesignReportBuilder.Build(result);
         CommandLine.Cancellation.ThrowIfCancellationRequested();
-        string folder = outDir ?? DesignCommand.DefaultFolder(request.Name);
         AtomicFile.Write(Path.Combine(folder, "sweep.png"), s => PlotExport.Write(DesignPlots.Sweep(report), s, "png", 900, DesignPlots.SweepHeight));
         AtomicFile.Write(Path.Combine(folder, "input.s1p"), s =>
         {
