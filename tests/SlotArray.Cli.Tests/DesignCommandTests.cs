@@ -48,10 +48,41 @@ internal static class DesignRuns
 
         """ + extra);
 
-    /// <summary>The data records of cutlist.csv (RFC 4180, CRLF, no quoted fields in data rows): header row, then one per slot.</summary>
-    public static List<string[]> CsvRecords(string path) =>
-        [.. File.ReadAllText(path).Split("\r\n", StringSplitOptions.RemoveEmptyEntries)
-            .Where(l => !l.StartsWith('#') && !l.StartsWith("\"#", StringComparison.Ordinal)).Select(l => l.Split(','))];
+    /// <summary>The column-header record of cutlist.csv, then its slot records (RFC 4180, CRLF); comment and feature records left out.</summary>
+    public static List<string[]> CsvRecords(string path)
+    {
+        var all = Records(File.ReadAllText(path)).Where(r => !r[0].StartsWith('#')).ToList();
+        return [all[0], .. all.Skip(1).Where(r => r[0] == "slot")];
+    }
+
+    /// <summary>Every record of an RFC 4180 text (IETF RFC 4180, 2005, §2: quoted fields with doubled quotes, CRLF record ends).</summary>
+    public static List<string[]> Records(string text)
+    {
+        var records = new List<string[]>();
+        var fields = new List<string>();
+        var field = new System.Text.StringBuilder();
+        bool quoted = false;
+        for (int i = 0; i < text.Length; i++)
+        {
+            char c = text[i];
+            if (quoted)
+            {
+                if (c == '"' && i + 1 < text.Length && text[i + 1] == '"') { field.Append('"'); i++; }
+                else if (c == '"') quoted = false;
+                else field.Append(c);
+            }
+            else if (c == '"') quoted = true;
+            else if (c == ',') { fields.Add(field.ToString()); field.Clear(); }
+            else if (c == '\r' && i + 1 < text.Length && text[i + 1] == '\n')
+            {
+                fields.Add(field.ToString()); field.Clear();
+                records.Add([.. fields]); fields.Clear();
+                i++;
+            }
+            else field.Append(c);
+        }
+        return records;
+    }
 
     public static double Mm(string field) => double.Parse(field, CultureInfo.InvariantCulture) * 1e-3;
 }
@@ -87,7 +118,7 @@ public class DesignCommandTests(DemoRuns demo) : IClassFixture<DemoRuns>
     public void Demo_designs_with_exit_0_and_writes_every_file()
     {
         Assert.True(demo.FirstRun.Code == ExitCodes.Ok, demo.FirstRun.Err);
-        string[] files = ["design.json", "cutlist.csv", "layout.svg", "pattern.png", "pattern.svg", "taper.png", "slots.png", "sweep.png", "scan.png", "input.s1p", "summary.md"];
+        string[] files = ["design.json", "cutlist.csv", "layout.svg", "face-broad.dxf", "pattern.png", "pattern.svg", "taper.png", "slots.png", "sweep.png", "scan.png", "input.s1p", "summary.md"];
         Assert.Equal(files.Order(StringComparer.Ordinal), Directory.GetFiles(demo.First).Select(Path.GetFileName).Order(StringComparer.Ordinal));
         Assert.Contains("S11 at 9.41 GHz", demo.FirstRun.Out);
         Assert.Contains("designing 'harbour-surveillance-16'", demo.FirstRun.Err);   // progress on stderr
@@ -137,29 +168,36 @@ public class DesignCommandTests(DemoRuns demo) : IClassFixture<DemoRuns>
         var g = json.GetProperty("guide");
         double a = g.GetProperty("a_m").GetDouble(), t = g.GetProperty("wall_m").GetDouble();
         var rows = DesignRuns.CsvRecords(Path.Combine(demo.First, "cutlist.csv"));
-        Assert.Equal(["slot", "position_mm", "offset_mm", "side", "from_datum_wall_mm", "length_mm", "width_mm", "end", "tolerance_mm"], rows[0]);
+        Assert.Equal(["feature", "slot", "z_from_A_mm", "z_tol_mm", "offset_mm", "offset_tol_mm", "side", "from_B_at_nominal_wall_mm",
+            "length_mm", "length_tol_mm", "width_mm", "width_tol_mm", "end", "end_radius_mm", "changed"], rows[0]);
         var slots = json.GetProperty("slots").EnumerateArray().ToList();
+        var fab = json.GetProperty("fabrication");
+        double origin = fab.GetProperty("datum_to_design_origin_m").GetDouble();
+        Check.Absolute(t, origin, 1e-15, "end-short plate as thick as the wall, flush at datum A (layout rule)");
         Assert.Equal(slots.Count, rows.Count - 1);
         for (int i = 0; i < slots.Count; i++)
         {
             var s = slots[i];
             var r = rows[i + 1];
             const double mm3 = 0.5e-6;   // the CSV prints mm with 3 decimals
-            Assert.Equal(s.GetProperty("index").GetInt32(), int.Parse(r[0], CultureInfo.InvariantCulture));
-            Check.Absolute(s.GetProperty("position_m").GetDouble(), DesignRuns.Mm(r[1]), mm3, "same slot in design.json");
+            Assert.Equal(s.GetProperty("index").GetInt32(), int.Parse(r[1], CultureInfo.InvariantCulture));
+            Check.Absolute(s.GetProperty("position_m").GetDouble() + origin, DesignRuns.Mm(r[2]), mm3, "same slot in design.json, from datum A");
             double x = s.GetProperty("offset_m").GetDouble();
-            Check.Absolute(x, DesignRuns.Mm(r[2]), mm3, "same slot in design.json");
-            Assert.Equal(x > 0 ? "+x" : "-x", r[3]);
-            // physics-reference §9.3: transverse position from the outside of the −x side wall = t + a/2 + x
-            Check.Absolute(t + a / 2 + x, DesignRuns.Mm(r[4]), mm3, "physics-reference §9.3 datum rule");
-            Check.Absolute(s.GetProperty("overall_length_m").GetDouble(), DesignRuns.Mm(r[5]), mm3, "overall length in both");
-            // physics-reference §9.1 equal-area rule, cutter = width: L_o = L_eq + (1 − π/4) w
+            Check.Absolute(x, DesignRuns.Mm(r[4]), mm3, "same slot in design.json");
+            Assert.Equal(x > 0 ? "+x" : "-x", r[6]);
+            // transverse position from the outside of the −x side wall = t + a/2 + x (baseline from datum B)
+            Check.Absolute(t + a / 2 + x, DesignRuns.Mm(r[7]), mm3, "datum B rule");
+            Check.Absolute(s.GetProperty("overall_length_m").GetDouble(), DesignRuns.Mm(r[8]), mm3, "overall length in both");
+            // equal-area rule, cutter = width: L_o = L_eq + (1 − π/4) w (common practice, no source)
             double w = s.GetProperty("width_m").GetDouble();
-            Check.Absolute(s.GetProperty("length_m").GetDouble() + (1 - Math.PI / 4) * w, s.GetProperty("overall_length_m").GetDouble(), 1e-12, "physics-reference §9.1 [C]");
-            Check.Absolute(w, DesignRuns.Mm(r[6]), mm3, "same slot in design.json");
-            Assert.Equal("round", r[7]);
-            Assert.Equal("0.020", r[8]);   // the demo's tightest tolerance (offset ±0.02 mm)
+            Check.Absolute(s.GetProperty("length_m").GetDouble() + (1 - Math.PI / 4) * w, s.GetProperty("overall_length_m").GetDouble(), 1e-12, "equal-area rule");
+            Check.Absolute(w, DesignRuns.Mm(r[10]), mm3, "same slot in design.json");
+            Assert.Equal("round", r[12]);
+            // the demo's own tolerances (arrays/harbour-surveillance-16.yaml: position ±0.03, offset ±0.02, length ±0.03, width ±0.02 mm)
+            Assert.Equal(["0.030", "0.020", "0.030", "0.020"], new[] { r[3], r[5], r[9], r[11] });
         }
+        string text = File.ReadAllText(Path.Combine(demo.First, "cutlist.csv"));
+        Assert.Contains("spec SHA-256 " + Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(File.ReadAllBytes(RepoFiles.Demo))), text);
     }
 
     [Fact]
@@ -174,11 +212,11 @@ public class DesignCommandTests(DemoRuns demo) : IClassFixture<DemoRuns>
     [Fact]
     public void Pngs_decode_and_carry_text_and_the_svg_names_its_font()
     {
-        foreach (string name in new[] { "pattern.png", "taper.png", "slots.png", "sweep.png" })
+        foreach (var (name, height) in new[] { ("pattern.png", 520), ("taper.png", 520), ("slots.png", 520), ("sweep.png", Reports.Plots.DesignPlots.SweepHeight) })
         {
             using var bmp = SKBitmap.Decode(Path.Combine(demo.First, name));
             Assert.NotNull(bmp);
-            Assert.Equal((900, 520), (bmp.Width, bmp.Height));
+            Assert.Equal((900, height), (bmp.Width, bmp.Height));
             // The title is drawn in the top 40 px, centred: dark glyph pixels there mean text was rendered (fonts found).
             int dark = 0;
             for (int y = 0; y < 40; y++)
@@ -248,20 +286,42 @@ public class DesignCommandFailureTests
     }
 
     [Fact]
-    public void Sweep_writes_the_plot_and_touchstone_and_prints_one_row_per_frequency()
+    public void Sweep_writes_the_plot_and_touchstone_and_by_default_spans_past_the_vswr_band_edges()
     {
         string spec = DesignRuns.Spec("sweep", Wr90Head + "\nslots: {type: longitudinal, count: 8, width: 1.6 mm}\ntaper: {type: uniform}\n");
         string outDir = Path.Combine(Path.GetDirectoryName(spec)!, "out");
         var (code, output, err) = DesignRuns.Run("sweep", spec, "-o", outDir, "--no-cache");
         Assert.True(code == ExitCodes.Ok, err);
         Assert.Equal(["input.s1p", "sweep.png"], Directory.GetFiles(outDir).Select(Path.GetFileName).Order(StringComparer.Ordinal));
-        var rows = output.Split('\n').Select(l => l.Trim()).Where(l => l.StartsWith("9.", StringComparison.Ordinal)).ToList();
-        Assert.Equal(201, rows.Count);   // AnalysisOptions.Default.SweepPoints
-        Assert.StartsWith("9.350000 ", rows[0]);
-        Assert.StartsWith("9.400000 ", rows[^1]);
-        // Touchstone 1.1: option line and 201 data lines
+        var rows = output.Split('\n').Select(l => l.Trim()).Where(l => l.Length > 0 && char.IsDigit(l[0])).Select(l => l.Split(' ', StringSplitOptions.RemoveEmptyEntries)).ToList();
+        Assert.Equal(401, rows.Count);   // MatchSpan.DefaultPoints
+        // The default span shows where the VSWR leaves 2 on both sides (issue 13): both end rows read VSWR > 2, the best < 1.5.
+        double V(string[] row) => double.Parse(row[3], CultureInfo.InvariantCulture);
+        Assert.True(V(rows[0]) > 2 && V(rows[^1]) > 2, $"VSWR at the span ends {V(rows[0])}, {V(rows[^1])}");
+        Assert.True(rows.Min(V) < 1.5);
         var s1p = File.ReadAllLines(Path.Combine(outDir, "input.s1p"));
-        Assert.Single(s1p, l => l.StartsWith("# Hz S RI R ", StringComparison.Ordinal));
-        Assert.Equal(201, s1p.Count(l => l.Length > 0 && char.IsDigit(l[0])));
+        Assert.Single(s1p, l => l == "# Hz S RI R 1");
+        Assert.Equal(401, s1p.Count(l => l.Length > 0 && char.IsDigit(l[0])));
+    }
+
+    [Fact]
+    public void Sweep_takes_from_to_and_points_and_prints_json()
+    {
+        string spec = DesignRuns.Spec("sweepjson", Wr90Head + "\nslots: {type: longitudinal, count: 8, width: 1.6 mm}\ntaper: {type: uniform}\n");
+        string outDir = Path.Combine(Path.GetDirectoryName(spec)!, "out");
+        var (code, output, err) = DesignRuns.Run("sweep", spec, "-o", outDir, "--no-cache", "--from", "9.2 GHz", "--to", "9.6GHz", "--points", "5", "--json");
+        Assert.True(code == ExitCodes.Ok, err);
+        using var doc = System.Text.Json.JsonDocument.Parse(output);
+        var pts = doc.RootElement.GetProperty("points").EnumerateArray().ToList();
+        Assert.Equal([9.2e9, 9.3e9, 9.4e9, 9.5e9, 9.6e9], pts.Select(p => Math.Round(p.GetProperty("frequency_hz").GetDouble())));
+        foreach (var p in pts)
+        {
+            double mag = Math.Sqrt(Math.Pow(p.GetProperty("s11_re").GetDouble(), 2) + Math.Pow(p.GetProperty("s11_im").GetDouble(), 2));
+            // VSWR = (1 + |Γ|)/(1 − |Γ|), standard definition (Pozar, Microwave Engineering, eq. 2.41, from memory)
+            Check.Relative((1 + mag) / (1 - mag), p.GetProperty("vswr").GetDouble(), 1e-12, "VSWR from S11");
+        }
+        var bad = DesignRuns.Run("sweep", spec, "-o", outDir, "--no-cache", "--from", "9.6 GHz", "--to", "9.2 GHz");
+        Assert.Equal(ExitCodes.BadInput, bad.Code);
+        Assert.Contains("upper frequency above its lower", bad.Err);
     }
 }

@@ -33,7 +33,7 @@ public class DesignJsonTests
     public void Design_json_key_layout_is_frozen()
     {
         var root = Root(ReportFixture.Eight());
-        Assert.Equal(["name", "frequency_hz", "normalisation", "band", "guide", "slots", "termination", "pattern", "match", "sweep", "inputs", "requirements", "warnings", "cautions", "tolerance"], Keys(root));
+        Assert.Equal(["name", "frequency_hz", "normalisation", "band", "guide", "slots", "termination", "fabrication", "pattern", "match", "sweep", "inputs", "requirements", "warnings", "cautions", "tolerance"], Keys(root));
         Assert.Equal(["designation", "a_m", "b_m", "wall_m", "metal", "guide_wavelength_m", "wave_impedance_ohm"], Keys(root.GetProperty("guide")));
         Assert.Equal(["index", "position_m", "offset_m", "length_m", "overall_length_m", "width_m", "end", "conductance", "target_amplitude", "achieved_amplitude", "achieved_phase_deg"], Keys(root.GetProperty("slots")[0]));
         Assert.Equal(["beam_deg", "hpbw_deg", "peak_sidelobe_db", "first_sidelobe_db", "directivity_dbi", "gain_dbi", "design_sidelobe_db", "cut"], Keys(root.GetProperty("pattern")));
@@ -43,10 +43,11 @@ public class DesignJsonTests
     [Fact]
     public void Edge_slots_write_tilt_and_cut_depth_instead_of_offset()
     {
-        var slot = Root(ReportFixture.Eight(tilt: true)).GetProperty("slots")[0];
+        var r = ReportFixture.Eight(tilt: true);
+        var slot = Root(r).GetProperty("slots")[0];
         Assert.False(slot.TryGetProperty("offset_m", out _));
         Assert.Equal(8.0, slot.GetProperty("tilt_deg").GetDouble());
-        Assert.Equal(3.1e-3, slot.GetProperty("cut_depth_m").GetDouble());
+        Assert.Equal(r.Slots[0].CutDepth, slot.GetProperty("cut_depth_m").GetDouble());
     }
 
     [Fact]
@@ -80,7 +81,8 @@ public class DesignJsonTests
         Assert.Equal(r.Pattern.CutLevelDb, back.Pattern.CutLevelDb);
         Assert.Equal(r.Pattern.CutAngleDeg, back.Pattern.CutAngleDeg);
         Assert.Equal(r.Pattern with { CutAngleDeg = [], CutLevelDb = [] }, back.Pattern with { CutAngleDeg = [], CutLevelDb = [] });
-        Assert.Equal(DesignJson.ToText(r), DesignJson.ToText(back));
+        // the fabrication section is written from Core's plan and not read back
+        Assert.Equal(DesignJson.ToText(r with { Fabrication = null }), DesignJson.ToText(back));
     }
 
     [Fact]

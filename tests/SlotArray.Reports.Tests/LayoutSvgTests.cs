@@ -1,8 +1,13 @@
 using System.Globalization;
+using System.Text.RegularExpressions;
 using System.Xml.Linq;
 
 namespace SlotArray.Reports.Tests;
 
+/// <summary>
+/// layout.svg (issue 13): true scale on ISO 216 sheets (landscape), numbered sheets with match lines, ordinate
+/// dimensions from datum A, a title block with drawing number, revision, date (as given), scale and units.
+/// </summary>
 public class LayoutSvgTests
 {
     private static readonly XNamespace Svg = "http://www.w3.org/2000/svg";
@@ -10,96 +15,121 @@ public class LayoutSvgTests
     private static double Attr(XElement e, string name) =>
         double.Parse(e.Attribute(name)!.Value.Replace("mm", ""), NumberStyles.Float, CultureInfo.InvariantCulture);
 
-    // SVG 1.1 (W3C 2011) §7: width/height with unit "mm" plus a viewBox of the same numbers make one user unit 1 mm.
-    [Fact]
-    public void Sheet_is_true_scale_in_mm()
+    private static XElement Root(string text) => XDocument.Parse(text).Root!;
+
+    private static IEnumerable<XElement> Rects(XElement svg) => svg.Descendants(Svg + "rect");
+
+    // ISO 216:2007 sheet sizes (from memory): A4 210 × 297, A3 297 × 420, A1 594 × 841, A0 841 × 1189 mm; drawn landscape.
+    // SVG 1.1 (W3C 2011) §7: width/height in mm with a viewBox of the same numbers make one user unit 1 mm.
+    [Theory]
+    [InlineData("A4", 297, 210)]
+    [InlineData("A3", 420, 297)]
+    [InlineData("A1", 841, 594)]
+    [InlineData("A0", 1189, 841)]
+    public void Every_sheet_is_a_standard_size_at_true_scale(string sheet, double width, double height)
     {
-        var doc = XDocument.Parse(LayoutSvg.Build(ReportFixture.Eight()));
-        var svg = doc.Root!;
-        Assert.EndsWith("mm", svg.Attribute("width")!.Value);
-        Assert.EndsWith("mm", svg.Attribute("height")!.Value);
-        double[] box = [.. svg.Attribute("viewBox")!.Value.Split(' ').Select(v => double.Parse(v, CultureInfo.InvariantCulture))];
-        Assert.Equal([0, 0, Attr(svg, "width"), Attr(svg, "height")], box);
-        // every rectangle lies on the sheet
-        foreach (var rect in svg.Descendants(Svg + "rect").Where(r => r.Attribute("transform") is null))
+        var r = ReportFixture.Eight(count: 24) with { Document = new Model.DocumentInfo { Sheet = sheet } };
+        foreach (var (_, text) in LayoutSvg.Sheets(r))
         {
-            Assert.InRange(Attr(rect, "x"), 0, box[2]);
-            Assert.InRange(Attr(rect, "x") + Attr(rect, "width"), 0, box[2]);
-            Assert.InRange(Attr(rect, "y") + Attr(rect, "height"), 0, box[3]);
+            var svg = Root(text);
+            Assert.Equal($"{width:0.000}mm", svg.Attribute("width")!.Value);
+            Assert.Equal($"{height:0.000}mm", svg.Attribute("height")!.Value);
+            Assert.Equal($"0 0 {width:0.000} {height:0.000}", svg.Attribute("viewBox")!.Value);
+            // everything outside the clipped face view lies on the sheet
+            foreach (var rect in Rects(svg).Where(x => x.Attribute("transform") is null && x.Ancestors(Svg + "g").All(g => g.Attribute("clip-path") is null) && x.Parent!.Name != Svg + "clipPath"))
+            {
+                Assert.InRange(Attr(rect, "x"), 0, width);
+                Assert.InRange(Attr(rect, "x") + Attr(rect, "width"), 0, width);
+                Assert.InRange(Attr(rect, "y") + Attr(rect, "height"), 0, height);
+            }
         }
     }
 
     [Fact]
-    public void Face_outline_is_a_plus_two_walls_wide_and_slots_are_drawn_to_size()
+    public void Face_outline_is_a_plus_two_walls_wide_and_slots_are_drawn_to_size_from_datum_A()
     {
         var r = ReportFixture.Eight();
-        var svg = XDocument.Parse(LayoutSvg.Build(r)).Root!;
-        var face = svg.Descendants(Svg + "rect").Single(e => (string?)e.Attribute("id") == "face");
+        var svg = Root(LayoutSvg.Build(r));
+        var face = Rects(svg).Single(e => (string?)e.Attribute("id") == "face");
         Check.Absolute(22.86 + 2 * 1.27, Attr(face, "height"), 1e-3, "outside width a + 2·wall of WR-90 with a 1.27 mm wall");
-        var slots = svg.Descendants(Svg + "rect").Where(e => (string?)e.Attribute("class") == "slot").ToList();
-        Assert.Equal(r.Slots.Count, slots.Count);
+        Check.Absolute(r.Fabrication!.TubeLength.Meters * 1e3, Attr(face, "width"), 1e-3, "the tube, datum A to its far end");
         double faceX = Attr(face, "x"), cl = Attr(face, "y") + Attr(face, "height") / 2;
-        foreach (var s in r.Slots)
+        foreach (var s in r.Fabrication.Slots)
         {
-            var e = slots.Single(x => (string?)x.Attribute("id") == $"slot-{s.Index}");
-            Check.Absolute(s.OverallLength * 1e3, Attr(e, "width"), 1e-3, "overall length, true scale");
-            Check.Absolute(s.Position * 1e3, Attr(e, "x") + Attr(e, "width") / 2 - faceX, 1e-3, "slot centre from datum A");
-            Check.Absolute(-s.Offset!.Value * 1e3, Attr(e, "y") + Attr(e, "height") / 2 - cl, 1e-3, "offset from the centreline, +x up");
-            Check.Absolute(s.Width * 1e3 / 2, Attr(e, "rx"), 1e-3, "round ends: radius = width/2 (physics-reference §9.1)");
+            var e = Rects(svg).Single(x => (string?)x.Attribute("id") == $"slot-{s.Row.Slot}");
+            Check.Absolute(s.Row.OverallLength.Meters * 1e3, Attr(e, "width"), 1e-3, "overall length, true scale");
+            Check.Absolute(s.Position.Meters * 1e3, Attr(e, "x") + Attr(e, "width") / 2 - faceX, 1e-3, "slot centre from datum A");
+            Check.Absolute(-s.Row.Offset!.Value.Meters * 1e3, Attr(e, "y") + Attr(e, "height") / 2 - cl, 1e-3, "offset from the centreline, +x up");
+            Check.Absolute(s.Row.EndRadius!.Value.Meters * 1e3, Attr(e, "rx"), 1e-3, "round ends: radius = cutter radius");
         }
     }
 
     [Fact]
-    public void Sheet_carries_datum_title_block_dimensions_and_a_table_row_per_slot()
+    public void Ordinates_give_every_slot_once_with_its_cut_list_position_and_the_title_block_its_fields()
     {
-        var r = ReportFixture.Eight();
-        var svg = XDocument.Parse(LayoutSvg.Build(r)).Root!;
+        var r = ReportFixture.Eight() with { Document = new Model.DocumentInfo { DrawingNumber = "SA-0042", Revision = "B", Date = "2026-12-05" } };
+        var svg = Root(LayoutSvg.Build(r));
         var texts = svg.Descendants(Svg + "text").Select(t => t.Value).ToList();
-        Assert.Contains("DATUM A: inner face of end short", texts);
+        foreach (var s in r.Fabrication!.Slots)
+            Assert.Equal(2, texts.Count(t => t == (s.Position.Meters * 1e3).ToString("F3", CultureInfo.InvariantCulture)));   // one ordinate per slot, and its table cell
+        // ordinates are written along their extension lines (rotated), all reading from one baseline: no stacked dimension lines
+        var ordinates = svg.Descendants(Svg + "text").Where(t => (t.Attribute("transform")?.Value ?? "").StartsWith("rotate(-90", StringComparison.Ordinal)).ToList();
+        Assert.True(ordinates.Count >= r.Slots.Count);
+        Assert.Contains(texts, t => t.Contains("Drawing no. SA-0042   Revision B   Date 2026-12-05   Sheet A3"));
+        Assert.Contains(texts, t => t.Contains("Scale 1:1") && t.Contains("Units: mm"));
         Assert.Contains(texts, t => t.Contains("DO NOT SCALE"));
-        Assert.Contains(texts, t => t.Contains("Units: mm"));
-        Assert.Contains(texts, t => t.Contains("G0"));
+        Assert.Contains("SHEET 1 OF 1", texts);
         Assert.Contains(r.Name, texts);                   // escaped quote survives the XML round trip
-        foreach (var s in r.Slots)
+        Assert.DoesNotContain(texts, t => t.Contains("not dated"));
+        Assert.Contains(LayoutSvg.Build(ReportFixture.Eight()).Split('\n'), l => l.Contains("Date not dated"));   // never the clock
+    }
+
+    [Fact]
+    public void A_long_array_runs_across_numbered_sheets_joined_by_match_lines()
+    {
+        var r = ReportFixture.Eight(count: 56);   // 56 × λg/2 ≈ 1.25 m on A3
+        var sheets = LayoutSvg.Sheets(r);
+        Assert.True(sheets.Count >= 4, $"{sheets.Count} sheets");
+        Assert.Equal(Enumerable.Range(1, sheets.Count).Select(LayoutSvg.SheetName), sheets.Select(s => s.Name));
+        var centres = new List<string>();
+        for (int k = 0; k < sheets.Count; k++)
         {
-            string pos = (s.Position * 1e3).ToString("F3", CultureInfo.InvariantCulture);
-            Assert.Contains($"{pos} (slot {s.Index})", texts);                    // baseline dimension label
-            Assert.Contains((s.Offset!.Value * 1e3).ToString("F3", CultureInfo.InvariantCulture), texts); // table cell
+            var svg = Root(sheets[k].Text);
+            var texts = svg.Descendants(Svg + "text").Select(t => t.Value).ToList();
+            Assert.Contains($"SHEET {k + 1} OF {sheets.Count}", texts);
+            centres.AddRange(svg.Descendants(Svg + "line").Select(l => (string?)l.Attribute("id")).OfType<string>().Where(id => id.StartsWith("centre-", StringComparison.Ordinal)));
+            if (k + 1 < sheets.Count)
+            {
+                // the match line to the next sheet names the same distance from A as the next sheet's line back
+                string here = texts.Single(t => t.EndsWith($"SEE SHEET {k + 2}", StringComparison.Ordinal));
+                string there = Root(sheets[k + 1].Text).Descendants(Svg + "text").Select(t => t.Value).Single(t => t.EndsWith($"SEE SHEET {k + 1}", StringComparison.Ordinal));
+                Assert.Equal(Regex.Match(here, @"[0-9.]+").Value, Regex.Match(there, @"[0-9.]+").Value);
+                double at = double.Parse(Regex.Match(here, @"[0-9.]+").Value, CultureInfo.InvariantCulture);
+                // never through a slot: the break lies in a gap between cuts
+                Assert.All(r.Fabrication!.Slots, s => Assert.True(Math.Abs(s.Position.Meters * 1e3 - at) > s.Row.OverallLength.Meters * 1e3 / 2, $"slot {s.Row.Slot} straddles the match line at {at}"));
+            }
         }
-        Assert.Equal(2 * r.Slots.Count, svg.Descendants(Svg + "path").Count(p => (string?)p.Attribute("class") == "arrow"));
-    }
-
-    // Baseline dimensions stack one per level: no two labels share a y, so none collide.
-    [Fact]
-    public void Dimension_labels_do_not_share_a_line()
-    {
-        var svg = XDocument.Parse(LayoutSvg.Build(ReportFixture.Eight())).Root!;
-        var ys = svg.Descendants(Svg + "text").Where(t => t.Value.Contains("(slot ")).Select(t => Attr(t, "y")).ToList();
-        Assert.Equal(8, ys.Count);
-        var sorted = ys.Order().ToList();
-        for (int i = 1; i < sorted.Count; i++) Assert.True(sorted[i] - sorted[i - 1] >= 2.5 + 1, "label pitch exceeds the 2.5 mm text height");
+        Assert.Equal(Enumerable.Range(1, 56).Select(n => $"centre-{n}"), centres);   // every slot's centre on exactly one sheet
     }
 
     [Fact]
-    public void A_long_array_gives_one_valid_long_sheet()
+    public void Edge_slots_are_drawn_tilted_on_the_narrow_face_with_their_wraps()
     {
-        var r = ReportFixture.Eight(count: 56);   // 56 × λg/2 ≈ 1.25 m
-        var svg = XDocument.Parse(LayoutSvg.Build(r)).Root!;
-        Assert.True(Attr(svg, "width") > 1250, "sheet as long as the array");
-        Assert.Equal(56, svg.Descendants(Svg + "rect").Count(e => (string?)e.Attribute("class") == "slot"));
-    }
-
-    [Fact]
-    public void Edge_slots_are_drawn_tilted_on_the_narrow_face()
-    {
-        var svg = XDocument.Parse(LayoutSvg.Build(ReportFixture.Eight(tilt: true))).Root!;
-        var face = svg.Descendants(Svg + "rect").Single(e => (string?)e.Attribute("id") == "face");
+        var r = ReportFixture.Eight(tilt: true);
+        var svg = Root(LayoutSvg.Build(r));
+        var face = Rects(svg).Single(e => (string?)e.Attribute("id") == "face");
         Check.Absolute(10.16 + 2 * 1.27, Attr(face, "height"), 1e-3, "outside height b + 2·wall");
-        var slot1 = svg.Descendants(Svg + "rect").Single(e => (string?)e.Attribute("id") == "slot-1");
+        var slot1 = Rects(svg).Single(e => (string?)e.Attribute("id") == "slot-1");
         // + tilt: the end in the upper broad wall lies farther from datum A (clockwise on the sheet: SVG rotate is clockwise with y down).
         Assert.StartsWith("rotate(8.000 ", slot1.Attribute("transform")!.Value);
-        // The wraps into the folded-out broad walls are as deep as the cut depth (fixture: 3.1 mm for slot 1).
         foreach (string id in new[] { "wrap-upper-1", "wrap-lower-1" })
-            Check.Absolute(3.1, Attr(svg.Descendants(Svg + "rect").Single(e => (string?)e.Attribute("id") == id), "height"), 1e-3, "cut depth from the outer narrow-wall face");
+            Check.Absolute(r.Slots[0].CutDepth!.Value * 1e3, Attr(Rects(svg).Single(e => (string?)e.Attribute("id") == id), "height"), 1e-3, "cut depth from the outer narrow-wall face");
+    }
+
+    [Fact]
+    public void Drawing_is_byte_identical_run_to_run()
+    {
+        var r = ReportFixture.Eight(count: 30);
+        Assert.Equal(LayoutSvg.Sheets(r), LayoutSvg.Sheets(r));
     }
 }

@@ -1,4 +1,10 @@
 using System.Numerics;
+using CutList = SlotArray.Core.Fabrication.CutList;
+using CutListGuide = SlotArray.Core.Fabrication.CutListGuide;
+using FabricationPlan = SlotArray.Core.Fabrication.FabricationPlan;
+using FeatureTolerances = SlotArray.Core.Fabrication.FeatureTolerances;
+using SlotCutInput = SlotArray.Core.Fabrication.SlotCutInput;
+using SlotArray.Core.Quantities;
 using SlotArray.Reports.Model;
 
 namespace SlotArray.Reports.Tests;
@@ -44,6 +50,12 @@ internal static class ReportFixture
                 AchievedPhaseDeg = 0.4 * (i - 3.5),
             });
         }
+        var plan = PlanFor(slots, tilt);
+        for (int i = 0; i < slots.Count; i++)
+        {
+            var row = plan.Slots[i].Row;
+            slots[i] = slots[i] with { OverallLength = row.OverallLength.Meters, CutDepth = tilt ? row.DepthOfCut?.Meters ?? 0 : null };
+        }
         double[] angles = [.. Enumerable.Range(0, 181).Select(k => k - 90.0)];
         double[] levels = [.. angles.Select(t => Math.Max(-80, 20 * Math.Log10(Math.Abs(Sinc(8 * Math.Sin(t * Math.PI / 180) / 1.4)) + 1e-9)))];
         var sweep = new List<SweepPoint>();
@@ -77,6 +89,7 @@ internal static class ReportFixture
                 WaveImpedanceOhm = WaveImpedance,
             },
             Slots = slots,
+            Fabrication = plan,
             Termination = new TerminationReport { Type = "short", Distance = LambdaG / 4 },
             Pattern = new PatternReport
             {
@@ -108,6 +121,21 @@ internal static class ReportFixture
                 new RequirementResult { Description = "VSWR over the band", Required = "≤ 1.5", Achieved = "1.71 at 9.450 GHz", Passed = false },
             ],
         };
+    }
+
+    /// <summary>
+    /// The fabrication plan of the fixture's slots, laid out by Core (end short at z = 0 for offset slots, a flanged
+    /// matched-load end for edge slots; feed plane at the last slot; ±0.025 mm defaults; aluminium).
+    /// </summary>
+    public static FabricationPlan PlanFor(IReadOnlyList<SlotReport> slots, bool tilt)
+    {
+        var guide = new CutListGuide(Length.FromMillimeters(22.86), Length.FromMillimeters(10.16), Length.FromMillimeters(1.27));
+        var inputs = slots.Select(s => new SlotCutInput(s.Index, Length.FromMeters(s.Position),
+            tilt ? null : Length.FromMeters(s.Offset!.Value), tilt ? Angle.FromDegrees(s.TiltDeg!.Value) : null,
+            Length.FromMeters(s.Length), Length.FromMeters(SlotWidth), Length.FromMeters(SlotWidth), Length.FromMillimeters(0.025))).ToList();
+        var cut = CutList.Build(guide, inputs);
+        return FabricationPlan.Layout(cut, FeatureTolerances.From(null), tilt, Length.FromMeters(slots[^1].Position), null,
+            Length.FromMeters(LambdaG), "aluminium");
     }
 
     private static double Sinc(double x) => x == 0 ? 1 : Math.Sin(Math.PI * x) / (Math.PI * x);

@@ -29,6 +29,42 @@ public class SummaryMarkdownTests
         Assert.DoesNotContain(SummaryMarkdown.StandardCaution, md);
     }
 
+    // Issue 13: the verdict and any safety exceedance come first, before the inputs.
+    [Fact]
+    public void Summary_opens_with_the_verdict_then_the_unmet_requirements_and_safety_exceedances()
+    {
+        var r = ReportFixture.Eight() with { SafetyExceedances = ["Peak power 250 kW against a derated waveguide handling of 99 kW: exceeds it by 4.0 dB."] };
+        var lines = Text(r).Split('\n');
+        Assert.Equal("**Requirements: FAIL** (1 of 2 met).", lines[2]);
+        Assert.Equal("- not met: VSWR over the band: required ≤ 1.5, achieved 1.71 at 9.450 GHz", lines[3]);
+        Assert.StartsWith("- **SAFETY LIMIT EXCEEDED**: Peak power 250 kW", lines[4]);
+        Assert.True(Array.IndexOf(lines, "## Inputs") > 4);
+        var passing = ReportFixture.Eight() with { Requirements = [ReportFixture.Eight().Requirements[0]] };
+        Assert.Equal("**Requirements: PASS** (1 of 1 met).", Text(passing).Split('\n')[2]);
+        Assert.Equal("**Requirements: none given** (no pass/fail verdict).", Text(ReportFixture.Eight() with { Requirements = [] }).Split('\n')[2]);
+    }
+
+    [Fact]
+    public void Summary_gives_the_eirp_where_a_transmitter_is_given()
+    {
+        // EIRP = P G (IEEE Std 145-2013 definition, from memory): 25 kW and 15.3 dBi → 10 log10(25000) + 15.3 = 59.279 dBW.
+        var r = ReportFixture.Eight() with { Eirp = new Model.EirpReport { PeakW = 25e3 * Math.Pow(10, 1.53), AverageW = 20 * Math.Pow(10, 1.53) } };
+        string md = Text(r);
+        Assert.Contains($"| EIRP on the beam axis at the peak transmitter power (P G) | {(10 * Math.Log10(25e3) + 15.3).ToString("0.00", CultureInfo.InvariantCulture)} | dBW (847.110 kW) |", md);
+        Assert.Contains($"| EIRP on the beam axis at the average transmitter power (P G) | {(10 * Math.Log10(20) + 15.3).ToString("0.00", CultureInfo.InvariantCulture)} | dBW (677.688 W) |", md);
+        Assert.DoesNotContain("EIRP", Text(ReportFixture.Eight()));
+    }
+
+    [Fact]
+    public void Summary_names_datum_A_and_the_tube_length_of_the_fabrication_plan()
+    {
+        var r = ReportFixture.Eight();
+        string md = Text(r);
+        Assert.Contains($"| datum A | {r.Fabrication!.Datum} |", md);
+        Assert.Contains($"| tube length, datum A (the tube's machined end face) to its far end | {(r.Fabrication.TubeLength.Meters * 1e3).ToString("0.000", CultureInfo.InvariantCulture)} | mm |", md);
+        Assert.Contains("| datum A to z = 0 (cutlist.csv, layout and DXF positions are z + this) | 1.270 | mm |", md);   // the end-short plate, as thick as the 1.27 mm wall
+    }
+
     [Fact]
     public void Summary_has_one_pass_fail_line_per_requirement()
     {

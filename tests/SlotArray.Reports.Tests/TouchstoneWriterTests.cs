@@ -16,12 +16,14 @@ public class TouchstoneWriterTests
         Assert.Equal("", lines[^1]);                      // ends with a newline
         var body = lines[..^1];
         var options = body.Where(l => l.StartsWith('#')).ToList();
-        Assert.Equal(["# Hz S RI R 527.115"], options);  // Z_TE of WR-90 at 9.375 GHz, physics-reference §1.2
+        // Normalised: a waveguide-calibrated analyser reports S11 against the guide's own impedance, so R is 1 (issue 13).
+        Assert.Equal(["# Hz S RI R 1"], options);
         int optionAt = Array.IndexOf(body, options[0]);
         Assert.All(body[..optionAt], l => Assert.StartsWith("!", l));
         string comments = string.Join("\n", body[..optionAt]);
         Assert.Contains("normalised to the TE10 wave impedance", comments);
         Assert.Contains("reference plane is the feed port", comments);
+        Assert.Contains("527.115 ohm", comments);   // Z_TE of WR-90 at 9.375 GHz, physics-reference §1.2, stated in the comment
         var data = body[(optionAt + 1)..];
         Assert.Equal(r.Sweep.Count, data.Length);
         double last = 0;

@@ -70,7 +70,8 @@ public class TravellingWaveReportTests
         Assert.Equal(report.Load, back.Load);
         Assert.Equal(report.TravellingWave, back.TravellingWave);
         Assert.Equal(report.Pattern.CrossPolarDb, back.Pattern.CrossPolarDb);
-        Assert.Equal(json, DesignJson.ToText(back));
+        // the fabrication section is written from Core's plan and not read back
+        Assert.Equal(DesignJson.ToText(report with { Fabrication = null }), DesignJson.ToText(back));
     }
 
     [Fact]

@@ -28,11 +28,47 @@ public static class DesignCommand
         var outDir = OutputOption();
         var json = new Option<bool>("--json") { Description = "Print design.json on stdout (messages stay on stderr)" };
         var (cacheDir, noCache) = CacheOptions();
-        var cmd = new Command("design", "Synthesise the array, analyse it across the band and write every output file") { spec, outDir, json, cacheDir, noCache };
-        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), pr.GetValue(json), CacheOf(pr, cacheDir, noCache), output, error,
+        var (drawing, revision, date, sheet) = DocumentOptions();
+        var cmd = new Command("design", "Synthesise the array, analyse it across the band and write every output file")
+        {
+            spec, outDir, json, cacheDir, noCache, drawing, revision, date, sheet,
+        };
+        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), pr.GetValue(json), CacheOf(pr, cacheDir, noCache),
+            DocumentOf(pr, pr.GetValue(spec)!, drawing, revision, date, sheet), output, error,
             ProgressDisplay.Allowed(error, pr.GetValue(json) || pr.GetValue(CommandLine.Quiet))));
         return cmd;
     }
+
+    /// <summary>The fabrication-document options: <c>--drawing-number</c>, <c>--revision</c>, <c>--date</c>, <c>--sheet</c>.</summary>
+    internal static (Option<string?> Drawing, Option<string> Revision, Option<string?> Date, Option<string> Sheet) DocumentOptions()
+    {
+        var drawing = new Option<string?>("--drawing-number") { Description = "Drawing number on the cut list, drawing and DXF files (default: the spec's name)" };
+        var revision = new Option<string>("--revision") { Description = "Revision letter(s), A to ZZ (default A)", DefaultValueFactory = _ => "A" };
+        revision.Validators.Add(r =>
+        {
+            if (r.Tokens.Count == 1 && !System.Text.RegularExpressions.Regex.IsMatch(r.Tokens[0].Value, "^[A-Z]{1,2}$"))
+                r.AddError($"--revision must be one or two capital letters (A, B, ... AA), got '{r.Tokens[0].Value}'");
+        });
+        var date = new Option<string?>("--date") { Description = "Issue date printed on the documents, YYYY-MM-DD (never read from the clock: runs stay byte-identical)" };
+        date.Validators.Add(r =>
+        {
+            if (r.Tokens.Count == 1 && !DateOnly.TryParseExact(r.Tokens[0].Value, "yyyy-MM-dd", Inv, DateTimeStyles.None, out _))
+                r.AddError($"--date must be a date YYYY-MM-DD, got '{r.Tokens[0].Value}'");
+        });
+        var sheet = new Option<string>("--sheet") { Description = "Drawing sheet size (ISO 216, landscape)", DefaultValueFactory = _ => "A3" };
+        sheet.AcceptOnlyFromAmong("A4", "A3", "A1", "A0");
+        return (drawing, revision, date, sheet);
+    }
+
+    /// <summary>The document details the options give, with the spec file's SHA-256 (none when the file is missing).</summary>
+    internal static DocumentInfo DocumentOf(ParseResult pr, string specPath, Option<string?> drawing, Option<string> revision, Option<string?> date, Option<string> sheet) => new()
+    {
+        DrawingNumber = pr.GetValue(drawing),
+        Revision = pr.GetValue(revision) ?? "A",
+        Date = pr.GetValue(date),
+        Sheet = pr.GetValue(sheet) ?? "A3",
+        SpecSha256 = File.Exists(specPath) ? Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(File.ReadAllBytes(specPath))) : null,
+    };
 
     /// <summary>The slot-cache options shared with <c>sweep</c>: <c>--cache-dir DIR</c> and <c>--no-cache</c>.</summary>
     internal static (Option<string?> Dir, Option<bool> Off) CacheOptions() => (
@@ -52,13 +88,13 @@ public static class DesignCommand
     /// <summary>The default output folder of a spec named <paramref name="name"/>: <c>out/&lt;name&gt;</c>.</summary>
     internal static string DefaultFolder(string name) => Path.Combine("out", name);
 
-    private static int Run(string path, string? outDir, bool json, SlotCache? cache, TextWriter output, TextWriter error, bool progress)
+    private static int Run(string path, string? outDir, bool json, SlotCache? cache, DocumentInfo document, TextWriter output, TextWriter error, bool progress)
     {
         var request = Load(path, error);
         string folder = OutputFolderCheck.Prepare(outDir ?? DefaultFolder(request.Name), replacesWhole: true);
         var clock = Stopwatch.StartNew();
         var result = Analyse(request, cache, error, progress);
-        var report = DesignReportBuilder.Build(result);
+        var report = DesignReportBuilder.Build(result, document);
         if (request.Tolerance is { } tol)
         {
             // The short tolerance summary of issue 7 (the full output is the tolerance command's).
@@ -69,12 +105,13 @@ public static class DesignCommand
             report = report with { Tolerance = Reports.ToleranceSummary.Lines(mc) };
         }
         CommandLine.Cancellation.ThrowIfCancellationRequested();
-        error.WriteLine($"writing {OutputFolder.Files.Count} files to {folder}/ ...");
+        error.WriteLine($"writing {OutputFolder.NamesFor(report).Count} files to {folder}/ ...");
         OutputFolder.WriteAll(report, folder);
         foreach (string w in report.Warnings) error.WriteLine($"warning: {w}");
         if (json)
         {
             output.Write(DesignJson.ToText(report));
+            foreach (string c in report.Cautions) error.WriteLine($"caution: {c}");
         }
         else
         {
@@ -130,14 +167,14 @@ public static class DesignCommand
     /// Runs the pipeline with the slot cache (when given), printing what it does to <paramref name="error"/>, with a
     /// progress bar when <paramref name="progress"/>; Ctrl-C stops it (<see cref="CommandLine.Cancellation"/>).
     /// </summary>
-    internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error, bool progress)
+    internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error, bool progress, AnalysisOptions? options = null)
     {
         var source = SourceFor(request, cache, error, out int loaded);
         error.WriteLine(string.Format(Inv, "designing '{0}': {1} slots at {2:0.####} GHz, analysing {3:0.####} to {4:0.####} GHz{5} ...",
             request.Name, request.Slots.Count, request.DesignFrequency.Gigahertz, request.BandLow.Gigahertz, request.BandHigh.Gigahertz,
             cache is null ? "" : string.Format(Inv, " ({0} slot table(s) from the cache)", loaded)));
         var result = ProgressDisplay.Run(progress, sink => ArrayPipeline.Run(request,
-            AnalysisOptions.Default with { Progress = sink, Cancellation = CommandLine.Cancellation }, source));
+            (options ?? AnalysisOptions.Default) with { Progress = sink, Cancellation = CommandLine.Cancellation }, source));
         cache?.Save(request, source.Cache, error);
         return result;
     }
@@ -147,6 +184,8 @@ public static class DesignCommand
         var p = r.Pattern;
         var m = r.Match;
         o.WriteLine($"{r.Name}: {r.Slots.Count} slots, {r.Inputs.FeedType}, {r.Inputs.TaperDescription}, {r.Inputs.SlotModelName}");
+        o.WriteLine("  " + SummaryMarkdown.VerdictLine(r).Replace("**", "", StringComparison.Ordinal));
+        foreach (string x in r.SafetyExceedances) o.WriteLine($"  SAFETY LIMIT EXCEEDED: {x}");
         o.WriteLine(string.Format(Inv, "  S11 at {0:0.####} GHz     {1:0.00} dB (VSWR {2:0.000})", r.FrequencyHz * 1e-9, m.S11DbAtDesign, m.VswrAtDesign));
         o.WriteLine(string.Format(Inv, "  VSWR <= 1.5 / 2 band   {0:0.0} / {1:0.0} MHz", m.BandwidthVswr15Hz * 1e-6, m.BandwidthVswr2Hz * 1e-6));
         o.WriteLine(string.Format(Inv, "  beam, HPBW             {0:0.00} deg, {1:0.00} deg", Math.Round(p.BeamDeg, 2) + 0.0, p.HpbwDeg));
@@ -179,6 +218,12 @@ public static class DesignCommand
         foreach (var q in r.Requirements)
             o.WriteLine($"  {(q.Passed ? "PASS" : "FAIL")}  {q.Description}: required {q.Required}, achieved {q.Achieved}");
         if (r.Tolerance.Count > 0) o.WriteLine($"  tolerance              {r.Tolerance[0]}");
-        o.WriteLine($"  wrote {folder}/: {string.Join(", ", OutputFolder.Files.Select(f => f.Name))}");
+        if (r.Eirp is { } eirp)
+        {
+            if (eirp.PeakW is { } pk) o.WriteLine(string.Format(Inv, "  EIRP peak, beam axis   {0:0.00} dBW", 10 * Math.Log10(pk)));
+            if (eirp.AverageW is { } av) o.WriteLine(string.Format(Inv, "  EIRP average           {0:0.00} dBW", 10 * Math.Log10(av)));
+        }
+        foreach (string caution in r.Cautions) o.WriteLine($"  caution: {caution}");
+        o.WriteLine($"  wrote {folder}/: {string.Join(", ", OutputFolder.NamesFor(r))}");
     }
 }

@@ -19,6 +19,15 @@ public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFra
     /// <summary>The defaults.</summary>
     public static AnalysisOptions Default { get; } = new();
 
+    /// <summary>Lower edge of the match sweep (<see cref="ArrayResult.MatchSweep"/>); null: <see cref="MatchSpan.Default"/>.</summary>
+    public Frequency? MatchLow { get; init; }
+
+    /// <summary>Upper edge of the match sweep; null: <see cref="MatchSpan.Default"/>.</summary>
+    public Frequency? MatchHigh { get; init; }
+
+    /// <summary>Frequencies of the match sweep, ≥ 2; default <see cref="MatchSpan.DefaultPoints"/>.</summary>
+    public int MatchPoints { get; init; } = MatchSpan.DefaultPoints;
+
     /// <summary>Receives the progress of the long steps (band sweep, coupled iterations); null for none. Called from worker threads.</summary>
     public IProgress<WorkProgress>? Progress { get; init; }
 
@@ -66,6 +75,12 @@ public sealed record ArrayResult(
     /// coupled analysis.
     /// </summary>
     public CoupledTravellingWaveComparison? CoupledTravellingWave { get; init; }
+
+    /// <summary>
+    /// The input match alone (network, no pattern) over the match span (<see cref="MatchSpan"/>; by default wide
+    /// enough to show the VSWR band edges), with the analysis that made <see cref="Sweep"/>; null when not computed.
+    /// </summary>
+    public FrequencySweep? MatchSweep { get; init; }
 }
 
 /// <summary>
@@ -191,7 +206,10 @@ public static class ArrayPipeline
         var b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
             .Concat(outside).DistinctBy(w => w.Message).ToList();
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling };
+        var (mLo, mHi) = MatchSpan.Resolve(request, options, b15, b2);
+        if (options.MatchPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.MatchPoints, "the match sweep needs at least 2 points");
+        var match = ArrayNetwork.Sweep(design, analysis, mLo, mHi, options.MatchPoints);
+        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling, MatchSweep = match };
     }
 
     /// <summary>
@@ -215,6 +233,7 @@ public static class ArrayPipeline
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
         {
             Coupling = comparison,
+            MatchSweep = CoupledMatchSweep(request, options, design, analysis, sweep),
         };
     }
 
@@ -241,6 +260,15 @@ public static class ArrayPipeline
         {
             TravellingWave = result.Uncoupled with { Design = design },
             CoupledTravellingWave = comparison,
+            MatchSweep = CoupledMatchSweep(request, options, design, analysis, sweep),
         };
+    }
+
+    /// <summary>The match sweep of a coupled design, through the coupled network, over <see cref="MatchSpan.Resolve"/>.</summary>
+    private static FrequencySweep CoupledMatchSweep(ArrayRequest request, AnalysisOptions options, ArrayDesign design, IShuntSlotModel analysis, FrequencySweep sweep)
+    {
+        var (lo, hi) = MatchSpan.Resolve(request, options, sweep.Band(1.5), sweep.Band(2.0));
+        if (options.MatchPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.MatchPoints, "the match sweep needs at least 2 points");
+        return CoupledArrayNetwork.Sweep(design, analysis, lo, hi, options.MatchPoints);
     }
 }

@@ -81,20 +81,31 @@ public sealed record DesignFolder(string Name, GuideSection Guide, double Design
         }
     }
 
-    /// <summary>Reads the slot rows of a cut list (comment rows start with '#'; the header names the columns).</summary>
+    /// <summary>
+    /// Reads the slot rows of a cut list (comment rows start with '#'; the header names the columns). Positions come
+    /// back from the design's z = 0 (the end short's inner face): the cut list gives them from datum A, the tube's end
+    /// face, so the end short's own z (its "end short" row) is taken off; a cut list without that row has z = 0 at A.
+    /// </summary>
     public static IReadOnlyList<CutListSlot> ReadCutList(string path)
     {
         var rows = File.ReadAllLines(path).Where(l => l.Length > 0 && !l.TrimStart('"').StartsWith('#')).ToList();
         if (rows.Count < 2) throw new InvalidDataException($"{path}: no slot rows");
         var head = rows[0].Split(',').ToList();
         int Col(string name) => head.IndexOf(name) is int i and >= 0 ? i : throw new InvalidDataException($"{path}: no column '{name}' (is this a longitudinal-slot cut list?)");
-        int cSlot = Col("slot"), cPos = Col("position_mm"), cOff = Col("offset_mm"), cLen = Col("length_mm"), cW = Col("width_mm"), cEnd = Col("end");
+        int cSlot = Col("slot"), cPos = Col("z_from_A_mm"), cOff = Col("offset_mm"), cLen = Col("length_mm"), cW = Col("width_mm"), cEnd = Col("end");
+        double origin = 0;
+        string? shortRow = rows.FirstOrDefault(r => r.StartsWith("\"end short", StringComparison.Ordinal));
+        if (shortRow is not null)
+        {
+            var rest = shortRow[(shortRow.IndexOf("\",", StringComparison.Ordinal) + 2)..].Split(',');   // after the quoted feature name: slot, z, ...
+            origin = double.Parse(rest[cPos - 1], NumberStyles.Float, Inv);
+        }
         var list = new List<CutListSlot>();
-        foreach (var (row, n) in rows.Skip(1).Select((r, n) => (r, n + 2)))
+        foreach (var (row, n) in rows.Skip(1).Select((r, n) => (r, n + 2)).Where(x => x.r.StartsWith("slot,", StringComparison.Ordinal)))
         {
             var v = row.Split(',');
             double D(int c) => double.TryParse(v[c], NumberStyles.Float, Inv, out double x) ? x : throw new InvalidDataException($"{path}: row {n}: '{v[c]}' in {head[c]} is not a number");
-            list.Add(new CutListSlot(int.Parse(v[cSlot], Inv), D(cPos), D(cOff), D(cLen), D(cW), v[cEnd].Trim() == "round"));
+            list.Add(new CutListSlot(int.Parse(v[cSlot], Inv), D(cPos) - origin, D(cOff), D(cLen), D(cW), v[cEnd].Trim() == "round"));
         }
         return list;
     }

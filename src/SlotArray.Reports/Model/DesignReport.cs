@@ -38,6 +38,12 @@ public sealed record DesignReport
     /// <summary>Figures at each frequency of the band, in increasing frequency.</summary>
     public required IReadOnlyList<SweepPoint> Sweep { get; init; }
 
+    /// <summary>
+    /// The input match alone over the match span (wide enough to show the VSWR band edges unless a span was asked for),
+    /// in increasing frequency; empty when not computed (the writers then use <see cref="Sweep"/>).
+    /// </summary>
+    public IReadOnlyList<MatchPoint> MatchSweep { get; init; } = [];
+
     /// <summary>What the user asked for, in words, for the report's inputs section.</summary>
     public required InputsSummary Inputs { get; init; }
 
@@ -46,6 +52,19 @@ public sealed record DesignReport
 
     /// <summary>Safety cautions, one paragraph each; when empty the summary prints the standard caution.</summary>
     public IReadOnlyList<string> Cautions { get; init; } = [];
+
+    /// <summary>The fabrication plan (datum A on the tube's end face, features, per-dimension tolerances, thermal
+    /// expansion) the cut list, drawing and DXF files print; null in reports built without one (those writers then refuse).</summary>
+    public Core.Fabrication.FabricationPlan? Fabrication { get; init; }
+
+    /// <summary>Drawing number, revision, date, tool version and spec checksum printed on the cut list and the drawing.</summary>
+    public DocumentInfo Document { get; init; } = DocumentInfo.Unnamed;
+
+    /// <summary>Safety limits exceeded (e.g. the peak power above the derated waveguide handling), one sentence each; printed first. May be empty.</summary>
+    public IReadOnlyList<string> SafetyExceedances { get; init; } = [];
+
+    /// <summary>EIRP on the beam axis at the design frequency for the transmitter's powers; null without a transmitter.</summary>
+    public EirpReport? Eirp { get; init; }
 
     /// <summary>One pass/fail result per requirement of the spec; may be empty.</summary>
     public IReadOnlyList<RequirementResult> Requirements { get; init; } = [];
@@ -89,6 +108,46 @@ public sealed record SlotDataReport
 
     /// <summary>Leave-one-out residuals of the fits: RMS and largest ΔL_r/L_r, Δg_r/g_r (fractions) and |Δy|/g_r.</summary>
     public required IReadOnlyList<double> Residuals { get; init; }
+}
+
+/// <summary>
+/// What identifies the fabrication documents: drawing number, revision, date (given by the user, never read from the
+/// clock, so runs stay byte-identical), tool version and the spec's SHA-256.
+/// </summary>
+public sealed record DocumentInfo
+{
+    /// <summary>No drawing number, revision A, no date, no spec checksum.</summary>
+    public static DocumentInfo Unnamed { get; } = new();
+
+    /// <summary>Drawing number; null: the writers use the array name.</summary>
+    public string? DrawingNumber { get; init; }
+
+    /// <summary>Revision letter, "A" for the first issue; a revised cut list advances it and flags the changed rows.</summary>
+    public string Revision { get; init; } = "A";
+
+    /// <summary>Issue date as given on the command line (e.g. 2026-12-05); null: "not dated".</summary>
+    public string? Date { get; init; }
+
+    /// <summary>The tool's version (the assembly's informational version).</summary>
+    public string ToolVersion { get; init; } = typeof(DocumentInfo).Assembly
+        .GetCustomAttributes(typeof(System.Reflection.AssemblyInformationalVersionAttribute), false)
+        .OfType<System.Reflection.AssemblyInformationalVersionAttribute>().FirstOrDefault()?.InformationalVersion ?? "unknown";
+
+    /// <summary>SHA-256 of the spec file's bytes, lower-case hex; null when the report was not built from a file.</summary>
+    public string? SpecSha256 { get; init; }
+
+    /// <summary>Sheet size of the drawing: "A4", "A3" (default), "A1" or "A0" (ISO 216, landscape).</summary>
+    public string Sheet { get; init; } = "A3";
+}
+
+/// <summary>EIRP = P G on the beam axis at the design frequency (IEEE Std 145-2013 definition, from memory).</summary>
+public sealed record EirpReport
+{
+    /// <summary>EIRP at the peak transmitter power, W; null when no peak power was given.</summary>
+    public double? PeakW { get; init; }
+
+    /// <summary>EIRP at the average transmitter power, W; null when no average power was given.</summary>
+    public double? AverageW { get; init; }
 }
 
 /// <summary>The matched load of a travelling-wave array.</summary>
@@ -309,6 +368,16 @@ public sealed record SweepPoint
 
     /// <summary>Edge slots: peak cross-polarised level relative to the co-polar peak, dB; null otherwise.</summary>
     public double? CrossPolarDb { get; init; }
+}
+
+/// <summary>The input reflection at one frequency of the match sweep.</summary>
+public sealed record MatchPoint
+{
+    /// <summary>Frequency, Hz.</summary>
+    public required double FrequencyHz { get; init; }
+
+    /// <summary>Input reflection coefficient at the feed port, normalised to the guide's TE10 wave impedance.</summary>
+    public required System.Numerics.Complex S11 { get; init; }
 }
 
 /// <summary>The outcome of one requirement of the spec.</summary>

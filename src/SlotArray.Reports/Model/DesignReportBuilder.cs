@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Numerics;
+using SlotArray.Core;
 using SlotArray.Core.Design;
 using SlotArray.Core.Fabrication;
 using SlotArray.Core.Network;
@@ -19,7 +20,7 @@ namespace SlotArray.Reports.Model;
 /// <item>Positions: slot centres from the longitudinal datum, the inner face of the end short at z = 0 (the designer's
 /// z axis, architecture.md "Axes"); offsets signed, positive toward the +x side wall.</item>
 /// <item>Lengths: the equivalent rectangular length the slot model resonated, and the overall tip-to-tip length by
-/// <see cref="CutList.Build"/> (round ends from the spec's cutter by the equal-area rule of <see cref="RoundEndedSlot"/>,
+/// <see cref="FabricationPlan.Build"/> (round ends from the spec's cutter by the equal-area rule of <see cref="RoundEndedSlot"/>,
 /// physics-reference §9.1; square ends without a cutter).</item>
 /// <item>Amplitudes: the target is the taper weight, the achieved one the magnitude of the network's slot excitation
 /// <see cref="NetworkSolution.Excitations"/> at the design frequency; both are normalised so that their largest
@@ -44,8 +45,9 @@ public static class DesignReportBuilder
 
     /// <summary>Builds the report of one pipeline run.</summary>
     /// <param name="result">The pipeline's result.</param>
+    /// <param name="document">Drawing number, revision, date and spec checksum for the fabrication documents; null: <see cref="DocumentInfo.Unnamed"/>.</param>
     /// <exception cref="Core.InfeasibleDesignException">A slot cannot be cut as designed (it reaches the side wall, or the cutter is wider than the slot).</exception>
-    public static DesignReport Build(ArrayResult result)
+    public static DesignReport Build(ArrayResult result, DocumentInfo? document = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         var request = result.Request;
@@ -53,14 +55,14 @@ public static class DesignReportBuilder
         var guide = design.Guide;
         var f0 = design.DesignFrequency;
         double tolerance = CutTolerance(request.Tolerance);
-        var cut = CutListOf(request, design, tolerance);
+        var plan = FabricationPlan.Build(request, design);
         var atDesign = result.AtDesign;
-        var slots = Slots(result, cut);
+        var slots = Slots(result, plan);
         var outside = SlotTableRangeCheck.Outside(design, result.SlotModel).Select(o => o.Index).ToHashSet();
         slots = [.. slots.Select(s => outside.Contains(s.Index) ? s with { OutsideSlotTable = true } : s)];
 
         var warnings = result.Warnings.Select(w => w.Message).ToList();
-        warnings.AddRange(cut.Notes.Where(n => n.Code != "cutlist-datum").Select(n => n.Message));
+        warnings.AddRange(plan.Notes.Select(n => n.Message));
         if (request.Coupling == CouplingMode.None) warnings.Add(NoMutualCouplingNote);
         foreach (var b in new[] { result.BandVswr15, result.BandVswr2 })
             if (b is { } band && (band.LowLimited || band.HighLimited))
@@ -130,17 +132,28 @@ public static class DesignReportBuilder
                 HpbwDeg = p.Metrics.HalfPowerBeamwidth.Degrees,
                 CrossPolarDb = p.CrossPolar?.PeakLevelDb,
             })],
+            MatchSweep = result.MatchSweep is { } ms
+                ? [.. ms.Points.Select(n => new MatchPoint { FrequencyHz = n.Frequency.Hertz, S11 = n.S11 })]
+                : [],
             Inputs = new InputsSummary
             {
                 SlotType = SlotTypeName(request.Slots.Type),
                 FeedType = FeedName(request.Feed),
                 TaperDescription = TaperName(request.Taper, result.Taper.Method),
                 SlotModelName = SlotModelName(design.SlotModelName),
-                DatumDescription = DatumName(cut.Datums),
+                DatumDescription = DatumName(request.Feed.Type),
                 CutTolerance = tolerance,
             },
             Warnings = warnings,
+            Fabrication = plan,
+            Document = document ?? DocumentInfo.Unnamed,
             Cautions = [.. safety.Cautions.Select(c => c.Message)],
+            SafetyExceedances = [.. safety.Cautions.Where(c => c.Code.EndsWith("-exceeded", StringComparison.Ordinal)).Select(c => c.Message)],
+            Eirp = request.Transmitter is { } tx ? new EirpReport
+            {
+                PeakW = tx.PeakPower is { } pk ? EffectiveRadiatedPower.Watts(pk, atDesign.GainDbi) : null,
+                AverageW = tx.AveragePower is { } av ? EffectiveRadiatedPower.Watts(av, atDesign.GainDbi) : null,
+            } : null,
             Requirements = Requirements(verdicts, result),
             Load = result.TravellingWave is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
             TravellingWave = result.TravellingWave is { } t ? TravellingWaveOf(result, t) : null,
@@ -193,21 +206,7 @@ public static class DesignReportBuilder
         return values.Length > 0 ? values.Min() : GeneralTolerances.PrecisionMilling.Meters;
     }
 
-    private static CutList CutListOf(ArrayRequest request, ArrayDesign design, double tolerance)
-    {
-        var g = design.Guide;
-        bool tilt = design.CouplingKind == SlotCouplingKind.Tilt;
-        var inputs = design.Slots.Select(s => new SlotCutInput(s.Index, s.Position,
-            tilt ? null : Length.FromMeters(s.Coupling), tilt ? Angle.FromRadians(s.Coupling) : null,
-            s.Length, s.Width, request.Slots.Cutter, Length.FromMeters(tolerance))).ToList();
-        // Travelling wave: the matched load sits at z = 0, so the datum is the inner face of the load-end flange.
-        var datums = request.Feed.Type == FeedType.TravellingWave
-            ? Datums.Default with { Longitudinal = LongitudinalDatumKind.LoadFlangeInnerFace }
-            : Datums.Default;
-        return CutList.Build(new CutListGuide(g.BroadWall, g.NarrowWall, g.WallThickness), inputs, datums);
-    }
-
-    private static List<SlotReport> Slots(ArrayResult result, CutList cut)
+    private static List<SlotReport> Slots(ArrayResult result, FabricationPlan plan)
     {
         var design = result.Design;
         var e = result.AtDesign.Network.Excitations;
@@ -219,7 +218,7 @@ public static class DesignReportBuilder
         for (int i = 0; i < design.Count; i++)
         {
             var s = design.Slots[i];
-            var row = cut.Rows[i];
+            var row = plan.Slots[i].Row;
             double phase = (e[i].Phase - phase0) * 180 / Math.PI;
             phase = Math.IEEERemainder(phase, 360);
             list.Add(new SlotReport
@@ -245,12 +244,9 @@ public static class DesignReportBuilder
     private static List<RequirementResult> Requirements(RequirementVerdicts verdicts, ArrayResult result) =>
         [.. verdicts.Verdicts.Select(v => RequirementWords.Of(v, result.Request))];
 
-    private static string DatumName(Datums d) => d.Longitudinal switch
-    {
-        LongitudinalDatumKind.EndShortInnerFace => "inner face of the end short",
-        LongitudinalDatumKind.LoadFlangeInnerFace => "inner face of the load-end flange (matched load)",
-        _ => "feed flange face",
-    };
+    private static string DatumName(FeedType feed) => feed == FeedType.TravellingWave
+        ? "inner face of the load-end flange (matched load)"
+        : "inner face of the end short";
 
     private static string TerminationName(TerminationKind k) => k switch
     {

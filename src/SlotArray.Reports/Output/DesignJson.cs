@@ -83,6 +83,7 @@ public static class DesignJson
         if (r.Termination.FeedPosition is { } feed) Num(w, "feed_position_m", feed);
         if (r.Termination.FarShortPosition is { } far) Num(w, "far_short_position_m", far);
         w.WriteEndObject();
+        if (r.Fabrication is { } plan) WriteFabrication(w, r, plan);
 
         if (r.Load is { } load)
         {
@@ -210,6 +211,60 @@ public static class DesignJson
         Strings(w, "warnings", r.Warnings);
         Strings(w, "cautions", r.Cautions);
         Strings(w, "tolerance", r.Tolerance);
+        w.WriteEndObject();
+    }
+
+    /// <summary>The fabrication plan: datum A, tube length, features and each slot's tolerances (SI, from datum A).</summary>
+    private static void WriteFabrication(Utf8JsonWriter w, DesignReport r, Core.Fabrication.FabricationPlan plan)
+    {
+        w.WriteStartObject("fabrication");
+        w.WriteString("drawing_number", r.Document.DrawingNumber ?? r.Name);
+        w.WriteString("revision", r.Document.Revision);
+        if (r.Document.Date is { } date) w.WriteString("date", date);
+        w.WriteString("tool_version", r.Document.ToolVersion);
+        if (r.Document.SpecSha256 is { } sha) w.WriteString("spec_sha256", sha);
+        w.WriteString("datum", plan.Datum);
+        Num(w, "datum_to_design_origin_m", plan.DesignOrigin.Meters);
+        Num(w, "end_plate_thickness_m", plan.EndPlateThickness.Meters);
+        Num(w, "tube_length_m", plan.TubeLength.Meters);
+        Num(w, "tube_length_tolerance_m", plan.TubeLengthTolerance.Value);
+        Num(w, "reference_temperature_c", Core.Fabrication.ThermalExpansion.ReferenceTemperatureCelsius);
+        if (plan.Thermal is { } th)
+        {
+            Num(w, "expansion_per_k", th.Coefficient);
+            w.WriteString("expansion_source", th.Source);
+            Num(w, "tube_change_m_per_k", plan.ChangePerKelvin!.Value.Meters);
+        }
+        w.WriteStartArray("features");
+        foreach (var f in plan.Features)
+        {
+            w.WriteStartObject();
+            w.WriteString("key", f.Key);
+            w.WriteString("name", f.Name);
+            Num(w, "position_from_datum_m", f.Position.Meters);
+            Num(w, "tolerance_m", f.Tolerance.Value);
+            w.WriteString("tolerance_source", f.Tolerance.Source);
+            w.WriteBoolean("changed", plan.Changed.Contains(f.Key));
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
+        w.WriteStartArray("slots");
+        foreach (var s in plan.Slots)
+        {
+            w.WriteStartObject();
+            w.WriteNumber("index", s.Row.Slot);
+            Num(w, "position_from_datum_m", s.Position.Meters);
+            Num(w, "position_tolerance_m", s.PositionTolerance.Value);
+            if (s.OffsetTolerance is { } ot) Num(w, "offset_tolerance_m", ot.Value);
+            if (s.TiltTolerance is { } tt) Num(w, "tilt_tolerance_deg", tt.Value * 180 / Math.PI);
+            if (s.CutDepthTolerance is { } dt) Num(w, "cut_depth_tolerance_m", dt.Value);
+            Num(w, "length_tolerance_m", s.LengthTolerance.Value);
+            Num(w, "width_tolerance_m", s.WidthTolerance.Value);
+            if (s.Row.EndRadius is { } er) Num(w, "end_radius_m", er.Meters);
+            w.WriteBoolean("changed", plan.Changed.Contains(s.Key));
+            w.WriteEndObject();
+        }
+        w.WriteEndArray();
         w.WriteEndObject();
     }
 

@@ -1,215 +1,279 @@
 using System.Text;
+using SlotArray.Core.Fabrication;
 using SlotArray.Reports.Model;
 
 namespace SlotArray.Reports;
 
 /// <summary>
-/// <c>layout.svg</c>: a true-scale (1:1) drawing of the slotted face, written by hand as SVG. The sheet's width and
-/// height are given in mm and the viewBox is in mm, so one user unit is one millimetre on paper.
-/// The guide axis z runs left to right from datum A at the left; +x is up. Every slot centre is
-/// baseline-dimensioned from datum A (physics-reference §9.3), one dimension line per slot stacked above the face,
-/// shortest nearest the part, so no two labels share a line. Transverse positions are tabulated on the sheet
-/// (offset, side and distance from datum B, the outside face of the −x side wall). A long array gives one long sheet
-/// (no splitting): every dimension refers to datum A, so the sheet may be tiled for printing without losing any.
-/// Edge slots are drawn on the narrow face across its outer height, tilted by their signed tilt from the direction
-/// across the face (positive: the end in the upper broad wall lies farther from datum A, i.e. clockwise on the sheet);
-/// the two broad walls are drawn folded out above and below the narrow face (developed view), where each cut wraps
-/// into them square to the guide axis to its cut depth, measured from the outer narrow-wall face (the fold line).
+/// The drawing of the slotted tube at true scale (1:1) on standard ISO 216 sheets in landscape (A3 by default; A4, A1,
+/// A0), written by hand as SVG: <c>layout.svg</c> is sheet 1, <c>layout-2.svg</c> … the following sheets. Each sheet's
+/// width and height are in mm and its viewBox in mm, so one user unit is one millimetre on paper: print at 100 %.
+/// The tube axis runs left to right from datum A (the tube's machined end face, sheet 1's left end); +x is up. A long
+/// tube continues across numbered sheets; each cut is marked by a MATCH LINE at the same distance from datum A on both
+/// sheets. Every slot centre and tube feature carries an ordinate dimension from datum A (the zero on sheet 1): a
+/// single baseline, the value written along each extension line, so nothing stacks. Each sheet tabulates its own
+/// slots (broad-wall slots: offset, side and the distance from datum B, the outside face of the −x side wall, at the
+/// nominal wall; edge slots: tilt and the depth of cut into each broad wall), and carries a title block with the
+/// drawing number, revision, date (as given, never the clock), sheet number, scale, units and the spec's checksum.
+/// Edge slots are drawn on the narrow face with the broad walls folded out above and below (developed view). Only
+/// formats: the geometry is Core's (<see cref="FabricationPlan"/>, <see cref="GuideFaces"/>).
 /// </summary>
 public static class LayoutSvg
 {
-    private const double Margin = 12, DimPitch = 6, Text = 2.5, RowHeight = 5, TitleWidth = 190;
+    private const double Margin = 10, Text = 2.5, RowHeight = 4.5, TitleWidth = 180, TitleHeight = 40, OrdinateZone = 26;
 
-    /// <summary>Writes the drawing of <paramref name="report"/>.</summary>
+    /// <summary>ISO 216 sheet sizes, landscape, mm (width, height).</summary>
+    public static readonly IReadOnlyDictionary<string, (double Width, double Height)> SheetSizes = new Dictionary<string, (double, double)>
+    {
+        ["A4"] = (297, 210),
+        ["A3"] = (420, 297),
+        ["A1"] = (841, 594),
+        ["A0"] = (1189, 841),
+    };
+
+    /// <summary>Writes sheet 1 of the drawing of <paramref name="report"/>.</summary>
     public static void Write(DesignReport report, TextWriter writer) => writer.Write(Build(report));
 
-    /// <summary>The SVG text of the drawing.</summary>
-    public static string Build(DesignReport report)
+    /// <summary>The SVG text of sheet 1.</summary>
+    public static string Build(DesignReport report) => Sheets(report)[0].Text;
+
+    /// <summary>File name of sheet <paramref name="k"/> (1-based): layout.svg, layout-2.svg, …</summary>
+    public static string SheetName(int k) => k == 1 ? "layout.svg" : $"layout-{Invariant.Int(k)}.svg";
+
+    /// <summary>Every sheet of the drawing: file name and SVG text.</summary>
+    /// <exception cref="ArgumentException">The report has no fabrication plan, or its sheet size is unknown.</exception>
+    public static IReadOnlyList<(string Name, string Text)> Sheets(DesignReport report)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        var plan = CutListCsv.PlanOf(report);
+        bool tilt = CutListCsv.UsesTilt(report);
+        if (!SheetSizes.TryGetValue(report.Document.Sheet, out var size))
+            throw new ArgumentException($"sheet size '{report.Document.Sheet}': use A4, A3, A1 or A0", nameof(report));
+        var faces = GuideFaces.Of(plan);
+        var face = faces[0];
+        double mm(double m) => m * 1e3;
+        double faceHeight = mm(face.YMax - face.YMin);
+        double wrap = tilt ? plan.Slots.Select(s => mm(s.Row.DepthOfCut?.Meters ?? 0)).DefaultIfEmpty(0).Max() + 2 : 0;
+        double left = Margin + 14, right = size.Width - Margin - 6, usable = right - left;
+        double faceTop = Margin + 8 + OrdinateZone + wrap;
+        double faceBottom = faceTop + faceHeight;
+        double tableTop = faceBottom + wrap + OrdinateZone + 14;
+        double tableBottom = size.Height - Margin - TitleHeight - 4;
+        double[] colW = tilt ? [10, 22, 18, 16, 22, 20, 18, 16] : [10, 22, 20, 12, 26, 20, 18, 16];
+        double blockW = colW.Sum() + 6;
+        int blocks = Math.Max(1, (int)((size.Width - 2 * Margin - 4) / blockW));
+        int rowsPerBlock = (int)((tableBottom - tableTop) / RowHeight) - 1;
+        if (rowsPerBlock < 1)
+            throw new ArgumentException($"the {report.Document.Sheet} sheet is too small for this face ({faceHeight:0.#} mm high at 1:1): use a larger sheet", nameof(report));
+        int capacity = blocks * rowsPerBlock;
+
+        // Split the tube along X: at most the usable width per sheet, and no more slots than the sheet's table holds.
+        double length = mm(plan.TubeLength.Meters);
+        var z = plan.Slots.Select(s => mm(s.Position.Meters)).ToArray();
+        var ranges = new List<(double X0, double X1)>();
+        double x0 = 0;
+        while (x0 < length - 1e-9)
+        {
+            double x1 = Math.Min(length, x0 + usable);
+            if (x1 < length)
+            {
+                // break midway between two slots, never through one: the last gap centre in the sheet's second half
+                double start = x0;
+                var gaps = Enumerable.Range(1, Math.Max(0, z.Length - 1)).Select(i => (z[i - 1] + z[i]) / 2).Where(m => m > start + usable / 2 && m <= x1).ToArray();
+                if (gaps.Length > 0) x1 = gaps[^1];
+            }
+            var inside = Enumerable.Range(0, z.Length).Where(i => z[i] >= x0 && z[i] < x1).ToArray();
+            if (inside.Length > capacity) x1 = (z[inside[capacity - 1]] + z[inside[capacity]]) / 2;
+            ranges.Add((x0, x1));
+            x0 = x1;
+        }
+
+        var sheets = new List<(string, string)>();
+        for (int k = 0; k < ranges.Count; k++)
+            sheets.Add((SheetName(k + 1), Sheet(report, plan, face, tilt, size, k + 1, ranges.Count, ranges[k], left, faceTop, faceHeight, wrap, tableTop, colW, blockW, rowsPerBlock)));
+        return sheets;
+    }
+
+    private static string Sheet(DesignReport report, FabricationPlan plan, GuideFace face, bool tilt, (double Width, double Height) size,
+        int number, int count, (double X0, double X1) range, double left, double faceTop, double faceHeight, double wrap,
+        double tableTop, double[] colW, double blockW, int rowsPerBlock)
     {
         var g = report.Guide;
-        bool tilt = CutListCsv.UsesTilt(report);
-        double mm(double meters) => meters * 1e3;
-        double faceHeight = mm(tilt ? g.B + 2 * g.Wall : g.A + 2 * g.Wall);
-        var slots = report.Slots.OrderBy(s => s.Position).ThenBy(s => s.Index).ToArray();
-        double zEnd = slots.Length == 0 ? 0 : slots.Max(s => mm(s.Position + s.OverallLength / 2));
-        double faceLength = report.Termination.FarShortPosition is { } farEnd && mm(farEnd) >= zEnd
-            ? mm(farEnd)   // centre feed: the face ends at the second short
-            : zEnd + Math.Max(mm(g.GuideWavelength) / 2, 15);
-
-        // table geometry
-        string[] head = tilt
-            ? ["slot", "z from A", "tilt (deg)", "cut depth", "length", "width"]
-            : ["slot", "z from A", "offset", "side", "from B", "length", "width"];
-        double[] colW = tilt ? [12, 24, 22, 22, 22, 18] : [12, 24, 20, 14, 22, 22, 18];
-        double blockW = colW.Sum() + 8;
-
-        double left = Margin + 8;
-        double sheetW = Math.Max(left + faceLength + Margin + (tilt ? 48 : 20), Math.Max(TitleWidth, blockW) + 2 * Margin);
-        int blocks = Math.Max(1, (int)((sheetW - 2 * Margin) / blockW));
-        int rowsPerBlock = Math.Max(1, (slots.Length + blocks - 1) / blocks);
-
-        // Edge slots: the broad walls folded out above and below the narrow face, as deep as the deepest cut plus 2 mm.
-        double wrap = tilt ? slots.Select(s => mm(s.CutDepth ?? 0)).DefaultIfEmpty(0).Max() + 2 : 0;
-        double dimTop = Margin + 10;
-        double faceTop = dimTop + DimPitch * slots.Length + 6 + wrap;
-        double cl = faceTop + faceHeight / 2;
-        double faceBottom = faceTop + faceHeight;
-        double tableTop = faceBottom + wrap + (tilt ? 25 : 22);
-        double tableBottom = tableTop + RowHeight * (rowsPerBlock + 1);
-        double titleTop = tableBottom + 10;
-        const int titleLines = 8;
-        double sheetH = titleTop + 7 + titleLines * 5 + Margin;
-
+        var d = report.Document;
+        double mm(double m) => m * 1e3;
+        double faceBottom = faceTop + faceHeight, cl = faceTop + faceHeight / 2;
+        double X(double zMm) => left + zMm - range.X0;
+        double viewLeft = X(range.X0), viewRight = X(range.X1);
         var sb = new StringBuilder();
         void Ln(string s) { sb.Append(s); sb.Append('\n'); }
         string F(double v) => Invariant.Fixed(v, 3);
-        string X(double zMm) => F(left + zMm);
-        void Line(double x1, double y1, double x2, double y2, string cls) =>
-            Ln($"<line class=\"{cls}\" x1=\"{F(x1)}\" y1=\"{F(y1)}\" x2=\"{F(x2)}\" y2=\"{F(y2)}\"/>");
-        void TextAt(double x, double y, string text, string anchor = "start", double size = Text, string extra = "") =>
-            Ln($"<text x=\"{F(x)}\" y=\"{F(y)}\" font-size=\"{F(size)}\" text-anchor=\"{anchor}\"{extra}>{Xml(text)}</text>");
-        void Arrow(double tipX, double y, int dir) => // dir +1 points right, -1 left
-            Ln($"<path class=\"arrow\" d=\"M {F(tipX)} {F(y)} L {F(tipX - dir * 2.5)} {F(y - 0.7)} L {F(tipX - dir * 2.5)} {F(y + 0.7)} Z\"/>");
+        void Line(double x1, double y1, double x2, double y2, string cls, string extra = "") =>
+            Ln($"<line class=\"{cls}\" x1=\"{F(x1)}\" y1=\"{F(y1)}\" x2=\"{F(x2)}\" y2=\"{F(y2)}\"{extra}/>");
+        void TextAt(double x, double y, string text, string anchor = "start", double sizeMm = Text, string extra = "") =>
+            Ln($"<text x=\"{F(x)}\" y=\"{F(y)}\" font-size=\"{F(sizeMm)}\" text-anchor=\"{anchor}\"{extra}>{Xml(text)}</text>");
+        void Vertical(double x, double y, string text, string anchor) =>   // reads bottom to top, baseline on the extension line
+            TextAt(x + Text / 3, y, text, anchor, Text, $" transform=\"rotate(-90 {F(x + Text / 3)} {F(y)})\"");
 
         Ln("<?xml version=\"1.0\" encoding=\"UTF-8\"?>");
-        Ln($"<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"{F(sheetW)}mm\" height=\"{F(sheetH)}mm\" viewBox=\"0 0 {F(sheetW)} {F(sheetH)}\" font-family=\"DejaVu Sans, sans-serif\">");
-        Ln($"<title>{Xml(report.Name)}: slot layout, true scale, mm</title>");
+        Ln($"<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"{F(size.Width)}mm\" height=\"{F(size.Height)}mm\" viewBox=\"0 0 {F(size.Width)} {F(size.Height)}\" font-family=\"DejaVu Sans, sans-serif\">");
+        Ln($"<title>{Xml(report.Name)}: slot layout, sheet {Invariant.Int(number)} of {Invariant.Int(count)}, {report.Document.Sheet}, scale 1:1, mm</title>");
         Ln("<style>");
         Ln("line, rect, path { fill: none; stroke: black; stroke-width: 0.25; }");
         Ln(".outline { stroke-width: 0.5; } .datum { stroke-width: 0.7; } .hidden { stroke-dasharray: 2 1; stroke-width: 0.18; }");
-        Ln(".centre { stroke-dasharray: 8 1.5 1 1.5; stroke-width: 0.18; } .thin { stroke-width: 0.18; }");
-        Ln(".slot { stroke-width: 0.35; fill: #d9d9d9; } .arrow { fill: black; stroke: none; } text { fill: black; stroke: none; }");
+        Ln(".centre { stroke-dasharray: 8 1.5 1 1.5; stroke-width: 0.18; } .thin { stroke-width: 0.18; } .match { stroke-width: 0.7; stroke-dasharray: 12 2 2 2; }");
+        Ln(".slot { stroke-width: 0.35; fill: #d9d9d9; } text { fill: black; stroke: none; }");
         Ln("</style>");
-        Ln($"<rect class=\"thin\" x=\"{F(1)}\" y=\"{F(1)}\" width=\"{F(sheetW - 2)}\" height=\"{F(sheetH - 2)}\"/>");
+        Ln($"<defs><clipPath id=\"view\"><rect x=\"{F(viewLeft)}\" y=\"0\" width=\"{F(viewRight - viewLeft)}\" height=\"{F(size.Height)}\"/></clipPath></defs>");
+        Ln($"<rect class=\"outline\" id=\"frame\" x=\"{F(Margin)}\" y=\"{F(Margin)}\" width=\"{F(size.Width - 2 * Margin)}\" height=\"{F(size.Height - 2 * Margin)}\"/>");
 
-        // face outline, hidden inner walls, centreline, datum A
-        Ln($"<rect class=\"outline\" id=\"face\" x=\"{X(0)}\" y=\"{F(faceTop)}\" width=\"{F(faceLength)}\" height=\"{F(faceHeight)}\"/>");
+        // the face, its walls and centreline, clipped to this sheet's stretch of tube
+        Ln("<g clip-path=\"url(#view)\">");
+        Ln($"<rect class=\"outline\" id=\"face\" x=\"{F(X(0))}\" y=\"{F(faceTop)}\" width=\"{F(mm(plan.TubeLength.Meters))}\" height=\"{F(faceHeight)}\"/>");
         double inner = mm(g.Wall);
-        Line(left, faceTop + inner, left + faceLength, faceTop + inner, "hidden");
-        Line(left, faceBottom - inner, left + faceLength, faceBottom - inner, "hidden");
-        Line(left - 4, cl, left + faceLength + 6, cl, "centre");
-        TextAt(left + faceLength + 7, cl + Text / 3, "CL", "start");
-        Line(left, dimTop - 4, left, faceBottom + 12, "datum");
-        double note = faceBottom + wrap + (tilt ? 9 : 6);
+        Line(X(0), faceTop + inner, X(mm(plan.TubeLength.Meters)), faceTop + inner, "hidden");
+        Line(X(0), faceBottom - inner, X(mm(plan.TubeLength.Meters)), faceBottom - inner, "hidden");
+        Line(X(0) - 4, cl, X(mm(plan.TubeLength.Meters)) + 6, cl, "centre");
         if (tilt)
         {
-            Ln($"<rect class=\"thin\" id=\"upper-broad-wall\" x=\"{X(0)}\" y=\"{F(faceTop - wrap)}\" width=\"{F(faceLength)}\" height=\"{F(wrap)}\"/>");
-            Ln($"<rect class=\"thin\" id=\"lower-broad-wall\" x=\"{X(0)}\" y=\"{F(faceBottom)}\" width=\"{F(faceLength)}\" height=\"{F(wrap)}\"/>");
-            TextAt(left + faceLength + 1.5, faceTop - wrap / 2 + Text / 3, "upper broad wall, folded out", "start", Text);
-            TextAt(left + faceLength + 1.5, faceBottom + wrap / 2 + Text / 3, "lower broad wall, folded out", "start", Text);
+            Ln($"<rect class=\"thin\" id=\"upper-broad-wall\" x=\"{F(X(0))}\" y=\"{F(faceTop - wrap)}\" width=\"{F(mm(plan.TubeLength.Meters))}\" height=\"{F(wrap)}\"/>");
+            Ln($"<rect class=\"thin\" id=\"lower-broad-wall\" x=\"{F(X(0))}\" y=\"{F(faceBottom)}\" width=\"{F(mm(plan.TubeLength.Meters))}\" height=\"{F(wrap)}\"/>");
         }
-        TextAt(left + 1, note, "DATUM A: " + report.Inputs.DatumDescription, "start", 3);
-        TextAt(left + 1, note + 4.5, tilt
-            ? "narrow face shown, broad walls folded out above and below; z along the guide from datum A; + tilt: upper end farther from A"
-            : "+x side at top; DATUM B: outside face of the -x side wall (bottom edge)", "start", Text);
-        if (report.Termination.FarShortPosition is { } farShort && mm(farShort) <= faceLength)
+        foreach (var s in plan.Slots)
         {
-            // centre feed: the second end short and the series junction are part of the drawing
-            Line(left + mm(farShort), dimTop - 4, left + mm(farShort), faceBottom + 12, "datum");
-            TextAt(left + mm(farShort) - 1, faceTop - 1.5, "second end short (inner face)", "end", Text);
-            if (report.Termination.FeedPosition is { } junction)
-                TextAt(left + mm(junction), faceBottom + 3.5, "feed junction " + Invariant.Mm(junction), "middle", Text);
-        }
-        else
-        {
-            TextAt(left + faceLength - 1, faceTop - 1.5, "to feed", "end", Text);
-        }
-
-        // slots, centre marks, numbers
-        foreach (var s in slots)
-        {
-            double z = mm(s.Position), len = mm(s.OverallLength), w = mm(s.Width);
-            double yc = tilt ? cl : cl - mm(s.Offset!.Value);
-            double r = s.EndForm == SlotEndForm.Round ? w / 2 : 0;
+            double zc = mm(s.Position.Meters), w = mm(s.Row.Width.Meters), r = mm(s.Row.EndRadius?.Meters ?? 0);
             if (tilt)
             {
-                // Across the narrow face at the tilt, then square to the guide axis into each folded-out broad wall.
-                double th = s.TiltDeg!.Value * Math.PI / 180, run = faceHeight / 2 * Math.Tan(th), depth = mm(s.CutDepth ?? 0);
-                Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Index)}\" x=\"{X(z - w / 2)}\" y=\"{F(faceTop)}\" width=\"{F(w)}\" height=\"{F(faceHeight / Math.Cos(th))}\" transform=\"rotate({F(s.TiltDeg!.Value)} {X(z)} {F(cl)}) translate(0 {F(faceHeight / 2 - faceHeight / (2 * Math.Cos(th)))})\"/>");
-                double wz = w / Math.Cos(th);
-                Ln($"<rect class=\"slot\" id=\"wrap-upper-{Invariant.Int(s.Index)}\" x=\"{X(z + run - wz / 2)}\" y=\"{F(faceTop - depth)}\" width=\"{F(wz)}\" height=\"{F(depth)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
-                Ln($"<rect class=\"slot\" id=\"wrap-lower-{Invariant.Int(s.Index)}\" x=\"{X(z - run - wz / 2)}\" y=\"{F(faceBottom)}\" width=\"{F(wz)}\" height=\"{F(depth)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
+                double th = s.Row.Tilt!.Value.Radians, deg = s.Row.Tilt.Value.Degrees, run = faceHeight / 2 * Math.Tan(th), depth = mm(s.Row.DepthOfCut?.Meters ?? 0);
+                double across = depth > 0 ? faceHeight / Math.Cos(th) : mm(s.Row.OverallLength.Meters);
+                Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Row.Slot)}\" x=\"{F(X(zc) - w / 2)}\" y=\"{F(cl - across / 2)}\" width=\"{F(w)}\" height=\"{F(across)}\" transform=\"rotate({F(deg)} {F(X(zc))} {F(cl)})\"/>");
+                if (depth > 0)
+                {
+                    double wz = w / Math.Cos(th);
+                    Ln($"<rect class=\"slot\" id=\"wrap-upper-{Invariant.Int(s.Row.Slot)}\" x=\"{F(X(zc + run) - wz / 2)}\" y=\"{F(faceTop - depth)}\" width=\"{F(wz)}\" height=\"{F(depth)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
+                    Ln($"<rect class=\"slot\" id=\"wrap-lower-{Invariant.Int(s.Row.Slot)}\" x=\"{F(X(zc - run) - wz / 2)}\" y=\"{F(faceBottom)}\" width=\"{F(wz)}\" height=\"{F(depth)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
+                }
             }
             else
-                Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Index)}\" x=\"{X(z - len / 2)}\" y=\"{F(yc - w / 2)}\" width=\"{F(len)}\" height=\"{F(w)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
-            Line(left + z - 1.2, yc, left + z + 1.2, yc, "thin");
-            Line(left + z, yc - 1.2, left + z, yc + 1.2, "thin");
-            // broad face: number on the far side of the centreline; narrow face: below the face, clear of the tilted slot
-            double side = tilt || s.Offset!.Value >= 0 ? 1 : -1;
+            {
+                double len = mm(s.Row.OverallLength.Meters), yc = cl - mm(s.Row.Offset!.Value.Meters);
+                Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Row.Slot)}\" x=\"{F(X(zc) - len / 2)}\" y=\"{F(yc - w / 2)}\" width=\"{F(len)}\" height=\"{F(w)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
+            }
+        }
+        Ln("</g>");
+
+        // centre marks, numbers and ordinates of the slots whose centres lie on this sheet
+        double ordinateBase = faceTop - wrap - 2;
+        var own = plan.Slots.Where(s => mm(s.Position.Meters) >= range.X0 && mm(s.Position.Meters) < range.X1 + (number == count ? 1e-9 : 0)).ToList();
+        foreach (var s in own)
+        {
+            double zc = mm(s.Position.Meters);
+            double yc = tilt ? cl : cl - mm(s.Row.Offset!.Value.Meters);
+            Line(X(zc) - 1.2, yc, X(zc) + 1.2, yc, "thin", $" id=\"centre-{Invariant.Int(s.Row.Slot)}\"");
+            Line(X(zc), yc - 1.2, X(zc), yc + 1.2, "thin");
+            double side = tilt || s.Row.Offset!.Value.Meters >= 0 ? 1 : -1;
             double yn = tilt ? faceBottom + wrap + 3.5 : cl + side * (faceHeight / 2 - 1.2) + (side > 0 ? 0 : Text);
-            TextAt(left + z, yn, Invariant.Int(s.Index), "middle", Text, " font-weight=\"bold\"");
+            TextAt(X(zc), yn, Invariant.Int(s.Row.Slot), "middle", Text, " font-weight=\"bold\"");
+            Line(X(zc), faceTop - wrap - 0.5, X(zc), ordinateBase - OrdinateZone + 4, "thin");
+            Vertical(X(zc), ordinateBase - 1, Invariant.Mm(s.Position.Meters), "start");
         }
-
-        // baseline dimensions from datum A, shortest nearest the face
-        for (int k = 0; k < slots.Length; k++)
+        // feature ordinates below the face
+        double below = faceBottom + wrap + (tilt ? 6 : 2);
+        double lastText = double.NegativeInfinity;
+        foreach (var f in plan.Features.Where(f => mm(f.Position.Meters) >= range.X0 - 1e-9 && mm(f.Position.Meters) <= range.X1 + 1e-9))
         {
-            var s = slots[k];
-            double z = mm(s.Position);
-            double y = faceTop - wrap - 6 - DimPitch * k;
-            Line(left + z, faceTop - wrap - 0.5, left + z, y - 1.5, "thin");
-            Line(left, y, left + z, y, "thin");
-            Arrow(left, y, -1);
-            Arrow(left + z, y, 1);
-            string label = $"{Invariant.Mm(s.Position)} (slot {Invariant.Int(s.Index)})";
-            bool fits = TextWidth(label, Text) + 4 < z; // else put it beyond the extension line, clear of the arrows
-            TextAt(left + z + (fits ? -1.5 : 1.5), y - 0.8, label, fits ? "end" : "start");
+            // ordinates closer than a text height apart get a jogged extension line, so their figures never overlap
+            double xf = X(mm(f.Position.Meters)), xt = Math.Max(xf, lastText + 3.5);
+            lastText = xt;
+            Line(xf, faceTop - wrap, xf, below + 3, f.Position.Meters == 0 ? "datum" : "thin", $" id=\"feature-{f.Key}\"");
+            Line(xf, below + 3, xt, below + 6, "thin");
+            Line(xt, below + 6, xt, below + OrdinateZone, "thin");
+            Vertical(xt, below + OrdinateZone, Invariant.Mm(f.Position.Meters) + " " + Short(f), "start");
         }
-        TextAt(left, dimTop - 5, "slot centres from DATUM A (baseline), mm", "start", Text);
-
-        // transverse table
-        TextAt(Margin, tableTop - 3, tilt ? "Slot table (mm, deg): z from datum A; cut depth into each broad wall from the outer narrow-wall face"
-            : "Slot table (mm): offset from the broad-wall centreline; 'from B' = wall + a/2 + offset, from the outside of the -x side wall", "start", Text);
-        for (int b = 0; b < blocks; b++)
+        if (number == 1)
         {
-            int first = b * rowsPerBlock;
-            if (first >= slots.Length && b > 0) break;
-            double x0 = Margin + b * blockW;
-            double cx = x0;
+            Line(X(0), Margin + 4, X(0), faceBottom + wrap + 4, "datum");
+            TextAt(X(0) - 2, Margin + 7, "A", "end", 4, " font-weight=\"bold\"");
+        }
+        TextAt(left, Margin + 5, $"ORDINATE DIMENSIONS FROM DATUM A (tube end face), mm; sheet {Invariant.Int(number)} of {Invariant.Int(count)}", "start", Text);
+        if (number > 1) Match(range.X0, number - 1);
+        if (number < count) Match(range.X1, number + 1);
+        void Match(double xMatch, int other)
+        {
+            Line(X(xMatch), faceTop - wrap - 4, X(xMatch), faceBottom + wrap + 4, "match", $" id=\"match-{Invariant.Int(other)}\"");
+            TextAt(X(xMatch) + (other > number ? -1 : 1), faceBottom + wrap + 8, $"MATCH LINE {Invariant.Fixed(xMatch, 3)} FROM A: SEE SHEET {Invariant.Int(other)}",
+                other > number ? "end" : "start", Text, " font-weight=\"bold\"");
+        }
+        if (!tilt) TextAt(Margin + 2, tableTop - 6, "DATUM B: outside face of the -x side wall (bottom edge of the face); +x side at top", "start", Text);
+        else TextAt(viewLeft + 1, faceTop - wrap - 0.8, "upper broad wall, folded out; + tilt: upper end farther from A (clockwise)", "start", 2);
+
+        // slot table of this sheet's slots
+        string[] head = tilt
+            ? ["slot", "z from A", "tilt deg", "+/-deg", "depth each", "length", "width", "+/-z"]
+            : ["slot", "z from A", "offset", "side", "B, nom. wall", "length", "width", "+/-z"];
+        TextAt(Margin + 2, tableTop - 2, tilt
+            ? "Slot table (mm, deg): z from datum A; depth of cut into each broad wall from the outer narrow-wall face; length = path on the inner surfaces"
+            : "Slot table (mm): offset from the broad-wall centreline; 'B, nom. wall' = wall + a/2 + offset from the outside of the -x side wall at the nominal wall", "start", 2.2);
+        for (int b = 0; b * rowsPerBlock < own.Count || b == 0; b++)
+        {
+            double bx = Margin + 2 + b * blockW, cx = bx;
             for (int c = 0; c < head.Length; c++)
             {
-                TextAt(cx + colW[c] - 1, tableTop + RowHeight - 1.5, head[c], "end", Text, " font-weight=\"bold\"");
+                TextAt(cx + colW[c] - 1, tableTop + RowHeight - 1.2, head[c], "end", 2.2, " font-weight=\"bold\"");
                 cx += colW[c];
             }
-            Line(x0, tableTop + RowHeight, x0 + colW.Sum(), tableTop + RowHeight, "thin");
-            var bySlot = report.Slots.Skip(first).Take(rowsPerBlock).ToArray();
-            for (int i = 0; i < bySlot.Length; i++)
+            Line(bx, tableTop + RowHeight, bx + colW.Sum(), tableTop + RowHeight, "thin");
+            var rows = own.Skip(b * rowsPerBlock).Take(rowsPerBlock).ToArray();
+            for (int i = 0; i < rows.Length; i++)
             {
-                var s = bySlot[i];
+                var s = rows[i];
                 string[] cells = tilt
-                    ? [Invariant.Int(s.Index), Invariant.Mm(s.Position), Invariant.Fixed(s.TiltDeg!.Value, 2), Invariant.Mm(s.CutDepth ?? double.NaN), Invariant.Mm(s.OverallLength), Invariant.Mm(s.Width)]
-                    : [Invariant.Int(s.Index), Invariant.Mm(s.Position), Invariant.Mm(s.Offset!.Value), CutListCsv.Side(s.Offset.Value), Invariant.Mm(g.Wall + g.A / 2 + s.Offset.Value), Invariant.Mm(s.OverallLength), Invariant.Mm(s.Width)];
-                cx = x0;
-                double y = tableTop + RowHeight * (i + 2) - 1.5;
+                    ? [Invariant.Int(s.Row.Slot), Invariant.Mm(s.Position.Meters), Invariant.Fixed(s.Row.Tilt!.Value.Degrees, 3), Invariant.Fixed(s.TiltTolerance!.Value * 180 / Math.PI, 3),
+                       Invariant.Mm(s.Row.DepthOfCut?.Meters ?? 0), Invariant.Mm(s.Row.OverallLength.Meters), Invariant.Mm(s.Row.Width.Meters), Invariant.Mm(s.PositionTolerance.Value)]
+                    : [Invariant.Int(s.Row.Slot), Invariant.Mm(s.Position.Meters), Invariant.Mm(s.Row.Offset!.Value.Meters), CutListCsv.Side(s.Row.Offset.Value.Meters),
+                       Invariant.Mm(g.Wall + g.A / 2 + s.Row.Offset.Value.Meters), Invariant.Mm(s.Row.OverallLength.Meters), Invariant.Mm(s.Row.Width.Meters), Invariant.Mm(s.PositionTolerance.Value)];
+                cx = bx;
+                double y = tableTop + RowHeight * (i + 2) - 1.2;
                 for (int c = 0; c < cells.Length; c++)
                 {
-                    TextAt(cx + colW[c] - 1, y, cells[c], "end");
+                    TextAt(cx + colW[c] - 1, y, cells[c], "end", 2.2);
                     cx += colW[c];
                 }
             }
         }
 
-        // title block
-        double tx = sheetW - Margin - TitleWidth;
-        Ln($"<rect class=\"outline\" id=\"title-block\" x=\"{F(tx)}\" y=\"{F(titleTop)}\" width=\"{F(TitleWidth)}\" height=\"{F(7 + titleLines * 5 + 2)}\"/>");
-        TextAt(tx + 2, titleTop + 6, report.Name, "start", 5, " font-weight=\"bold\"");
+        // title block (ISO 7200 layout is not imitated; these are the fields a shop needs)
+        double tx = size.Width - Margin - TitleWidth, ty = size.Height - Margin - TitleHeight;
+        Ln($"<rect class=\"outline\" id=\"title-block\" x=\"{F(tx)}\" y=\"{F(ty)}\" width=\"{F(TitleWidth)}\" height=\"{F(TitleHeight)}\"/>");
+        Line(tx, ty + 9, tx + TitleWidth, ty + 9, "thin");
+        TextAt(tx + 2, ty + 6.5, report.Name, "start", 4.5, " font-weight=\"bold\"");
+        TextAt(tx + TitleWidth - 2, ty + 6.5, $"SHEET {Invariant.Int(number)} OF {Invariant.Int(count)}", "end", 3.5, " font-weight=\"bold\" id=\"sheet-number\"");
+        var t = plan.Tolerances;
         string[] lines =
         [
-            $"Slotted {(tilt ? "narrow" : "broad")} face, true scale 1:1. Units: mm (angles deg).",
-            "DO NOT SCALE THIS DRAWING: work to the dimensions given.",
-            $"Guide {g.Designation}: inside a = {Invariant.Mm(g.A)}, b = {Invariant.Mm(g.B)}; wall {Invariant.Mm(g.Wall)}",
-            $"Metal: {g.Metal}. Tolerance unless stated: ± {Invariant.Mm(report.Inputs.CutTolerance)}",
-            $"Datum A: {report.Inputs.DatumDescription}; all z by baseline dimensioning from A.",
-            "Slot lengths overall tip to tip; round ends radius = width/2 (width = cutter).",
-            Invariant.Normalisation + ".",
-            $"{Invariant.Int(report.Slots.Count)} slots; design frequency {Invariant.Ghz(report.FrequencyHz, 4)} GHz.",
+            $"Drawing no. {d.DrawingNumber ?? report.Name}   Revision {d.Revision}   Date {d.Date ?? "not dated"}   Sheet {report.Document.Sheet}",
+            $"Scale 1:1 (print at 100 %). Units: mm, angles deg. Dimensions at 20 degC. DO NOT SCALE: work to the figures.",
+            $"Guide {g.Designation}: inside a = {Invariant.Mm(g.A)}, b = {Invariant.Mm(g.B)}; wall {Invariant.Mm(g.Wall)}; {g.Metal}; tube {Invariant.Mm(plan.TubeLength.Meters)} +/- {Invariant.Mm(plan.TubeLengthTolerance.Value)}",
+            $"Tolerances +/-: z {Invariant.Mm(t.Position.Value)}, {(tilt ? "depth " + Invariant.Mm(t.CutDepth.Value) : "offset " + Invariant.Mm(t.Offset.Value))}, length {Invariant.Mm(t.Length.Value)}, width {Invariant.Mm(t.Width.Value)}; others ISO 2768-f (cutlist.csv gives sources)",
+            $"Datum A: tube end face ({(plan.EndPlateThickness.Meters > 0 ? "end-short plate flush" : "load-end flange face")}). Slot lengths overall tip to tip, end radius = cutter radius.",
+            $"{Invariant.Int(report.Slots.Count)} slots; {Invariant.Ghz(report.FrequencyHz, 4)} GHz. SlotArray {d.ToolVersion}; spec SHA-256 {(d.SpecSha256 is { } h ? h[..16] + "..." : "not from a file")}",
         ];
-        for (int i = 0; i < lines.Length; i++) TextAt(tx + 2, titleTop + 12 + 5 * i, lines[i], "start", 3);
+        for (int i = 0; i < lines.Length; i++) TextAt(tx + 2, ty + 14 + 4.6 * i, lines[i], "start", 2.4);
         Ln("</svg>");
         return sb.ToString();
     }
 
-    /// <summary>Generous estimate of a DejaVu Sans text width, mm (0.62 em per character).</summary>
-    private static double TextWidth(string text, double size) => 0.62 * size * text.Length;
+    /// <summary>A short label for a feature's ordinate.</summary>
+    private static string Short(TubeFeature f) => f.Key switch
+    {
+        "tube-end" => "A",
+        "load-flange" => "A flange",
+        "end-short" => "short",
+        "feed-junction" => "feed T",
+        "second-short" => "short 2",
+        "feed-flange" => "flange",
+        "far-tube-end" => "end",
+        _ => f.Key,
+    };
 
     /// <summary>XML text escape.</summary>
     private static string Xml(string s) => s.Replace("&", "&amp;").Replace("<", "&lt;").Replace(">", "&gt;").Replace("\"", "&quot;");

@@ -7,7 +7,17 @@ namespace SlotArray.Reports;
 /// <summary>One file of the output folder: its name and the writer that fills it.</summary>
 /// <param name="Name">File name inside the folder, e.g. "design.json".</param>
 /// <param name="Write">Writes the file's bytes for a report to a stream.</param>
-public sealed record OutputFile(string Name, Action<DesignReport, Stream> Write);
+public sealed record OutputFile(string Name, Action<DesignReport, Stream> Write)
+{
+    /// <summary>
+    /// For an entry that writes a varying set of files (drawing sheets, one DXF per face): the files for a report,
+    /// name and bytes; null for a single file (<see cref="Name"/>, <see cref="Write"/>).
+    /// </summary>
+    public Func<DesignReport, IReadOnlyList<(string Name, byte[] Bytes)>>? Many { get; init; }
+
+    /// <summary>For a <see cref="Many"/> entry: whether a file name is one this entry may write (so a later run may replace it).</summary>
+    public Func<string, bool>? Owns { get; init; }
+}
 
 /// <summary>
 /// Writes the whole output folder of <c>design</c> (architecture.md, "Output folder of design") atomically at
@@ -25,13 +35,22 @@ public static class OutputFolder
     [
         new("design.json", DesignJson.Write),
         new("cutlist.csv", Text(CutListCsv.Write)),
-        new("layout.svg", Text(LayoutSvg.Write)),
+        new("layout.svg", Text(LayoutSvg.Write))
+        {
+            Many = r => [.. LayoutSvg.Sheets(r).Select(p => (p.Name, Utf8(p.Text)))],
+            Owns = n => n == "layout.svg" || System.Text.RegularExpressions.Regex.IsMatch(n, "^layout-[0-9]+\\.svg$"),
+        },
+        new("face-broad.dxf", Text(Dxf.GuideFaceDxf.Write))
+        {
+            Many = r => [.. Dxf.GuideFaceDxf.Files(r).Select(p => (p.Name, Utf8(p.Text)))],
+            Owns = n => System.Text.RegularExpressions.Regex.IsMatch(n, "^face-[a-z-]+\\.dxf$"),
+        },
         new("pattern.png", (r, s) => PlotExport.Write(DesignPlots.Pattern(r), s, "png")),
         new("pattern.svg", (r, s) => PlotExport.Write(DesignPlots.Pattern(r), s, "svg")),
         new("taper.png", (r, s) => PlotExport.Write(DesignPlots.Taper(r), s, "png")),
         new("slots.png", (r, s) => PlotExport.Write(DesignPlots.Slots(r), s, "png")),
-        new("sweep.png", (r, s) => PlotExport.Write(DesignPlots.Sweep(r), s, "png")),
-        new("scan.png", (r, s) => PlotExport.Write(ScanPlot.Build(r), s, "png")),
+        new("sweep.png", (r, s) => PlotExport.Write(DesignPlots.Sweep(r), s, "png", 900, DesignPlots.SweepHeight)),
+        new("scan.png", (r, s) => PlotExport.Write(ScanPlot.Build(r), s, "png", 900, ScanPlot.Height(r))),
         new("input.s1p", Text(TouchstoneWriter.Write)),
         new("summary.md", Text(SummaryMarkdown.Write)),
     ];
@@ -55,14 +74,19 @@ public static class OutputFolder
         try
         {
             // Render every file in memory in parallel (the plots dominate), then write them in the fixed order.
-            var bytes = new byte[files.Count][];
+            var rendered = new IReadOnlyList<(string Name, byte[] Bytes)>[files.Count];
             try
             {
                 Parallel.For(0, files.Count, i =>
                 {
+                    if (files[i].Many is { } many)
+                    {
+                        rendered[i] = many(report);
+                        return;
+                    }
                     using var ms = new MemoryStream();
                     files[i].Write(report, ms);
-                    bytes[i] = ms.ToArray();
+                    rendered[i] = [(files[i].Name, ms.ToArray())];
                 });
             }
             catch (AggregateException e) when (e.InnerExceptions.Count > 0)
@@ -70,10 +94,10 @@ public static class OutputFolder
                 // a writer's own exception (not the AggregateException wrapper), as a sequential run throws it
                 System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
             }
-            for (int i = 0; i < files.Count; i++)
+            foreach (var (name, data) in rendered.SelectMany(r => r))
             {
-                using var fs = new FileStream(Path.Combine(temp, files[i].Name), FileMode.CreateNew, FileAccess.Write, FileShare.None);
-                fs.Write(bytes[i]);
+                using var fs = new FileStream(Path.Combine(temp, name), FileMode.CreateNew, FileAccess.Write, FileShare.None);
+                fs.Write(data);
             }
             if (Directory.Exists(target))
             {
@@ -99,6 +123,12 @@ public static class OutputFolder
             if (Directory.Exists(temp)) Directory.Delete(temp, recursive: true);
         }
     }
+
+    /// <summary>The names of the files <see cref="WriteAll(DesignReport, string)"/> writes for <paramref name="report"/>, in order.</summary>
+    public static IReadOnlyList<string> NamesFor(DesignReport report) =>
+        [.. Files.SelectMany(f => f.Many is { } many ? many(report).Select(p => p.Name) : [f.Name])];
+
+    private static byte[] Utf8(string text) => new UTF8Encoding(false).GetBytes(text);
 
     /// <summary>Adapts a text writer to a stream: UTF-8 without byte-order mark, invariant culture.</summary>
     private static Action<DesignReport, Stream> Text(Action<DesignReport, TextWriter> write) => (r, s) =>

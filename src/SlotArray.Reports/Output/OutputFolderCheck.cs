@@ -69,7 +69,7 @@ public static partial class OutputFolderCheck
         var known = new HashSet<string>(OwnFiles, StringComparer.Ordinal);
         if (extra is not null) known.UnionWith(extra);
         var foreign = Directory.EnumerateFileSystemEntries(target).Select(Path.GetFileName)
-            .Where(n => !known.Contains(n!)).Order(StringComparer.Ordinal).ToArray();
+            .Where(n => !known.Contains(n!) && !OutputFolder.Files.Any(f => f.Owns?.Invoke(n!) == true)).Order(StringComparer.Ordinal).ToArray();
         if (foreign.Length > 0)
             throw new OutputFolderException($"output folder '{target}' holds {foreign.Length} entr{(foreign.Length == 1 ? "y" : "ies")} that this tool did not write ({string.Join(", ", foreign.Take(5))}{(foreign.Length > 5 ? ", ..." : "")}); it would replace the folder whole, so give a new or empty folder with -o");
     }

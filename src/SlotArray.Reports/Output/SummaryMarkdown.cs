@@ -23,6 +23,11 @@ public static class SummaryMarkdown
 
         L($"# {Escape(report.Name)}: slotted-waveguide array design");
         L();
+        L(VerdictLine(report));
+        foreach (var q in report.Requirements.Where(q => !q.Passed))
+            L($"- not met: {Escape(q.Description)}: required {Escape(q.Required)}, achieved {Escape(q.Achieved)}");
+        foreach (string x in report.SafetyExceedances) L($"- **SAFETY LIMIT EXCEEDED**: {Escape(x)}");
+        L();
         L("## Inputs");
         L();
         L("| item | value |");
@@ -35,7 +40,7 @@ public static class SummaryMarkdown
         L($"| feed | {Escape(i.FeedType)} |");
         L($"| taper | {Escape(i.TaperDescription)} |");
         L($"| slot model | {Escape(i.SlotModelName)} |");
-        L($"| datum | {Escape(i.DatumDescription)} |");
+        L($"| datum A | {Escape(report.Fabrication?.Datum ?? i.DatumDescription)} |");
         L($"| cut tolerance | ± {Invariant.Mm(i.CutTolerance)} mm |");
         L();
         if (report.SlotData is { } sd)
@@ -61,9 +66,14 @@ public static class SummaryMarkdown
         L("| --- | ---: | --- |");
         L($"| guide wavelength at the design frequency | {Invariant.Mm(g.GuideWavelength)} | mm |");
         L($"| TE10 wave impedance | {Invariant.Fixed(g.WaveImpedanceOhm, 2)} | Ω |");
-        L($"| termination: {Escape(report.Termination.Type)}, its inner face (datum A) to the centre of slot 1 | {Invariant.Mm(report.Termination.Distance)} | mm |");
-        if (report.Termination.FeedPosition is { } feed) L($"| feed reference plane from datum A | {Invariant.Mm(feed)} | mm |");
-        if (report.Termination.FarShortPosition is { } far) L($"| second end short (inner face) from datum A | {Invariant.Mm(far)} | mm |");
+        L($"| termination: {Escape(report.Termination.Type)}, its plane (z = 0) to the centre of slot 1 | {Invariant.Mm(report.Termination.Distance)} | mm |");
+        if (report.Termination.FeedPosition is { } feed) L($"| feed reference plane from z = 0 | {Invariant.Mm(feed)} | mm |");
+        if (report.Termination.FarShortPosition is { } far) L($"| second end short (inner face) from z = 0 | {Invariant.Mm(far)} | mm |");
+        if (report.Fabrication is { } plan)
+        {
+            L($"| tube length, datum A (the tube's machined end face) to its far end | {Invariant.Mm(plan.TubeLength.Meters)} | mm |");
+            L($"| datum A to z = 0 (cutlist.csv, layout and DXF positions are z + this) | {Invariant.Mm(plan.DesignOrigin.Meters)} | mm |");
+        }
         L($"| beam direction from broadside | {Invariant.Fixed(p.BeamDeg, 2)} | deg |");
         L($"| half-power beamwidth | {Invariant.Fixed(p.HpbwDeg, 2)} | deg |");
         L($"| peak sidelobe (design level {Invariant.Fixed(p.DesignSidelobeDb, 1)} dB) | {Invariant.Fixed(p.PeakSidelobeDb, 2)} | dB |");
@@ -78,6 +88,11 @@ public static class SummaryMarkdown
         {
             double worst = report.Sweep.Max(s => Complex.Abs(s.S11));
             L($"| worst VSWR over the sweep ({Invariant.Ghz(report.Sweep[0].FrequencyHz)} to {Invariant.Ghz(report.Sweep[^1].FrequencyHz)} GHz) | {Invariant.Fixed((1 + worst) / (1 - worst), 3)} | |");
+        }
+        if (report.Eirp is { } eirp)
+        {
+            if (eirp.PeakW is { } pk) L($"| EIRP on the beam axis at the peak transmitter power (P G) | {Invariant.Fixed(Dbw(pk), 2)} | dBW ({Watts(pk)}) |");
+            if (eirp.AverageW is { } av) L($"| EIRP on the beam axis at the average transmitter power (P G) | {Invariant.Fixed(Dbw(av), 2)} | dBW ({Watts(av)}) |");
         }
         if (p.CrossPolarDb is { } xpol)
             L($"| peak cross-polar level (edge-slot tilts, no polarisation filter) at {Invariant.Fixed(p.CrossPolarDirectionDeg ?? double.NaN, 1)} deg | {Invariant.Fixed(xpol, 2)} | dB |");
@@ -105,7 +120,7 @@ public static class SummaryMarkdown
         L();
         L("## Slots");
         L();
-        L($"Positions from datum A ({Escape(i.DatumDescription)}); {Invariant.Normalisation}; amplitudes linear, each normalised to its largest value; phase in degrees.");
+        L($"Positions z from the {Escape(i.DatumDescription)} (z = 0; the cut list gives them from datum A, the tube's end face); {Invariant.Normalisation}; amplitudes linear, each normalised to its largest value; phase in degrees.");
         L();
         if (tilt)
         {
@@ -146,6 +161,22 @@ public static class SummaryMarkdown
             L(Escape(cautions[k]));
         }
     }
+
+    /// <summary>
+    /// The verdict line that opens the summary: "**Requirements: PASS** (n of n met)", "**Requirements: FAIL** (k of n
+    /// met)", or "Requirements: none given".
+    /// </summary>
+    public static string VerdictLine(DesignReport report)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        int n = report.Requirements.Count, met = report.Requirements.Count(q => q.Passed);
+        if (n == 0) return "**Requirements: none given** (no pass/fail verdict).";
+        return $"**Requirements: {(met == n ? "PASS" : "FAIL")}** ({Invariant.Int(met)} of {Invariant.Int(n)} met).";
+    }
+
+    private static double Dbw(double watts) => watts > 0 ? 10 * Math.Log10(watts) : double.NegativeInfinity;
+
+    private static string Watts(double w) => w >= 1e6 ? $"{Invariant.Fixed(w * 1e-6, 3)} MW" : w >= 1e3 ? $"{Invariant.Fixed(w * 1e-3, 3)} kW" : $"{Invariant.Fixed(w, 3)} W";
 
     /// <summary>Most rows of the frequency-scan table (evenly spaced over the sweep, both ends included).</summary>
     public const int ScanRows = 11;

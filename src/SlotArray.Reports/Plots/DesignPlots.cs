@@ -96,45 +96,67 @@ public static class DesignPlots
         return m;
     }
 
-    /// <summary>Return loss (dB, left) and VSWR (right) vs frequency in GHz, analysis band shaded, VSWR 1.5 and 2 drawn.</summary>
+    /// <summary>Pixel height of <c>sweep.png</c> (two panels).</summary>
+    public const int SweepHeight = 760;
+
+    /// <summary>The VSWR limits drawn on the sweep plot: 1.5 and 2.</summary>
+    public static readonly IReadOnlyList<double> VswrLimits = [1.5, 2.0];
+
+    /// <summary>
+    /// The input match in two panels sharing the frequency axis (GHz): return loss (dB, upper panel) with the return
+    /// losses of the VSWR limits drawn as its limit lines, and VSWR (lower panel, 1 to 3) with VSWR 1.5 and 2 drawn;
+    /// the analysis band shaded in both. Over the report's match sweep (wide enough to show the VSWR band edges), else
+    /// its analysis sweep. Return loss = −20 log10 |Γ| and VSWR = (1 + |Γ|)/(1 − |Γ|) (standard definitions, e.g. D. M.
+    /// Pozar, <i>Microwave Engineering</i>, 4th ed., 2012, eqs. 2.39 and 2.41, from memory).
+    /// </summary>
     public static PlotModel Sweep(DesignReport report)
     {
-        var m = PlotExport.NewModel($"{report.Name}: input match");
-        AddLegend(m);
-        m.Axes.Add(new LinearAxis { Position = AxisPosition.Bottom, Title = "Frequency (GHz)", MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = OxyColor.FromRgb(225, 225, 225) });
-        m.Axes.Add(new LinearAxis { Position = AxisPosition.Left, Key = "rl", Title = "Return loss (dB)", Minimum = 0 });
-        m.Axes.Add(new LinearAxis { Position = AxisPosition.Right, Key = "vswr", Title = "VSWR", Minimum = 1, Maximum = 4 });
-        m.Annotations.Add(new RectangleAnnotation
+        var m = PlotExport.NewModel($"{report.Name}: input match (S11 normalised to the TE10 wave impedance)");
+        var grid = OxyColor.FromRgb(225, 225, 225);
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Bottom, Title = "Frequency (GHz)", MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = grid });
+        var rlAxis = new LinearAxis { Position = AxisPosition.Left, Key = "rl", Title = "Return loss (dB)", Minimum = 0, StartPosition = 0.54, EndPosition = 1, MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = grid };
+        m.Axes.Add(rlAxis);
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Left, Key = "vswr", Title = "VSWR", Minimum = 1, Maximum = 3, StartPosition = 0, EndPosition = 0.46, MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = grid });
+        foreach (string key in (string[])["rl", "vswr"])
         {
-            MinimumX = report.BandLowHz * 1e-9,
-            MaximumX = report.BandHighHz * 1e-9,
-            Fill = OxyColor.FromAColor(40, OxyColors.SteelBlue),
-            Text = "analysis band",
-            TextVerticalAlignment = VerticalAlignment.Top,
-            YAxisKey = "vswr",
-        });
-        foreach (double v in (double[])[1.5, 2.0])
+            m.Annotations.Add(new RectangleAnnotation
+            {
+                MinimumX = report.BandLowHz * 1e-9,
+                MaximumX = report.BandHighHz * 1e-9,
+                Fill = OxyColor.FromAColor(40, OxyColors.SteelBlue),
+                Text = "analysis band",
+                TextVerticalAlignment = VerticalAlignment.Top,
+                YAxisKey = key,
+            });
+        }
+        foreach (double v in VswrLimits)
         {
+            double rl = -Db20((v - 1) / (v + 1));
             m.Annotations.Add(new LineAnnotation
             {
-                Type = LineAnnotationType.Horizontal,
-                Y = v,
-                YAxisKey = "vswr",
-                LineStyle = LineStyle.Dash,
-                Color = OxyColors.Gray,
+                Type = LineAnnotationType.Horizontal, Y = rl, YAxisKey = "rl", LineStyle = LineStyle.Dash, Color = OxyColors.Gray,
+                Text = $"return loss {Invariant.Fixed(rl, 2)} dB (VSWR {Invariant.Fixed(v, 1)})",
+            });
+            m.Annotations.Add(new LineAnnotation
+            {
+                Type = LineAnnotationType.Horizontal, Y = v, YAxisKey = "vswr", LineStyle = LineStyle.Dash, Color = OxyColors.Gray,
                 Text = $"VSWR {Invariant.Fixed(v, 1)}",
             });
         }
-        var rl = new LineSeries { Title = "return loss (dB)", YAxisKey = "rl", Color = OxyColors.Navy, StrokeThickness = 1.5 };
+        var rlSeries = new LineSeries { Title = "return loss (dB)", YAxisKey = "rl", Color = OxyColors.Navy, StrokeThickness = 1.5 };
         var vswr = new LineSeries { Title = "VSWR", YAxisKey = "vswr", Color = OxyColors.Firebrick, StrokeThickness = 1.5 };
-        foreach (var p in report.Sweep)
+        double rlMax = 0;
+        foreach (var (fHz, s11) in TouchstoneWriter.Points(report))
         {
-            double mag = Math.Min(Complex.Abs(p.S11), 1 - 1e-12);
-            double f = p.FrequencyHz * 1e-9;
-            rl.Points.Add(new DataPoint(f, -Db20(Math.Max(mag, 1e-6))));
+            double mag = Math.Min(Complex.Abs(s11), 1 - 1e-12);
+            double f = fHz * 1e-9;
+            double rl = -Db20(Math.Max(mag, 1e-6));
+            rlMax = Math.Max(rlMax, rl);
+            rlSeries.Points.Add(new DataPoint(f, rl));
             vswr.Points.Add(new DataPoint(f, Math.Min((1 + mag) / (1 - mag), 100)));
         }
-        m.Series.Add(rl);
+        rlAxis.Maximum = Math.Max(20, Math.Min(60, 5 * Math.Ceiling(rlMax / 5)));
+        m.Series.Add(rlSeries);
         m.Series.Add(vswr);
         return m;
     }
