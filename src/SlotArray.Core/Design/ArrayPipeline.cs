@@ -151,10 +151,23 @@ public static class ArrayPipeline
         if (request.Coupling == CouplingMode.Mutual && request.Slots.Type != SlotType.Longitudinal)
             throw new InfeasibleDesignException(
                 $"coupling: mutual is implemented for arrays of longitudinal slots only; {request.Slots.Type} slots have no coupled designer yet: use coupling: none");
+        return RunWithSlotModel(request, SlotModelFor(request), options);
+    }
+
+    /// <summary>
+    /// Runs the whole pipeline with a given slot model in place of the one the request names (e.g. a model corrected by
+    /// what a prototype showed, <see cref="Prototype.CalibratedSlotModel"/>).
+    /// </summary>
+    /// <exception cref="InfeasibleDesignException">The request cannot be realised; the message says what to change.</exception>
+    public static ArrayResult RunWithSlotModel(ArrayRequest request, IShuntSlotModel slot, AnalysisOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(slot);
+        options ??= AnalysisOptions.Default;
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
-        var slot = SlotModelFor(request);
         if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
         var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
+        design = Prototype.PrototypeMargin.Apply(design, request.PrototypeMargin);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
         var f0 = request.DesignFrequency;
@@ -176,7 +189,7 @@ public static class ArrayPipeline
     {
         if (request.Feed.Type == FeedType.TravellingWave) return RunCoupledTravelling(request, options, taper, slot);
         var elliott = ElliottDesigner.Design(request, slot, taper.Weights);
-        var design = elliott.Design;
+        var design = Prototype.PrototypeMargin.Apply(elliott.Design, request.PrototypeMargin);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
@@ -198,7 +211,7 @@ public static class ArrayPipeline
     private static ArrayResult RunCoupledTravelling(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
     {
         var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights);
-        var design = result.Design;
+        var design = Prototype.PrototypeMargin.Apply(result.Design, request.PrototypeMargin);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
