@@ -23,6 +23,8 @@ public static class CommandLine
             DesignCommand.Build(output, error),
             SweepCommand.Build(output, error),
             ToleranceCommand.Build(output, error),
+            CompareCommand.Build(output, error),
+            SynthesiseCommand.Build(output, error),
         };
         return root;
     }

@@ -55,7 +55,7 @@ public static class DesignCommand
         if (request is null) return code;
         var clock = Stopwatch.StartNew();
         var result = Analyse(request, cache, error);
-        var report = DesignReportBuilder.Build(result);
+        var report = DesignReportBuilder.Build(result) with { SpecText = File.ReadAllText(path) };
         if (request.Tolerance is { } tol)
         {
             // The short tolerance summary of issue 7 (the full output is the tolerance command's).
