@@ -23,6 +23,7 @@ public static class CommandLine
             DesignCommand.Build(output, error),
             SweepCommand.Build(output, error),
             ToleranceCommand.Build(output, error),
+            SchemaCommand.Build(output, error),
             CompareCommand.Build(output, error),
             SynthesiseCommand.Build(output, error),
         };
@@ -44,6 +45,11 @@ public static class CommandLine
         {
             error.WriteLine($"infeasible: {e.Message}");
             return ExitCodes.Infeasible;
+        }
+        catch (Core.Slots.Tables.SlotTableException e)
+        {
+            error.WriteLine(e.Line > 0 ? $"slot table, line {e.Line}: {e.Message}" : $"slot table: {e.Message}");
+            return ExitCodes.BadInput;
         }
         catch (UserInputException e)
         {

@@ -7,8 +7,18 @@ namespace SlotArray.Cli.Tests;
 /// compare end to end: a design, synthetic measurements of it with a known error (synthesise), and the diagnosis. The
 /// reference is the injected error itself (closed loop); the refusals follow from the design (one port, its band).
 /// </summary>
-public class CompareCommandTests
+public class CompareCommandTests(CompareCommandTests.DesignedPlate plate) : IClassFixture<CompareCommandTests.DesignedPlate>
 {
+    /// <summary>One design folder shared by the tests (designing it is the slow part).</summary>
+    public sealed class DesignedPlate
+    {
+        public DesignedPlate() => (Design, Root) = Designed();
+
+        public string Design { get; }
+
+        public string Root { get; }
+    }
+
     private const string Yaml = """
         spec: 1
         name: compare-test-8
@@ -34,7 +44,7 @@ public class CompareCommandTests
     [Fact]
     public void A_synthetic_prototype_with_a_length_error_is_diagnosed_and_fixed()
     {
-        var (design, root) = Designed();
+        var (design, root) = (plate.Design, plate.Root);
         string meas = Path.Combine(root, "meas");
         var (c1, o1, e1) = DesignRuns.Run("synthesise", design, "-o", meas, "--length-error", "0.5%", "--no-cache", "--seed", "2");
         Assert.True(c1 == 0, e1);
@@ -56,7 +66,7 @@ public class CompareCommandTests
     [Fact]
     public void A_malformed_file_exits_2_with_file_and_line_and_another_design_is_refused()
     {
-        var (design, root) = Designed();
+        var (design, root) = (plate.Design, plate.Root);
         string bad = Path.Combine(root, "bad.s1p");
         File.WriteAllLines(bad, ["# GHz S MA R 50", "9.3 0.1 10", "9.4 0.1 oops"]);
         var (code, _, err) = DesignRuns.Run("compare", design, bad, "--no-cache");

@@ -64,7 +64,7 @@ public static class SynthesiseCommand
         var freqs = cutFrequencies.Length == 0 ? [design.DesignFrequency] : cutFrequencies.Select(t =>
             QuantityParser.TryParseFrequency(t, out var f, out string why) ? f : throw new UserInputException($"--cut-frequency '{t}': {why}")).ToArray();
         var truth = PrototypeErrors.None(design.Count) with { LengthScale = sl, ConductanceScale = conductanceScale, GuideWavelengthScale = sg, SlotLengthErrors = dl };
-        var model = new PrototypeModel(design, result.SlotModel);
+        var model = new PrototypeModel(design, ArrayPipeline.AnalysisModel(request, design, result.SlotModel, AnalysisOptions.Default));
         bool twoPort = request.Feed.Type == FeedType.TravellingWave;
         // A sweep of ±2.5 % around the design frequency (or the band, when wider), as a bench would sweep a prototype.
         var low = Frequency.FromHertz(Math.Min(request.BandLow.Hertz, 0.975 * design.DesignFrequency.Hertz));

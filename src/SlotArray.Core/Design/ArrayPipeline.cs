@@ -69,18 +69,15 @@ public sealed record ArrayResult(
 /// </summary>
 public static class ArrayPipeline
 {
-    /// <summary>The slot model the request names, built for its guide, slot width and design frequency.</summary>
+    /// <summary>
+    /// The slot model for the request from <paramref name="source"/> (chosen at the composition root; when null, the
+    /// source the request asks for, <see cref="SlotSource.For"/>, with a cache of its own).
+    /// </summary>
     /// <exception cref="InfeasibleDesignException">The slot type has no designer yet.</exception>
-    public static IShuntSlotModel SlotModelFor(ArrayRequest request)
+    public static IShuntSlotModel SlotModelFor(ArrayRequest request, SlotSource? source = null)
     {
         ArgumentNullException.ThrowIfNull(request);
-        return request.Slots.Type switch
-        {
-            SlotType.Longitudinal => LongitudinalSlotModels.Create(request.Slots.Model, request.Guide, request.Slots.Width, request.DesignFrequency),
-            SlotType.Edge => EdgeSlot.Create(request.Guide, request.Slots.Width),
-            _ => throw new InfeasibleDesignException(
-                $"slots of type '{request.Slots.Type}' have a conductance formula (slot command) but no array designer yet: use 'longitudinal' or 'edge' slots"),
-        };
+        return (source ?? SlotSource.For(request)).ModelFor(request);
     }
 
     /// <summary>The designer the feed type calls for.</summary>
@@ -142,16 +139,16 @@ public static class ArrayPipeline
         return (sweep, ArrayFigures.At(design, sweep.AtDesign, grid), Array.AsReadOnly(points));
     }
 
-    /// <summary>Runs the whole pipeline.</summary>
+    /// <summary>Runs the whole pipeline with the slot source chosen by the caller (the request's own when null).</summary>
     /// <exception cref="InfeasibleDesignException">The request cannot be realised; the message says what to change.</exception>
-    public static ArrayResult Run(ArrayRequest request, AnalysisOptions? options = null)
+    public static ArrayResult Run(ArrayRequest request, AnalysisOptions? options = null, SlotSource? source = null)
     {
         ArgumentNullException.ThrowIfNull(request);
         options ??= AnalysisOptions.Default;
         if (request.Coupling == CouplingMode.Mutual && request.Slots.Type != SlotType.Longitudinal)
             throw new InfeasibleDesignException(
                 $"coupling: mutual is implemented for arrays of longitudinal slots only; {request.Slots.Type} slots have no coupled designer yet: use coupling: none");
-        return RunWithSlotModel(request, SlotModelFor(request), options);
+        return RunWithSlotModel(request, SlotModelFor(request, source), options);
     }
 
     /// <summary>
@@ -168,6 +165,7 @@ public static class ArrayPipeline
         if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
         var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
         design = Prototype.PrototypeMargin.Apply(design, request.PrototypeMargin);
+        var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
         var f0 = request.DesignFrequency;
@@ -177,7 +175,7 @@ public static class ArrayPipeline
         var b15 = ArrayNetwork.FindBand(design, analysis, 1.5, lo, hi, step);
         var b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
-            .DistinctBy(w => w.Message).ToList();
+            .Concat(outside).DistinctBy(w => w.Message).ToList();
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling };
     }
 
@@ -190,12 +188,13 @@ public static class ArrayPipeline
         if (request.Feed.Type == FeedType.TravellingWave) return RunCoupledTravelling(request, options, taper, slot);
         var elliott = ElliottDesigner.Design(request, slot, taper.Weights);
         var design = Prototype.PrototypeMargin.Apply(elliott.Design, request.PrototypeMargin);
+        var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
         var comparison = ElliottComparison.Of(elliott, analysis, AnalysisModel(request, elliott.Uncoupled, slot, options),
             request.BandLow, request.BandHigh);
-        var warnings = taper.Warnings.Concat(design.Warnings).DistinctBy(w => w.Message).ToList();
+        var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).DistinctBy(w => w.Message).ToList();
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
         {
             Coupling = comparison,
@@ -212,12 +211,13 @@ public static class ArrayPipeline
     {
         var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights);
         var design = Prototype.PrototypeMargin.Apply(result.Design, request.PrototypeMargin);
+        var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
         var comparison = CoupledTravellingWaveComparison.Of(result, analysis, AnalysisModel(request, result.Uncoupled.Design, slot, options),
             request.BandLow, request.BandHigh);
-        var warnings = taper.Warnings.Concat(design.Warnings).DistinctBy(w => w.Message).ToList();
+        var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).DistinctBy(w => w.Message).ToList();
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
         {
             TravellingWave = result.Uncoupled with { Design = design },

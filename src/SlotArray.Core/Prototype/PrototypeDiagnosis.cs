@@ -54,7 +54,7 @@ public static class PrototypeFit
         ArgumentNullException.ThrowIfNull(asCut);
         var inner = slot is FrequencyInterpolatedSlotModel fi ? fi.Inner : slot;
         var surfaces = new SlotSurfaceModel(inner, [.. asCut.Slots.Select(s => (s.Coupling, s.Length))], 0.025, 0.1);
-        return new FrequencyInterpolatedSlotModel(surfaces, asCut.DesignFrequency, FrequencyInterpolatedSlotModel.DefaultStep, 4);
+        return new FrequencyInterpolatedSlotModel(surfaces, asCut.DesignFrequency);
     }
 
     /// <summary>
