@@ -125,6 +125,7 @@ public static class SpecJsonSchema
     private static JsonObject Value(SpecValue value) => value switch
     {
         TextValue t => Text(t),
+        BooleanValue => new JsonObject { ["type"] = "boolean" },
         IntegerValue i => i.Minimum == i.Maximum
             ? AnyOf(new JsonObject { ["const"] = i.Minimum }, NumeralString(@"^\s*\+?0*" + i.Minimum.ToString(CultureInfo.InvariantCulture) + @"\s*$"))
             : AnyOf(new JsonObject { ["type"] = "integer", ["minimum"] = i.Minimum, ["maximum"] = i.Maximum }, NumeralString(@"^\s*[+-]?[0-9]+\s*$")),

@@ -68,7 +68,14 @@ internal static class SpecKeys
         new("cutter", Q(QuantityKind.Length, "above 0, no larger than the width"), "end-mill diameter: round-ended slots")
             { DefaultText = "omitted: square ends" },
         new("model", Words(SpecNames.SlotModels), "slot admittance model") { Default = "moment-method" },
-    ]);
+        new("data", new TextValue(MaxLength: 4096), "your own slot table (CSV, README 'Your own slot table'), path relative to the spec; replaces the model")
+            { DefaultText = "none: the model" },
+        new("extrapolate", new BooleanValue(), "with data: design slots outside the table (flagged in the cut list and summary) instead of refusing")
+            { DefaultText = "false" },
+    ])
+    {
+        Exclusive = [("model", "data")],
+    };
 
     private static readonly string[] StandingWave = [SpecNames.Of(Core.Design.FeedType.StandingWave)];
     private static readonly string[] TravellingWave = [SpecNames.Of(Core.Design.FeedType.TravellingWave)];

@@ -8,6 +8,9 @@ internal abstract record SpecValue;
 /// <param name="MaxLength">Longest text accepted, or null.</param>
 internal sealed record TextValue(string? Pattern = null, int? MaxLength = null) : SpecValue;
 
+/// <summary>A YAML boolean: <c>true</c> or <c>false</c> (also <c>True</c>, <c>TRUE</c>, … as the YAML 1.2 core schema reads them).</summary>
+internal sealed record BooleanValue : SpecValue;
+
 /// <summary>A whole number in [<paramref name="Minimum"/>, <paramref name="Maximum"/>] (a quoted numeral is accepted too).</summary>
 internal sealed record IntegerValue(long Minimum, long Maximum) : SpecValue;
 

@@ -39,8 +39,13 @@ internal sealed partial class SpecBuilder
                 $"'cutter' (end-mill diameter) must be positive and no larger than the slot width{(width is null ? "" : $" {Mm(width.Value)}")}, got {Mm(cutter.Value)}"))
             cutterOk = false;
         SlotModelKind? model = s.Has("model") ? Choice(s, "model", SpecNames.SlotModels, false) : SlotModelKind.MomentMethod;
-        if (type is null || count is null || width is null || !cutterOk || model is null) return null;
-        return new SlotRequest(type.Value, count.Value, Length.FromMeters(width.Value), cutter is null ? null : Length.FromMeters(cutter.Value), model.Value);
+        var (data, extrapolate, dataOk) = SlotData(s, type, guide);
+        if (type is null || count is null || width is null || !cutterOk || model is null || !dataOk) return null;
+        return new SlotRequest(type.Value, count.Value, Length.FromMeters(width.Value), cutter is null ? null : Length.FromMeters(cutter.Value), model.Value)
+        {
+            Data = data,
+            Extrapolate = extrapolate,
+        };
     }
 
     /// <summary>

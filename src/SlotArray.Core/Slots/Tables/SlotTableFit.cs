@@ -15,11 +15,13 @@ namespace SlotArray.Core.Slots.Tables;
 /// <para>Why this shape: a slot's y against L/L_r is nearly the same function for every offset (R. S. Elliott,
 /// <i>Antenna Theory and Design</i>, Prentice-Hall 1981, ch. 8: measured Y/G0 curves for different offsets nearly
 /// collapse on one function of l/l_r), so h varies weakly with the geometry and is interpolated linearly between
-/// tabulated geometries (held at the end ones outside), while the strongly varying L_r and g_r get monotone cubic
-/// curves (<see cref="MonotoneCurve"/>).</para>
-/// <para>Outside the table: g_r beyond the tabulated geometries follows g_r ∝ sin²(πx/a) (offset; Stevenson's
-/// longitudinal slot, A. F. Stevenson, J. Appl. Phys. 19, 24–38, 1948) or sin²θ (tilt) from the nearest end, L_r is held
-/// at the end value; outside the tabulated frequencies y(L, f) = y(L f/f_e, f_e) at the nearest tabulated f_e (the
+/// tabulated geometries (held at the end ones outside), while L_r and g_r get monotone cubic curves
+/// (<see cref="MonotoneCurve"/>). g_r is fitted as s(c) × (g_r/s(c)) with s = sin²(πx/a) for an offset (Stevenson's
+/// longitudinal slot, A. F. Stevenson, J. Appl. Phys. 19, 24–38, 1948: g ∝ sin²(πx/a)) or s = sin²θ for a tilt: the
+/// ratio varies slowly, so the curve through it is accurate between offsets where g_r itself bends (g_r ∝ x² near
+/// the centre line), as the moment method's own characterisation does.</para>
+/// <para>Outside the table: g_r beyond the tabulated geometries follows s(c) with the ratio of the nearest end, L_r is
+/// held at the end value; outside the tabulated frequencies y(L, f) = y(L f/f_e, f_e) at the nearest tabulated f_e (the
 /// slot's response scales with its electrical length; an approximation, flagged). The range check of the design
 /// (<see cref="OutsideRange"/>) refuses or flags such slots.</para>
 /// <para>Residuals: leave-one-out at the interior points of every fit (each point predicted by the fit through the
@@ -29,7 +31,7 @@ public sealed class SlotTableFit
 {
     private readonly double[] _c, _f;
     private readonly Group[,] _g;            // [frequency k, coupling i]
-    private readonly MonotoneCurve[] _lr, _gr; // per frequency, against coupling
+    private readonly MonotoneCurve[] _lr, _ratio; // per frequency, against coupling: L_r and g_r/s(c)
     private readonly double _a;
 
     private SlotTableFit(SlotTable table, RectangularWaveguide guide, double[] c, double[] f, Group[,] g, SlotTableResiduals residuals)
@@ -41,11 +43,11 @@ public sealed class SlotTableFit
         _g = g;
         _a = guide.BroadWall.Meters;
         _lr = new MonotoneCurve[f.Length];
-        _gr = new MonotoneCurve[f.Length];
+        _ratio = new MonotoneCurve[f.Length];
         for (int k = 0; k < f.Length; k++)
         {
             _lr[k] = new MonotoneCurve(c, [.. Enumerable.Range(0, c.Length).Select(i => g[k, i].ResonantLength)]);
-            _gr[k] = new MonotoneCurve(c, [.. Enumerable.Range(0, c.Length).Select(i => g[k, i].ResonantConductance)]);
+            _ratio[k] = new MonotoneCurve(c, [.. Enumerable.Range(0, c.Length).Select(i => g[k, i].ResonantConductance / Shape(CouplingKind, _a, c[i]))]);
         }
         Residuals = residuals;
         double nuLow = 0, nuHigh = double.PositiveInfinity;
@@ -110,7 +112,9 @@ public sealed class SlotTableFit
                     throw new SlotTableException(FormattableString.Invariant(
                         $"the resonant conductance does not increase with the {Noun(table)} at {f[k] / 1e9:0.######} GHz: g_r = {groups[k, i - 1].ResonantConductance:0.#####} at {Show(table, c[i - 1])} but {groups[k, i].ResonantConductance:0.#####} at {Show(table, c[i])}; check those rows"),
                         groups[k, i].FirstLine);
-        return new SlotTableFit(table, guide, c, f, groups, SlotTableResiduals.Of(c, groups));
+        var kind = table.Geometry == SlotTableGeometry.Longitudinal ? SlotCouplingKind.Offset : SlotCouplingKind.Tilt;
+        double a = guide.BroadWall.Meters;
+        return new SlotTableFit(table, guide, c, f, groups, SlotTableResiduals.Of(c, groups, x => Shape(kind, a, x)));
     }
 
     /// <summary>Resonant length L_r (m) at coupling c and frequency f (electrical scaling outside the tabulated frequencies).</summary>
@@ -170,17 +174,13 @@ public sealed class SlotTableFit
         return new MonotoneCurve(_f, [.. Enumerable.Range(0, _f.Length).Select(valueAt)]).At(f);
     }
 
-    /// <summary>g_r at tabulated frequency k: the monotone curve inside, ∝ sin²(πx/a) or sin²θ from the nearest end outside.</summary>
-    private double Conductance(int k, double c)
-    {
-        if (c >= _c[0] && c <= _c[^1]) return _gr[k].Raw(c);
-        double end = c < _c[0] ? _c[0] : _c[^1];
-        return _gr[k].At(end) * Shape(c) / Shape(end);
-    }
+    /// <summary>g_r at tabulated frequency k: s(c) times the monotone curve of g_r/s(c), held at its end values outside.</summary>
+    private double Conductance(int k, double c) => Shape(CouplingKind, _a, c) * _ratio[k].At(c);
 
-    private double Shape(double c)
+    /// <summary>The shape s(c) of the resonant conductance: sin²(πx/a) for an offset, sin²θ for a tilt.</summary>
+    internal static double Shape(SlotCouplingKind kind, double broadWall, double c)
     {
-        double s = CouplingKind == SlotCouplingKind.Offset ? Math.Sin(Math.PI * c / _a) : Math.Sin(c);
+        double s = kind == SlotCouplingKind.Offset ? Math.Sin(Math.PI * c / broadWall) : Math.Sin(c);
         return s * s;
     }
 

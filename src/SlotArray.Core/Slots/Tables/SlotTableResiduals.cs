@@ -14,7 +14,7 @@ namespace SlotArray.Core.Slots.Tables;
 public sealed record SlotTableResiduals(double ResonantLengthRms, double ResonantLengthMax, double ResonantConductanceRms,
     double ResonantConductanceMax, double AdmittanceRms, double AdmittanceMax, int Points)
 {
-    internal static SlotTableResiduals Of(double[] c, SlotTableFit.Group[,] g)
+    internal static SlotTableResiduals Of(double[] c, SlotTableFit.Group[,] g, Func<double, double> shape)
     {
         var dl = new List<double>();
         var dg = new List<double>();
@@ -24,7 +24,8 @@ public sealed record SlotTableResiduals(double ResonantLengthRms, double Resonan
             double[] lr = [.. Enumerable.Range(0, c.Length).Select(i => g[k, i].ResonantLength)];
             double[] gr = [.. Enumerable.Range(0, c.Length).Select(i => g[k, i].ResonantConductance)];
             dl.AddRange(MonotoneCurve.LeaveOneOut(c, lr).Select(p => p.Residual / lr[p.Index]));
-            dg.AddRange(MonotoneCurve.LeaveOneOut(c, gr).Select(p => p.Residual / gr[p.Index]));
+            double[] ratio = [.. gr.Select((v, i) => v / shape(c[i]))];
+            dg.AddRange(MonotoneCurve.LeaveOneOut(c, ratio).Select(p => p.Residual / ratio[p.Index]));   // Δg_r/g_r = Δratio/ratio
             for (int i = 0; i < c.Length; i++)
             {
                 var grp = g[k, i];

@@ -75,16 +75,12 @@ public sealed class TabulatedSlotModel : IShuntSlotModel
         return new SlotResonance(c, Length.FromMeters(Fit.ResonantLength(c, f)), conductance);
     }
 
-    /// <summary>Outside the single-mode band; a geometry or frequency outside the table (extrapolated).</summary>
+    /// <summary>Outside the single-mode band. (Slots outside the table are judged per slot by the design's range check.)</summary>
     public IReadOnlyList<DesignWarning> Warnings(double coupling, Frequency f)
     {
-        var list = new List<DesignWarning>();
         var (low, high) = Guide.SingleModeBand;
-        if (f <= low || f >= high)
-            list.Add(new DesignWarning("slot-single-mode", $"{f} is outside the single-mode band {low} – {high}: the slot table assumes TE10 only"));
-        var why = Fit.OutsideRange(coupling, Fit.ResonantLength(coupling, f), f);
-        if (why.Count > 0)
-            list.Add(new DesignWarning("slot-table-extrapolated", $"slot table {Fit.Table.Source}: {string.Join("; ", why)}: extrapolated"));
-        return list;
+        return f <= low || f >= high
+            ? [new DesignWarning("slot-single-mode", $"{f} is outside the single-mode band {low} – {high}: the slot table assumes TE10 only")]
+            : [];
     }
 }
