@@ -83,7 +83,7 @@ public static class CompareCommand
         }
         foreach (var line in inputs) error.WriteLine($"read {line}");
 
-        var result = DesignCommand.Analyse(request, cache, error);
+        var result = DesignCommand.Analyse(request, cache, error, false);
         var data = new PrototypeMeasurements(network, cuts);
         PrototypeDiagnosis diagnosis;
         try

@@ -50,7 +50,7 @@ public static class SynthesiseCommand
         if (request is null) return code;
         double sl = Percent(lengthError, "--length-error"), sg = Percent(guideError, "--guide-wavelength-error");
         if (!(conductanceScale > 0)) throw new UserInputException("--conductance-scale must be positive");
-        var result = DesignCommand.Analyse(request, cache, error);
+        var result = DesignCommand.Analyse(request, cache, error, false);
         var design = result.Design;
         var dl = new double[design.Count];
         foreach (string item in slotErrors)

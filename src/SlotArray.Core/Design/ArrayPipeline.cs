@@ -18,6 +18,12 @@ public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFra
 {
     /// <summary>The defaults.</summary>
     public static AnalysisOptions Default { get; } = new();
+
+    /// <summary>Receives the progress of the long steps (band sweep, coupled iterations); null for none. Called from worker threads.</summary>
+    public IProgress<WorkProgress>? Progress { get; init; }
+
+    /// <summary>Stops the run between steps, iterations and sweep points with an <see cref="OperationCanceledException"/>.</summary>
+    public CancellationToken Cancellation { get; init; }
 }
 
 /// <summary>Everything one run computes: the taper, the slot model, the design and its analysis across the band.</summary>
@@ -135,7 +141,12 @@ public static class ArrayPipeline
         var top = sweep.Points.Count > 0 && sweep.Points[^1].Frequency > design.DesignFrequency ? sweep.Points[^1].Frequency : design.DesignFrequency;
         var grid = ArrayFigures.DefaultGrid(design, top);
         var points = new FrequencyFigures[sweep.Points.Count];
-        Parallel.For(0, points.Length, i => points[i] = ArrayFigures.At(design, sweep.Points[i], grid));
+        int done = 0;
+        Parallel.For(0, points.Length, new ParallelOptions { CancellationToken = options.Cancellation }, i =>
+        {
+            points[i] = ArrayFigures.At(design, sweep.Points[i], grid);
+            options.Progress?.Report(new WorkProgress("band sweep", Interlocked.Increment(ref done), points.Length));
+        });
         return (sweep, ArrayFigures.At(design, sweep.AtDesign, grid), Array.AsReadOnly(points));
     }
 
@@ -164,6 +175,7 @@ public static class ArrayPipeline
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
         if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
         var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
+        options.Cancellation.ThrowIfCancellationRequested();
         design = Prototype.PrototypeMargin.Apply(design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
@@ -186,7 +198,9 @@ public static class ArrayPipeline
     private static ArrayResult RunCoupled(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
     {
         if (request.Feed.Type == FeedType.TravellingWave) return RunCoupledTravelling(request, options, taper, slot);
-        var elliott = ElliottDesigner.Design(request, slot, taper.Weights);
+        var elliott = ElliottDesigner.Design(request, slot, taper.Weights,
+            ElliottOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
+        options.Cancellation.ThrowIfCancellationRequested();
         var design = Prototype.PrototypeMargin.Apply(elliott.Design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
@@ -209,7 +223,9 @@ public static class ArrayPipeline
     /// </summary>
     private static ArrayResult RunCoupledTravelling(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
     {
-        var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights);
+        var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights,
+            CoupledTravellingWaveOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
+        options.Cancellation.ThrowIfCancellationRequested();
         var design = Prototype.PrototypeMargin.Apply(result.Design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
