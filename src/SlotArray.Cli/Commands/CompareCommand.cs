@@ -44,8 +44,7 @@ public static class CompareCommand
         string spec = Path.Combine(dir, "spec.yaml");
         if (!File.Exists(spec))
             throw new UserInputException($"{dir}: no spec.yaml: give the output folder of 'slotarray design' (it writes the spec beside its outputs; run design again if the folder is older)");
-        var request = DesignCommand.Load(spec, error, out int code);
-        if (request is null) return code;
+        var request = DesignCommand.Load(spec, error, "nothing compared");
 
         Core.Quantities.Frequency? defaultFrequency = null;
         if (cutFrequency is not null)

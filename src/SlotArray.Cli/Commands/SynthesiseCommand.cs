@@ -46,8 +46,7 @@ public static class SynthesiseCommand
     {
         string spec = Path.Combine(dir, "spec.yaml");
         if (!File.Exists(spec)) throw new UserInputException($"{dir}: no spec.yaml: give the output folder of 'slotarray design'");
-        var request = DesignCommand.Load(spec, error, out int code);
-        if (request is null) return code;
+        var request = DesignCommand.Load(spec, error, "nothing written");
         double sl = Percent(lengthError, "--length-error"), sg = Percent(guideError, "--guide-wavelength-error");
         if (!(conductanceScale > 0)) throw new UserInputException("--conductance-scale must be positive");
         var result = DesignCommand.Analyse(request, cache, error, false);
