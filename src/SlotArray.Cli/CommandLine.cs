@@ -39,6 +39,8 @@ public static class CommandLine
             InitCommand.Build(output, error),
             CharacteriseCommand.Build(output, error),
             VerifyCommand.Build(output, error),
+            CompareCommand.Build(output, error),
+            SynthesiseCommand.Build(output, error),
         };
         return root;
     }

@@ -118,7 +118,7 @@ public class DesignCommandTests(DemoRuns demo) : IClassFixture<DemoRuns>
     public void Demo_designs_with_exit_0_and_writes_every_file()
     {
         Assert.True(demo.FirstRun.Code == ExitCodes.Ok, demo.FirstRun.Err);
-        string[] files = ["design.json", "cutlist.csv", "layout.svg", "face-broad.dxf", "pattern.png", "pattern.svg", "taper.png", "slots.png", "sweep.png", "scan.png", "input.s1p", "summary.md"];
+        string[] files = ["design.json", "cutlist.csv", "layout.svg", "face-broad.dxf", "pattern.png", "pattern.svg", "taper.png", "slots.png", "sweep.png", "scan.png", "input.s1p", "summary.md", "spec.yaml"];
         Assert.Equal(files.Order(StringComparer.Ordinal), Directory.GetFiles(demo.First).Select(Path.GetFileName).Order(StringComparer.Ordinal));
         Assert.Contains("S11 at 9.41 GHz", demo.FirstRun.Out);
         Assert.Contains("designing 'harbour-surveillance-16'", demo.FirstRun.Err);   // progress on stderr

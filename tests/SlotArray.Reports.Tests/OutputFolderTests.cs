@@ -9,7 +9,7 @@ public sealed class OutputFolderTests : IDisposable
     public void Dispose() => Directory.Delete(_root, recursive: true);
 
     private static readonly string[] Expected =
-        ["cutlist.csv", "design.json", "face-broad.dxf", "input.s1p", "layout.svg", "pattern.png", "pattern.svg", "scan.png", "slots.png", "summary.md", "sweep.png", "taper.png"];
+        ["cutlist.csv", "design.json", "face-broad.dxf", "input.s1p", "layout.svg", "pattern.png", "pattern.svg", "scan.png", "slots.png", "spec.yaml", "summary.md", "sweep.png", "taper.png"];
 
     private string[] Entries(string dir) => [.. Directory.EnumerateFileSystemEntries(dir).Select(Path.GetFileName).Order(StringComparer.Ordinal)!];
 

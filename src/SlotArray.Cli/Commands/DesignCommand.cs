@@ -94,7 +94,7 @@ public static class DesignCommand
         string folder = OutputFolderCheck.Prepare(outDir ?? DefaultFolder(request.Name), replacesWhole: true);
         var clock = Stopwatch.StartNew();
         var result = Analyse(request, cache, error, progress);
-        var report = DesignReportBuilder.Build(result, document);
+        var report = DesignReportBuilder.Build(result, document) with { SpecText = File.ReadAllText(path) };
         if (request.Tolerance is { } tol)
         {
             // The short tolerance summary of issue 7 (the full output is the tolerance command's).

@@ -190,11 +190,24 @@ public static class ArrayPipeline
         if (request.Coupling == CouplingMode.Mutual && request.Slots.Type != SlotType.Longitudinal)
             throw new InfeasibleDesignException(
                 $"coupling: mutual is implemented for arrays of longitudinal slots only; {request.Slots.Type} slots have no coupled designer yet: use coupling: none");
+        return RunWithSlotModel(request, SlotModelFor(request, source), options);
+    }
+
+    /// <summary>
+    /// Runs the whole pipeline with a given slot model in place of the one the request names (e.g. a model corrected by
+    /// what a prototype showed, <see cref="Prototype.CalibratedSlotModel"/>).
+    /// </summary>
+    /// <exception cref="InfeasibleDesignException">The request cannot be realised; the message says what to change.</exception>
+    public static ArrayResult RunWithSlotModel(ArrayRequest request, IShuntSlotModel slot, AnalysisOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(slot);
+        options ??= AnalysisOptions.Default;
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
-        var slot = SlotModelFor(request, source);
         if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
         var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
         options.Cancellation.ThrowIfCancellationRequested();
+        design = Prototype.PrototypeMargin.Apply(design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
@@ -222,7 +235,7 @@ public static class ArrayPipeline
         var elliott = ElliottDesigner.Design(request, slot, taper.Weights,
             ElliottOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
         options.Cancellation.ThrowIfCancellationRequested();
-        var design = elliott.Design;
+        var design = Prototype.PrototypeMargin.Apply(elliott.Design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
@@ -248,7 +261,7 @@ public static class ArrayPipeline
         var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights,
             CoupledTravellingWaveOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
         options.Cancellation.ThrowIfCancellationRequested();
-        var design = result.Design;
+        var design = Prototype.PrototypeMargin.Apply(result.Design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);

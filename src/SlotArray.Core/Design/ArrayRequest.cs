@@ -31,7 +31,15 @@ public sealed record ArrayRequest(
     CouplingMode Coupling,
     ToleranceRequest? Tolerance,
     Requirements Requirements,
-    TransmitterRequest? Transmitter);
+    TransmitterRequest? Transmitter)
+{
+    /// <summary>
+    /// <c>fabrication.prototype_margin</c>: fractional change of every slot length on the plate to be cut, e.g. −0.005 for
+    /// a first plate whose slots are cut 0.5 % short on purpose so that they can be trimmed up after measurement (common
+    /// practice, no source); 0 (default) cuts the designed lengths. The analysis and every output describe the plate as cut.
+    /// </summary>
+    public double PrototypeMargin { get; init; }
+}
 
 /// <summary>Kind of radiating slot.</summary>
 public enum SlotType

@@ -11,6 +11,9 @@ public sealed record DesignReport
     /// <summary>Array name, used in titles and file names.</summary>
     public required string Name { get; init; }
 
+    /// <summary>The spec's text as given (written back as spec.yaml so that <c>compare</c> can rebuild the design), or null.</summary>
+    public string? SpecText { get; init; }
+
     /// <summary>Design frequency, Hz; &gt; 0.</summary>
     public required double FrequencyHz { get; init; }
 

@@ -53,6 +53,7 @@ public static class OutputFolder
         new("scan.png", (r, s) => PlotExport.Write(ScanPlot.Build(r), s, "png", 900, ScanPlot.Height(r))),
         new("input.s1p", Text(TouchstoneWriter.Write)),
         new("summary.md", Text(SummaryMarkdown.Write)),
+        new("spec.yaml", (r, s) => s.Write(new UTF8Encoding(false).GetBytes(r.SpecText ?? "# the spec's text was not given to this writer\n"))),
     ];
 
     /// <summary>Writes every file of <see cref="Files"/> for <paramref name="report"/> into <paramref name="directory"/>.</summary>

@@ -152,6 +152,14 @@ internal static class SpecKeys
         new("average_power", Q(QuantityKind.Power, "above 0, up to the peak power"), "average transmitter power") { DefaultText = "no estimate", Example = "20 W" },
     ]);
 
+    /// <summary><c>fabrication</c>: how the plate is to be cut.</summary>
+    public static readonly SpecSection Fabrication = new("fabrication", "how the plate is to be cut",
+    [
+        new("prototype_margin", Q(QuantityKind.Percent, "-5 % to +5 %"),
+            "every slot cut this much longer (+) or shorter (-) than designed; a first plate cut short (e.g. -0.5 %) can be trimmed up after 'slotarray compare' (common practice, no source)")
+            { DefaultText = "0 %: the designed lengths" },
+    ]);
+
     /// <summary>The top level of the spec.</summary>
     public static readonly SpecSection Root = new("", "a SlotArray spec (version 1): one slotted-waveguide array from requirements to metal",
     [
@@ -169,8 +177,9 @@ internal static class SpecKeys
         new("tolerance", new BlockValue(ToleranceBlock), "machining tolerances for the Monte Carlo analysis") { DefaultText = "no tolerance analysis" },
         new("requirements", new BlockValue(Requirements), Requirements.Description) { DefaultText = "none" },
         new("transmitter", new BlockValue(Transmitter), Transmitter.Description) { DefaultText = "no exposure estimate" },
+        new("fabrication", new BlockValue(Fabrication), Fabrication.Description) { DefaultText = "the designed lengths" },
     ]);
 
     /// <summary>Every block, the top level first.</summary>
-    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, Requirements, Transmitter];
+    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, Requirements, Transmitter, Fabrication];
 }

@@ -11,6 +11,7 @@ internal sealed partial class SpecBuilder
     private static IReadOnlyList<string> SigmaKeys => SpecKeys.Sigma.Names;
     private static IReadOnlyList<string> RequirementKeys => SpecKeys.Requirements.Names;
     private static IReadOnlyList<string> TransmitterKeys => SpecKeys.Transmitter.Names;
+    private static IReadOnlyList<string> FabricationKeys => SpecKeys.Fabrication.Names;
 
     /// <summary>Default Monte Carlo trials and seed when a tolerance block omits them.</summary>
     internal const int DefaultTrials = 1000, DefaultSeed = 1;
@@ -138,5 +139,19 @@ internal sealed partial class SpecBuilder
         if (ok && peak is not null && average is not null)
             ok &= Require(s, "average_power", average <= peak, $"'average_power' {Num(average.Value)} W cannot exceed 'peak_power' {Num(peak.Value)} W");
         return ok ? new TransmitterRequest(peak, average) : null;
+    }
+
+    /// <summary>Fabrication (optional): prototype_margin, a percentage within ±5 % (0 when absent).</summary>
+    private double Fabrication(Section root, out bool ok)
+    {
+        ok = true;
+        if (!root.Has("fabrication")) return 0;
+        var s = Sub(root, "fabrication", FabricationKeys, false);
+        if (s is null) { ok = false; return 0; }
+        if (!s.Has("prototype_margin")) return 0;
+        double? m = Quantity(s, "prototype_margin", QuantityKind.Percent, false, "-0.5 %");
+        ok &= m is not null && Require(s, "prototype_margin", Math.Abs(m.Value) <= Core.Prototype.PrototypeMargin.Limit,
+            $"'prototype_margin' must lie within ±5 % (a first plate is usually cut about 0.5 % short: -0.5 %), got {Num(m.Value * 100)} %");
+        return ok ? m!.Value : 0;
     }
 }

@@ -53,12 +53,13 @@ internal sealed partial class SpecBuilder
         var tolerance = Tolerance(s, out bool toleranceOk);
         var requirements = Requirements(s);
         var transmitter = Transmitter(s, out bool transmitterOk);
+        double margin = Fabrication(s, out bool fabricationOk);
 
         if (D.ErrorCount > 0 || name is null || f is null || band is null || guide is null || slots is null || feed is null
-            || taper is null || coupling is null || !toleranceOk || requirements is null || !transmitterOk)
+            || taper is null || coupling is null || !toleranceOk || requirements is null || !transmitterOk || !fabricationOk)
             return null;
         return new ArrayRequest(name, f.Value, band.Value.Low, band.Value.High, guide, slots, feed, taper, coupling.Value,
-            tolerance, requirements, transmitter);
+            tolerance, requirements, transmitter) { PrototypeMargin = margin };
     }
 
     private string? Name(Section s)
