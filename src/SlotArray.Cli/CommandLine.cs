@@ -27,6 +27,9 @@ public static class CommandLine
         return root;
     }
 
+    /// <summary>The exception a user can act on: the cause inside a parallel failure, else the exception itself.</summary>
+    private static Exception Actionable(Exception e) => e is AggregateException a ? ParallelFailures.Cause(a) : e;
+
     /// <summary>Parses and runs; maps exceptions to the architecture's exit codes.</summary>
     public static int Run(string[] args, TextWriter output, TextWriter error)
     {
@@ -38,9 +41,11 @@ public static class CommandLine
             // System.CommandLine reports a parse error as 1; our contract says bad input is 2.
             return parse.Errors.Count > 0 ? ExitCodes.BadInput : code;
         }
-        catch (InfeasibleDesignException e)
+        catch (Exception e) when (Actionable(e) is InfeasibleDesignException or ConvergenceException)
         {
-            error.WriteLine($"infeasible: {e.Message}");
+            // A solver that does not converge is exit 1 too: the message names the slot or stage, and the spec can be changed.
+            var cause = Actionable(e);
+            error.WriteLine($"{(cause is InfeasibleDesignException ? "infeasible" : "not converged")}: {cause.Message}");
             return ExitCodes.Infeasible;
         }
         catch (UserInputException e)

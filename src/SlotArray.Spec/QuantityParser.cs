@@ -55,7 +55,7 @@ public static partial class QuantityParser
         new("λg", QuantityKind.GuideWavelengths, 1),
     ];
 
-    [GeneratedRegex(@"^\s*(?<num>[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?)\s*(?<unit>.*?)\s*$", RegexOptions.CultureInvariant)]
+    [GeneratedRegex(@"^\s*(?<num>[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(?<unit>.*?)\s*$", RegexOptions.CultureInvariant)]
     private static partial Regex NumberAndUnit();
 
     /// <summary>What a value of each kind looks like, for messages: "a length such as '1.27 mm'".</summary>
@@ -96,7 +96,14 @@ public static partial class QuantityParser
         string expected = string.Join(", or ", accepted.Select(Describe));
         if (string.IsNullOrWhiteSpace(text)) { error = $"needs {expected}"; return false; }
         var m = NumberAndUnit().Match(text);
-        if (!m.Success) { error = $"needs {expected}; '{text.Trim()}' is not a number with a unit"; return false; }
+        if (!m.Success)
+        {
+            // \d would also take other scripts' digits, which the invariant number parser cannot read: the pattern says [0-9].
+            error = text.Any(c => char.IsDigit(c) && !char.IsAsciiDigit(c))
+                ? $"needs {expected}; '{text.Trim()}' has digits other than 0-9: write the number with the digits 0-9"
+                : $"needs {expected}; '{text.Trim()}' is not a number with a unit";
+            return false;
+        }
         double number = double.Parse(m.Groups["num"].Value, NumberStyles.Float, CultureInfo.InvariantCulture);
         if (!double.IsFinite(number)) { error = $"needs {expected}; '{m.Groups["num"].Value}' is too large to be a finite number"; return false; }
         string symbol = m.Groups["unit"].Value;

@@ -121,11 +121,22 @@ public sealed class ResonantCharacterisation
         ArgumentNullException.ThrowIfNull(solver);
         double lam = 2 * Math.PI / solver.Guide.MediumWavenumber(f);
         double Im(double len) => solver.Solve(offset, len, f.Hertz, null).Admittance.Imaginary;
-        double lo = 0.44 * lam, hi = 0.52 * lam, flo = Im(lo), fhi = Im(hi);
-        if (!(flo > 0 && fhi < 0)) { lo = 0.36 * lam; hi = 0.62 * lam; flo = Im(lo); fhi = Im(hi); }
+        // The narrow-slot model needs L > 2w: the brackets start just above twice the width when that is longer.
+        double shortest = 2 * solver.Width.Meters * (1 + 1e-6);
+        double lo = Math.Max(0.44 * lam, shortest), hi = 0.52 * lam, flo = lo < hi ? Im(lo) : double.NaN, fhi = lo < hi ? Im(hi) : double.NaN;
+        if (!(flo > 0 && fhi < 0))
+        {
+            lo = Math.Max(0.36 * lam, shortest);
+            hi = 0.62 * lam;
+            if (lo >= hi)
+                throw new InfeasibleDesignException(FormattableString.Invariant(
+                    $"slots {solver.Width} wide are too wide for the narrow-slot model at {f}: it needs the length (about half a wavelength, here at most {hi * 1e3:0.##} mm) to exceed twice the width; use slots narrower than {hi / 2 * 1e3:0.##} mm"));
+            flo = Im(lo);
+            fhi = Im(hi);
+        }
         if (!(flo > 0 && fhi < 0))
             throw new ConvergenceException(FormattableString.Invariant(
-                $"no resonance (Im y = 0) of the longitudinal slot at offset {offset * 1e3:0.###} mm between {lo * 1e3:0.##} and {hi * 1e3:0.##} mm at {f}"), 2, Math.Min(Math.Abs(flo), Math.Abs(fhi)));
+                $"no resonance (Im y = 0) of the longitudinal slot at offset {offset * 1e3:0.###} mm between {lo * 1e3:0.##} and {hi * 1e3:0.##} mm at {f} in this guide (TE10 cutoff {solver.Guide.CutoffTe10}, {solver.Guide.NextModeName} cutoff {solver.Guide.SingleModeBand.High}, wall {solver.Guide.WallThickness}): move the frequency toward the middle of the single-mode band, or use a thicker wall"), 2, Math.Min(Math.Abs(flo), Math.Abs(fhi)));
         if (!Brent.TryFindRoot(Im, lo, hi, 1e-7 * lam, 100, out double root))
             throw new ConvergenceException($"resonance search of the longitudinal slot at offset {offset * 1e3:0.###} mm failed", 100, double.NaN);
         return (root, solver.Solve(offset, root, f.Hertz, null));
