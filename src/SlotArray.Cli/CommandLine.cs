@@ -23,6 +23,7 @@ public static class CommandLine
             DesignCommand.Build(output, error),
             SweepCommand.Build(output, error),
             ToleranceCommand.Build(output, error),
+            SchemaCommand.Build(output, error),
         };
         return root;
     }
@@ -47,6 +48,11 @@ public static class CommandLine
             var cause = Actionable(e);
             error.WriteLine($"{(cause is InfeasibleDesignException ? "infeasible" : "not converged")}: {cause.Message}");
             return ExitCodes.Infeasible;
+        }
+        catch (Core.Slots.Tables.SlotTableException e)
+        {
+            error.WriteLine(e.Line > 0 ? $"slot table, line {e.Line}: {e.Message}" : $"slot table: {e.Message}");
+            return ExitCodes.BadInput;
         }
         catch (UserInputException e)
         {

@@ -35,12 +35,13 @@ public sealed record SlotCache(string Directory)
 
     /// <summary>
     /// Preloads every stored table that matches the request's guide and slot width (default moment-method options,
-    /// as the spec's slot models use) into Core's in-memory cache. Returns the number preloaded; reasons for ignored
+    /// as the spec's slot models use) into the run's in-memory cache. Returns the number preloaded; reasons for ignored
     /// files go to <paramref name="log"/>.
     /// </summary>
-    public int Load(ArrayRequest request, TextWriter log)
+    public int Load(ArrayRequest request, ResonantCharacterisationCache memory, TextWriter log)
     {
         ArgumentNullException.ThrowIfNull(request);
+        ArgumentNullException.ThrowIfNull(memory);
         ArgumentNullException.ThrowIfNull(log);
         if (request.Slots.Type != SlotType.Longitudinal || !System.IO.Directory.Exists(Directory)) return 0;
         var solver = new LongitudinalSlotMomentMethod(request.Guide, request.Slots.Width);
@@ -53,7 +54,7 @@ public sealed record SlotCache(string Directory)
                 if (table is null) { log.WriteLine($"slot cache: ignored {file} (unreadable, another version or a bad checksum)"); continue; }
                 string key = ResonantCharacterisation.KeyOf(solver, Core.Quantities.Frequency.FromHertz(table.FrequencyHertz), table.OffsetsMeters.Count);
                 if (key != table.Key) continue;   // another guide, width or frequency: not this run's
-                ResonantCharacterisation.Preload(solver, table);
+                memory.Preload(solver, table);
                 loaded++;
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException or JsonException or ArgumentException or InvalidOperationException)
@@ -64,12 +65,13 @@ public sealed record SlotCache(string Directory)
         return loaded;
     }
 
-    /// <summary>Stores every table Core holds in memory that the cache lacks. Write failures are reported to <paramref name="log"/>, never thrown.</summary>
-    public int Save(TextWriter log)
+    /// <summary>Stores every table the run's in-memory cache holds that the disk cache lacks. Write failures are reported to <paramref name="log"/>, never thrown.</summary>
+    public int Save(ResonantCharacterisationCache memory, TextWriter log)
     {
+        ArgumentNullException.ThrowIfNull(memory);
         ArgumentNullException.ThrowIfNull(log);
         int saved = 0;
-        foreach (var table in ResonantCharacterisation.CachedTables())
+        foreach (var table in memory.Tables())
         {
             string file = FileFor(table.Key);
             if (File.Exists(file) && Read(file)?.Key == table.Key) continue;

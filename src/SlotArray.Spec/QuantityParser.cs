@@ -55,8 +55,35 @@ public static partial class QuantityParser
         new("λg", QuantityKind.GuideWavelengths, 1),
     ];
 
-    [GeneratedRegex(@"^\s*(?<num>[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?)\s*(?<unit>.*?)\s*$", RegexOptions.CultureInvariant)]
+    /// <summary>
+    /// A decimal number as a spec writes it (dot separator, optional exponent, the digits 0-9: .NET's \d would also take
+    /// other scripts' digits, which the invariant number parser cannot read); shared with the JSON Schema's patterns.
+    /// </summary>
+    internal const string NumberPattern = @"[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?";
+
+    [GeneratedRegex(@"^\s*(?<num>" + NumberPattern + @")\s*(?<unit>.*?)\s*$", RegexOptions.CultureInvariant)]
     private static partial Regex NumberAndUnit();
+
+    /// <summary>The unit symbols of the given kinds, in table order (e.g. m, cm, mm, um, µm, μm, in, inch, mil).</summary>
+    internal static IReadOnlyList<string> SymbolsOf(IReadOnlyList<QuantityKind> kinds)
+        => Units.Where(u => kinds.Contains(u.Kind)).Select(u => u.Symbol).ToList();
+
+    /// <summary>
+    /// A regular expression (ECMA-262 subset, for a JSON Schema <c>pattern</c>) that matches exactly the unit spellings
+    /// <see cref="FindUnit"/> accepts for the given kinds: each symbol as written, and in any letter case where the
+    /// case-folded symbol is unique (so <c>ghz</c> is matched, <c>mw</c> is not).
+    /// </summary>
+    internal static string UnitPattern(IReadOnlyList<QuantityKind> kinds)
+    {
+        var parts = Units.Where(u => kinds.Contains(u.Kind)).Select(u =>
+        {
+            bool foldable = Units.Count(v => string.Equals(v.Symbol, u.Symbol, StringComparison.OrdinalIgnoreCase)) == 1;
+            return string.Concat(u.Symbol.Select(c => foldable && char.ToUpperInvariant(c) != char.ToLowerInvariant(c)
+                ? $"[{char.ToLowerInvariant(c)}{char.ToUpperInvariant(c)}]"
+                : Regex.Escape(c.ToString())));
+        });
+        return "(?:" + string.Join("|", parts.OrderByDescending(p => p.Length).ThenBy(p => p, StringComparer.Ordinal)) + ")";
+    }
 
     /// <summary>What a value of each kind looks like, for messages: "a length such as '1.27 mm'".</summary>
     public static string Describe(QuantityKind kind) => kind switch
@@ -98,7 +125,6 @@ public static partial class QuantityParser
         var m = NumberAndUnit().Match(text);
         if (!m.Success)
         {
-            // \d would also take other scripts' digits, which the invariant number parser cannot read: the pattern says [0-9].
             error = text.Any(c => char.IsDigit(c) && !char.IsAsciiDigit(c))
                 ? $"needs {expected}; '{text.Trim()}' has digits other than 0-9: write the number with the digits 0-9"
                 : $"needs {expected}; '{text.Trim()}' is not a number with a unit";

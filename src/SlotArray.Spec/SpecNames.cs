@@ -29,6 +29,10 @@ public static class SpecNames
         new("cosine-pedestal", TaperType.CosinePedestal), new("bayliss", TaperType.Bayliss), new("given", TaperType.Given),
     ];
 
+    /// <summary>Other spellings accepted for a word of these tables (after folding case and '_'/' ' to '-'), each with the word it stands for.</summary>
+    internal static IReadOnlyList<KeyValuePair<string, string>> WordAliases { get; } =
+        [new("center", "centre"), new("traveling-wave", "travelling-wave"), new("moment", "moment-method")];
+
     /// <summary>Coupling modes: none | mutual.</summary>
     public static IReadOnlyList<KeyValuePair<string, CouplingMode>> CouplingModes { get; } =
         [new("none", CouplingMode.None), new("mutual", CouplingMode.Mutual)];

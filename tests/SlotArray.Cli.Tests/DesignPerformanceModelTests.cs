@@ -44,7 +44,7 @@ public class DesignPerformanceModelTests
     public void Stored_characterisation_round_trips_bit_exactly_and_a_tampered_file_is_rejected()
     {
         var solver = new LongitudinalSlotMomentMethod(Wr90, Length.FromMillimeters(1.6));
-        var table = ResonantCharacterisation.For(solver, Frequency.FromGigahertz(9.41), 8).Table;
+        var table = new ResonantCharacterisationCache().For(solver, Frequency.FromGigahertz(9.41), 8).Table;
         string dir = DesignRuns.TempFolder("cachefile");
         var cache = new SlotCache(dir);
         string file = cache.FileFor(table.Key);

@@ -57,7 +57,8 @@ public static class CheckCommand
         o.WriteLine(string.Format(Inv, "  λg               {0:F3} mm at {1:F4} GHz", lg.Millimeters, r.DesignFrequency.Gigahertz));
         var s = r.Slots;
         o.WriteLine(string.Format(Inv, "  slots            {0} {1}, width {2:F3} mm, {3}, model {4}", s.Count, SpecNames.Of(s.Type), s.Width.Millimeters,
-            s.Cutter is { } c ? string.Format(Inv, "cutter {0:F3} mm (round ends)", c.Millimeters) : "square ends", SpecNames.Of(s.Model)));
+            s.Cutter is { } c ? string.Format(Inv, "cutter {0:F3} mm (round ends)", c.Millimeters) : "square ends",
+            s.Data is { } table ? string.Format(Inv, "slot table {0} ({1} rows, SHA-256 {2}){3}", table.Source, table.Rows.Count, table.Sha256, s.Extrapolate ? ", extrapolate" : "") : SpecNames.Of(s.Model)));
         var f = r.Feed;
         string fed = f.Type == FeedType.StandingWave
             ? string.Format(Inv, "{0}-fed, short {1}", SpecNames.Of(f.Position), Distance(f.ShortDistance, lg))
@@ -116,6 +117,11 @@ public static class CheckCommand
             ["coupling"] = SpecNames.Of(r.Coupling),
             ["warnings"] = warnings.Select(w => w.ToString()).ToArray(),
         };
+        if (r.Slots.Data is { } data && doc["slots"] is Dictionary<string, object?> slots)
+        {
+            slots.Remove("model");
+            slots["data"] = new Dictionary<string, object?> { ["file"] = data.Source, ["sha256"] = data.Sha256, ["rows"] = data.Rows.Count, ["extrapolate"] = r.Slots.Extrapolate };
+        }
         o.WriteLine(JsonSerializer.Serialize(doc, new JsonSerializerOptions { WriteIndented = true }));
     }
 }

@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Diagnostics;
 using System.Globalization;
 using SlotArray.Core.Design;
+using SlotArray.Core.Slots;
 using SlotArray.Reports;
 using SlotArray.Reports.Model;
 using SlotArray.Spec;
@@ -92,15 +93,36 @@ public static class DesignCommand
         return null;
     }
 
+    /// <summary>
+    /// The composition root of a run: the slot source the spec asks for (its <c>slots.data</c> table, fitted, or the
+    /// built-in models) with the run's characterisation cache, preloaded from the disk cache when given. Prints the
+    /// table's fit residuals to <paramref name="error"/>.
+    /// </summary>
+    internal static SlotSource SourceFor(ArrayRequest request, SlotCache? cache, TextWriter error, out int loaded)
+    {
+        var memory = new ResonantCharacterisationCache();
+        loaded = cache?.Load(request, memory, error) ?? 0;
+        var source = SlotSource.For(request, memory);
+        if (source.Table is { } t)
+        {
+            var r = t.Residuals;
+            error.WriteLine(string.Format(Inv, "slot table {0} (SHA-256 {1}): {2} rows, {3} {4}(s), {5} frequenc{6}; fit residuals (leave-one-out, {7} points): L_r rms {8:0.###} % max {9:0.###} %, g_r rms {10:0.##} % max {11:0.##} %, y/g_r rms {12:0.####} max {13:0.####}",
+                t.Table.Source, t.Table.Sha256, t.Table.Rows.Count, t.Couplings.Count, t.CouplingKind == Core.Slots.SlotCouplingKind.Offset ? "offset" : "tilt",
+                t.Frequencies.Count, t.Frequencies.Count == 1 ? "y" : "ies", r.Points, r.ResonantLengthRms * 100, r.ResonantLengthMax * 100,
+                r.ResonantConductanceRms * 100, r.ResonantConductanceMax * 100, r.AdmittanceRms, r.AdmittanceMax));
+        }
+        return source;
+    }
+
     /// <summary>Runs the pipeline with the slot cache (when given), printing progress to <paramref name="error"/>.</summary>
     internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error)
     {
-        int loaded = cache?.Load(request, error) ?? 0;
+        var source = SourceFor(request, cache, error, out int loaded);
         error.WriteLine(string.Format(Inv, "designing '{0}': {1} slots at {2:0.####} GHz, analysing {3:0.####} to {4:0.####} GHz{5} ...",
             request.Name, request.Slots.Count, request.DesignFrequency.Gigahertz, request.BandLow.Gigahertz, request.BandHigh.Gigahertz,
             cache is null ? "" : string.Format(Inv, " ({0} slot table(s) from the cache)", loaded)));
-        var result = ArrayPipeline.Run(request);
-        cache?.Save(error);
+        var result = ArrayPipeline.Run(request, source: source);
+        cache?.Save(source.Cache, error);
         return result;
     }
 

@@ -37,7 +37,11 @@ public static class SlotCommand
         var target = new Option<string>("--target") { Description = "--plane: input resistance to feed at, e.g. 50ohm", DefaultValueFactory = _ => "50ohm" };
         var wall = new Option<string>("--wall") { Description = "Wall thickness where the slot is cut (0 = thin-wall model)", DefaultValueFactory = _ => "0mm" };
         var width = new Option<string>("--width") { Description = "Slot width", DefaultValueFactory = _ => "1.5875mm" };
-        var table = new Option<bool>("--table") { Description = "Also tabulate g_r and L_r over the usable offsets (0 < x <= a/4)" };
+        var table = new Option<string?>("--table")
+        {
+            Description = "Also tabulate g_r and L_r over the usable offsets (0 < x <= a/4); --table FILE writes the built-in model's slot table (the slots.data CSV format) to FILE",
+            Arity = ArgumentArity.ZeroOrOne,
+        };
         var json = new Option<bool>("--json") { Description = "Print one JSON document on stdout" };
         var cmd = new Command("slot", "One slot: resonant length and conductance (moment method beside Stevenson) and y = Y/G0 against length")
         {
@@ -56,10 +60,22 @@ public static class SlotCommand
             var w = ParseLength(pr.GetValue(width)!, "--width");
             if (pr.GetValue(offset) is not null && pr.GetValue(tilt) is not null)
                 throw new UserInputException("slot: give --offset (broad-wall slot) or --tilt (edge slot), not both");
+            bool withTable = pr.GetResult(table) is not null;
+            string? tableFile = pr.GetValue(table);
             if (pr.GetValue(offset) is { } x)
-                return Longitudinal(g, f, ParseLength(x, "--offset"), w, pr.GetValue(table), pr.GetValue(json), output, error);
+            {
+                int code = Longitudinal(g, f, ParseLength(x, "--offset"), w, withTable && tableFile is null, pr.GetValue(json), output, error);
+                if (tableFile is not null)
+                    error.WriteLine($"wrote {SlotTableExport.Longitudinal(new MomentMethodSlotModel(g, w), f, tableFile)} rows of the moment-method slot table to {tableFile}");
+                return code;
+            }
             if (pr.GetValue(tilt) is { } th)
-                return SlotEdgeReport.Run(g, f, ParseAngle(th, "--tilt"), null, w, pr.GetValue(json), output, error);
+            {
+                int code = SlotEdgeReport.Run(g, f, ParseAngle(th, "--tilt"), null, w, pr.GetValue(json), output, error);
+                if (tableFile is not null)
+                    error.WriteLine($"wrote {SlotTableExport.Edge(EdgeSlot.Create(g, w), f, tableFile)} rows of the edge-slot table to {tableFile}");
+                return code;
+            }
             throw new UserInputException("slot: give the coupling of the slot: --offset X (longitudinal broad-wall slot), --tilt A (edge slot) or --plane");
         });
         return cmd;

@@ -54,9 +54,10 @@ public static class ToleranceCommand
             $"{path}: the spec has no tolerance: block; add one, e.g. 'tolerance: {{offset: 0.02 mm, length: 0.02 mm, trials: 2000, seed: 1}}'");
         tol = tol with { Trials = trials ?? tol.Trials, Seed = seed ?? tol.Seed };
 
-        var (design, slot) = ToleranceAnalysis.Design(request);
+        var source = DesignCommand.SourceFor(request, null, error, out _);
+        var (design, slot) = ToleranceAnalysis.Design(request, source);
         foreach (var w in design.Warnings) error.WriteLine($"warning: {w.Message}");
-        var result = Analyse(request, design, slot, tol, interactive: !json && !Console.IsOutputRedirected && AnsiConsole.Profile.Capabilities.Interactive);
+        var result = Analyse(request, design, slot, source, tol, interactive: !json && !Console.IsOutputRedirected && AnsiConsole.Profile.Capabilities.Interactive);
 
         Write(dir, request, result);
         if (json) output.Write(ToleranceJson.ToText(request.Name, request.DesignFrequency.Hertz, result));
@@ -69,15 +70,16 @@ public static class ToleranceCommand
     }
 
     /// <summary>Runs the analysis, with a Spectre progress bar when <paramref name="interactive"/>.</summary>
-    private static ToleranceResult Analyse(ArrayRequest request, ArrayDesign design, Core.Slots.IShuntSlotModel slot, ToleranceRequest tol, bool interactive)
+    private static ToleranceResult Analyse(ArrayRequest request, ArrayDesign design, Core.Slots.IShuntSlotModel slot, SlotSource source,
+        ToleranceRequest tol, bool interactive)
     {
-        if (!interactive) return ToleranceAnalysis.Run(request, design, slot, tol);
+        if (!interactive) return ToleranceAnalysis.Run(request, design, slot, tol, source: source);
         ToleranceResult? result = null;
         AnsiConsole.Progress().Start(ctx =>
         {
             var task = ctx.AddTask("Monte Carlo trials", maxValue: tol.Trials);
             var gate = new object();
-            result = ToleranceAnalysis.Run(request, design, slot, tol, progress: done => { lock (gate) task.Value = Math.Max(task.Value, done); });
+            result = ToleranceAnalysis.Run(request, design, slot, tol, progress: done => { lock (gate) task.Value = Math.Max(task.Value, done); }, source: source);
             task.Value = tol.Trials;
         });
         return result!;

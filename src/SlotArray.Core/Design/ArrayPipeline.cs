@@ -80,18 +80,15 @@ public sealed record ArrayResult(
 /// </summary>
 public static class ArrayPipeline
 {
-    /// <summary>The slot model the request names, built for its guide, slot width and design frequency.</summary>
+    /// <summary>
+    /// The slot model for the request from <paramref name="source"/> (chosen at the composition root; when null, the
+    /// source the request asks for, <see cref="SlotSource.For"/>, with a cache of its own).
+    /// </summary>
     /// <exception cref="InfeasibleDesignException">The slot type has no designer yet.</exception>
-    public static IShuntSlotModel SlotModelFor(ArrayRequest request)
+    public static IShuntSlotModel SlotModelFor(ArrayRequest request, SlotSource? source = null)
     {
         ArgumentNullException.ThrowIfNull(request);
-        return request.Slots.Type switch
-        {
-            SlotType.Longitudinal => LongitudinalSlotModels.Create(request.Slots.Model, request.Guide, request.Slots.Width, request.DesignFrequency),
-            SlotType.Edge => EdgeSlot.Create(request.Guide, request.Slots.Width),
-            _ => throw new InfeasibleDesignException(
-                $"slots of type '{request.Slots.Type}' have a conductance formula (slot command) but no array designer yet: use 'longitudinal' or 'edge' slots"),
-        };
+        return (source ?? SlotSource.For(request)).ModelFor(request);
     }
 
     /// <summary>The designer the feed type calls for.</summary>
@@ -153,25 +150,29 @@ public static class ArrayPipeline
         return (sweep, ArrayFigures.At(design, sweep.AtDesign, grid), Array.AsReadOnly(points));
     }
 
-    /// <summary>Runs the whole pipeline; a failure inside its parallel stages surfaces as itself (<see cref="ParallelFailures"/>).</summary>
+    /// <summary>
+    /// Runs the whole pipeline with the slot source chosen by the caller (the request's own when null); a failure inside
+    /// its parallel stages surfaces as itself (<see cref="ParallelFailures"/>).
+    /// </summary>
     /// <exception cref="InfeasibleDesignException">The request cannot be realised; the message says what to change.</exception>
     /// <exception cref="ConvergenceException">A solver did not converge; the message names the slot or stage.</exception>
-    public static ArrayResult Run(ArrayRequest request, AnalysisOptions? options = null)
+    public static ArrayResult Run(ArrayRequest request, AnalysisOptions? options = null, SlotSource? source = null)
     {
         ArgumentNullException.ThrowIfNull(request);
-        return ParallelFailures.Unwrapped(() => RunStages(request, options ?? AnalysisOptions.Default));
+        return ParallelFailures.Unwrapped(() => RunStages(request, options ?? AnalysisOptions.Default, source));
     }
 
-    private static ArrayResult RunStages(ArrayRequest request, AnalysisOptions options)
+    private static ArrayResult RunStages(ArrayRequest request, AnalysisOptions options, SlotSource? source)
     {
         if (request.Coupling == CouplingMode.Mutual && request.Slots.Type != SlotType.Longitudinal)
             throw new InfeasibleDesignException(
                 $"coupling: mutual is implemented for arrays of longitudinal slots only; {request.Slots.Type} slots have no coupled designer yet: use coupling: none");
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
-        var slot = SlotModelFor(request);
+        var slot = SlotModelFor(request, source);
         if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
         var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
         SlotClearance.Require(design, request.Slots.Cutter);
+        var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
         var f0 = request.DesignFrequency;
@@ -186,7 +187,7 @@ public static class ArrayPipeline
             b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
         }
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
-            .DistinctBy(w => w.Message).ToList();
+            .Concat(outside).DistinctBy(w => w.Message).ToList();
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling };
     }
 
@@ -200,12 +201,13 @@ public static class ArrayPipeline
         var elliott = ElliottDesigner.Design(request, slot, taper.Weights);
         var design = elliott.Design;
         SlotClearance.Require(design, request.Slots.Cutter);
+        var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
         var comparison = ElliottComparison.Of(elliott, analysis, AnalysisModel(request, elliott.Uncoupled, slot, options),
             request.BandLow, request.BandHigh);
-        var warnings = taper.Warnings.Concat(design.Warnings).DistinctBy(w => w.Message).ToList();
+        var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).DistinctBy(w => w.Message).ToList();
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
         {
             Coupling = comparison,
@@ -223,12 +225,13 @@ public static class ArrayPipeline
         var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights);
         var design = result.Design;
         SlotClearance.Require(design, request.Slots.Cutter);
+        var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
         var comparison = CoupledTravellingWaveComparison.Of(result, analysis, AnalysisModel(request, result.Uncoupled.Design, slot, options),
             request.BandLow, request.BandHigh);
-        var warnings = taper.Warnings.Concat(design.Warnings).DistinctBy(w => w.Message).ToList();
+        var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).DistinctBy(w => w.Message).ToList();
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
         {
             TravellingWave = result.Uncoupled with { Design = design },

@@ -59,7 +59,14 @@ public enum SlotModelKind
 /// <param name="Width">Slot width.</param>
 /// <param name="Cutter">End-mill diameter for round-ended slots, or null for square ends.</param>
 /// <param name="Model">Slot-admittance model.</param>
-public sealed record SlotRequest(SlotType Type, int Count, Length Width, Length? Cutter, SlotModelKind Model);
+public sealed record SlotRequest(SlotType Type, int Count, Length Width, Length? Cutter, SlotModelKind Model)
+{
+    /// <summary><c>slots.data</c>: the user's slot table that replaces the built-in model, or null.</summary>
+    public Slots.Tables.SlotTable? Data { get; init; }
+
+    /// <summary><c>slots.extrapolate</c>: allow (and flag) slots outside the table instead of refusing the design.</summary>
+    public bool Extrapolate { get; init; }
+}
 
 /// <summary>Feed arrangement.</summary>
 public enum FeedType

@@ -81,6 +81,9 @@ public sealed class FrequencyInterpolatedSlotModel : IShuntSlotModel
     /// <inheritdoc />
     public double MaximumCoupling => Inner.MaximumCoupling;
 
+    /// <inheritdoc />
+    public SlotDataRange Range => Inner.Range;
+
     /// <summary>Node frequency f_k = f_ref (1 + k h).</summary>
     /// <param name="k">Node number (0 at the reference frequency).</param>
     public Frequency NodeFrequency(long k) => Frequency.FromHertz(Reference.Hertz * (1 + k * Step));

@@ -11,11 +11,17 @@ public static class LongitudinalSlotModels
     /// The model of the given kind: <see cref="MomentMethodSlotModel"/> ("moment-method", finite wall) or
     /// <see cref="StevensonSlotModel"/> ("stevenson", whose length dependence is computed at the design frequency).
     /// </summary>
+    /// <param name="kind">Which model.</param>
+    /// <param name="guide">The guide.</param>
+    /// <param name="width">Slot width.</param>
+    /// <param name="designFrequency">Design frequency (the Stevenson model's length dependence is computed there).</param>
+    /// <param name="options">Truncations of the moment method; the defaults when null.</param>
+    /// <param name="cache">Where resonant characterisations are kept (injected by the composition root); a private one when null.</param>
     public static IShuntSlotModel Create(SlotModelKind kind, RectangularWaveguide guide, Length width, Frequency designFrequency,
-        MomentMethodOptions? options = null) => kind switch
+        MomentMethodOptions? options = null, ResonantCharacterisationCache? cache = null) => kind switch
         {
-            SlotModelKind.MomentMethod => new MomentMethodSlotModel(guide, width, options),
-            SlotModelKind.Stevenson => new StevensonSlotModel(guide, width, designFrequency, options),
+            SlotModelKind.MomentMethod => new MomentMethodSlotModel(guide, width, options, cache),
+            SlotModelKind.Stevenson => new StevensonSlotModel(guide, width, designFrequency, options, cache),
             _ => throw new ArgumentOutOfRangeException(nameof(kind), kind, "unknown longitudinal slot model"),
         };
 }

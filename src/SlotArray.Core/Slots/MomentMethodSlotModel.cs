@@ -14,9 +14,18 @@ public sealed class MomentMethodSlotModel : IShuntSlotModel
     /// <summary>Shunt asymmetry |B − C|/|B| above which the shunt representation is flagged (10 %).</summary>
     public const double ShuntAsymmetryLimit = 0.10;
 
+    private readonly ResonantCharacterisationCache _cache;
+
     /// <summary>A model for slots of the given width in the given guide (its wall thickness is used).</summary>
-    public MomentMethodSlotModel(RectangularWaveguide guide, Length width, MomentMethodOptions? options = null)
-        => Solver = new LongitudinalSlotMomentMethod(guide, width, options);
+    /// <param name="guide">The guide.</param>
+    /// <param name="width">Slot width.</param>
+    /// <param name="options">Truncations of the moment method; the defaults when null.</param>
+    /// <param name="cache">Where resonant characterisations are kept (shared by the composition root); a private one when null.</param>
+    public MomentMethodSlotModel(RectangularWaveguide guide, Length width, MomentMethodOptions? options = null, ResonantCharacterisationCache? cache = null)
+    {
+        Solver = new LongitudinalSlotMomentMethod(guide, width, options);
+        _cache = cache ?? new ResonantCharacterisationCache();
+    }
 
     /// <summary>The moment-method solver.</summary>
     public LongitudinalSlotMomentMethod Solver { get; }
@@ -37,7 +46,7 @@ public sealed class MomentMethodSlotModel : IShuntSlotModel
     public double MaximumCoupling => StevensonLongitudinalSlot.MaximumOffset(Guide);
 
     /// <summary>The resonant characterisation at frequency f (computed once, cached).</summary>
-    public ResonantCharacterisation Characterisation(Frequency f) => ResonantCharacterisation.For(Solver, f);
+    public ResonantCharacterisation Characterisation(Frequency f) => _cache.For(Solver, f);
 
     /// <inheritdoc />
     public Complex Admittance(double coupling, Length length, Frequency f) => Solver.Solve(Length.FromMeters(coupling), length, f).Admittance;

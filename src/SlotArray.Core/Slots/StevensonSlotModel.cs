@@ -29,9 +29,15 @@ public sealed class StevensonSlotModel : IShuntSlotModel
     private readonly CubicSpline _hRe, _hIm;
 
     /// <summary>The model for slots of the given width in the given guide; h is computed at the design frequency.</summary>
-    public StevensonSlotModel(RectangularWaveguide guide, Length width, Frequency designFrequency, MomentMethodOptions? options = null)
+    /// <param name="guide">The guide.</param>
+    /// <param name="width">Slot width.</param>
+    /// <param name="designFrequency">Frequency at which h is computed.</param>
+    /// <param name="options">Truncations of the moment method; the defaults when null.</param>
+    /// <param name="cache">Where the moment method's resonant characterisations are kept; a private one when null.</param>
+    public StevensonSlotModel(RectangularWaveguide guide, Length width, Frequency designFrequency, MomentMethodOptions? options = null,
+        ResonantCharacterisationCache? cache = null)
     {
-        _mom = new MomentMethodSlotModel(guide, width, options);
+        _mom = new MomentMethodSlotModel(guide, width, options, cache);
         DesignFrequency = designFrequency;
         double xRef = guide.BroadWall.Meters / 8;
         var c = _mom.Characterisation(designFrequency);

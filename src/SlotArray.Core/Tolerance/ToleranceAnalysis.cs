@@ -24,24 +24,34 @@ public static class ToleranceAnalysis
         return request.Requirements.SidelobesDb ?? request.Taper.SidelobeLevelDb;
     }
 
-    /// <summary>The slot-model factory of a request: the same model kind for a perturbed guide or slot width.</summary>
-    public static SlotModelFactory FactoryFor(ArrayRequest request)
+    /// <summary>
+    /// The slot-model factory of a request: the same slot source for a perturbed guide or slot width (a table's y
+    /// shifted by the built-in model's change; <see cref="SlotSource.ModelFor"/>).
+    /// </summary>
+    /// <param name="request">The request.</param>
+    /// <param name="source">The run's slot source; the request's own when null.</param>
+    public static SlotModelFactory FactoryFor(ArrayRequest request, SlotSource? source = null)
     {
         ArgumentNullException.ThrowIfNull(request);
-        return (guide, width) => ArrayPipeline.SlotModelFor(request with { Guide = guide, Slots = request.Slots with { Width = width } });
+        var from = source ?? SlotSource.For(request);
+        return (guide, width) => ArrayPipeline.SlotModelFor(request with { Guide = guide, Slots = request.Slots with { Width = width } }, from);
     }
 
     /// <summary>
     /// The nominal design by the pipeline's own stages (taper, slot model, designer: <see cref="ArrayPipeline"/>) without
     /// its band sweep, which the tolerance analysis at the design frequency does not need.
     /// </summary>
+    /// <param name="request">The request.</param>
+    /// <param name="source">The run's slot source; the request's own when null.</param>
     /// <exception cref="InfeasibleDesignException">The request cannot be realised.</exception>
-    public static (ArrayDesign Design, Slots.IShuntSlotModel Slot) Design(ArrayRequest request)
+    public static (ArrayDesign Design, Slots.IShuntSlotModel Slot) Design(ArrayRequest request, SlotSource? source = null)
     {
         ArgumentNullException.ThrowIfNull(request);
         var taper = Tapers.TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
-        var slot = ArrayPipeline.SlotModelFor(request);
-        return (ArrayPipeline.Synthesise(request, slot, taper), slot);
+        var slot = ArrayPipeline.SlotModelFor(request, source);
+        var design = ArrayPipeline.Synthesise(request, slot, taper);
+        SlotTableRangeCheck.Check(design, slot);
+        return (design, slot);
     }
 
     /// <summary>Runs the analysis of a pipeline result.</summary>
@@ -64,15 +74,16 @@ public static class ToleranceAnalysis
     /// <param name="tolerance">The tolerances; the request's when null.</param>
     /// <param name="options">Grids, surrogate nodes and threads.</param>
     /// <param name="progress">Called with the trials done so far (from worker threads), or null.</param>
+    /// <param name="source">The run's slot source (for the perturbed slot models); the request's own when null.</param>
     /// <exception cref="ArgumentException">Neither the request nor the caller gives tolerances.</exception>
     public static ToleranceResult Run(ArrayRequest request, ArrayDesign design, Slots.IShuntSlotModel slot, ToleranceRequest? tolerance = null,
-        ToleranceOptions? options = null, Action<int>? progress = null)
+        ToleranceOptions? options = null, Action<int>? progress = null, SlotSource? source = null)
     {
         ArgumentNullException.ThrowIfNull(request);
         var tol = tolerance ?? request.Tolerance
             ?? throw new ArgumentException("the spec has no tolerance: block; add one (e.g. offset: 0.02 mm, length: 0.02 mm)", nameof(tolerance));
         options ??= ToleranceOptions.Default;
-        var model = ArrayTrialModel.Build(design, slot, FactoryFor(request), tol, options);
+        var model = ArrayTrialModel.Build(design, slot, FactoryFor(request, source), tol, options);
         var mc = ToleranceMonteCarlo.Run(model, tol.Trials, tol.Seed, TargetDb(request), options, progress);
         var sens = ToleranceSensitivities.Compute(model, options);
         return new ToleranceResult(tol, mc, sens, model.SurrogateSamples);

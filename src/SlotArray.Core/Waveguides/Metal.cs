@@ -25,11 +25,18 @@ public sealed record Metal(string Name, double Conductivity, string Source)
     /// <summary>Every metal the spec can name.</summary>
     public static IReadOnlyList<Metal> All { get; } = [Copper, Aluminium, Aluminium6061, Brass, Silver];
 
-    /// <summary>Finds a metal by name (case-insensitive; also accepts "aluminum" and "al-6061").</summary>
+    /// <summary>Other names accepted for a metal (lower case), each with the <see cref="Name"/> it stands for.</summary>
+    public static IReadOnlyList<KeyValuePair<string, string>> Aliases { get; } =
+    [
+        new("aluminum", "aluminium"), new("al", "aluminium"), new("6061-t6", "6061"), new("al-6061", "6061"),
+        new("aluminium-6061", "6061"), new("cu", "copper"), new("ag", "silver"),
+    ];
+
+    /// <summary>Finds a metal by name (case-insensitive; also accepts the <see cref="Aliases"/>, e.g. "aluminum" and "al-6061").</summary>
     public static Metal? Find(string name)
     {
         string n = name.Trim().ToLowerInvariant();
-        n = n switch { "aluminum" or "al" => "aluminium", "6061-t6" or "al-6061" or "aluminium-6061" => "6061", "cu" => "copper", "ag" => "silver", _ => n };
+        n = Aliases.FirstOrDefault(p => p.Key == n).Value ?? n;
         return All.FirstOrDefault(m => m.Name == n);
     }
 }

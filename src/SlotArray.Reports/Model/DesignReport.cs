@@ -61,6 +61,34 @@ public sealed record DesignReport
 
     /// <summary><c>coupling: mutual</c>: the coupled and isolated-slot designs side by side; null otherwise.</summary>
     public CouplingReport? Coupling { get; init; }
+
+    /// <summary><c>slots.data</c>: the user's slot table the design was made from; null for the built-in models.</summary>
+    public SlotDataReport? SlotData { get; init; }
+}
+
+/// <summary>The user's slot table (<c>slots.data</c>) a design was made from: its identity, provenance, extent and fit residuals.</summary>
+public sealed record SlotDataReport
+{
+    /// <summary>The file as the spec names it.</summary>
+    public required string File { get; init; }
+
+    /// <summary>SHA-256 of the file's bytes, lower-case hex.</summary>
+    public required string Sha256 { get; init; }
+
+    /// <summary>The file's <c>#</c> comment lines, in order.</summary>
+    public required IReadOnlyList<string> Provenance { get; init; }
+
+    /// <summary>Number of rows.</summary>
+    public required int Rows { get; init; }
+
+    /// <summary>The tabulated range in words, e.g. "offset 0.5 mm to 5.5 mm, L/L_r 0.9 to 1.1, 9.2 to 9.55 GHz".</summary>
+    public required string Range { get; init; }
+
+    /// <summary>Whether slots outside the table were allowed (<c>slots.extrapolate: true</c>).</summary>
+    public required bool Extrapolate { get; init; }
+
+    /// <summary>Leave-one-out residuals of the fits: RMS and largest ΔL_r/L_r, Δg_r/g_r (fractions) and |Δy|/g_r.</summary>
+    public required IReadOnlyList<double> Residuals { get; init; }
 }
 
 /// <summary>The matched load of a travelling-wave array.</summary>
@@ -147,6 +175,9 @@ public sealed record SlotReport
 
     /// <summary>Slot centre measured along the guide from the datum, m.</summary>
     public required double Position { get; init; }
+
+    /// <summary><c>slots.data</c> only: true when the slot lies outside the table (extrapolated; <c>slots.extrapolate: true</c>).</summary>
+    public bool OutsideSlotTable { get; init; }
 
     /// <summary>Signed offset of the slot centre from the broad-wall centreline, m; positive toward the +x side wall; null for edge slots.</summary>
     public double? Offset { get; init; }

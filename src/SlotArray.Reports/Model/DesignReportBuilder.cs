@@ -57,6 +57,8 @@ public static class DesignReportBuilder
         var cut = CutListOf(request, design, tolerance);
         var atDesign = result.AtDesign;
         var slots = Slots(result, cut);
+        var outside = SlotTableRangeCheck.Outside(design, result.SlotModel).Select(o => o.Index).ToHashSet();
+        slots = [.. slots.Select(s => outside.Contains(s.Index) ? s with { OutsideSlotTable = true } : s)];
 
         var warnings = result.Warnings.Select(w => w.Message).ToList();
         warnings.AddRange(cut.Notes.Where(n => n.Code != "cutlist-datum").Select(n => n.Message));
@@ -86,6 +88,7 @@ public static class DesignReportBuilder
                 WaveImpedanceOhm = guide.WaveImpedance(f0),
             },
             Slots = slots,
+            SlotData = SlotDataOf(result.SlotModel),
             Termination = new TerminationReport
             {
                 Type = TerminationName(design.NearTermination.Kind),
@@ -379,6 +382,27 @@ public static class DesignReportBuilder
     private static string FeedName(FeedRequest f) => f.Type == FeedType.StandingWave
         ? "standing-wave, " + (f.Position == FeedPosition.Centre ? "centre-fed" : "end-fed")
         : "travelling-wave";
+
+    /// <summary>The user's slot table behind the design's slot model, in report form; null for a built-in model.</summary>
+    private static SlotDataReport? SlotDataOf(Core.Slots.IShuntSlotModel slot)
+    {
+        if (SlotTableRangeCheck.TableOf(slot) is not { } model) return null;
+        var fit = model.Fit;
+        var r = fit.Range;
+        var res = fit.Residuals;
+        bool offset = fit.CouplingKind == Core.Slots.SlotCouplingKind.Offset;
+        string C(double c) => offset ? string.Create(Inv, $"{c * 1e3:0.####} mm") : string.Create(Inv, $"{c * 180 / Math.PI:0.###} deg");
+        return new SlotDataReport
+        {
+            File = fit.Table.Source,
+            Sha256 = fit.Table.Sha256,
+            Provenance = fit.Table.Provenance,
+            Rows = fit.Table.Rows.Count,
+            Range = string.Create(Inv, $"{(offset ? "offset" : "tilt")} {C(r.CouplingLow)} to {C(r.CouplingHigh)}, L/L_r {r.LengthRatioLow:0.####} to {r.LengthRatioHigh:0.####}, {r.FrequencyLow / 1e9:0.######} to {r.FrequencyHigh / 1e9:0.######} GHz"),
+            Extrapolate = model.Extrapolate,
+            Residuals = [res.ResonantLengthRms, res.ResonantLengthMax, res.ResonantConductanceRms, res.ResonantConductanceMax, res.AdmittanceRms, res.AdmittanceMax],
+        };
+    }
 
     private static string SlotModelName(string name) => name switch
     {

@@ -20,12 +20,16 @@ public static class CutListCsv
     public static readonly IReadOnlyList<string> TiltColumns =
         ["slot", "position_mm", "tilt_deg", "cut_depth_mm", "length_mm", "width_mm", "end", "tolerance_mm"];
 
+    /// <summary>Column added when the design comes from a user's slot table: "in table" or "outside" (extrapolated).</summary>
+    public const string SlotTableColumn = "slot_table";
+
     /// <summary>Writes the cut list of <paramref name="report"/>.</summary>
     /// <exception cref="ArgumentException">Some slots carry an offset and others a tilt, or a slot carries neither.</exception>
     public static void Write(DesignReport report, TextWriter writer)
     {
         bool tilt = UsesTilt(report);
         var columns = tilt ? TiltColumns : OffsetColumns;
+        if (report.SlotData is not null) columns = [.. columns, SlotTableColumn];
         var g = report.Guide;
         string tol = Invariant.Mm(report.Inputs.CutTolerance);
         var comments = new List<string>
@@ -51,6 +55,11 @@ public static class CutListCsv
         }
         comments.Add("# length_mm: overall length tip to tip (round ends: end radius = width/2, width = cutter diameter)");
         comments.Add($"# normalisation: {Invariant.Normalisation}");
+        if (report.SlotData is { } sd)
+        {
+            comments.Add($"# slot data: {sd.File} (SHA-256 {sd.Sha256}); {sd.Range}; {SlotTableColumn}: \"outside\" marks a slot extrapolated beyond the table");
+            comments.AddRange(sd.Provenance.Select(p => $"# slot data provenance: {p}"));
+        }
 
         foreach (string c in comments) Record(writer, [c, .. Enumerable.Repeat("", columns.Count - 1)]);
         Record(writer, columns);
@@ -61,7 +70,8 @@ public static class CutListCsv
             string[] middle = tilt
                 ? [Invariant.Fixed(s.TiltDeg!.Value, 2), Invariant.Mm(s.CutDepth ?? double.NaN)]
                 : [Invariant.Mm(s.Offset!.Value), Side(s.Offset.Value), Invariant.Mm(g.Wall + g.A / 2 + s.Offset.Value)];
-            Record(writer, [.. common, .. middle, .. tail]);
+            string[] flag = report.SlotData is null ? [] : [s.OutsideSlotTable ? "outside" : "in table"];
+            Record(writer, [.. common, .. middle, .. tail, .. flag]);
         }
     }
 

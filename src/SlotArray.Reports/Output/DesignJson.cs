@@ -61,6 +61,7 @@ public static class DesignJson
             w.WriteStartObject();
             w.WriteNumber("index", s.Index);
             Num(w, "position_m", s.Position);
+            if (r.SlotData is not null) w.WriteBoolean("outside_slot_table", s.OutsideSlotTable);
             if (s.Offset is { } x) Num(w, "offset_m", x);
             if (s.TiltDeg is { } t) Num(w, "tilt_deg", t);
             if (s.CutDepth is { } d) Num(w, "cut_depth_m", d);
@@ -177,6 +178,22 @@ public static class DesignJson
         w.WriteString("datum", i.DatumDescription);
         Num(w, "cut_tolerance_m", i.CutTolerance);
         w.WriteEndObject();
+
+        if (r.SlotData is { } sd)
+        {
+            w.WriteStartObject("slot_data");
+            w.WriteString("file", sd.File);
+            w.WriteString("sha256", sd.Sha256);
+            Strings(w, "provenance", sd.Provenance);
+            w.WriteNumber("rows", sd.Rows);
+            w.WriteString("range", sd.Range);
+            w.WriteBoolean("extrapolate", sd.Extrapolate);
+            w.WriteStartObject("fit_residuals_leave_one_out");
+            string[] keys = ["resonant_length_rms", "resonant_length_max", "resonant_conductance_rms", "resonant_conductance_max", "admittance_rms", "admittance_max"];
+            for (int k = 0; k < keys.Length; k++) Num(w, keys[k], sd.Residuals[k]);
+            w.WriteEndObject();
+            w.WriteEndObject();
+        }
 
         w.WriteStartArray("requirements");
         foreach (var q in r.Requirements)

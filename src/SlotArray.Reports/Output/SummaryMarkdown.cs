@@ -38,6 +38,21 @@ public static class SummaryMarkdown
         L($"| datum | {Escape(i.DatumDescription)} |");
         L($"| cut tolerance | ± {Invariant.Mm(i.CutTolerance)} mm |");
         L();
+        if (report.SlotData is { } sd)
+        {
+            L("## Slot data");
+            L();
+            L($"The slots were designed from the table `{Escape(sd.File)}` (SHA-256 `{sd.Sha256}`), {Invariant.Int(sd.Rows)} rows: {Escape(sd.Range)}.");
+            L($"Fit residuals (leave-one-out): L_r rms {Invariant.Fixed(sd.Residuals[0] * 100, 3)} %, max {Invariant.Fixed(sd.Residuals[1] * 100, 3)} %; g_r rms {Invariant.Fixed(sd.Residuals[2] * 100, 2)} %, max {Invariant.Fixed(sd.Residuals[3] * 100, 2)} %; y/g_r rms {Invariant.Fixed(sd.Residuals[4], 4)}, max {Invariant.Fixed(sd.Residuals[5], 4)}.");
+            int outside = report.Slots.Count(s => s.OutsideSlotTable);
+            if (outside > 0) L($"{Invariant.Int(outside)} slot(s) lie outside the table and were extrapolated (slots.extrapolate: true); they are marked \"outside table\" below and in the cut list.");
+            L();
+            L("Provenance (the table's comment lines):");
+            L();
+            foreach (string line in sd.Provenance) L($"> {Escape(line)}");
+            if (sd.Provenance.Count == 0) L("> (the table has no comment lines)");
+            L();
+        }
         L("## Key figures");
         L();
         var p = report.Pattern;
@@ -107,7 +122,7 @@ public static class SummaryMarkdown
             string mid = tilt
                 ? $"{Invariant.Fixed(s.TiltDeg!.Value, 2)} | {Invariant.Mm(s.CutDepth ?? double.NaN)}"
                 : $"{Invariant.Mm(s.Offset!.Value)} | {CutListCsv.Side(s.Offset.Value)}";
-            L($"| {Invariant.Int(s.Index)} | {Invariant.Mm(s.Position)} | {mid} | {Invariant.Mm(s.Length)} | {Invariant.Mm(s.OverallLength)} | {Invariant.Mm(s.Width)} | {(s.EndForm == SlotEndForm.Round ? "round" : "square")} | {Invariant.Fixed(s.Conductance, 5)} | {Invariant.Fixed(s.TargetAmplitude, 4)} | {Invariant.Fixed(s.AchievedAmplitude, 4)} | {Invariant.Fixed(s.AchievedPhaseDeg, 2)} |");
+            L($"| {Invariant.Int(s.Index)}{(s.OutsideSlotTable ? " (outside table)" : "")} | {Invariant.Mm(s.Position)} | {mid} | {Invariant.Mm(s.Length)} | {Invariant.Mm(s.OverallLength)} | {Invariant.Mm(s.Width)} | {(s.EndForm == SlotEndForm.Round ? "round" : "square")} | {Invariant.Fixed(s.Conductance, 5)} | {Invariant.Fixed(s.TargetAmplitude, 4)} | {Invariant.Fixed(s.AchievedAmplitude, 4)} | {Invariant.Fixed(s.AchievedPhaseDeg, 2)} |");
         }
         L();
         if (report.Tolerance.Count > 0)

@@ -2,17 +2,18 @@ using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Tapers;
 using SlotArray.Core.Waveguides;
+using SlotArray.Spec.Schema;
 
 namespace SlotArray.Spec.Yaml;
 
 internal sealed partial class SpecBuilder
 {
-    private static readonly string[] SlotKeys = ["type", "count", "width", "cutter", "model"];
-    private static readonly string[] FeedKeys = ["type", "spacing", "position", "load", "short"];
-    private static readonly string[] TaperKeys = ["type", "sidelobes", "nbar", "edge", "exponent", "weights"];
+    private static IReadOnlyList<string> SlotKeys => SpecKeys.Slots.Names;
+    private static IReadOnlyList<string> FeedKeys => SpecKeys.Feed.Names;
+    private static IReadOnlyList<string> TaperKeys => SpecKeys.Taper.Names;
 
     /// <summary>Largest slot count accepted.</summary>
-    private const int MaxSlots = 1000;
+    private const int MaxSlots = SpecKeys.MaxSlots;
     /// <summary>Default n̄ for Taylor, Villeneuve and Bayliss tapers.</summary>
     internal const int DefaultNbar = 4;
     /// <summary>Default travelling-wave load fraction, 5 % (common practice, no source).</summary>
@@ -42,7 +43,7 @@ internal sealed partial class SpecBuilder
                 "'inclined-series' slots have a conductance formula ('slotarray slot' prints it) but no array designer yet: use 'longitudinal' (broad-wall) or 'edge' slots"))
             type = null;
         int? count = Integer(s, "count", true, int.MinValue, int.MaxValue, "16");
-        if (count is not null && !Require(s, "count", count >= 2 && count <= MaxSlots,
+        if (count is not null && !Require(s, "count", count >= SpecKeys.MinSlots && count <= MaxSlots,
                 $"'count' must be at least 2 (an array) and at most {MaxSlots}, got {count}")) count = null;
         double? width = Quantity(s, "width", QuantityKind.Length, true, "1.6 mm");
         if (width is not null && !Require(s, "width", width > 0, $"'width' must be a positive length, got {Mm(width.Value)}")) width = null;
@@ -66,8 +67,13 @@ internal sealed partial class SpecBuilder
                 $"'cutter' (end-mill diameter) must be positive and no larger than the slot width{(width is null ? "" : $" {Mm(width.Value)}")}, got {Mm(cutter.Value)}"))
             cutterOk = false;
         SlotModelKind? model = s.Has("model") ? Choice(s, "model", SpecNames.SlotModels, false) : SlotModelKind.MomentMethod;
-        if (type is null || count is null || width is null || !cutterOk || model is null) return null;
-        return new SlotRequest(type.Value, count.Value, Length.FromMeters(width.Value), cutter is null ? null : Length.FromMeters(cutter.Value), model.Value);
+        var (data, extrapolate, dataOk) = SlotData(s, type, guide);
+        if (type is null || count is null || width is null || !cutterOk || model is null || !dataOk) return null;
+        return new SlotRequest(type.Value, count.Value, Length.FromMeters(width.Value), cutter is null ? null : Length.FromMeters(cutter.Value), model.Value)
+        {
+            Data = data,
+            Extrapolate = extrapolate,
+        };
     }
 
     /// <summary>
@@ -207,13 +213,12 @@ internal sealed partial class SpecBuilder
         TaperType? type = Choice(s, "type", SpecNames.TaperTypes, true);
         if (type is null) return null;
         var t = type.Value;
-        bool usesSll = t is TaperType.Chebyshev or TaperType.Taylor or TaperType.Villeneuve or TaperType.TaylorOneParameter or TaperType.Bayliss;
-        bool usesNbar = t is TaperType.Taylor or TaperType.Villeneuve or TaperType.Bayliss;
         string family = SpecNames.Of(t);
+        bool usesSll = SpecKeys.Taper["sidelobes"].Applies(family);
+        bool usesNbar = SpecKeys.Taper["nbar"].Applies(family);
         bool ok = true;
-        foreach (var (key, used) in new[] { ("sidelobes", usesSll), ("nbar", usesNbar), ("edge", t == TaperType.CosinePedestal),
-                     ("exponent", t == TaperType.CosinePedestal), ("weights", t == TaperType.Given) })
-            if (!used && s.Has(key)) ok &= Require(s, key, false, $"'{key}' does not apply to a {family} taper; remove it");
+        foreach (var key in SpecKeys.Taper.Keys.Where(k => !k.Applies(family)).Select(k => k.Name))
+            if (s.Has(key)) ok &= Require(s, key, false, $"'{key}' does not apply to a {family} taper; remove it");
 
         double? sll = UniformSidelobeDb;
         if (usesSll)
@@ -225,7 +230,7 @@ internal sealed partial class SpecBuilder
             if (sll is not null && !Require(s, "sidelobes", sll >= lowest && sll <= highest,
                     $"'sidelobes' for a {family} taper must be between {Num(lowest)} dB and {Num(highest)} dB, got {Num(sll.Value)} dB")) sll = null;
         }
-        int? nbar = usesNbar && s.Has("nbar") ? Integer(s, "nbar", false, 2, 50, "4") : DefaultNbar;
+        int? nbar = usesNbar && s.Has("nbar") ? Integer(s, "nbar", false, SpecKeys.MinNbar, SpecKeys.MaxNbar, "4") : DefaultNbar;
         if (nbar is not null && usesNbar && slotCount is { } count && nbar > TaperSynthesis.MaximumNbar(t, count))
         {
             int most = TaperSynthesis.MaximumNbar(t, count);
@@ -241,7 +246,7 @@ internal sealed partial class SpecBuilder
             if (edge is not null && !Require(s, "edge", edge < 0 && edge >= -100, $"'edge' must be a negative level between -100 dB and 0 dB, got {Num(edge.Value)} dB")) edge = null;
         }
         double? exponent = t == TaperType.CosinePedestal && s.Has("exponent") ? Number(s, "exponent", false, "2") : 2;
-        if (exponent is not null && !Require(s, "exponent", exponent >= 1 && exponent <= 20, $"'exponent' must be between 1 and 20, got {Num(exponent.Value)}")) exponent = null;
+        if (exponent is not null && !Require(s, "exponent", exponent >= SpecKeys.MinExponent && exponent <= SpecKeys.MaxExponent, $"'exponent' must be between 1 and 20, got {Num(exponent.Value)}")) exponent = null;
         IReadOnlyList<double>? weights = null;
         if (t == TaperType.Given)
         {

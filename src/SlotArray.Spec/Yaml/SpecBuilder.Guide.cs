@@ -1,12 +1,13 @@
 using System.Globalization;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Waveguides;
+using SlotArray.Spec.Schema;
 
 namespace SlotArray.Spec.Yaml;
 
 internal sealed partial class SpecBuilder
 {
-    private static readonly string[] GuideKeys = ["size", "a", "b", "wall", "metal", "conductivity", "permittivity", "roughness"];
+    private static IReadOnlyList<string> GuideKeys => SpecKeys.Guide.Names;
 
     /// <summary>
     /// The guide: a catalogue <c>size</c> and/or inside <c>a</c>, <c>b</c> (which override the size), the required
@@ -89,7 +90,7 @@ internal sealed partial class SpecBuilder
         }
 
         double? er = g.Has("permittivity") ? Number(g, "permittivity", false, "1.0") : 1.0;
-        if (er is not null && !Require(g, "permittivity", er >= 1 && er <= 100, $"'permittivity' (relative, of the filling) must be between 1 and 100, got {Num(er.Value)}")) er = null;
+        if (er is not null && !Require(g, "permittivity", er >= SpecKeys.MinPermittivity && er <= SpecKeys.MaxPermittivity, $"'permittivity' (relative, of the filling) must be between 1 and 100, got {Num(er.Value)}")) er = null;
         double? rough = g.Has("roughness") ? Quantity(g, "roughness", QuantityKind.Length, false, "0.8 um") : 0.0;
         if (rough is not null && !Require(g, "roughness", rough >= 0 && rough < 1e-3, $"'roughness' (RMS) must be between 0 and 1 mm, got {Mm(rough.Value)}")) rough = null;
 

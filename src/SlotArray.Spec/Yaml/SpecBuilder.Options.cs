@@ -1,15 +1,16 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
+using SlotArray.Spec.Schema;
 
 namespace SlotArray.Spec.Yaml;
 
 internal sealed partial class SpecBuilder
 {
-    private static readonly string[] ToleranceKeys = ["offset", "length", "position", "width", "guide_width", "wall", "systematic", "trials", "seed"];
-    private static readonly string[] SystematicKeys = ["length", "offset"];
-    private static readonly string[] SigmaKeys = ["sigma"];
-    private static readonly string[] RequirementKeys = ["sidelobes", "cross_polar", "vswr"];
-    private static readonly string[] TransmitterKeys = ["peak_power", "average_power"];
+    private static IReadOnlyList<string> ToleranceKeys => SpecKeys.ToleranceBlock.Names;
+    private static IReadOnlyList<string> SystematicKeys => SpecKeys.Systematic.Names;
+    private static IReadOnlyList<string> SigmaKeys => SpecKeys.Sigma.Names;
+    private static IReadOnlyList<string> RequirementKeys => SpecKeys.Requirements.Names;
+    private static IReadOnlyList<string> TransmitterKeys => SpecKeys.Transmitter.Names;
 
     /// <summary>Default Monte Carlo trials and seed when a tolerance block omits them.</summary>
     internal const int DefaultTrials = 1000, DefaultSeed = 1;
@@ -42,7 +43,7 @@ internal sealed partial class SpecBuilder
                 if (sysOffset is not null && !Require(sys, "offset", Math.Abs(sysOffset.Value) <= MaxTolerance, $"'offset' must be within ±10 mm, got {Mm(sysOffset.Value)}")) sysOffset = null;
             }
         }
-        int? trials = s.Has("trials") ? Integer(s, "trials", false, 1, 1_000_000, "2000") : DefaultTrials;
+        int? trials = s.Has("trials") ? Integer(s, "trials", false, SpecKeys.MinTrials, SpecKeys.MaxTrials, "2000") : DefaultTrials;
         int? seed = s.Has("seed") ? Integer(s, "seed", false, 0, int.MaxValue, "7") : DefaultSeed;
         if (offset is null || length is null || position is null || width is null || guideWidth is null || wall is null
             || sysLength is null || sysOffset is null || trials is null || seed is null)

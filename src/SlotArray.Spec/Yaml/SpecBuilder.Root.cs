@@ -1,21 +1,18 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
+using SlotArray.Spec.Schema;
 
 namespace SlotArray.Spec.Yaml;
 
 internal sealed partial class SpecBuilder
 {
-    private static readonly string[] RootKeys =
-        ["spec", "name", "frequency", "band", "guide", "slots", "feed", "taper", "coupling", "tolerance", "requirements", "transmitter"];
+    private static readonly IReadOnlyList<string> RootKeys = SpecKeys.Root.Names;
 
     /// <summary>Section (or sections) of each key that is not a top-level key, for the hint on a key written at the top level.</summary>
     /// <remarks>Built on first use: static initialisers in different parts of a partial class run in no defined order.</remarks>
-    private static Dictionary<string, string> Homes => s_homes ??= new[]
-        {
-            ("guide", GuideKeys), ("slots", SlotKeys), ("feed", FeedKeys), ("taper", TaperKeys), ("tolerance", ToleranceKeys),
-            ("requirements", RequirementKeys), ("transmitter", TransmitterKeys),
-        }
-        .SelectMany(p => p.Item2.Select(k => (Key: k, Section: p.Item1)))
+    private static Dictionary<string, string> Homes => s_homes ??= SpecKeys.Root.Keys
+        .Where(k => k.Value is BlockValue)
+        .SelectMany(k => ((BlockValue)k.Value).Section.Names.Select(n => (Key: n, Section: k.Name)))
         .GroupBy(p => p.Key).Where(g => !RootKeys.Contains(g.Key))
         .ToDictionary(g => g.Key, g => string.Join("' or '", g.Select(p => p.Section)), StringComparer.Ordinal);
 

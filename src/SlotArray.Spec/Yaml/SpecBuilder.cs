@@ -113,7 +113,7 @@ internal sealed partial class SpecBuilder(Diagnostics d)
         if (sc is null) return null;
         string word = sc.Value.Trim();
         string norm = word.ToLowerInvariant().Replace('_', '-').Replace(' ', '-');
-        norm = norm switch { "center" => "centre", "traveling-wave" => "travelling-wave", "moment" => "moment-method", _ => norm };
+        norm = SpecNames.WordAliases.FirstOrDefault(a => a.Key == norm).Value ?? norm;
         foreach (var (name, value) in table)
             if (name == norm) return value;
         string? near = Section.Nearest(norm, table.Select(p => p.Key));

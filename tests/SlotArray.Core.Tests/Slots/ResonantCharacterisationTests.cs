@@ -15,7 +15,7 @@ public class ResonantCharacterisationTests
     [Fact]
     public void Spline_between_table_offsets_matches_a_direct_resonance_search()
     {
-        var c = ResonantCharacterisation.For(Thick, F);
+        var c = new ResonantCharacterisationCache().For(Thick, F);
         foreach (double x in new[] { 0.3e-3, 2.1e-3, 4.45e-3 })
         {
             var (l, sc) = ResonantCharacterisation.FindResonance(Thick, x, F);
@@ -27,8 +27,10 @@ public class ResonantCharacterisationTests
     [Fact]
     public void Cache_returns_the_same_table_and_a_stored_table_round_trips()
     {
-        var c1 = ResonantCharacterisation.For(Thick, F);
-        Assert.Same(c1, ResonantCharacterisation.For(new LongitudinalSlotMomentMethod(Wr90(1.27), SlotTestGuides.Width), F));
+        var cache = new ResonantCharacterisationCache();
+        var c1 = cache.For(Thick, F);
+        Assert.Same(c1, cache.For(new LongitudinalSlotMomentMethod(Wr90(1.27), SlotTestGuides.Width), F));
+        Assert.NotSame(c1, new ResonantCharacterisationCache().For(Thick, F));   // injected, not static: another cache computes its own
         var back = ResonantCharacterisation.FromTable(Thick, c1.Table);
         Check.Relative(c1.ResonantLength(2e-3).Meters, back.ResonantLength(2e-3).Meters, 1e-15, "same table");
         Assert.Throws<ArgumentException>(() => ResonantCharacterisation.FromTable(Thin, c1.Table));

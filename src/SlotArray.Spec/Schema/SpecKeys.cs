@@ -1,0 +1,176 @@
+using SlotArray.Core.Waveguides;
+
+namespace SlotArray.Spec.Schema;
+
+/// <summary>
+/// Every key of the YAML spec (version 1), section by section: the one source of truth. The parser takes its known
+/// keys, ranges, defaults and "applies to" rules from here; <c>slotarray schema</c> writes the JSON Schema and
+/// <c>slotarray init</c> the comments of its starter spec from the same definitions. To add a key: add it to its
+/// section below, then read it in the matching <c>SpecBuilder</c> part (DEVELOPERS.md, "Adding a spec key").
+/// </summary>
+internal static class SpecKeys
+{
+    /// <summary>Slot count range: an array has at least two slots; above 1000 a mistake is likelier than a design.</summary>
+    public const int MinSlots = 2, MaxSlots = 1000;
+    /// <summary>n̄ range of the Taylor, Villeneuve and Bayliss tapers.</summary>
+    public const int MinNbar = 2, MaxNbar = 50;
+    /// <summary>Monte Carlo trial range.</summary>
+    public const int MinTrials = 1, MaxTrials = 1_000_000;
+    /// <summary>Relative permittivity range of the guide's filling.</summary>
+    public const double MinPermittivity = 1, MaxPermittivity = 100;
+    /// <summary>Cosine-pedestal exponent range.</summary>
+    public const double MinExponent = 1, MaxExponent = 20;
+
+    private static QuantityValue Q(QuantityKind kind, string range) => new([kind], range);
+    private static QuantityValue GuideDistance(string range) => new([QuantityKind.GuideWavelengths, QuantityKind.Length], range);
+    private static ChoiceValue Words<T>(IReadOnlyList<KeyValuePair<string, T>> table) where T : struct, Enum
+    {
+        var words = table.Select(p => p.Key).ToList();
+        return new(words, [.. SpecNames.WordAliases.Where(a => words.Contains(a.Value)).Select(a => a.Key)], WordFolding.Words);
+    }
+    private static string[] TaperWords(params Core.Design.TaperType[] types) => [.. types.Select(SpecNames.Of)];
+
+    private static readonly QuantityValue ToleranceLength = Q(QuantityKind.Length, "0 to 10 mm");
+
+    /// <summary><c>tolerance.&lt;error&gt;: {sigma: …}</c>: a normally distributed error.</summary>
+    public static readonly SpecSection Sigma = new("tolerance.sigma", "a normally distributed error given by its standard deviation",
+    [
+        new("sigma", ToleranceLength, "standard deviation of a normally distributed error") { Required = true },
+    ]);
+
+    private static readonly AnyOfValue Tolerance = new([ToleranceLength, new BlockValue(Sigma)]);
+
+    /// <summary><c>guide</c>: the waveguide or tube the slots are cut in.</summary>
+    public static readonly SpecSection Guide = new("guide", "the waveguide or rectangular tube the slots are cut in",
+    [
+        new("size", new ChoiceValue([.. WaveguideCatalogue.All.SelectMany(g => new[] { g.Designation, g.Iec })], [], WordFolding.Designation),
+            "catalogue size (EIA WR or IEC R, 'slotarray guides' lists them); or give a and b") { DefaultText = "none: give size, or a and b" },
+        new("a", Q(QuantityKind.Length, "above 0, up to 10 m; larger than b"), "inside broad-wall width (overrides size)") { DefaultText = "from size" },
+        new("b", Q(QuantityKind.Length, "above 0, smaller than a"), "inside narrow-wall height (overrides size)") { DefaultText = "from size" },
+        new("wall", Q(QuantityKind.Length, "0 or more, smaller than a"), "wall thickness where the slots are cut") { Required = true },
+        new("metal", new ChoiceValue([.. Metal.All.Select(m => m.Name)], [.. Metal.Aliases.Select(a => a.Key)], WordFolding.CaseOnly),
+            "wall metal (sets the conductivity for the loss)") { Default = "aluminium", DefaultText = "aluminium (warning)" },
+        new("conductivity", Q(QuantityKind.Conductivity, "above 0, up to 1e9 S/m"), "wall conductivity, instead of metal"),
+        new("permittivity", new NumberValue(MinPermittivity, MaxPermittivity), "relative permittivity εr of the filling") { Default = 1L },
+        new("roughness", Q(QuantityKind.Length, "0 to 1 mm"), "RMS surface roughness of the inside walls") { Default = "0 mm" },
+    ])
+    {
+        RequireOneOf = [["size"], ["a", "b"]],
+        Exclusive = [("metal", "conductivity")],
+    };
+
+    /// <summary><c>slots</c>: the radiating slots.</summary>
+    public static readonly SpecSection Slots = new("slots", "the radiating slots",
+    [
+        new("type", Words(SpecNames.SlotTypes), "longitudinal broad-wall, inclined narrow-wall (edge) or inclined series slots") { Required = true },
+        new("count", new IntegerValue(MinSlots, MaxSlots), "number of slots") { Required = true },
+        new("width", Q(QuantityKind.Length, "above 0, less than a/2; 0.002 to 0.2 wavelength for longitudinal slots, less than b for edge slots"), "slot width") { Required = true },
+        new("cutter", Q(QuantityKind.Length, "above 0, no larger than the width"), "end-mill diameter: round-ended slots")
+            { DefaultText = "omitted: square ends" },
+        new("model", Words(SpecNames.SlotModels), "slot admittance model") { Default = "moment-method" },
+        new("data", new TextValue(MaxLength: 4096), "your own slot table (CSV, README 'Your own slot table'), path relative to the spec; replaces the model")
+            { DefaultText = "none: the model" },
+        new("extrapolate", new BooleanValue(), "with data: design slots outside the table (flagged in the cut list and summary) instead of refusing")
+            { DefaultText = "false" },
+    ])
+    {
+        Exclusive = [("model", "data")],
+    };
+
+    private static readonly string[] StandingWave = [SpecNames.Of(Core.Design.FeedType.StandingWave)];
+    private static readonly string[] TravellingWave = [SpecNames.Of(Core.Design.FeedType.TravellingWave)];
+
+    /// <summary><c>feed</c>: how the guide is fed and ended.</summary>
+    public static readonly SpecSection Feed = new("feed", "how the guide is fed and how it ends",
+    [
+        new("type", Words(SpecNames.FeedTypes), "standing-wave (ends in a short) or travelling-wave (ends in a load)") { Required = true },
+        new("spacing", GuideDistance("between 0 and 1 guide-wavelength"), "slot spacing along the guide, in guide wavelengths or a length")
+            { Default = "0.5 guide-wavelength", DefaultText = "0.5 guide-wavelength (standing-wave); required for travelling-wave", RequiredFor = TravellingWave },
+        new("position", Words(SpecNames.FeedPositions), "where a standing-wave array is fed") { Default = "end", AppliesTo = StandingWave },
+        new("load", Q(QuantityKind.Percent, "between 0 % and 100 % (exclusive)"), "fraction of the input power left for the load")
+            { Default = "5 %", DefaultText = "5 % (warning)", AppliesTo = TravellingWave },
+        new("short", GuideDistance("between 0 and 1 guide-wavelength"), "last slot centre to the end short")
+            { Default = "0.25 guide-wavelength", AppliesTo = StandingWave },
+    ]);
+
+    private static readonly string[] SidelobeTapers = TaperWords(Core.Design.TaperType.Chebyshev, Core.Design.TaperType.Taylor,
+        Core.Design.TaperType.Villeneuve, Core.Design.TaperType.TaylorOneParameter, Core.Design.TaperType.Bayliss);
+    private static readonly string[] NbarTapers = TaperWords(Core.Design.TaperType.Taylor, Core.Design.TaperType.Villeneuve, Core.Design.TaperType.Bayliss);
+    private static readonly string[] PedestalTaper = TaperWords(Core.Design.TaperType.CosinePedestal);
+    private static readonly string[] GivenTaper = TaperWords(Core.Design.TaperType.Given);
+
+    /// <summary><c>taper</c>: the aperture amplitude distribution.</summary>
+    public static readonly SpecSection Taper = new("taper", "the aperture amplitude distribution (sum or difference pattern)",
+    [
+        new("type", Words(SpecNames.TaperTypes), "taper family") { Required = true },
+        new("sidelobes", Q(QuantityKind.Decibels, "-100 dB up to -13.3 dB (chebyshev: up to -1 dB; bayliss: -60 dB to -15 dB)"), "design sidelobe level")
+            { AppliesTo = SidelobeTapers, RequiredFor = SidelobeTapers },
+        new("nbar", new IntegerValue(MinNbar, MaxNbar), "number of nearly equal sidelobes next to the main beam") { Default = 4L, AppliesTo = NbarTapers },
+        new("edge", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "cosine-pedestal: edge level")
+            { AppliesTo = PedestalTaper, RequiredFor = PedestalTaper },
+        new("exponent", new NumberValue(MinExponent, MaxExponent), "cosine-pedestal: exponent of the cosine") { Default = 2L, AppliesTo = PedestalTaper },
+        new("weights", new ListValue(new NumberValue(null, null), 1, null), "given: one amplitude per slot (any signs)")
+            { AppliesTo = GivenTaper, RequiredFor = GivenTaper },
+    ]);
+
+    /// <summary><c>tolerance.systematic</c>: the same error on every slot.</summary>
+    public static readonly SpecSection Systematic = new("tolerance.systematic", "the same error on every slot",
+    [
+        new("length", Q(QuantityKind.Length, "within ±10 mm"), "error added to every slot length") { Default = "0 mm" },
+        new("offset", Q(QuantityKind.Length, "within ±10 mm"), "error added to every slot offset") { Default = "0 mm" },
+    ]);
+
+    /// <summary><c>tolerance</c>: machining errors for the Monte Carlo analysis.</summary>
+    public static readonly SpecSection ToleranceBlock = new("tolerance", "machining errors for the Monte Carlo analysis: '0.02 mm' is uniform ±, '{sigma: 0.02 mm}' normal",
+    [
+        new("offset", Tolerance, "error of each slot's offset from the centreline") { DefaultText = "no error" },
+        new("length", Tolerance, "error of each slot's length") { DefaultText = "no error" },
+        new("position", Tolerance, "error of each slot's position along the guide") { DefaultText = "no error" },
+        new("width", Tolerance, "error of each slot's width") { DefaultText = "no error" },
+        new("guide_width", Tolerance, "error of the tube's inside broad wall a") { DefaultText = "no error" },
+        new("wall", Tolerance, "error of the wall thickness") { DefaultText = "no error" },
+        new("systematic", new BlockValue(Systematic), "the same error on every slot") { DefaultText = "none" },
+        new("trials", new IntegerValue(MinTrials, MaxTrials), "Monte Carlo trials") { Default = 1000L },
+        new("seed", new IntegerValue(0, int.MaxValue), "random seed (same seed, same results)") { Default = 1L },
+    ]);
+
+    private static readonly string VswrPattern = @"^\s*" + QuantityParser.NumberPattern + @"\s*(?::1)?\s*$";
+
+    /// <summary><c>requirements</c>: what the antenna must meet (pass or fail in the report).</summary>
+    public static readonly SpecSection Requirements = new("requirements", "what the antenna must meet (pass or fail in the report)",
+    [
+        new("sidelobes", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "highest sidelobe allowed") { DefaultText = "the taper's design level" },
+        new("cross_polar", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "highest cross-polar level allowed") { DefaultText = "not checked" },
+        new("vswr", new AnyOfValue([new NumberValue(1, 100, ExclusiveMinimum: true), new TextValue(VswrPattern)]),
+            "highest VSWR over the whole band, e.g. 1.5 or '1.5:1'") { DefaultText = "not checked" },
+    ]);
+
+    /// <summary><c>transmitter</c>: powers for the exposure and power-handling screening.</summary>
+    public static readonly SpecSection Transmitter = new("transmitter", "transmitter powers for the RF exposure and power-handling screening",
+    [
+        new("peak_power", Q(QuantityKind.Power, "above 0, up to 1000 MW"), "peak transmitter power") { DefaultText = "no estimate" },
+        new("average_power", Q(QuantityKind.Power, "above 0, up to the peak power"), "average transmitter power") { DefaultText = "no estimate" },
+    ]);
+
+    /// <summary>The top level of the spec.</summary>
+    public static readonly SpecSection Root = new("", "a SlotArray spec (version 1): one slotted-waveguide array from requirements to metal",
+    [
+        new("spec", new IntegerValue(1, 1), "spec format version") { Required = true },
+        new("name", new TextValue(@"^[^/\\:*?""<>|\u0000-\u001f\u007f-\u009f]+$"), "used in titles and file names (1 to 100 characters, no / \\ : * ? \" < > |)")
+            { Required = true },
+        new("frequency", Q(QuantityKind.Frequency, "1 MHz to 1000 GHz, inside the guide's single-mode band"), "design frequency") { Required = true },
+        new("band", new ListValue(Q(QuantityKind.Frequency, "low above the TE10 cutoff, low < high"), 2, 2), "analysis band [low, high] containing the design frequency")
+            { DefaultText = "frequency ± 2 % (warning)" },
+        new("guide", new BlockValue(Guide), Guide.Description) { Required = true },
+        new("slots", new BlockValue(Slots), Slots.Description) { Required = true },
+        new("feed", new BlockValue(Feed), Feed.Description) { Required = true },
+        new("taper", new BlockValue(Taper), Taper.Description) { DefaultText = "uniform (warning)" },
+        new("coupling", Words(SpecNames.CouplingModes), "mutual: Elliott's design with mutual coupling between slots") { Default = "none" },
+        new("tolerance", new BlockValue(ToleranceBlock), "machining tolerances for the Monte Carlo analysis") { DefaultText = "no tolerance analysis" },
+        new("requirements", new BlockValue(Requirements), Requirements.Description) { DefaultText = "none" },
+        new("transmitter", new BlockValue(Transmitter), Transmitter.Description) { DefaultText = "no exposure estimate" },
+    ]);
+
+    /// <summary>Every block, the top level first.</summary>
+    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, Requirements, Transmitter];
+}
