@@ -10,12 +10,21 @@ public static class CommandLine
     /// <summary>Shows the stack trace of an internal error.</summary>
     public static readonly Option<bool> Verbose = new("--verbose") { Description = "Show the stack trace of an internal error", Recursive = true };
 
+    /// <summary>No progress bar (it shows only on a terminal anyway).</summary>
+    public static readonly Option<bool> Quiet = new("--quiet", "-q") { Description = "Show no progress bar", Recursive = true };
+
+    /// <summary>Cancelled by Ctrl-C while <see cref="Run"/> runs (never in-process callers that pass none).</summary>
+    internal static CancellationToken Cancellation => s_cancellation.Value;
+
+    private static readonly AsyncLocal<CancellationToken> s_cancellation = new();
+
     /// <summary>Builds the root command with every sub-command, writing to the given writers.</summary>
     public static RootCommand Build(TextWriter output, TextWriter error)
     {
         var root = new RootCommand("SlotArray: design slotted-waveguide antenna arrays from a YAML spec to a cut list.")
         {
             Verbose,
+            Quiet,
             GuidesCommand.Build(output, error),
             CheckCommand.Build(output, error),
             SlotCommand.Build(output, error),
@@ -24,6 +33,7 @@ public static class CommandLine
             SweepCommand.Build(output, error),
             ToleranceCommand.Build(output, error),
             SchemaCommand.Build(output, error),
+            InitCommand.Build(output, error),
         };
         return root;
     }
@@ -31,9 +41,10 @@ public static class CommandLine
     /// <summary>The exception a user can act on: the cause inside a parallel failure, else the exception itself.</summary>
     private static Exception Actionable(Exception e) => e is AggregateException a ? ParallelFailures.Cause(a) : e;
 
-    /// <summary>Parses and runs; maps exceptions to the architecture's exit codes.</summary>
-    public static int Run(string[] args, TextWriter output, TextWriter error)
+    /// <summary>Parses and runs; maps exceptions to the architecture's exit codes (130 when <paramref name="cancel"/> stops the run).</summary>
+    public static int Run(string[] args, TextWriter output, TextWriter error, CancellationToken cancel = default)
     {
+        s_cancellation.Value = cancel;
         var root = Build(output, error);
         var parse = root.Parse(args);
         try
@@ -54,6 +65,11 @@ public static class CommandLine
             error.WriteLine(e.Line > 0 ? $"slot table, line {e.Line}: {e.Message}" : $"slot table: {e.Message}");
             return ExitCodes.BadInput;
         }
+        catch (Exception e) when (cancel.IsCancellationRequested && IsCancellation(e))
+        {
+            error.WriteLine("interrupted: nothing written");
+            return ExitCodes.Interrupted;
+        }
         catch (UserInputException e)
         {
             error.WriteLine(e.Message);
@@ -66,6 +82,9 @@ public static class CommandLine
             return ExitCodes.InternalError;
         }
     }
+
+    private static bool IsCancellation(Exception e) => e is OperationCanceledException
+        || (e is AggregateException a && a.Flatten().InnerExceptions.All(i => i is OperationCanceledException));
 }
 
 /// <summary>Bad input found by a command (not by the parser): printed as one line, exit code 2.</summary>

@@ -11,4 +11,6 @@ public static class ExitCodes
     public const int BadInput = 2;
     /// <summary>An internal error (a bug): one line, and the stack trace with --verbose.</summary>
     public const int InternalError = 3;
+    /// <summary>Interrupted (Ctrl-C): nothing written; 128 + SIGINT, as shells report it.</summary>
+    public const int Interrupted = 130;
 }

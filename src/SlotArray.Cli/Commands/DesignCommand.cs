@@ -28,7 +28,8 @@ public static class DesignCommand
         var json = new Option<bool>("--json") { Description = "Print design.json on stdout (messages stay on stderr)" };
         var (cacheDir, noCache) = CacheOptions();
         var cmd = new Command("design", "Synthesise the array, analyse it across the band and write every output file") { spec, outDir, json, cacheDir, noCache };
-        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), pr.GetValue(json), CacheOf(pr, cacheDir, noCache), output, error));
+        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), pr.GetValue(json), CacheOf(pr, cacheDir, noCache), output, error,
+            ProgressDisplay.Allowed(error, pr.GetValue(json) || pr.GetValue(CommandLine.Quiet))));
         return cmd;
     }
 
@@ -50,19 +51,23 @@ public static class DesignCommand
     /// <summary>The default output folder of a spec named <paramref name="name"/>: <c>out/&lt;name&gt;</c>.</summary>
     internal static string DefaultFolder(string name) => Path.Combine("out", name);
 
-    private static int Run(string path, string? outDir, bool json, SlotCache? cache, TextWriter output, TextWriter error)
+    private static int Run(string path, string? outDir, bool json, SlotCache? cache, TextWriter output, TextWriter error, bool progress)
     {
         var request = Load(path, error, out int code);
         if (request is null) return code;
         var clock = Stopwatch.StartNew();
-        var result = Analyse(request, cache, error);
+        var result = Analyse(request, cache, error, progress);
         var report = DesignReportBuilder.Build(result);
         if (request.Tolerance is { } tol)
         {
             // The short tolerance summary of issue 7 (the full output is the tolerance command's).
             error.WriteLine(string.Format(Inv, "tolerance: {0} Monte Carlo trials, seed {1} ...", tol.Trials, tol.Seed));
-            report = report with { Tolerance = Reports.ToleranceSummary.Lines(Core.Tolerance.ToleranceAnalysis.Run(result)) };
+            var options = Core.Tolerance.ToleranceOptions.Default with { Cancellation = CommandLine.Cancellation };
+            var mc = ProgressDisplay.Run(progress, sink => Core.Tolerance.ToleranceAnalysis.Run(result, options: options,
+                progress: sink is null ? null : done => sink.Report(new Core.WorkProgress("Monte Carlo trials", done, tol.Trials))));
+            report = report with { Tolerance = Reports.ToleranceSummary.Lines(mc) };
         }
+        CommandLine.Cancellation.ThrowIfCancellationRequested();
         string folder = outDir ?? DefaultFolder(request.Name);
         error.WriteLine($"writing {OutputFolder.Files.Count} files to {folder}/ ...");
         OutputFolder.WriteAll(report, folder);
@@ -106,7 +111,7 @@ public static class DesignCommand
         if (source.Table is { } t)
         {
             var r = t.Residuals;
-            error.WriteLine(string.Format(Inv, "slot table {0} (SHA-256 {1}): {2} rows, {3} {4}(s), {5} frequenc{6}; fit residuals (leave-one-out, {7} points): L_r rms {8:0.###} % max {9:0.###} %, g_r rms {10:0.##} % max {11:0.##} %, y/g_r rms {12:0.####} max {13:0.####}",
+            error.WriteLine(string.Format(Inv, "slot table {0} (SHA-256 {1}): {2} rows, {3} {4}(s), {5} frequenc{6}; fit residuals (leave-one-out, {7} points): L_r rms {8:0.####} % max {9:0.####} %, g_r rms {10:0.####} % max {11:0.####} %, y/g_r rms {12:0.####} max {13:0.####}",
                 t.Table.Source, t.Table.Sha256, t.Table.Rows.Count, t.Couplings.Count, t.CouplingKind == Core.Slots.SlotCouplingKind.Offset ? "offset" : "tilt",
                 t.Frequencies.Count, t.Frequencies.Count == 1 ? "y" : "ies", r.Points, r.ResonantLengthRms * 100, r.ResonantLengthMax * 100,
                 r.ResonantConductanceRms * 100, r.ResonantConductanceMax * 100, r.AdmittanceRms, r.AdmittanceMax));
@@ -114,14 +119,18 @@ public static class DesignCommand
         return source;
     }
 
-    /// <summary>Runs the pipeline with the slot cache (when given), printing progress to <paramref name="error"/>.</summary>
-    internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error)
+    /// <summary>
+    /// Runs the pipeline with the slot cache (when given), printing what it does to <paramref name="error"/>, with a
+    /// progress bar when <paramref name="progress"/>; Ctrl-C stops it (<see cref="CommandLine.Cancellation"/>).
+    /// </summary>
+    internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error, bool progress)
     {
         var source = SourceFor(request, cache, error, out int loaded);
         error.WriteLine(string.Format(Inv, "designing '{0}': {1} slots at {2:0.####} GHz, analysing {3:0.####} to {4:0.####} GHz{5} ...",
             request.Name, request.Slots.Count, request.DesignFrequency.Gigahertz, request.BandLow.Gigahertz, request.BandHigh.Gigahertz,
             cache is null ? "" : string.Format(Inv, " ({0} slot table(s) from the cache)", loaded)));
-        var result = ArrayPipeline.Run(request, source: source);
+        var result = ProgressDisplay.Run(progress, sink => ArrayPipeline.Run(request,
+            AnalysisOptions.Default with { Progress = sink, Cancellation = CommandLine.Cancellation }, source));
         cache?.Save(source.Cache, error);
         return result;
     }

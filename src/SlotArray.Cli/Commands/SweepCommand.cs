@@ -25,15 +25,17 @@ public static class SweepCommand
         var outDir = DesignCommand.OutputOption();
         var (cacheDir, noCache) = DesignCommand.CacheOptions();
         var cmd = new Command("sweep", "Frequency response of the designed array: sweep.png, input.s1p and a table on stdout") { spec, outDir, cacheDir, noCache };
-        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), DesignCommand.CacheOf(pr, cacheDir, noCache), output, error));
+        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir), DesignCommand.CacheOf(pr, cacheDir, noCache), output, error,
+            pr.GetValue(CommandLine.Quiet)));
         return cmd;
     }
 
-    private static int Run(string path, string? outDir, SlotCache? cache, TextWriter output, TextWriter error)
+    private static int Run(string path, string? outDir, SlotCache? cache, TextWriter output, TextWriter error, bool quiet)
     {
         var request = DesignCommand.Load(path, error, out int code);
         if (request is null) return code;
-        var report = DesignReportBuilder.Build(DesignCommand.Analyse(request, cache, error));
+        var report = DesignReportBuilder.Build(DesignCommand.Analyse(request, cache, error, ProgressDisplay.Allowed(error, quiet)));
+        CommandLine.Cancellation.ThrowIfCancellationRequested();
         string folder = outDir ?? DesignCommand.DefaultFolder(request.Name);
         AtomicFile.Write(Path.Combine(folder, "sweep.png"), s => PlotExport.Write(DesignPlots.Sweep(report), s, "png"));
         AtomicFile.Write(Path.Combine(folder, "input.s1p"), s =>

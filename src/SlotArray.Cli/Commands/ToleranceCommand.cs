@@ -5,7 +5,6 @@ using SlotArray.Core.Tolerance;
 using SlotArray.Reports;
 using SlotArray.Reports.Plots;
 using SlotArray.Spec;
-using Spectre.Console;
 
 namespace SlotArray.Cli.Commands;
 
@@ -13,7 +12,7 @@ namespace SlotArray.Cli.Commands;
 /// <c>slotarray tolerance SPEC [-o DIR] [--trials N] [--seed S] [--json]</c>: designs the array, runs the Monte Carlo of
 /// the spec's <c>tolerance:</c> block and writes <c>tolerance.json</c>, <c>tolerance.png</c> and <c>sensitivity.csv</c>
 /// (each atomically) into DIR. Prints the percentiles, the probability of meeting the target and the most sensitive
-/// dimensions; with <c>--json</c> the JSON document instead. A progress bar shows on an interactive terminal only.
+/// dimensions; with <c>--json</c> the JSON document instead. A progress bar shows on stderr when it is a terminal (not with --json or --quiet); Ctrl-C ends with exit 130 and writes nothing.
 /// </summary>
 public static class ToleranceCommand
 {
@@ -34,11 +33,12 @@ public static class ToleranceCommand
         var seed = new Option<int?>("--seed") { Description = "Random seed (overrides tolerance.seed)" };
         var json = new Option<bool>("--json") { Description = "Print tolerance.json on stdout" };
         var cmd = new Command("tolerance", "Monte Carlo of machining errors: sidelobes, gain, pointing and match; ranked per-slot sensitivities") { spec, outDir, trials, seed, json };
-        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir)!, pr.GetValue(trials), pr.GetValue(seed), pr.GetValue(json), output, error));
+        cmd.SetAction(pr => Run(pr.GetValue(spec)!, pr.GetValue(outDir)!, pr.GetValue(trials), pr.GetValue(seed), pr.GetValue(json), output, error,
+            ProgressDisplay.Allowed(error, pr.GetValue(json) || pr.GetValue(CommandLine.Quiet))));
         return cmd;
     }
 
-    private static int Run(string path, string dir, int? trials, int? seed, bool json, TextWriter output, TextWriter error)
+    private static int Run(string path, string dir, int? trials, int? seed, bool json, TextWriter output, TextWriter error, bool progress)
     {
         if (!File.Exists(path)) throw new UserInputException($"spec file not found: {path}");
         var loaded = SpecLoader.LoadFile(path);
@@ -57,7 +57,11 @@ public static class ToleranceCommand
         var source = DesignCommand.SourceFor(request, null, error, out _);
         var (design, slot) = ToleranceAnalysis.Design(request, source);
         foreach (var w in design.Warnings) error.WriteLine($"warning: {w.Message}");
-        var result = Analyse(request, design, slot, source, tol, interactive: !json && !Console.IsOutputRedirected && AnsiConsole.Profile.Capabilities.Interactive);
+        var options = ToleranceOptions.Default with { Cancellation = CommandLine.Cancellation };
+        error.WriteLine(string.Format(CultureInfo.InvariantCulture, "tolerance: {0} Monte Carlo trials, seed {1} ...", tol.Trials, tol.Seed));
+        var result = ProgressDisplay.Run(progress, sink => ToleranceAnalysis.Run(request, design, slot, tol, options,
+            sink is null ? null : done => sink.Report(new Core.WorkProgress("Monte Carlo trials", done, tol.Trials)), source));
+        CommandLine.Cancellation.ThrowIfCancellationRequested();
 
         Write(dir, request, result);
         if (json) output.Write(ToleranceJson.ToText(request.Name, request.DesignFrequency.Hertz, result));
@@ -67,22 +71,6 @@ public static class ToleranceCommand
             output.WriteLine($"wrote {string.Join(", ", Files)} to {Path.GetFullPath(dir)}");
         }
         return ExitCodes.Ok;
-    }
-
-    /// <summary>Runs the analysis, with a Spectre progress bar when <paramref name="interactive"/>.</summary>
-    private static ToleranceResult Analyse(ArrayRequest request, ArrayDesign design, Core.Slots.IShuntSlotModel slot, SlotSource source,
-        ToleranceRequest tol, bool interactive)
-    {
-        if (!interactive) return ToleranceAnalysis.Run(request, design, slot, tol, source: source);
-        ToleranceResult? result = null;
-        AnsiConsole.Progress().Start(ctx =>
-        {
-            var task = ctx.AddTask("Monte Carlo trials", maxValue: tol.Trials);
-            var gate = new object();
-            result = ToleranceAnalysis.Run(request, design, slot, tol, progress: done => { lock (gate) task.Value = Math.Max(task.Value, done); }, source: source);
-            task.Value = tol.Trials;
-        });
-        return result!;
     }
 
     /// <summary>Writes the three files, each through a temporary file renamed into place.</summary>

@@ -29,6 +29,12 @@ public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFra
     /// (a margin of 0.1 %, common practice, no source).
     /// </summary>
     public const double LowestSearchAboveCutoff = 1.001;
+
+    /// <summary>Receives the progress of the long steps (band sweep, coupled iterations); null for none. Called from worker threads.</summary>
+    public IProgress<WorkProgress>? Progress { get; init; }
+
+    /// <summary>Stops the run between steps, iterations and sweep points with an <see cref="OperationCanceledException"/>.</summary>
+    public CancellationToken Cancellation { get; init; }
 }
 
 /// <summary>Everything one run computes: the taper, the slot model, the design and its analysis across the band.</summary>
@@ -146,7 +152,12 @@ public static class ArrayPipeline
         var top = sweep.Points.Count > 0 && sweep.Points[^1].Frequency > design.DesignFrequency ? sweep.Points[^1].Frequency : design.DesignFrequency;
         var grid = ArrayFigures.DefaultGrid(design, top);
         var points = new FrequencyFigures[sweep.Points.Count];
-        Parallel.For(0, points.Length, i => points[i] = ArrayFigures.At(design, sweep.Points[i], grid));
+        int done = 0;
+        Parallel.For(0, points.Length, new ParallelOptions { CancellationToken = options.Cancellation }, i =>
+        {
+            points[i] = ArrayFigures.At(design, sweep.Points[i], grid);
+            options.Progress?.Report(new WorkProgress("band sweep", Interlocked.Increment(ref done), points.Length));
+        });
         return (sweep, ArrayFigures.At(design, sweep.AtDesign, grid), Array.AsReadOnly(points));
     }
 
@@ -172,6 +183,7 @@ public static class ArrayPipeline
         if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
         var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
         SlotClearance.Require(design, request.Slots.Cutter);
+        options.Cancellation.ThrowIfCancellationRequested();
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
@@ -198,7 +210,9 @@ public static class ArrayPipeline
     private static ArrayResult RunCoupled(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
     {
         if (request.Feed.Type == FeedType.TravellingWave) return RunCoupledTravelling(request, options, taper, slot);
-        var elliott = ElliottDesigner.Design(request, slot, taper.Weights);
+        var elliott = ElliottDesigner.Design(request, slot, taper.Weights,
+            ElliottOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
+        options.Cancellation.ThrowIfCancellationRequested();
         var design = elliott.Design;
         SlotClearance.Require(design, request.Slots.Cutter);
         var outside = SlotTableRangeCheck.Check(design, slot);
@@ -222,7 +236,9 @@ public static class ArrayPipeline
     /// </summary>
     private static ArrayResult RunCoupledTravelling(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
     {
-        var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights);
+        var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights,
+            CoupledTravellingWaveOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
+        options.Cancellation.ThrowIfCancellationRequested();
         var design = result.Design;
         SlotClearance.Require(design, request.Slots.Cutter);
         var outside = SlotTableRangeCheck.Check(design, slot);

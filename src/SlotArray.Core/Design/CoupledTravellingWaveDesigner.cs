@@ -17,6 +17,12 @@ public sealed record CoupledTravellingWaveOptions(MutualImpedanceModel? Coupling
 {
     /// <summary>The defaults.</summary>
     public static CoupledTravellingWaveOptions Default { get; } = new();
+
+    /// <summary>Receives one report per coupled solution (done of at most <see cref="MaximumIterations"/>); null for none.</summary>
+    public IProgress<WorkProgress>? Progress { get; init; }
+
+    /// <summary>Stops the iteration with an <see cref="OperationCanceledException"/>.</summary>
+    public CancellationToken Cancellation { get; init; }
 }
 
 /// <summary>A travelling-wave design corrected for the external mutual coupling, and the isolated-slot design it started from.</summary>
@@ -120,8 +126,10 @@ public static class CoupledTravellingWaveDesigner
         int iterations = 0;
         while (true)
         {
+            options.Cancellation.ThrowIfCancellationRequested();
             var sol = CoupledArrayNetwork.Solve(design, slot, f0, options.Coupling);
             iterations++;
+            options.Progress?.Report(new WorkProgress("coupled travelling-wave iterations", iterations, options.MaximumIterations));
             double budget = 1 - loadFraction - sol.WallLoss - sol.ReflectedPower;
             if (!(budget > 0))
                 throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,

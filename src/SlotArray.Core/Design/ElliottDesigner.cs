@@ -16,6 +16,12 @@ public sealed record ElliottOptions(double Tolerance = 1e-7, int MaximumIteratio
 {
     /// <summary>The defaults.</summary>
     public static ElliottOptions Default { get; } = new();
+
+    /// <summary>Receives one report per iteration (done of at most <see cref="MaximumIterations"/>); null for none.</summary>
+    public IProgress<WorkProgress>? Progress { get; init; }
+
+    /// <summary>Stops the iteration with an <see cref="OperationCanceledException"/>.</summary>
+    public CancellationToken Cancellation { get; init; }
 }
 
 /// <summary>One outer iteration of Elliott's procedure.</summary>
@@ -118,6 +124,8 @@ public static class ElliottDesigner
         var target = new double[n];
         for (int it = 1; it <= options.MaximumIterations; it++)
         {
+            options.Cancellation.ThrowIfCancellationRequested();
+            options.Progress?.Report(new WorkProgress("Elliott's coupled iterations", it, options.MaximumIterations));
             var z = coupling(Placements(uncoupled, side, x, len), uncoupled.Slots[0].Width, f0);
             var fn = new double[n];
             double sum = 0;

@@ -85,6 +85,7 @@ public static class ToleranceAnalysis
         options ??= ToleranceOptions.Default;
         var model = ArrayTrialModel.Build(design, slot, FactoryFor(request, source), tol, options);
         var mc = ToleranceMonteCarlo.Run(model, tol.Trials, tol.Seed, TargetDb(request), options, progress);
+        options.Cancellation.ThrowIfCancellationRequested();
         var sens = ToleranceSensitivities.Compute(model, options);
         return new ToleranceResult(tol, mc, sens, model.SurrogateSamples);
     }

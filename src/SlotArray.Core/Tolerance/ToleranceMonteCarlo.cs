@@ -41,7 +41,7 @@ public static class ToleranceMonteCarlo
         var outcomes = new TrialOutcome[trials];
         int done = 0;
         int chunks = (trials + Chunk - 1) / Chunk;
-        Parallel.For(0, chunks, new ParallelOptions { MaxDegreeOfParallelism = options.Threads }, c =>
+        Parallel.For(0, chunks, new ParallelOptions { MaxDegreeOfParallelism = options.Threads, CancellationToken = options.Cancellation }, c =>
         {
             int end = Math.Min(trials, (c + 1) * Chunk);
             for (int i = c * Chunk; i < end; i++)

@@ -16,6 +16,9 @@ public sealed record ToleranceOptions(int PatternPoints = 2048, int SurrogateNod
     /// <summary>The thread count to use.</summary>
     public int Threads => MaxThreads > 0 ? MaxThreads : Environment.ProcessorCount;
 
+    /// <summary>Stops the Monte Carlo between chunks of trials with an <see cref="OperationCanceledException"/>.</summary>
+    public CancellationToken Cancellation { get; init; }
+
     internal void Validate()
     {
         if (PatternPoints < 256) throw new ArgumentOutOfRangeException(nameof(PatternPoints), PatternPoints, "a trial pattern needs at least 256 angles");

@@ -114,6 +114,13 @@ public static class SpecJsonSchema
             double x => JsonValue.Create(x),
             _ => throw new ArgumentException($"default of '{key.Name}' must be a string, long or double", nameof(key)),
         };
+        if (key.Example is { } ex && key.Value is not (ListValue or BlockValue))
+            described["examples"] = new JsonArray(key.Value switch
+            {
+                IntegerValue => JsonValue.Create(long.Parse(ex, CultureInfo.InvariantCulture)),
+                NumberValue => JsonValue.Create(double.Parse(ex, CultureInfo.InvariantCulture)),
+                _ => JsonValue.Create(ex),
+            });
         foreach (var (k, v) in o.ToList())
         {
             o.Remove(k);

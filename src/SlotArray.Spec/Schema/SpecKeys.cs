@@ -35,7 +35,7 @@ internal static class SpecKeys
     /// <summary><c>tolerance.&lt;error&gt;: {sigma: …}</c>: a normally distributed error.</summary>
     public static readonly SpecSection Sigma = new("tolerance.sigma", "a normally distributed error given by its standard deviation",
     [
-        new("sigma", ToleranceLength, "standard deviation of a normally distributed error") { Required = true },
+        new("sigma", ToleranceLength, "standard deviation of a normally distributed error") { Required = true, Example = "0.02 mm" },
     ]);
 
     private static readonly AnyOfValue Tolerance = new([ToleranceLength, new BlockValue(Sigma)]);
@@ -44,13 +44,13 @@ internal static class SpecKeys
     public static readonly SpecSection Guide = new("guide", "the waveguide or rectangular tube the slots are cut in",
     [
         new("size", new ChoiceValue([.. WaveguideCatalogue.All.SelectMany(g => new[] { g.Designation, g.Iec })], [], WordFolding.Designation),
-            "catalogue size (EIA WR or IEC R, 'slotarray guides' lists them); or give a and b") { DefaultText = "none: give size, or a and b" },
-        new("a", Q(QuantityKind.Length, "above 0, up to 10 m; larger than b"), "inside broad-wall width (overrides size)") { DefaultText = "from size" },
-        new("b", Q(QuantityKind.Length, "above 0, smaller than a"), "inside narrow-wall height (overrides size)") { DefaultText = "from size" },
-        new("wall", Q(QuantityKind.Length, "0 or more, smaller than a"), "wall thickness where the slots are cut") { Required = true },
+            "catalogue size (EIA WR or IEC R, 'slotarray guides' lists them); or give a and b") { DefaultText = "none: give size, or a and b", Example = "WR-90" },
+        new("a", Q(QuantityKind.Length, "above 0, up to 10 m; larger than b"), "inside broad-wall width (overrides size)") { DefaultText = "from size", Example = "22.86 mm" },
+        new("b", Q(QuantityKind.Length, "above 0, smaller than a"), "inside narrow-wall height (overrides size)") { DefaultText = "from size", Example = "10.16 mm" },
+        new("wall", Q(QuantityKind.Length, "0 or more, smaller than a"), "wall thickness where the slots are cut") { Required = true, Example = "1.27 mm" },
         new("metal", new ChoiceValue([.. Metal.All.Select(m => m.Name)], [.. Metal.Aliases.Select(a => a.Key)], WordFolding.CaseOnly),
             "wall metal (sets the conductivity for the loss)") { Default = "aluminium", DefaultText = "aluminium (warning)" },
-        new("conductivity", Q(QuantityKind.Conductivity, "above 0, up to 1e9 S/m"), "wall conductivity, instead of metal"),
+        new("conductivity", Q(QuantityKind.Conductivity, "above 0, up to 1e9 S/m"), "wall conductivity, instead of metal") { Example = "3.5e7 S/m" },
         new("permittivity", new NumberValue(MinPermittivity, MaxPermittivity), "relative permittivity εr of the filling") { Default = 1L },
         new("roughness", Q(QuantityKind.Length, "0 to 1 mm"), "RMS surface roughness of the inside walls") { Default = "0 mm" },
     ])
@@ -62,11 +62,11 @@ internal static class SpecKeys
     /// <summary><c>slots</c>: the radiating slots.</summary>
     public static readonly SpecSection Slots = new("slots", "the radiating slots",
     [
-        new("type", Words(SpecNames.SlotTypes), "longitudinal broad-wall, inclined narrow-wall (edge) or inclined series slots") { Required = true },
-        new("count", new IntegerValue(MinSlots, MaxSlots), "number of slots") { Required = true },
-        new("width", Q(QuantityKind.Length, "above 0, less than a/2; 0.002 to 0.2 wavelength for longitudinal slots, less than b for edge slots"), "slot width") { Required = true },
+        new("type", Words(SpecNames.SlotTypes), "longitudinal broad-wall, inclined narrow-wall (edge) or inclined series slots") { Required = true, Example = "longitudinal" },
+        new("count", new IntegerValue(MinSlots, MaxSlots), "number of slots") { Required = true, Example = "16" },
+        new("width", Q(QuantityKind.Length, "above 0, less than a/2; 0.002 to 0.2 wavelength for longitudinal slots, less than b for edge slots"), "slot width") { Required = true, Example = "1.6 mm" },
         new("cutter", Q(QuantityKind.Length, "above 0, no larger than the width"), "end-mill diameter: round-ended slots")
-            { DefaultText = "omitted: square ends" },
+            { DefaultText = "omitted: square ends", Example = "1.6 mm" },
         new("model", Words(SpecNames.SlotModels), "slot admittance model") { Default = "moment-method" },
         new("data", new TextValue(MaxLength: 4096), "your own slot table (CSV, README 'Your own slot table'), path relative to the spec; replaces the model")
             { DefaultText = "none: the model" },
@@ -83,7 +83,7 @@ internal static class SpecKeys
     /// <summary><c>feed</c>: how the guide is fed and ended.</summary>
     public static readonly SpecSection Feed = new("feed", "how the guide is fed and how it ends",
     [
-        new("type", Words(SpecNames.FeedTypes), "standing-wave (ends in a short) or travelling-wave (ends in a load)") { Required = true },
+        new("type", Words(SpecNames.FeedTypes), "standing-wave (ends in a short) or travelling-wave (ends in a load)") { Required = true, Example = "standing-wave" },
         new("spacing", GuideDistance("between 0 and 1 guide-wavelength"), "slot spacing along the guide, in guide wavelengths or a length")
             { Default = "0.5 guide-wavelength", DefaultText = "0.5 guide-wavelength (standing-wave); required for travelling-wave", RequiredFor = TravellingWave },
         new("position", Words(SpecNames.FeedPositions), "where a standing-wave array is fed") { Default = "end", AppliesTo = StandingWave },
@@ -102,15 +102,15 @@ internal static class SpecKeys
     /// <summary><c>taper</c>: the aperture amplitude distribution.</summary>
     public static readonly SpecSection Taper = new("taper", "the aperture amplitude distribution (sum or difference pattern)",
     [
-        new("type", Words(SpecNames.TaperTypes), "taper family") { Required = true },
+        new("type", Words(SpecNames.TaperTypes), "taper family") { Required = true, Example = "taylor" },
         new("sidelobes", Q(QuantityKind.Decibels, "-100 dB up to -13.3 dB (chebyshev: up to -1 dB; bayliss: -60 dB to -15 dB)"), "design sidelobe level")
-            { AppliesTo = SidelobeTapers, RequiredFor = SidelobeTapers },
+            { AppliesTo = SidelobeTapers, RequiredFor = SidelobeTapers, Example = "-26 dB" },
         new("nbar", new IntegerValue(MinNbar, MaxNbar), "number of nearly equal sidelobes next to the main beam") { Default = 4L, AppliesTo = NbarTapers },
         new("edge", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "cosine-pedestal: edge level")
-            { AppliesTo = PedestalTaper, RequiredFor = PedestalTaper },
+            { AppliesTo = PedestalTaper, RequiredFor = PedestalTaper, Example = "-20 dB" },
         new("exponent", new NumberValue(MinExponent, MaxExponent), "cosine-pedestal: exponent of the cosine") { Default = 2L, AppliesTo = PedestalTaper },
         new("weights", new ListValue(new NumberValue(null, null), 1, null), "given: one amplitude per slot (any signs)")
-            { AppliesTo = GivenTaper, RequiredFor = GivenTaper },
+            { AppliesTo = GivenTaper, RequiredFor = GivenTaper, Example = "[0.5, 1, 1, 0.5]" },
     ]);
 
     /// <summary><c>tolerance.systematic</c>: the same error on every slot.</summary>
@@ -123,12 +123,12 @@ internal static class SpecKeys
     /// <summary><c>tolerance</c>: machining errors for the Monte Carlo analysis.</summary>
     public static readonly SpecSection ToleranceBlock = new("tolerance", "machining errors for the Monte Carlo analysis: '0.02 mm' is uniform ±, '{sigma: 0.02 mm}' normal",
     [
-        new("offset", Tolerance, "error of each slot's offset from the centreline") { DefaultText = "no error" },
-        new("length", Tolerance, "error of each slot's length") { DefaultText = "no error" },
-        new("position", Tolerance, "error of each slot's position along the guide") { DefaultText = "no error" },
-        new("width", Tolerance, "error of each slot's width") { DefaultText = "no error" },
-        new("guide_width", Tolerance, "error of the tube's inside broad wall a") { DefaultText = "no error" },
-        new("wall", Tolerance, "error of the wall thickness") { DefaultText = "no error" },
+        new("offset", Tolerance, "error of each slot's offset from the centreline") { DefaultText = "no error", Example = "0.02 mm" },
+        new("length", Tolerance, "error of each slot's length") { DefaultText = "no error", Example = "0.02 mm" },
+        new("position", Tolerance, "error of each slot's position along the guide") { DefaultText = "no error", Example = "0.02 mm" },
+        new("width", Tolerance, "error of each slot's width") { DefaultText = "no error", Example = "0.02 mm" },
+        new("guide_width", Tolerance, "error of the tube's inside broad wall a") { DefaultText = "no error", Example = "0.02 mm" },
+        new("wall", Tolerance, "error of the wall thickness") { DefaultText = "no error", Example = "0.02 mm" },
         new("systematic", new BlockValue(Systematic), "the same error on every slot") { DefaultText = "none" },
         new("trials", new IntegerValue(MinTrials, MaxTrials), "Monte Carlo trials") { Default = 1000L },
         new("seed", new IntegerValue(0, int.MaxValue), "random seed (same seed, same results)") { Default = 1L },
@@ -139,28 +139,28 @@ internal static class SpecKeys
     /// <summary><c>requirements</c>: what the antenna must meet (pass or fail in the report).</summary>
     public static readonly SpecSection Requirements = new("requirements", "what the antenna must meet (pass or fail in the report)",
     [
-        new("sidelobes", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "highest sidelobe allowed") { DefaultText = "the taper's design level" },
-        new("cross_polar", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "highest cross-polar level allowed") { DefaultText = "not checked" },
+        new("sidelobes", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "highest sidelobe allowed") { DefaultText = "the taper's design level", Example = "-24 dB" },
+        new("cross_polar", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "highest cross-polar level allowed") { DefaultText = "not checked", Example = "-25 dB" },
         new("vswr", new AnyOfValue([new NumberValue(1, 100, ExclusiveMinimum: true), new TextValue(VswrPattern)]),
-            "highest VSWR over the whole band, e.g. 1.5 or '1.5:1'") { DefaultText = "not checked" },
+            "highest VSWR over the whole band, e.g. 1.5 or '1.5:1'") { DefaultText = "not checked", Example = "1.5" },
     ]);
 
     /// <summary><c>transmitter</c>: powers for the exposure and power-handling screening.</summary>
     public static readonly SpecSection Transmitter = new("transmitter", "transmitter powers for the RF exposure and power-handling screening",
     [
-        new("peak_power", Q(QuantityKind.Power, "above 0, up to 1000 MW"), "peak transmitter power") { DefaultText = "no estimate" },
-        new("average_power", Q(QuantityKind.Power, "above 0, up to the peak power"), "average transmitter power") { DefaultText = "no estimate" },
+        new("peak_power", Q(QuantityKind.Power, "above 0, up to 1000 MW"), "peak transmitter power") { DefaultText = "no estimate", Example = "25 kW" },
+        new("average_power", Q(QuantityKind.Power, "above 0, up to the peak power"), "average transmitter power") { DefaultText = "no estimate", Example = "20 W" },
     ]);
 
     /// <summary>The top level of the spec.</summary>
     public static readonly SpecSection Root = new("", "a SlotArray spec (version 1): one slotted-waveguide array from requirements to metal",
     [
-        new("spec", new IntegerValue(1, 1), "spec format version") { Required = true },
+        new("spec", new IntegerValue(1, 1), "spec format version") { Required = true, Example = "1" },
         new("name", new TextValue(@"^[^/\\:*?""<>|\u0000-\u001f\u007f-\u009f]+$"), "used in titles and file names (1 to 100 characters, no / \\ : * ? \" < > |)")
-            { Required = true },
-        new("frequency", Q(QuantityKind.Frequency, "1 MHz to 1000 GHz, inside the guide's single-mode band"), "design frequency") { Required = true },
+            { Required = true, Example = "harbour-sensor-16" },
+        new("frequency", Q(QuantityKind.Frequency, "1 MHz to 1000 GHz, inside the guide's single-mode band"), "design frequency") { Required = true, Example = "9.41 GHz" },
         new("band", new ListValue(Q(QuantityKind.Frequency, "low above the TE10 cutoff, low < high"), 2, 2), "analysis band [low, high] containing the design frequency")
-            { DefaultText = "frequency ± 2 % (warning)" },
+            { DefaultText = "frequency ± 2 % (warning)", Example = "[9.35 GHz, 9.47 GHz]" },
         new("guide", new BlockValue(Guide), Guide.Description) { Required = true },
         new("slots", new BlockValue(Slots), Slots.Description) { Required = true },
         new("feed", new BlockValue(Feed), Feed.Description) { Required = true },

@@ -10,6 +10,8 @@ internal sealed record SpecKey(string Name, SpecValue Value, string Description)
     public bool Required { get; init; }
     /// <summary>The value used when the key is absent, as the spec writes it (a string, a whole number or a number); null when there is none.</summary>
     public object? Default { get; init; }
+    /// <summary>A typical value as the spec writes it, for keys without a <see cref="Default"/> (editors offer it; the starter spec shows it).</summary>
+    public string? Example { get; init; }
     /// <summary>The default in words when it is not one value (e.g. "frequency ± 2 %"); null to print <see cref="Default"/>.</summary>
     public string? DefaultText { get; init; }
     /// <summary>The words of the section's <c>type</c> key for which this key may be given; null when it always may.</summary>

@@ -29,8 +29,26 @@ public class SpecSchemaTests
 
     private static bool CheckAccepts(JsonNode doc) => SpecLoader.Parse(doc.ToJsonString(), "mutant.yaml").IsValid;
 
+    /// <summary>The bundled specs and the starter spec of each kind.</summary>
     private static IReadOnlyList<(string Name, JsonNode Doc)> Bases =>
-        [.. RepoFiles.Examples.Select(p => (Path.GetFileName(p), YamlToJson.Convert(File.ReadAllText(p))!))];
+    [
+        .. RepoFiles.Examples.Select(p => (Path.GetFileName(p), YamlToJson.Convert(File.ReadAllText(p))!)),
+        .. StarterSpec.Kinds.Select(k => ($"init --kind {k.Key}", YamlToJson.Convert(StarterSpec.Text(k.Value))!)),
+    ];
+
+    [Fact]
+    public void Every_starter_spec_passes_check_and_validates()
+    {
+        foreach (var (word, kind) in StarterSpec.Kinds)
+        {
+            string text = StarterSpec.Text(kind);
+            var r = SpecLoader.Parse(text, word + ".yaml");
+            Assert.True(r.IsValid, string.Join("\n", r.Errors));
+            Assert.Empty(r.Warnings);
+            Assert.True(SchemaAccepts(YamlToJson.Convert(text), out string why), $"init --kind {word}: {why}");
+            Assert.StartsWith(SpecJsonSchema.Modeline(SpecJsonSchema.FileName) + "\n", text);
+        }
+    }
 
     [Fact]
     public void Schema_is_a_valid_draft_2020_12_schema()
