@@ -45,6 +45,9 @@ public static class CommandLine
         return root;
     }
 
+    /// <summary>The exception a user can act on: the cause inside a parallel failure, else the exception itself.</summary>
+    private static Exception Actionable(Exception e) => e is AggregateException a ? ParallelFailures.Cause(a) : e;
+
     /// <summary>
     /// Parses and runs; maps exceptions to the architecture's exit codes (130 when <paramref name="cancel"/> stops the
     /// run). A failure always prints a readable message on <paramref name="error"/>; when the command was given
@@ -77,10 +80,12 @@ public static class CommandLine
             if (parse.Errors.Count > 0) return Fail(ExitCodes.BadInput, JsonError.BadInput, string.Join(" ", parse.Errors.Select(e => e.Message)));
             return code is ExitCodes.Ok or ExitCodes.RequirementsNotMet ? code : Fail(code, JsonError.KindOf(code), stderr.LastLine ?? "failed");
         }
-        catch (InfeasibleDesignException e)
+        catch (Exception e) when (Actionable(e) is InfeasibleDesignException or ConvergenceException)
         {
-            error.WriteLine($"infeasible: {e.Message}");
-            return Fail(ExitCodes.Infeasible, JsonError.Infeasible, e.Message);
+            // A solver that does not converge is exit 1 too: the message names the slot or stage, and the spec can be changed.
+            var cause = Actionable(e);
+            error.WriteLine($"{(cause is InfeasibleDesignException ? "infeasible" : "not converged")}: {cause.Message}");
+            return Fail(ExitCodes.Infeasible, JsonError.Infeasible, cause.Message);
         }
         catch (SpecErrorsException e)
         {

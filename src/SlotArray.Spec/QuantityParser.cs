@@ -55,8 +55,11 @@ public static partial class QuantityParser
         new("λg", QuantityKind.GuideWavelengths, 1),
     ];
 
-    /// <summary>A decimal number as a spec writes it (dot separator, optional exponent); shared with the JSON Schema's patterns.</summary>
-    internal const string NumberPattern = @"[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?";
+    /// <summary>
+    /// A decimal number as a spec writes it (dot separator, optional exponent, the digits 0-9: .NET's \d would also take
+    /// other scripts' digits, which the invariant number parser cannot read); shared with the JSON Schema's patterns.
+    /// </summary>
+    internal const string NumberPattern = @"[+-]?(?:[0-9]+(?:\.[0-9]*)?|\.[0-9]+)(?:[eE][+-]?[0-9]+)?";
 
     [GeneratedRegex(@"^\s*(?<num>" + NumberPattern + @")\s*(?<unit>.*?)\s*$", RegexOptions.CultureInvariant)]
     private static partial Regex NumberAndUnit();
@@ -120,7 +123,13 @@ public static partial class QuantityParser
         string expected = string.Join(", or ", accepted.Select(Describe));
         if (string.IsNullOrWhiteSpace(text)) { error = $"needs {expected}"; return false; }
         var m = NumberAndUnit().Match(text);
-        if (!m.Success) { error = $"needs {expected}; '{text.Trim()}' is not a number with a unit"; return false; }
+        if (!m.Success)
+        {
+            error = text.Any(c => char.IsDigit(c) && !char.IsAsciiDigit(c))
+                ? $"needs {expected}; '{text.Trim()}' has digits other than 0-9: write the number with the digits 0-9"
+                : $"needs {expected}; '{text.Trim()}' is not a number with a unit";
+            return false;
+        }
         double number = double.Parse(m.Groups["num"].Value, NumberStyles.Float, CultureInfo.InvariantCulture);
         if (!double.IsFinite(number)) { error = $"needs {expected}; '{m.Groups["num"].Value}' is too large to be a finite number"; return false; }
         string symbol = m.Groups["unit"].Value;

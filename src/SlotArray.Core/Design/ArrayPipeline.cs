@@ -1,3 +1,4 @@
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
@@ -7,7 +8,11 @@ namespace SlotArray.Core.Design;
 
 /// <summary>How finely the pipeline analyses a design.</summary>
 /// <param name="SweepPoints">Frequencies across the analysis band (≥ 2); default 201.</param>
-/// <param name="BandSearchFraction">How far either side of the design frequency the VSWR bands are searched, as a fraction of it; default 0.15.</param>
+/// <param name="BandSearchFraction">
+/// How far either side of the design frequency the VSWR bands are searched, as a fraction of it; default 0.15. The search
+/// never goes below <see cref="LowestSearchAboveCutoff"/> times the TE10 cutoff. 0: no search (both bands null), for runs
+/// that need the design and the sweep but not the bands.
+/// </param>
 /// <param name="AdmittanceStep">
 /// Node spacing (fraction of the design frequency) of the <see cref="FrequencyInterpolatedSlotModel"/> through which the
 /// analysis evaluates each slot's y(f); default <see cref="FrequencyInterpolatedSlotModel.DefaultStep"/>; 0: solve the
@@ -27,6 +32,12 @@ public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFra
 
     /// <summary>Frequencies of the match sweep, ≥ 2; default <see cref="MatchSpan.DefaultPoints"/>.</summary>
     public int MatchPoints { get; init; } = MatchSpan.DefaultPoints;
+
+    /// <summary>
+    /// Lowest frequency of the band search as a multiple of the TE10 cutoff, 1.001: below, λg and the slot models diverge
+    /// (a margin of 0.1 %, common practice, no source).
+    /// </summary>
+    public const double LowestSearchAboveCutoff = 1.001;
 
     /// <summary>Receives the progress of the long steps (band sweep, coupled iterations); null for none. Called from worker threads.</summary>
     public IProgress<WorkProgress>? Progress { get; init; }
@@ -181,12 +192,20 @@ public static class ArrayPipeline
         return (sweep, ArrayFigures.At(design, sweep.AtDesign, grid), Array.AsReadOnly(points));
     }
 
-    /// <summary>Runs the whole pipeline with the slot source chosen by the caller (the request's own when null).</summary>
+    /// <summary>
+    /// Runs the whole pipeline with the slot source chosen by the caller (the request's own when null); a failure inside
+    /// its parallel stages surfaces as itself (<see cref="ParallelFailures"/>).
+    /// </summary>
     /// <exception cref="InfeasibleDesignException">The request cannot be realised; the message says what to change.</exception>
+    /// <exception cref="ConvergenceException">A solver did not converge; the message names the slot or stage.</exception>
     public static ArrayResult Run(ArrayRequest request, AnalysisOptions? options = null, SlotSource? source = null)
     {
         ArgumentNullException.ThrowIfNull(request);
-        options ??= AnalysisOptions.Default;
+        return ParallelFailures.Unwrapped(() => RunStages(request, options ?? AnalysisOptions.Default, source));
+    }
+
+    private static ArrayResult RunStages(ArrayRequest request, AnalysisOptions options, SlotSource? source)
+    {
         if (request.Coupling == CouplingMode.Mutual && request.Slots.Type != SlotType.Longitudinal)
             throw new InfeasibleDesignException(
                 $"coupling: mutual is implemented for arrays of longitudinal slots only; {request.Slots.Type} slots have no coupled designer yet: use coupling: none");
@@ -206,17 +225,23 @@ public static class ArrayPipeline
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
         if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
         var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
+        SlotClearance.Require(design, request.Slots.Cutter);
         options.Cancellation.ThrowIfCancellationRequested();
         design = Prototype.PrototypeMargin.Apply(design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
         var f0 = request.DesignFrequency;
-        var lo = Frequency.FromHertz(f0.Hertz * (1 - options.BandSearchFraction));
-        var hi = Frequency.FromHertz(f0.Hertz * (1 + options.BandSearchFraction));
-        var step = Frequency.FromHertz(f0.Hertz * 1e-3);
-        var b15 = ArrayNetwork.FindBand(design, analysis, 1.5, lo, hi, step);
-        var b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
+        MatchBand? b15 = null, b2 = null;
+        if (options.BandSearchFraction > 0)
+        {
+            var lo = Frequency.FromHertz(Math.Max(f0.Hertz * (1 - options.BandSearchFraction),
+                Math.Min(request.BandLow.Hertz, request.Guide.CutoffTe10.Hertz * AnalysisOptions.LowestSearchAboveCutoff)));
+            var hi = Frequency.FromHertz(f0.Hertz * (1 + options.BandSearchFraction));
+            var step = Frequency.FromHertz(f0.Hertz * 1e-3);
+            b15 = ArrayNetwork.FindBand(design, analysis, 1.5, lo, hi, step);
+            b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
+        }
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
             .Concat(outside).DistinctBy(w => w.Message).ToList();
         var (mLo, mHi) = MatchSpan.Resolve(request, options, b15, b2);
@@ -235,7 +260,9 @@ public static class ArrayPipeline
         var elliott = ElliottDesigner.Design(request, slot, taper.Weights,
             ElliottOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
         options.Cancellation.ThrowIfCancellationRequested();
-        var design = Prototype.PrototypeMargin.Apply(elliott.Design, request.PrototypeMargin);
+        var design = elliott.Design;
+        SlotClearance.Require(design, request.Slots.Cutter);
+        design = Prototype.PrototypeMargin.Apply(design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
@@ -261,7 +288,9 @@ public static class ArrayPipeline
         var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights,
             CoupledTravellingWaveOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
         options.Cancellation.ThrowIfCancellationRequested();
-        var design = Prototype.PrototypeMargin.Apply(result.Design, request.PrototypeMargin);
+        var design = result.Design;
+        SlotClearance.Require(design, request.Slots.Cutter);
+        design = Prototype.PrototypeMargin.Apply(design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);

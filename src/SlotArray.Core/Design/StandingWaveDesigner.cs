@@ -91,7 +91,6 @@ public static class StandingWaveDesigner
                 if (!warnings.Contains(w)) warnings.Add(w);
         }
 
-        CheckGeometry(slots, spacing, shortDistance);
         AddRuleWarnings(warnings, request, lambdaG, spacing, shortDistance, centre);
 
         var near = Termination.ShortAt(shortDistance);
@@ -99,8 +98,10 @@ public static class StandingWaveDesigner
         var feedPlane = centre
             ? slots[n / 2 - 1].Position + 0.5 * spacing
             : slots[n - 1].Position;
-        return new ArrayDesign(request.Name, f0, request.Guide, lambdaG, spacing, request.Feed.Position,
+        var design = new ArrayDesign(request.Name, f0, request.Guide, lambdaG, spacing, request.Feed.Position,
             slot.CouplingKind, slot.Name, Array.AsReadOnly(slots), near, far, feedPlane, centre ? CentreJunctionRatio : 1, warnings.AsReadOnly());
+        Fabrication.SlotClearance.Require(design, request.Slots.Cutter);
+        return design;
     }
 
     private static void CheckTaper(ArrayRequest request, IReadOnlyList<double> amplitudes, int n, bool centre)
@@ -124,26 +125,6 @@ public static class StandingWaveDesigner
             $"slot {worst + 1} needs g = {g[worst]:0.000}, above the {gMax:0.000} this guide can give at {f0} ({over} of {g.Length} slots exceed it): use more slots (about {needed} or more) or a gentler taper"));
     }
 
-    private static void CheckGeometry(SlotDesign[] slots, Length spacing, Length shortDistance)
-    {
-        var first = slots[0];
-        var last = slots[^1];
-        foreach (var s in new[] { first, last })
-            if (0.5 * s.Length >= shortDistance)
-                throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                    $"slot {s.Index} is {s.Length} long, so its half-length reaches past the short {shortDistance} away: use the 3/4 guide-wavelength short distance"));
-        for (int i = 0; i + 1 < slots.Length; i++)
-        {
-            var a = slots[i];
-            var b = slots[i + 1];
-            bool overlapAlong = 0.5 * (a.Length + b.Length) > spacing;
-            bool sameSideOrTouching = Math.Abs(a.Coupling - b.Coupling) < 0.5 * (a.Width.Meters + b.Width.Meters);
-            if (overlapAlong && sameSideOrTouching)
-                throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                    $"slots {a.Index} and {b.Index} overlap: lengths {a.Length} and {b.Length} at spacing {spacing}: increase the spacing or the offsets"));
-        }
-    }
-
     private static void AddRuleWarnings(List<DesignWarning> warnings, ArrayRequest request, Length lambdaG, Length spacing,
         Length shortDistance, bool centre)
     {
@@ -151,7 +132,7 @@ public static class StandingWaveDesigner
         var lambda = f0.FreeSpaceWavelength;
         if (spacing >= lambda)
             warnings.Add(new DesignWarning("grating-lobe", string.Create(CultureInfo.InvariantCulture,
-                $"slot spacing {spacing} is not less than the free-space wavelength {lambda} at {f0}: grating lobes appear in real space (physics-reference §5.1)")));
+                $"slot spacing {spacing} is not less than the free-space wavelength {lambda} at {f0}: grating lobes appear in real space")));
         double sp = spacing / lambdaG;
         if (Math.Abs(sp - 0.5) > 1e-6)
             warnings.Add(new DesignWarning("spacing-not-half-guide-wavelength", string.Create(CultureInfo.InvariantCulture,

@@ -114,7 +114,7 @@ public static class TravellingWaveConductances
             {
                 if (p > 0.5)
                     throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                        $"slot {slotNumber(i)} must absorb p = {p:0.###} of the {a:0.#####} arriving at it, beyond the 0.5 a shunt slot on a matched line can take (single-shunt form, physics-reference §5.2): leave more power for the load, use more slots or a gentler taper"));
+                        $"slot {slotNumber(i)} must absorb p = {p:0.###} of the {a:0.#####} arriving at it, beyond the 0.5 a shunt slot on a matched line can take (a shunt g on a matched line absorbs 4g/(2 + g)², at most 0.5 at g = 2): leave more power for the load, use more slots or a gentler taper"));
                 g[i] = SingleShuntConductance(p);
                 double r = ReflectedFraction(g[i]) * a;
                 reflected += r;

@@ -197,12 +197,12 @@ public static class TravellingWaveDesigner
             foreach (var w in slot.Warnings(coupling, f0))
                 if (!warnings.Contains(w)) warnings.Add(w);
         }
-        CheckGeometry(slots, spacing, end, slot);
         var squint = TravellingWaveBeam.Direction(guide, spacing, f0);
         AddRuleWarnings(warnings, request, lambdaG, spacing, squint);
 
         var design = new ArrayDesign(request.Name, f0, guide, lambdaG, spacing, FeedPosition.End, slot.CouplingKind, slot.Name,
             Array.AsReadOnly(slots), Termination.MatchedLoadAt(end), null, Length.FromMeters(feedPlane), 1, warnings.AsReadOnly());
+        Fabrication.SlotClearance.Require(design, request.Slots.Cutter);
 
         var check = ArrayNetwork.Solve(design, slot, f0);
         double error = 0;
@@ -307,31 +307,6 @@ public static class TravellingWaveDesigner
             $"slot {worst + 1} needs g = {g[worst]:0.000}, above the {gMax:0.000} the {slot.Name} can give in {slot.Guide.Designation} at {f0} ({over} of {g.Length} slots exceed it): leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
     }
 
-    private static void CheckGeometry(SlotDesign[] slots, Length spacing, Length end, IShuntSlotModel slot)
-    {
-        // Half the extent along z of each slot: a broad-wall slot half its length; an edge slot half the run of its tilted
-        // cut across the outer narrow face, (b + 2t) tan|θ|/2, plus half its width.
-        var guide = slot.Guide;
-        double HalfExtent(SlotDesign s) => slot.CouplingKind == SlotCouplingKind.Offset
-            ? 0.5 * s.Length.Meters
-            : 0.5 * (guide.NarrowWall.Meters + 2 * guide.WallThickness.Meters) * Math.Tan(Math.Abs(s.Coupling)) + 0.5 * s.Width.Meters;
-        foreach (var s in new[] { slots[0], slots[^1] })
-            if (HalfExtent(s) >= end.Meters)
-                throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                    $"slot {s.Index} reaches {HalfExtent(s) * 1e3:0.###} mm along the guide from its centre, past the flange {end} away: increase the spacing"));
-        for (int i = 0; i + 1 < slots.Length; i++)
-        {
-            var a = slots[i];
-            var b = slots[i + 1];
-            bool overlapAlong = HalfExtent(a) + HalfExtent(b) > spacing.Meters;
-            bool touching = slot.CouplingKind == SlotCouplingKind.Tilt
-                || Math.Abs(a.Coupling - b.Coupling) < 0.5 * (a.Width.Meters + b.Width.Meters);
-            if (overlapAlong && touching)
-                throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                    $"slots {a.Index} and {b.Index} overlap at spacing {spacing} (extents {HalfExtent(a) * 2e3:0.###} and {HalfExtent(b) * 2e3:0.###} mm along the guide): increase the spacing, or the offsets"));
-        }
-    }
-
     private static void AddRuleWarnings(List<DesignWarning> warnings, ArrayRequest request, Length lambdaG, Length spacing, Angle? squint)
     {
         var f0 = request.DesignFrequency;
@@ -342,9 +317,9 @@ public static class TravellingWaveDesigner
                 $"slot spacing {spacing} is {sp:0.0000} guide wavelengths, within 0.02 of {nearest:0.0}: the slot reflections add nearly in phase at {f0} and the input match suffers; move the spacing away from a multiple of half a guide wavelength")));
         if (squint is null)
             warnings.Add(new DesignWarning("travelling-wave-no-beam", string.Create(CultureInfo.InvariantCulture,
-                $"at spacing {spacing} the travelling-wave phase condition has no beam in real space at {f0} (physics-reference §5.2): change the spacing")));
+                $"at spacing {spacing} the travelling-wave phase condition has no beam in real space at {f0} (sin θ = λ/λg − λ/(2d) lies outside −1…1): change the spacing")));
         else if (TravellingWaveBeam.HasGratingLobe(request.Guide, spacing, f0))
             warnings.Add(new DesignWarning("grating-lobe", string.Create(CultureInfo.InvariantCulture,
-                $"spacing {spacing} with the beam at {squint.Value.Degrees:0.##} deg: d(1 + |sin θ|) ≥ λ at {f0}, so a grating lobe enters real space (physics-reference §5.1)")));
+                $"spacing {spacing} with the beam at {squint.Value.Degrees:0.##} deg: d(1 + |sin θ|) ≥ λ at {f0}, so a grating lobe enters real space")));
     }
 }

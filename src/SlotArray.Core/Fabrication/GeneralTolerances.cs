@@ -32,9 +32,9 @@ public sealed record GeneralToleranceRow(Iso2768Class Class, Length Above, Lengt
 public static class GeneralTolerances
 {
     /// <summary>Provenance of the ISO 2768-1 rows.</summary>
-    public const string Iso2768Provenance = "[M, Medium] ISO 2768-1:1989 Table 1 (from memory), physics-reference §9.2";
+    public const string Iso2768Provenance = "ISO 2768-1:1989, Table 1 (from memory)";
     /// <summary>Provenance of the slot-milling figures.</summary>
-    public const string MillingProvenance = "[C] common practice, no source; physics-reference §9.2";
+    public const string MillingProvenance = "common practice, no source";
 
     /// <summary>Routine precision CNC milling of slots, ±0.025 mm [C].</summary>
     public static Length PrecisionMilling { get; } = Length.FromMillimeters(0.025);

@@ -30,7 +30,7 @@ public static class Icnirp2020
 
     private const string Name = "ICNIRP 2020";
     private const string Citation = "ICNIRP, \"Guidelines for limiting exposure to electromagnetic fields (100 kHz to 300 GHz)\", "
-        + "Health Physics 118(5):483–524, 2020; physics-reference §8.2";
+        + "Health Physics 118(5):483–524, 2020";
     private const string Table6Tag = "[S: Table 6 as reproduced in a bioelectromagnetism handbook chapter]";
 
     /// <summary>Whether the tables held here cover f (2 GHz ≤ f ≤ 300 GHz; at exactly 2 GHz the "&gt;2 GHz" rows are used).</summary>

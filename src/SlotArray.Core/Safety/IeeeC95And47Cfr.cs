@@ -18,7 +18,7 @@ public static class IeeeC95_1_2019
     private const string Name = "IEEE C95.1-2019";
     private const string Tag = "[M, Medium: tables not retrieved; verify before release]";
     private const string Citation = "IEEE Std C95.1-2019, Safety Levels with Respect to Human Exposure to Electric, Magnetic, and "
-        + "Electromagnetic Fields, 0 Hz to 300 GHz; physics-reference §8.3";
+        + "Electromagnetic Fields, 0 Hz to 300 GHz";
 
     /// <summary>Whole-body reference level, 2–300 GHz: 10 W/m² unrestricted, 50 W/m² restricted [M, Medium].</summary>
     /// <param name="f">Frequency; 2 GHz ≤ f ≤ 300 GHz.</param>
@@ -65,6 +65,6 @@ public static class Fcc47Cfr1310
         bool occ = tier == ExposureTier.Occupational;
         return new ReferenceLevel("FCC 47 CFR 1.1310", "Table 1, 1.5–100 GHz", tier, ExposureExtent.WholeBody, f,
             occ ? 50.0 : 10.0, occ ? 360 : 1800, "whole body", "[M, High]",
-            "US Code of Federal Regulations, Title 47, §1.1310, Table 1 (limits for maximum permissible exposure); physics-reference §8.3");
+            "US Code of Federal Regulations, Title 47, §1.1310, Table 1 (limits for maximum permissible exposure)");
     }
 }

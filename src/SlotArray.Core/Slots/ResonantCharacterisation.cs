@@ -91,8 +91,11 @@ public sealed class ResonantCharacterisation
     {
         ArgumentNullException.ThrowIfNull(solver);
         double lam = 2 * Math.PI / solver.Guide.MediumWavenumber(f);
+        var g = solver.Guide;
         double root = SlotResonanceSolver.ResonantLength(len => solver.Solve(offset, len, f.Hertz, null).Admittance.Imaginary, lam,
-            FormattableString.Invariant($"the longitudinal slot at offset {offset * 1e3:0.###} mm"), f);
+            FormattableString.Invariant($"the longitudinal slot {solver.Width.Millimeters:0.###} mm wide at offset {offset * 1e3:0.###} mm"), f,
+            shortest: 2 * solver.Width.Meters * (1 + 1e-6),   // the narrow-slot model needs L > 2w
+            advice: $"this guide (TE10 cutoff {g.CutoffTe10}, {g.NextModeName} cutoff {g.SingleModeBand.High}, wall {g.WallThickness}) gives the slot no resonance here; move the frequency toward the middle of the single-mode band, or use a thicker wall");
         return (root, solver.Solve(offset, root, f.Hertz, null));
     }
 

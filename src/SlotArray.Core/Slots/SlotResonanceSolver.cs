@@ -24,15 +24,30 @@ public static class SlotResonanceSolver
     /// <param name="wavelength">The wavelength λ (m) that sets the brackets and the accuracy.</param>
     /// <param name="what">The slot, for the message (e.g. "the longitudinal slot at offset 2 mm").</param>
     /// <param name="f">The frequency, for the message.</param>
-    public static double ResonantLength(Func<double, double> susceptance, double wavelength, string what, Frequency f)
+    /// <param name="shortest">Shortest length the model takes (m), e.g. just above twice the width for a narrow-slot model;
+    /// each bracket starts there when it is longer than the bracket's own start. A bracket that then closes is
+    /// <see cref="InfeasibleDesignException"/> (the slot is too wide for the model).</param>
+    /// <param name="advice">What to change when no resonance is found (appended to the message), or null.</param>
+    public static double ResonantLength(Func<double, double> susceptance, double wavelength, string what, Frequency f, double shortest = 0,
+        string? advice = null)
     {
         ArgumentNullException.ThrowIfNull(susceptance);
         double lam = wavelength;
-        double lo = 0.44 * lam, hi = 0.52 * lam, flo = susceptance(lo), fhi = susceptance(hi);
-        if (!(flo > 0 && fhi < 0)) { lo = 0.36 * lam; hi = 0.62 * lam; flo = susceptance(lo); fhi = susceptance(hi); }
+        double lo = Math.Max(0.44 * lam, shortest), hi = 0.52 * lam;
+        double flo = lo < hi ? susceptance(lo) : double.NaN, fhi = lo < hi ? susceptance(hi) : double.NaN;
+        if (!(flo > 0 && fhi < 0))
+        {
+            lo = Math.Max(0.36 * lam, shortest);
+            hi = 0.62 * lam;
+            if (lo >= hi)
+                throw new InfeasibleDesignException(FormattableString.Invariant(
+                    $"{what} is too wide for the narrow-slot model at {f}: it needs the length (about half a wavelength, here at most {hi * 1e3:0.##} mm) to exceed twice the width; use slots narrower than {hi / 2 * 1e3:0.##} mm"));
+            flo = susceptance(lo);
+            fhi = susceptance(hi);
+        }
         if (!(flo > 0 && fhi < 0))
             throw new ConvergenceException(FormattableString.Invariant(
-                $"no resonance (Im y = 0) of {what} between {lo * 1e3:0.##} and {hi * 1e3:0.##} mm at {f}"), 2, Math.Min(Math.Abs(flo), Math.Abs(fhi)));
+                $"no resonance (Im y = 0) of {what} between {lo * 1e3:0.##} and {hi * 1e3:0.##} mm at {f}{(advice is null ? "" : ": " + advice)}"), 2, Math.Min(Math.Abs(flo), Math.Abs(fhi)));
         return ResonantLength(susceptance, lo, hi, 1e-7 * lam, what);
     }
 

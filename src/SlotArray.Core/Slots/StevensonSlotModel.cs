@@ -15,7 +15,8 @@ namespace SlotArray.Core.Slots;
 /// <para>h is Elliott's near-universal normalised admittance (R. S. Elliott, <i>Antenna Theory and Design</i>, 1981: measured
 /// Y/G0 curves for different offsets nearly collapse on one function of l/l_r; physics-reference §3.1 [M, Medium]).
 /// Here h(ν) = y_MoM(x_ref, ν L_r(x_ref))/g_r,MoM(x_ref), computed once at the design frequency and the reference offset
-/// x_ref = a/8, on 0.6 ≤ ν ≤ 1.35 (61 points, natural cubic splines of Re h and Im h). h(1) = 1 by construction.</para>
+/// x_ref = a/8, on 0.6 ≤ ν ≤ 1.35 (for a slot wider than 0.3 L_r from just above 2w/L_r, since the moment method needs
+/// L &gt; 2w; 61 points, natural cubic splines of Re h and Im h). h(1) = 1 by construction.</para>
 /// </remarks>
 public sealed class StevensonSlotModel : IShuntSlotModel
 {
@@ -44,12 +45,17 @@ public sealed class StevensonSlotModel : IShuntSlotModel
         var (_, atRes) = ResonantCharacterisation.FindResonance(_mom.Solver, xRef, designFrequency);
         double gRef = atRes.Admittance.Real;
         const int n = 61;
+        // The moment method needs L > 2w: a wide slot's table starts just above that instead of at 0.6 L_r.
+        LowestLengthRatio = Math.Max(MinimumLengthRatio, 2 * width.Meters / lr * (1 + 1e-6));
+        if (LowestLengthRatio >= 0.95)
+            throw new InfeasibleDesignException(FormattableString.Invariant(
+                $"slots {width} wide are too wide for the narrow-slot model at {designFrequency}: twice the width exceeds 95 % of the resonant length {lr * 1e3:0.##} mm; use slots narrower than {0.95 * lr / 2 * 1e3:0.##} mm"));
         var nu = new double[n];
         var re = new double[n];
         var im = new double[n];
         for (int i = 0; i < n; i++)
         {
-            nu[i] = MinimumLengthRatio + (MaximumLengthRatio - MinimumLengthRatio) * i / (n - 1);
+            nu[i] = LowestLengthRatio + (MaximumLengthRatio - LowestLengthRatio) * i / (n - 1);
             var y = _mom.Solver.Solve(xRef, nu[i] * lr, designFrequency.Hertz, null).Admittance / gRef;
             re[i] = y.Real;
             im[i] = y.Imaginary;
@@ -57,6 +63,9 @@ public sealed class StevensonSlotModel : IShuntSlotModel
         _hRe = CubicSpline.InterpolateNatural(nu, re);
         _hIm = CubicSpline.InterpolateNatural(nu, im);
     }
+
+    /// <summary>Smallest L/L_r at which h is tabulated for this width: <see cref="MinimumLengthRatio"/>, or just above 2w/L_r for a wide slot.</summary>
+    public double LowestLengthRatio { get; }
 
     /// <summary>Frequency at which the normalised length dependence h was computed.</summary>
     public Frequency DesignFrequency { get; }
@@ -79,9 +88,9 @@ public sealed class StevensonSlotModel : IShuntSlotModel
     /// <summary>h(ν), the normalised admittance y/g_r as a function of ν = L/L_r (h(1) = 1).</summary>
     public Complex NormalisedAdmittance(double lengthRatio)
     {
-        if (!(lengthRatio >= MinimumLengthRatio && lengthRatio <= MaximumLengthRatio))
+        if (!(lengthRatio >= LowestLengthRatio && lengthRatio <= MaximumLengthRatio))
             throw new ArgumentOutOfRangeException(nameof(lengthRatio), lengthRatio,
-                FormattableString.Invariant($"L/L_r = {lengthRatio:0.###} is outside the tabulated {MinimumLengthRatio}–{MaximumLengthRatio} of the Stevenson model's length dependence"));
+                FormattableString.Invariant($"L/L_r = {lengthRatio:0.###} is outside the tabulated {LowestLengthRatio:0.###}–{MaximumLengthRatio} of the Stevenson model's length dependence"));
         return new Complex(_hRe.Interpolate(lengthRatio), _hIm.Interpolate(lengthRatio));
     }
 

@@ -15,6 +15,35 @@ public static class TaperSynthesis
     /// <summary>Largest N for which the achieved sidelobe level is measured (the check costs O(N²)).</summary>
     public const int MeasuredSidelobeCheckLimit = 2000;
 
+    /// <summary>
+    /// The design sidelobe levels a family synthesises, dB, from the highest (least negative) to the lowest; null for
+    /// families without a level (uniform, cosine-pedestal, given). The limits are the ones each method checks: Taylor,
+    /// Villeneuve and Taylor one-parameter below the uniform line source's −13.26 dB (rounded to −13.3), Bayliss −15 to −60 dB
+    /// (the range of Bayliss's 1968 parameter table), Dolph-Chebyshev −1 to −300 dB.
+    /// </summary>
+    /// <param name="type">The taper family.</param>
+    public static (double Highest, double Lowest)? LevelRange(TaperType type) => type switch
+    {
+        TaperType.Chebyshev => (-1, -300),
+        TaperType.Taylor or TaperType.Villeneuve => (-13.3, -100),
+        TaperType.TaylorOneParameter => (-13.3, -150),
+        TaperType.Bayliss => (-15, -60),
+        _ => null,
+    };
+
+    /// <summary>
+    /// Largest n̄ a family accepts for <paramref name="count"/> elements: (N − 1)/2 for Villeneuve (its n̄ − 1 moved zeros
+    /// need that many distinct array zeros), 100 for Taylor and Bayliss; 0 for families without n̄. The smallest is 2.
+    /// </summary>
+    /// <param name="type">The taper family.</param>
+    /// <param name="count">Number of elements.</param>
+    public static int MaximumNbar(TaperType type, int count) => type switch
+    {
+        TaperType.Villeneuve => (count - 1) / 2,
+        TaperType.Taylor or TaperType.Bayliss => 100,
+        _ => 0,
+    };
+
     /// <summary>Synthesises the taper of <paramref name="count"/> elements.</summary>
     /// <param name="request">Taper family and parameters (level negative dB, n̄, edge level, exponent, given weights).</param>
     /// <param name="count">Number of elements, 2 … 100,000.</param>
@@ -43,7 +72,7 @@ public static class TaperSynthesis
         {
             case TaperType.Chebyshev when count >= 3 && Math.Abs(w[0]) > Math.Abs(w[1]):
                 warnings.Add(new DesignWarning("chebyshev-edge-spike", Invariant(
-                    $"The Dolph-Chebyshev edge elements ({w[0]:0.####}) exceed their neighbours ({w[1]:0.####}) at N = {count} and {sll} dB: long equal-ripple arrays need edge spikes (physics-reference §6.1); use a Taylor or Villeneuve taper.")));
+                    $"The Dolph-Chebyshev edge elements ({w[0]:0.####}) exceed their neighbours ({w[1]:0.####}) at N = {count} and {sll} dB: equal sidelobes out to the last one need strong edge elements in long arrays (a property of Dolph's 1946 weights); use a Taylor or Villeneuve taper.")));
                 break;
             case TaperType.Taylor:
                 var design = TaylorLineSource.Parameters(sll, nbar);
@@ -95,7 +124,7 @@ public static class TaperSynthesis
     }
 
     private static DesignWarning EdgeRise(int nbar, double a) => new("nbar-edge-rise", Invariant(
-        $"With n̄ = {nbar} the distribution dips and rises again toward the ends (n̄ above about 4A² = {4 * a * a:0.0}, physics-reference §6.2): lower n̄ to avoid strong edge slots."));
+        $"With n̄ = {nbar} the distribution dips and rises again toward the ends (n̄ above about 4A² = {4 * a * a:0.0}, where Taylor's A sets the design sidelobe level: computed limit of a monotonic distribution): lower n̄ to avoid strong edge slots."));
 
     private static bool FallsFromCentre(double[] w)
     {

@@ -64,7 +64,7 @@ internal static class SpecKeys
     [
         new("type", Words(SpecNames.SlotTypes), "longitudinal broad-wall, inclined narrow-wall (edge) or inclined series slots") { Required = true, Example = "longitudinal" },
         new("count", new IntegerValue(MinSlots, MaxSlots), "number of slots") { Required = true, Example = "16" },
-        new("width", Q(QuantityKind.Length, "above 0, less than a/2"), "slot width") { Required = true, Example = "1.6 mm" },
+        new("width", Q(QuantityKind.Length, "above 0, less than a/2; 0.002 to 0.2 wavelength for longitudinal slots, less than b for edge slots"), "slot width") { Required = true, Example = "1.6 mm" },
         new("cutter", Q(QuantityKind.Length, "above 0, no larger than the width"), "end-mill diameter: round-ended slots")
             { DefaultText = "omitted: square ends", Example = "1.6 mm" },
         new("model", Words(SpecNames.SlotModels), "slot admittance model") { Default = "moment-method" },
@@ -103,7 +103,7 @@ internal static class SpecKeys
     public static readonly SpecSection Taper = new("taper", "the aperture amplitude distribution (sum or difference pattern)",
     [
         new("type", Words(SpecNames.TaperTypes), "taper family") { Required = true, Example = "taylor" },
-        new("sidelobes", Q(QuantityKind.Decibels, "-100 dB up to -13.26 dB (chebyshev: up to 0 dB)"), "design sidelobe level")
+        new("sidelobes", Q(QuantityKind.Decibels, "-100 dB up to -13.3 dB (chebyshev: up to -1 dB; bayliss: -60 dB to -15 dB)"), "design sidelobe level")
             { AppliesTo = SidelobeTapers, RequiredFor = SidelobeTapers, Example = "-26 dB" },
         new("nbar", new IntegerValue(MinNbar, MaxNbar), "number of nearly equal sidelobes next to the main beam") { Default = 4L, AppliesTo = NbarTapers },
         new("edge", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "cosine-pedestal: edge level")

@@ -46,10 +46,13 @@ internal sealed partial class SpecBuilder
         (Frequency Low, Frequency High)? band = Band(s, f);
         var guide = Guide(s, f, band);
         Length? lambdaG = guide is not null && f is { } ff && ff > guide.CutoffTe10 ? guide.GuideWavelength(ff) : null;
-        var slots = Slots(s, guide);
-        var feed = Feed(s, lambdaG);
+        var slots = Slots(s, guide, f);
+        var feed = Feed(s, lambdaG, slots, guide, f);
         var taper = Taper(s, slots?.Count);
         CouplingMode? coupling = s.Has("coupling") ? Choice(s, "coupling", SpecNames.CouplingModes, false) : CouplingMode.None;
+        if (coupling == CouplingMode.Mutual && slots?.Type == SlotType.Edge && !Require(s, "coupling", false,
+                "'coupling: mutual' is designed for broad-wall (longitudinal) slots only; edge slots have no coupled designer yet: write 'coupling: none'"))
+            coupling = null;
         var tolerance = Tolerance(s, out bool toleranceOk);
         var requirements = Requirements(s);
         var transmitter = Transmitter(s, out bool transmitterOk);
@@ -67,6 +70,12 @@ internal sealed partial class SpecBuilder
         string? name = Text(s, "name", true, "harbour-sensor-16")?.Trim();
         if (name is null) return null;
         char[] bad = ['/', '\\', ':', '*', '?', '"', '<', '>', '|'];
+        if (name.Length > 0 && name.Trim('.').Length == 0)
+        {
+            // "." and ".." name the current and parent folders: the default output folder out/<name> would be out/ or the working folder.
+            D.Error(s["name"]!, $"'name' cannot be '{name}': it is used as a folder name (out/<name>); write a word such as 'harbour-sensor-16'");
+            return null;
+        }
         if (name.Length == 0 || name.Length > 100 || name.Any(c => char.IsControl(c) || bad.Contains(c)))
         {
             D.Error(s["name"]!, "'name' is used in file names: write 1 to 100 letters, digits, spaces, '-', '_' or '.', e.g. 'harbour-sensor-16'");
