@@ -111,7 +111,7 @@ public static class DesignCommand
         if (source.Table is { } t)
         {
             var r = t.Residuals;
-            error.WriteLine(string.Format(Inv, "slot table {0} (SHA-256 {1}): {2} rows, {3} {4}(s), {5} frequenc{6}; fit residuals (leave-one-out, {7} points): L_r rms {8:0.###} % max {9:0.###} %, g_r rms {10:0.##} % max {11:0.##} %, y/g_r rms {12:0.####} max {13:0.####}",
+            error.WriteLine(string.Format(Inv, "slot table {0} (SHA-256 {1}): {2} rows, {3} {4}(s), {5} frequenc{6}; fit residuals (leave-one-out, {7} points): L_r rms {8:0.####} % max {9:0.####} %, g_r rms {10:0.####} % max {11:0.####} %, y/g_r rms {12:0.####} max {13:0.####}",
                 t.Table.Source, t.Table.Sha256, t.Table.Rows.Count, t.Couplings.Count, t.CouplingKind == Core.Slots.SlotCouplingKind.Offset ? "offset" : "tilt",
                 t.Frequencies.Count, t.Frequencies.Count == 1 ? "y" : "ies", r.Points, r.ResonantLengthRms * 100, r.ResonantLengthMax * 100,
                 r.ResonantConductanceRms * 100, r.ResonantConductanceMax * 100, r.AdmittanceRms, r.AdmittanceMax));

@@ -43,7 +43,7 @@ public static class SummaryMarkdown
             L("## Slot data");
             L();
             L($"The slots were designed from the table `{Escape(sd.File)}` (SHA-256 `{sd.Sha256}`), {Invariant.Int(sd.Rows)} rows: {Escape(sd.Range)}.");
-            L($"Fit residuals (leave-one-out): L_r rms {Invariant.Fixed(sd.Residuals[0] * 100, 3)} %, max {Invariant.Fixed(sd.Residuals[1] * 100, 3)} %; g_r rms {Invariant.Fixed(sd.Residuals[2] * 100, 2)} %, max {Invariant.Fixed(sd.Residuals[3] * 100, 2)} %; y/g_r rms {Invariant.Fixed(sd.Residuals[4], 4)}, max {Invariant.Fixed(sd.Residuals[5], 4)}.");
+            L($"Fit residuals (leave-one-out): L_r rms {Invariant.Fixed(sd.Residuals[0] * 100, 4)} %, max {Invariant.Fixed(sd.Residuals[1] * 100, 4)} %; g_r rms {Invariant.Fixed(sd.Residuals[2] * 100, 4)} %, max {Invariant.Fixed(sd.Residuals[3] * 100, 4)} %; y/g_r rms {Invariant.Fixed(sd.Residuals[4], 4)}, max {Invariant.Fixed(sd.Residuals[5], 4)}.");
             int outside = report.Slots.Count(s => s.OutsideSlotTable);
             if (outside > 0) L($"{Invariant.Int(outside)} slot(s) lie outside the table and were extrapolated (slots.extrapolate: true); they are marked \"outside table\" below and in the cut list.");
             L();
