@@ -13,8 +13,9 @@ for side in ref here; do
   dotnet build "$root/src/SlotArray.Cli" -c Release -o "$work/$side-bin" >/dev/null || { echo "build of $side failed"; exit 1; }
   for spec in arrays/*.yaml; do
     n=$(basename "$spec" .yaml)
-    XDG_CACHE_HOME="$work/$side-cache" dotnet "$work/$side-bin/slotarray.dll" design "$spec" -o "$work/out-$side/$n" >/dev/null 2>&1 \
-      || echo "$side: design $spec failed"
+    XDG_CACHE_HOME="$work/$side-cache" dotnet "$work/$side-bin/slotarray.dll" design "$spec" -o "$work/out-$side/$n" >/dev/null 2>&1
+    rc=$?   # 4: written, but a requirement FAILs (the marine example's cross-polar level)
+    [ "$rc" -eq 0 ] || [ "$rc" -eq 4 ] || echo "$side: design $spec failed (exit $rc)"
   done
 done
 status=0

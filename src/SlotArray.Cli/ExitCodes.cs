@@ -11,6 +11,9 @@ public static class ExitCodes
     public const int BadInput = 2;
     /// <summary>An internal error (a bug): one line, and the stack trace with --verbose.</summary>
     public const int InternalError = 3;
+    /// <summary>The design was made and written, but a stated requirement (sidelobes, cross-polar level, VSWR, power
+    /// handling) is not met: the FAIL lines on stdout and in summary.md say which.</summary>
+    public const int RequirementsNotMet = 4;
     /// <summary>Interrupted (Ctrl-C): nothing written; 128 + SIGINT, as shells report it.</summary>
     public const int Interrupted = 130;
 }

@@ -73,11 +73,11 @@ public class DesignReportBuilderTests
         var result = Base.Value with { Request = Request(new TransmitterRequest(25e3, 20)) };
         var r = DesignReportBuilder.Build(result);
         Assert.Equal(SafetyCautions.Standard.Message, r.Cautions[0]);
-        var (k, _) = DesignReportBuilder.StandingWavePeak(result);
+        var (k, _) = ArraySafety.StandingWavePeak(result);
         // The factor is the largest |V| on the line over the analysed frequencies, or 1 + |S11| on the feed line.
         double expected = new[] { result.AtDesign.Network }.Concat(result.SweepFigures.Select(p => p.Network))
             .Max(n => Math.Max(n.PeakModeVoltage, 1 + n.S11.Magnitude));
-        Check.Absolute(Math.Max(1, expected), k, 0, "definition in DesignReportBuilder.StandingWavePeak");
+        Check.Absolute(Math.Max(1, expected), k, 0, "definition in ArraySafety.StandingWavePeak");
         Assert.True(k < 2, $"a matched resonant array at resonance has a peak field well below the blanket factor 2 (got {k})");
         var power = PowerHandling.Assess(Wr90, F0, 1.0, Math.Min(k, 2), peakPower: 25e3);
         Assert.Contains(r.Cautions, c => c.Contains($"{power.MarginDecibels:0.0} dB", StringComparison.Ordinal) && c.StartsWith("Peak power 25 kW", StringComparison.Ordinal));
@@ -99,10 +99,11 @@ public class DesignReportBuilderTests
         Assert.Equal(result.SweepFigures.Max(p => p.Network.Vswr) <= 1.2, q[2].Passed);
         Assert.Contains(DesignReportBuilder.Build(result).Warnings, w => w.StartsWith("requirements.cross_polar", StringComparison.Ordinal));
 
-        // Without a sidelobe requirement the taper's design level is used: uniform, −13.26 dB (the sinc first sidelobe,
-        // physics-reference §6, from memory), marked as such.
+        // Without a sidelobe requirement a uniform taper is held to its own level: the first sidelobe of the 10-element
+        // array factor |sin(5ψ)/(10 sin(ψ/2))|, -12.97 dB (Balanis, Antenna Theory, 3rd ed., 2005, eq. 6-10c, computed
+        // here), not the line source's -13.26 dB; marked as such.
         var byTaper = DesignReportBuilder.Build(Base.Value).Requirements;
-        Assert.All(byTaper, x => Assert.Contains("the taper's design level", x.Required));
-        Assert.StartsWith("≤ -13.26 dB", byTaper[0].Required);
+        Assert.All(byTaper, x => Assert.Contains("the taper's own level", x.Required));
+        Assert.StartsWith("≤ -12.97 dB", byTaper[0].Required);
     }
 }

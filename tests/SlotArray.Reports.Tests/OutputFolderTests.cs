@@ -73,7 +73,7 @@ public sealed class OutputFolderTests : IDisposable
         string dir = Path.Combine(_root, "mine");
         Directory.CreateDirectory(dir);
         File.WriteAllText(Path.Combine(dir, "notes.txt"), "keep me");
-        var e = Assert.Throws<IOException>(() => OutputFolder.WriteAll(ReportFixture.Eight(), dir));
+        var e = Assert.Throws<OutputFolderException>(() => OutputFolder.WriteAll(ReportFixture.Eight(), dir));
         Assert.Contains("notes.txt", e.Message);
         Assert.Equal(["notes.txt"], Entries(dir));
         Assert.Equal(["mine"], Entries(_root));

@@ -27,17 +27,8 @@ public static class CheckCommand
 
     private static int Run(string path, bool json, TextWriter output, TextWriter error)
     {
-        if (!File.Exists(path)) throw new UserInputException($"spec file not found: {path}");
-        var result = SpecLoader.LoadFile(path);
-        foreach (var w in result.Warnings) error.WriteLine(w);
-        foreach (var e in result.Errors) error.WriteLine(e);
-        if (!result.IsValid)
-        {
-            error.WriteLine(string.Format(Inv, "{0}: {1} error(s); nothing designed", path, result.Errors.Count));
-            return ExitCodes.BadInput;
-        }
-        var r = result.Request!;
-        if (json) WriteJson(output, r, result.Warnings); else WriteText(output, r, path);
+        var r = DesignCommand.Load(path, error, out var warnings);
+        if (json) WriteJson(output, r, warnings); else WriteText(output, r, path);
         return ExitCodes.Ok;
     }
 

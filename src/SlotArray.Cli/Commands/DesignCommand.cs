@@ -13,7 +13,8 @@ namespace SlotArray.Cli.Commands;
 /// <c>slotarray design SPEC [-o DIR] [--json]</c>: the main job. Loads the spec (exit 2 with positioned errors), runs
 /// the pipeline (synthesis, network analysis across the band, pattern and figures), writes every output file
 /// atomically into DIR (default <c>out/&lt;name&gt;</c>, the spec's name) and prints a short summary. An infeasible
-/// design exits 1 with the reason and writes nothing. Progress, warnings and errors go to stderr; with
+/// design exits 1 with the reason and writes nothing; a design that misses a stated requirement (a FAIL verdict) is
+/// written and exits 4. Progress, warnings and errors go to stderr; with
 /// <c>--json</c> stdout carries the content of design.json and nothing else.
 /// </summary>
 public static class DesignCommand
@@ -53,8 +54,8 @@ public static class DesignCommand
 
     private static int Run(string path, string? outDir, bool json, SlotCache? cache, TextWriter output, TextWriter error, bool progress)
     {
-        var request = Load(path, error, out int code);
-        if (request is null) return code;
+        var request = Load(path, error);
+        string folder = OutputFolderCheck.Prepare(outDir ?? DefaultFolder(request.Name), replacesWhole: true);
         var clock = Stopwatch.StartNew();
         var result = Analyse(request, cache, error, progress);
         var report = DesignReportBuilder.Build(result);
@@ -68,7 +69,6 @@ public static class DesignCommand
             report = report with { Tolerance = Reports.ToleranceSummary.Lines(mc) };
         }
         CommandLine.Cancellation.ThrowIfCancellationRequested();
-        string folder = outDir ?? DefaultFolder(request.Name);
         error.WriteLine($"writing {OutputFolder.Files.Count} files to {folder}/ ...");
         OutputFolder.WriteAll(report, folder);
         foreach (string w in report.Warnings) error.WriteLine($"warning: {w}");
@@ -81,21 +81,28 @@ public static class DesignCommand
             PrintSummary(output, report, folder);
         }
         error.WriteLine(string.Format(Inv, "done in {0:0.0} s", clock.Elapsed.TotalSeconds));
-        return ExitCodes.Ok;
+        var failed = report.Requirements.Where(q => !q.Passed).ToList();
+        if (failed.Count == 0) return ExitCodes.Ok;
+        error.WriteLine($"requirements not met ({failed.Count} of {report.Requirements.Count}): {string.Join("; ", failed.Select(q => $"{q.Description}: required {q.Required}, achieved {q.Achieved}"))}. The design was written; exit code {ExitCodes.RequirementsNotMet}.");
+        return ExitCodes.RequirementsNotMet;
     }
 
-    /// <summary>Loads and validates a spec; prints its warnings and errors to <paramref name="error"/>. Null with the exit code on failure.</summary>
-    internal static ArrayRequest? Load(string path, TextWriter error, out int code)
+    /// <summary>Loads and validates a spec; prints its warnings to <paramref name="error"/>.</summary>
+    /// <param name="path">The spec file.</param>
+    /// <param name="error">Where the warnings go.</param>
+    /// <param name="nothing">The end of the failure message: what was not done, e.g. "nothing designed".</param>
+    /// <exception cref="SpecErrorsException">The file is missing or the spec has errors (exit 2; printed by <see cref="CommandLine.Run"/>).</exception>
+    internal static ArrayRequest Load(string path, TextWriter error, string nothing = "nothing designed") => Load(path, error, out _, nothing);
+
+    /// <summary>As <see cref="Load(string, TextWriter, string)"/>, also returning the spec's warnings.</summary>
+    internal static ArrayRequest Load(string path, TextWriter error, out IReadOnlyList<SpecWarning> warnings, string nothing = "nothing designed")
     {
-        code = ExitCodes.Ok;
         if (!File.Exists(path)) throw new UserInputException($"spec file not found: {path}");
         var result = SpecLoader.LoadFile(path);
+        warnings = result.Warnings;
         foreach (var w in result.Warnings) error.WriteLine(w);
-        foreach (var e in result.Errors) error.WriteLine(e);
-        if (result.IsValid) return result.Request;
-        error.WriteLine(string.Format(Inv, "{0}: {1} error(s); nothing designed", path, result.Errors.Count));
-        code = ExitCodes.BadInput;
-        return null;
+        if (result.IsValid) return result.Request!;
+        throw new SpecErrorsException(string.Format(Inv, "{0}: {1} error(s); {2}", path, result.Errors.Count, nothing), result.Errors);
     }
 
     /// <summary>

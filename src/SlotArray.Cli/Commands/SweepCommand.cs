@@ -32,11 +32,10 @@ public static class SweepCommand
 
     private static int Run(string path, string? outDir, SlotCache? cache, TextWriter output, TextWriter error, bool quiet)
     {
-        var request = DesignCommand.Load(path, error, out int code);
-        if (request is null) return code;
+        var request = DesignCommand.Load(path, error);
+        string folder = OutputFolderCheck.Prepare(outDir ?? DesignCommand.DefaultFolder(request.Name), replacesWhole: false);
         var report = DesignReportBuilder.Build(DesignCommand.Analyse(request, cache, error, ProgressDisplay.Allowed(error, quiet)));
         CommandLine.Cancellation.ThrowIfCancellationRequested();
-        string folder = outDir ?? DesignCommand.DefaultFolder(request.Name);
         AtomicFile.Write(Path.Combine(folder, "sweep.png"), s => PlotExport.Write(DesignPlots.Sweep(report), s, "png"));
         AtomicFile.Write(Path.Combine(folder, "input.s1p"), s =>
         {

@@ -17,7 +17,7 @@ namespace SlotArray.Cli.Commands;
 public static class ToleranceCommand
 {
     /// <summary>The files the command writes.</summary>
-    public static readonly IReadOnlyList<string> Files = ["tolerance.json", "tolerance.png", "sensitivity.csv"];
+    public static IReadOnlyList<string> Files => OutputFolderCheck.ToleranceFiles;
 
     /// <summary>Builds the command.</summary>
     public static Command Build(TextWriter output, TextWriter error)
@@ -40,19 +40,11 @@ public static class ToleranceCommand
 
     private static int Run(string path, string dir, int? trials, int? seed, bool json, TextWriter output, TextWriter error, bool progress)
     {
-        if (!File.Exists(path)) throw new UserInputException($"spec file not found: {path}");
-        var loaded = SpecLoader.LoadFile(path);
-        foreach (var w in loaded.Warnings) error.WriteLine(w);
-        foreach (var e in loaded.Errors) error.WriteLine(e);
-        if (!loaded.IsValid)
-        {
-            error.WriteLine(string.Format(CultureInfo.InvariantCulture, "{0}: {1} error(s); nothing analysed", path, loaded.Errors.Count));
-            return ExitCodes.BadInput;
-        }
-        var request = loaded.Request!;
+        var request = DesignCommand.Load(path, error, "nothing analysed");
         var tol = request.Tolerance ?? throw new UserInputException(
             $"{path}: the spec has no tolerance: block; add one, e.g. 'tolerance: {{offset: 0.02 mm, length: 0.02 mm, trials: 2000, seed: 1}}'");
         tol = tol with { Trials = trials ?? tol.Trials, Seed = seed ?? tol.Seed };
+        dir = OutputFolderCheck.Prepare(dir, replacesWhole: false);
 
         var source = DesignCommand.SourceFor(request, null, error, out _);
         var (design, slot) = ToleranceAnalysis.Design(request, source);

@@ -113,9 +113,11 @@ public sealed record ExposureAssessment(
             warnings.Add(new DesignWarning("exposure-frequency-range",
                 FormattableString.Invariant($"no ICNIRP 2020 reference level is held here for {frequency} (covered: 2–300 GHz); the distances to the reference levels are not given: consult the guideline's tables")));
         }
-        if (levels.Any(l => l.InsideFarFieldDistance))
-            warnings.Add(new DesignWarning("exposure-near-field",
-                FormattableString.Invariant($"the reference-level distances lie inside the far-field distance 2D²/λ = {SafetyText.Metres(ff)}: the far-field formula is a conservative screen only there")));
+        int inside = levels.Count(l => l.InsideFarFieldDistance);
+        if (inside > 0)
+            warnings.Add(new DesignWarning("exposure-near-field", inside == levels.Count
+                ? FormattableString.Invariant($"the reference-level distances all lie inside the far-field distance 2D²/λ = {SafetyText.Metres(ff)}: the far-field formula is a conservative screen only there")
+                : FormattableString.Invariant($"{inside} of the {levels.Count} reference-level distances lie inside the far-field distance 2D²/λ = {SafetyText.Metres(ff)}: the far-field formula is a conservative screen only for those")));
         return new ExposureAssessment(averagePower, gainDbi, frequency, apertureLength, apertureWidth, rotation,
             ff, nfb, ffs, bound, onAxis, levels, warnings);
     }

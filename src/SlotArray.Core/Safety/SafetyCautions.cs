@@ -38,13 +38,30 @@ public static class SafetyCautions
                 + (d.NearFieldBoundBelowLevel ? $"; the near-field bound 4P/A = {SafetyText.Sig3(e.NearFieldBound)} W/m² stays below this level" : "")
                 + ".");
         }
-        if (e.Distances.Any(d => d.InsideFarFieldDistance))
-            yield return new DesignWarning("exposure-near-field",
-                $"These distances lie inside the far-field distance 2D²/λ = {SafetyText.Metres(e.FarFieldDistance)}: the far-field "
-                + $"formula is a conservative screen there, not a field prediction; the near-field bound 4P/A is "
-                + $"{SafetyText.Sig3(e.NearFieldBound)} W/m².");
+        if (NearFieldNote(e) is { } note)
+            yield return new DesignWarning("exposure-near-field", note + $" The near-field bound 4P/A is {SafetyText.Sig3(e.NearFieldBound)} W/m².");
         foreach (var w in e.Warnings.Where(w => w.Code != "exposure-near-field"))
             yield return w;
+    }
+
+    /// <summary>
+    /// Which of the reference-level distances lie inside the far-field distance 2D²/λ, where the far-field formula is a
+    /// conservative screen and not a field prediction, named so that a distance beyond it is never said to lie inside;
+    /// null when none does.
+    /// </summary>
+    /// <param name="e">The exposure screen.</param>
+    public static string? NearFieldNote(ExposureAssessment e)
+    {
+        ArgumentNullException.ThrowIfNull(e);
+        var inside = e.Distances.Where(d => d.InsideFarFieldDistance).ToList();
+        if (inside.Count == 0) return null;
+        string ff = SafetyText.Metres(e.FarFieldDistance);
+        if (inside.Count == e.Distances.Count)
+            return (inside.Count == 1 ? "This distance lies" : "These distances all lie")
+                + $" inside the far-field distance 2D²/λ = {ff}: the far-field formula is a conservative screen there, not a field prediction.";
+        var beyond = e.Distances.Where(d => !d.InsideFarFieldDistance);
+        return $"Of these distances, {string.Join(", ", inside.Select(d => SafetyText.Metres(d.Stationary)))} lie inside the far-field distance 2D²/λ = {ff} "
+            + $"(the far-field formula is a conservative screen there, not a field prediction); {string.Join(", ", beyond.Select(d => SafetyText.Metres(d.Stationary)))} lie beyond it, where the formula applies.";
     }
 
     private static string Capital(string s) => char.ToUpperInvariant(s[0]) + s[1..];

@@ -17,11 +17,16 @@ public sealed record ToleranceResult(ToleranceRequest Tolerance, MonteCarloResul
 /// </summary>
 public static class ToleranceAnalysis
 {
-    /// <summary>The sidelobe target: <c>requirements.sidelobes</c>, else the taper's design level.</summary>
+    /// <summary>
+    /// The sidelobe target, by the one rule the requirement verdicts also use (<see cref="Verdicts.SidelobeTarget"/>):
+    /// <c>requirements.sidelobes</c>, else the taper's design level, else the peak sidelobe of its own weights; 0 dB
+    /// (every build meets it) for a taper without sidelobes.
+    /// </summary>
+    /// <param name="request">The request.</param>
     public static double TargetDb(ArrayRequest request)
     {
         ArgumentNullException.ThrowIfNull(request);
-        return request.Requirements.SidelobesDb ?? request.Taper.SidelobeLevelDb;
+        return Verdicts.SidelobeTarget.Of(request)?.LevelDb ?? 0;
     }
 
     /// <summary>

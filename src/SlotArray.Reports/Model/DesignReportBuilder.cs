@@ -6,6 +6,7 @@ using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Safety;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Verdicts;
 
 namespace SlotArray.Reports.Model;
 
@@ -23,13 +24,11 @@ namespace SlotArray.Reports.Model;
 /// <item>Amplitudes: the target is the taper weight, the achieved one the magnitude of the network's slot excitation
 /// <see cref="NetworkSolution.Excitations"/> at the design frequency; both are normalised so that their largest
 /// magnitude is 1. The achieved phase is that of the excitation relative to the slot of largest achieved amplitude.</item>
-/// <item>Requirements: sidelobes (the spec's level, else the taper's design level) at the design frequency and as the
-/// worst over the sweep of the analysis band; VSWR as the worst over the sweep of the whole analysis band; cross-polar
-/// level (edge slots) as the worst over the design frequency and the sweep.</item>
+/// <item>Requirements: the verdicts of <see cref="RequirementChecks"/> (Core), worded by <see cref="RequirementWords"/>.</item>
 /// <item>Travelling wave: datum the inner face of the load-end flange; the load power and efficiency from the network at
 /// the design frequency; the squint and scan rate from the phase condition, and the scan rate also from the sweep.</item>
-/// <item>Cautions: <see cref="SafetyCautions.Standard"/> always; with a transmitter, the exposure screen and the
-/// power-handling margin with the network's own standing-wave peak field (see <see cref="StandingWavePeak"/>).</item>
+/// <item>Cautions: those of <see cref="ArraySafety.Assess"/> (Core): the standard caution always; with a transmitter, the
+/// exposure screen and the power-handling margin with the network's own standing-wave peak field.</item>
 /// </list>
 /// </remarks>
 public static class DesignReportBuilder
@@ -66,8 +65,11 @@ public static class DesignReportBuilder
         foreach (var b in new[] { result.BandVswr15, result.BandVswr2 })
             if (b is { } band && (band.LowLimited || band.HighLimited))
                 warnings.Add(string.Create(Inv, $"the VSWR ≤ {band.VswrLimit:0.0#} band reaches the edge of the search range ({band.Low} to {band.High}): it is at least as wide as reported"));
-        var (requirements, requirementWarnings) = Requirements(result);
-        warnings.AddRange(requirementWarnings);
+        var safety = ArraySafety.Assess(result);
+        var verdicts = RequirementChecks.Evaluate(result, safety);
+        warnings.AddRange(verdicts.Notes.Select(n => n.Message));
+        // Over-stress is a FAIL verdict and also a warning, so the console shows it as it happens.
+        warnings.AddRange(safety.Cautions.Where(c => c.Code == "power-handling-exceeded").Select(c => c.Message));
 
         return new DesignReport
         {
@@ -104,7 +106,7 @@ public static class DesignReportBuilder
                 FirstSidelobeDb = atDesign.Metrics.FirstSidelobeDb ?? double.NaN,
                 DirectivityDbi = atDesign.DirectivityDbi,
                 GainDbi = atDesign.GainDbi,
-                DesignSidelobeDb = DesignSidelobeLevel(request.Taper) ?? double.NaN,
+                DesignSidelobeDb = SidelobeTarget.OfTaper(request.Taper, result.Taper)?.LevelDb ?? double.NaN,
                 CutAngleDeg = [.. atDesign.Pattern.Theta.Select(t => t * 180 / Math.PI)],
                 CutLevelDb = atDesign.Pattern.RelativeDecibels(PatternFloorDb),
                 CrossPolarDb = atDesign.CrossPolar?.PeakLevelDb,
@@ -138,8 +140,8 @@ public static class DesignReportBuilder
                 CutTolerance = tolerance,
             },
             Warnings = warnings,
-            Cautions = Cautions(result),
-            Requirements = requirements,
+            Cautions = [.. safety.Cautions.Select(c => c.Message)],
+            Requirements = Requirements(verdicts, result),
             Load = result.TravellingWave is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
             TravellingWave = result.TravellingWave is { } t ? TravellingWaveOf(result, t) : null,
             Coupling = CouplingReport.Of(result),
@@ -240,123 +242,8 @@ public static class DesignReportBuilder
         return list;
     }
 
-    /// <summary>The taper's design sidelobe level, dB, for the families that have one; null otherwise (cosine-pedestal, given).</summary>
-    /// <param name="taper">The taper request.</param>
-    public static double? DesignSidelobeLevel(TaperRequest taper)
-    {
-        ArgumentNullException.ThrowIfNull(taper);
-        return taper.Type switch
-        {
-            TaperType.Uniform => TaperRequest.Uniform.SidelobeLevelDb,
-            TaperType.CosinePedestal or TaperType.Given => null,
-            _ => taper.SidelobeLevelDb,
-        };
-    }
-
-    private static (List<RequirementResult> Results, List<string> Warnings) Requirements(ArrayResult result)
-    {
-        var request = result.Request;
-        var list = new List<RequirementResult>();
-        var warnings = new List<string>();
-        var band = result.SweepFigures;
-        double? level = request.Requirements.SidelobesDb ?? DesignSidelobeLevel(request.Taper);
-        if (level is { } sll)
-        {
-            string origin = request.Requirements.SidelobesDb is null ? " (the taper's design level)" : "";
-            double atDesign = result.AtDesign.Metrics.PeakSidelobeDb ?? double.NegativeInfinity;
-            list.Add(new RequirementResult
-            {
-                Description = "peak sidelobe at the design frequency",
-                Required = string.Create(Inv, $"≤ {sll:0.0#} dB{origin}"),
-                Achieved = string.Create(Inv, $"{atDesign:0.00} dB at {result.Design.DesignFrequency.Gigahertz:0.####} GHz"),
-                Passed = atDesign <= sll,
-            });
-            if (band.Count > 0)
-            {
-                var worst = band.MaxBy(p => p.Metrics.PeakSidelobeDb ?? double.NegativeInfinity)!;
-                double w = worst.Metrics.PeakSidelobeDb ?? double.NegativeInfinity;
-                list.Add(new RequirementResult
-                {
-                    Description = "peak sidelobe, worst over the analysis band",
-                    Required = string.Create(Inv, $"≤ {sll:0.0#} dB{origin}"),
-                    Achieved = string.Create(Inv, $"{w:0.00} dB at {worst.Frequency.Gigahertz:0.####} GHz ({band.Count} frequencies from {request.BandLow.Gigahertz:0.####} to {request.BandHigh.Gigahertz:0.####} GHz)"),
-                    Passed = w <= sll,
-                });
-            }
-        }
-        if (request.Requirements.Vswr is { } vswr && band.Count > 0)
-        {
-            var worst = band.MaxBy(p => p.Network.S11.Magnitude)!;
-            list.Add(new RequirementResult
-            {
-                Description = "VSWR over the whole analysis band",
-                Required = string.Create(Inv, $"≤ {vswr:0.0##}"),
-                Achieved = string.Create(Inv, $"{worst.Network.Vswr:0.000} worst, at {worst.Frequency.Gigahertz:0.####} GHz ({band.Count} frequencies from {request.BandLow.Gigahertz:0.####} to {request.BandHigh.Gigahertz:0.####} GHz)"),
-                Passed = worst.Network.Vswr <= vswr,
-            });
-        }
-        if (request.Requirements.CrossPolarDb is { } xpol && result.AtDesign.CrossPolar is { } cross)
-        {
-            var worst = band.Count > 0 ? band.MaxBy(p => p.CrossPolar?.PeakLevelDb ?? double.NegativeInfinity)! : result.AtDesign;
-            double w = Math.Max(worst.CrossPolar?.PeakLevelDb ?? double.NegativeInfinity, cross.PeakLevelDb);
-            list.Add(new RequirementResult
-            {
-                Description = "peak cross-polar level, worst over the analysis band",
-                Required = string.Create(Inv, $"≤ {xpol:0.0#} dB"),
-                Achieved = string.Create(Inv, $"{w:0.00} dB worst; {cross.PeakLevelDb:0.00} dB at {cross.PeakDirection.Degrees:0.#} deg at the design frequency (bare slots, no polarisation filter modelled)"),
-                Passed = w <= xpol,
-            });
-        }
-        else if (request.Requirements.CrossPolarDb is { } xp)
-            warnings.Add(string.Create(Inv, $"requirements.cross_polar ({xp:0.0#} dB) is not checked: this analysis has no cross-polar prediction for {SlotTypeName(request.Slots.Type)} slots"));
-        return (list, warnings);
-    }
-
-    /// <summary>
-    /// The standing-wave peak-field factor used for the power-handling check: the largest of the network's peak mode
-    /// voltage <see cref="NetworkSolution.PeakModeVoltage"/> (inside the slotted section) and 1 + |S11| (the feed line's
-    /// own peak) over the design frequency and every sweep frequency, with the frequency where it occurs. It includes
-    /// the reflection at the feed, so the power check applies no separate VSWR factor. Never below 1: the feed guide
-    /// carries the whole incident wave.
-    /// </summary>
-    /// <param name="result">The pipeline's result.</param>
-    public static (double Factor, Frequency At) StandingWavePeak(ArrayResult result)
-    {
-        ArgumentNullException.ThrowIfNull(result);
-        var all = result.SweepFigures.Select(p => p.Network).Prepend(result.AtDesign.Network);
-        var worst = all.MaxBy(Peak)!;
-        return (Math.Max(1, Peak(worst)), worst.Frequency);
-        static double Peak(NetworkSolution n) => Math.Max(n.PeakModeVoltage, 1 + n.S11.Magnitude);
-    }
-
-    private static List<string> Cautions(ArrayResult result)
-    {
-        var request = result.Request;
-        var design = result.Design;
-        if (request.Transmitter is not { } tx) return [SafetyCautions.Standard.Message];
-        ExposureAssessment? exposure = null;
-        if (tx.AveragePower is { } avg)
-        {
-            var length = design.Count * design.Spacing;
-            var width = design.Guide.BroadWall + 2 * design.Guide.WallThickness;
-            exposure = ExposureAssessment.Assess(avg, result.AtDesign.GainDbi, design.DesignFrequency, length, width);
-        }
-        PowerHandling? power = null;
-        var extra = new List<string>();
-        if (tx.PeakPower is { } peak)
-        {
-            var (k, at) = StandingWavePeak(result);
-            power = PowerHandling.Assess(design.Guide, design.DesignFrequency, vswr: 1.0, standingWaveFieldFactor: Math.Min(k, 2), peakPower: peak);
-            extra.Add(string.Create(Inv,
-                $"The standing-wave peak-field factor {k:0.###} is this array's own: the largest mode voltage anywhere on the line (slotted section and feed), relative to the incident wave, over the design frequency and the sweep (worst at {at.Gigahertz:0.####} GHz); it includes the reflection at the feed, so no separate VSWR factor is applied, and it replaces the blanket factor 2 of a full standing wave.")
-                + (k > 2 ? " It exceeds 2, the largest factor the power check takes, so the margin above is optimistic: treat the design as over-stressed." : ""));
-        }
-        var list = SafetyCautions.For(exposure, power).Select(c => c.Message).ToList();
-        list.AddRange(extra);
-        if (tx.AveragePower is null)
-            list.Add("No average power was given (transmitter.average_power), so no RF exposure screen was made.");
-        return list;
-    }
+    private static List<RequirementResult> Requirements(RequirementVerdicts verdicts, ArrayResult result) =>
+        [.. verdicts.Verdicts.Select(v => RequirementWords.Of(v, result.Request))];
 
     private static string DatumName(Datums d) => d.Longitudinal switch
     {

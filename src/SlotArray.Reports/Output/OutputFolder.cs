@@ -1,4 +1,3 @@
-using System.Globalization;
 using System.Text;
 using SlotArray.Reports.Model;
 using SlotArray.Reports.Plots;
@@ -14,9 +13,10 @@ public sealed record OutputFile(string Name, Action<DesignReport, Stream> Write)
 /// Writes the whole output folder of <c>design</c> (architecture.md, "Output folder of design") atomically at
 /// folder level. Every file is written into a temporary sibling folder; only when all succeeded is that folder moved
 /// into place. Policy: a failed run leaves no new files and keeps an existing older output folder intact; a
-/// successful run replaces an existing output folder whole (no file of an older run survives). To protect a
-/// user's other work, an existing folder is replaced only if it is empty or holds nothing but files of this set;
-/// otherwise the run fails before writing anything, naming the foreign entries.
+/// successful run replaces an existing output folder whole (no file of an older design run survives; a
+/// <c>tolerance</c> run's files are carried over). To protect a user's other work, an existing folder is replaced only
+/// if it is empty or holds nothing but files of this tool; otherwise the run fails before writing anything, naming the
+/// foreign entries (<see cref="OutputFolderCheck"/>, which commands also call before computing).
 /// </summary>
 public static class OutputFolder
 {
@@ -37,28 +37,20 @@ public static class OutputFolder
     ];
 
     /// <summary>Writes every file of <see cref="Files"/> for <paramref name="report"/> into <paramref name="directory"/>.</summary>
-    /// <exception cref="IOException">The folder holds files that are not outputs of this tool, or a file system operation failed.</exception>
+    /// <exception cref="OutputFolderException">The folder cannot be used (<see cref="OutputFolderCheck.Prepare"/>).</exception>
+    /// <exception cref="IOException">A file system operation failed.</exception>
     public static void WriteAll(DesignReport report, string directory) => WriteAll(report, directory, Files);
 
     /// <summary>Writes the given files atomically at folder level (see the class remarks); the seam for failure tests.</summary>
     internal static void WriteAll(DesignReport report, string directory, IReadOnlyList<OutputFile> files)
     {
-        string target = Path.TrimEndingDirectorySeparator(Path.GetFullPath(directory));
-        string parent = Path.GetDirectoryName(target) ?? throw new IOException($"cannot write the output into the root folder '{target}'; give a sub-folder");
+        string target = OutputFolderCheck.Prepare(directory, replacesWhole: true, files.Select(f => f.Name));
+        string parent = Path.GetDirectoryName(target)!;
         string leaf = Path.GetFileName(target);
         Directory.CreateDirectory(parent);
-        if (Directory.Exists(target))
-        {
-            var known = new HashSet<string>(Files.Select(f => f.Name).Concat(files.Select(f => f.Name)), StringComparer.Ordinal);
-            var foreign = Directory.EnumerateFileSystemEntries(target).Select(Path.GetFileName)
-                .Where(n => !known.Contains(n!)).Order(StringComparer.Ordinal).ToArray();
-            if (foreign.Length > 0)
-                throw new IOException($"output folder '{target}' holds {foreign.Length} entr{(foreign.Length == 1 ? "y" : "ies")} that this tool did not write ({string.Join(", ", foreign.Take(5))}{(foreign.Length > 5 ? ", ..." : "")}); it would replace the folder whole, so give a new or empty folder with -o");
-        }
-
-        string stamp = Environment.ProcessId.ToString(CultureInfo.InvariantCulture) + "-" + Guid.NewGuid().ToString("N")[..8];
-        string temp = Path.Combine(parent, $".{leaf}.tmp-{stamp}");
-        string old = Path.Combine(parent, $".{leaf}.old-{stamp}");
+        string stamp = OutputFolderCheck.NewStamp();
+        string temp = OutputFolderCheck.Sibling(parent, leaf, "tmp", stamp);
+        string old = OutputFolderCheck.Sibling(parent, leaf, "old", stamp);
         Directory.CreateDirectory(temp);
         try
         {
@@ -85,6 +77,9 @@ public static class OutputFolder
             }
             if (Directory.Exists(target))
             {
+                // Another command's files (a tolerance run's) are not this run's to delete: they move with the new output.
+                foreach (string name in OutputFolderCheck.ToleranceFiles.Where(n => files.All(f => f.Name != n)))
+                    if (File.Exists(Path.Combine(target, name))) File.Copy(Path.Combine(target, name), Path.Combine(temp, name));
                 Directory.Move(target, old);
                 try { Directory.Move(temp, target); }
                 catch
