@@ -37,6 +37,8 @@ public static class CommandLine
             ToleranceCommand.Build(output, error),
             SchemaCommand.Build(output, error),
             InitCommand.Build(output, error),
+            CharacteriseCommand.Build(output, error),
+            VerifyCommand.Build(output, error),
         };
         return root;
     }
