@@ -132,11 +132,11 @@ public static class SpecJsonSchema
     private static JsonObject Value(SpecValue value) => value switch
     {
         TextValue t => Text(t),
-        BooleanValue => new JsonObject { ["type"] = "boolean" },
+        BooleanValue => AnyOf(new JsonObject { ["type"] = "boolean" }, PatternString("^(?:true|True|TRUE|false|False|FALSE)$")),   // the parser reads a quoted word too
         IntegerValue i => i.Minimum == i.Maximum
-            ? AnyOf(new JsonObject { ["const"] = i.Minimum }, NumeralString(@"^\s*\+?0*" + i.Minimum.ToString(CultureInfo.InvariantCulture) + @"\s*$"))
-            : AnyOf(new JsonObject { ["type"] = "integer", ["minimum"] = i.Minimum, ["maximum"] = i.Maximum }, NumeralString(@"^\s*[+-]?[0-9]+\s*$")),
-        NumberValue n => AnyOf(Number(n), NumeralString(@"^\s*" + QuantityParser.NumberPattern + @"\s*$")),
+            ? AnyOf(new JsonObject { ["const"] = i.Minimum }, PatternString(@"^\s*\+?0*" + i.Minimum.ToString(CultureInfo.InvariantCulture) + @"\s*$"))
+            : AnyOf(new JsonObject { ["type"] = "integer", ["minimum"] = i.Minimum, ["maximum"] = i.Maximum }, PatternString(@"^\s*[+-]?[0-9]+\s*$")),
+        NumberValue n => AnyOf(Number(n), PatternString(@"^\s*" + QuantityParser.NumberPattern + @"\s*$")),
         QuantityValue q => new JsonObject
         {
             ["type"] = "string",
@@ -165,7 +165,7 @@ public static class SpecJsonSchema
         return o;
     }
 
-    private static JsonObject NumeralString(string pattern) => new() { ["type"] = "string", ["pattern"] = pattern };
+    private static JsonObject PatternString(string pattern) => new() { ["type"] = "string", ["pattern"] = pattern };
 
     private static JsonObject AnyOf(JsonObject first, JsonObject second) => new() { ["anyOf"] = new JsonArray(first, second) };
 
