@@ -26,8 +26,8 @@ public class DesignFuzzTests
     /// the band densely and is cheaper through the interpolating model.
     /// </summary>
     internal static AnalysisOptions Coarse(ArrayRequest request) => request.Coupling == CouplingMode.Mutual
-        ? new(SweepPoints: 2, BandSearchFraction: 0)
-        : new(SweepPoints: 2, BandSearchFraction: 0, AdmittanceStep: 0);
+        ? new(SweepPoints: 2, BandSearchFraction: 0) { MatchPoints = 2 }
+        : new(SweepPoints: 2, BandSearchFraction: 0, AdmittanceStep: 0) { MatchPoints = 2 };
 
     [Fact]
     public void Every_spec_the_check_accepts_designs_or_says_why()

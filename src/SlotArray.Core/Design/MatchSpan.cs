@@ -18,7 +18,7 @@ public static class MatchSpan
     /// <param name="request">The request (analysis band, guide).</param>
     /// <param name="vswr15">The VSWR ≤ 1.5 band around the design frequency, or null.</param>
     /// <param name="vswr2">The VSWR ≤ 2 band around the design frequency, or null.</param>
-    /// <param name="searchFraction">The VSWR search range either side of the design frequency, as a fraction of it (&gt; 0).</param>
+    /// <param name="searchFraction">The VSWR search range either side of the design frequency, as a fraction of it; 0: no band search, no limit.</param>
     public static (Frequency Low, Frequency High) Default(ArrayRequest request, MatchBand? vswr15, MatchBand? vswr2, double searchFraction)
     {
         ArgumentNullException.ThrowIfNull(request);
@@ -36,9 +36,28 @@ public static class MatchSpan
             hi += pad;
         }
         var (modeLow, modeHigh) = request.Guide.SingleModeBand;
-        lo = Math.Max(lo, Math.Max(f0 * (1 - searchFraction), modeLow.Hertz * 1.001));
-        hi = Math.Min(hi, Math.Min(f0 * (1 + searchFraction), modeHigh.Hertz * 0.999));
+        if (searchFraction > 0)
+        {
+            lo = Math.Max(lo, f0 * (1 - searchFraction));
+            hi = Math.Min(hi, f0 * (1 + searchFraction));
+        }
+        lo = Math.Max(lo, modeLow.Hertz * 1.001);
+        hi = Math.Min(hi, modeHigh.Hertz * 0.999);
         return (Frequency.FromHertz(lo), Frequency.FromHertz(hi));
+    }
+
+    /// <summary>
+    /// The default span slid by less than half a step so that one of its <paramref name="points"/> equally spaced
+    /// frequencies is the design frequency itself: a reader of <c>input.s1p</c> then finds |S11| at f0 without
+    /// interpolating across a deep null. A span that does not contain f0, or fewer than 2 points, is returned as it is.
+    /// </summary>
+    private static (Frequency Low, Frequency High) ThroughDesignFrequency(Frequency low, Frequency high, Frequency f0, int points)
+    {
+        double lo = low.Hertz, hi = high.Hertz, f = f0.Hertz;
+        if (points < 2 || !(f > lo && f < hi)) return (low, high);
+        double step = (hi - lo) / (points - 1);
+        double shifted = f - Math.Round((f - lo) / step) * step;
+        return (Frequency.FromHertz(shifted), Frequency.FromHertz(shifted + (points - 1) * step));
     }
 
     /// <summary>The span the options ask for, each missing edge taken from <see cref="Default"/>.</summary>
@@ -51,6 +70,8 @@ public static class MatchSpan
     {
         ArgumentNullException.ThrowIfNull(options);
         var (lo, hi) = Default(request, vswr15, vswr2, options.BandSearchFraction);
+        if (options.MatchLow is null && options.MatchHigh is null)
+            (lo, hi) = ThroughDesignFrequency(lo, hi, request.DesignFrequency, options.MatchPoints);
         lo = options.MatchLow ?? lo;
         hi = options.MatchHigh ?? hi;
         if (!(hi > lo))
