@@ -23,7 +23,7 @@ public class TouchstoneWriterTests
         string comments = string.Join("\n", body[..optionAt]);
         Assert.Contains("normalised to the TE10 wave impedance", comments);
         Assert.Contains("reference plane is the feed port", comments);
-        Assert.Contains("527.115 ohm", comments);   // Z_TE of WR-90 at 9.375 GHz, physics-reference §1.2, stated in the comment
+        Assert.Contains("527.115 ohm", comments);   // Z_TE = η/√(1 − (fc/f)²) of WR-90 at 9.375 GHz (Pozar, "Microwave Engineering", 4th ed., 2012, §3.3, from memory), stated in the comment
         var data = body[(optionAt + 1)..];
         Assert.Equal(r.Sweep.Count, data.Length);
         double last = 0;

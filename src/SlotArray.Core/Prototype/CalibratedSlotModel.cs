@@ -10,8 +10,8 @@ namespace SlotArray.Core.Prototype;
 /// A slot model corrected by what a prototype showed: y'(c, l, f) = k_G · y(c, l (1 + s_L), f), i.e. each slot behaves
 /// as the inner model's slot (1 + s_L) times as long, coupling k_G times as much. Scaling the whole admittance follows
 /// Stevenson's result that a slot's admittance near resonance scales with the square of its coupling to the TE10 mode
-/// (A. F. Stevenson, "Theory of slots in rectangular wave-guides", J. Appl. Phys. 19, 1948, eq. for g; physics-reference
-/// §4.1), so a coupling error moves G and B together.
+/// (A. F. Stevenson, "Theory of slots in rectangular wave-guides", J. Appl. Phys. 19, 1948, the
+/// resonant conductance g ∝ sin²(πx/a)), so a coupling error moves G and B together.
 /// </summary>
 public sealed class CalibratedSlotModel : IShuntSlotModel
 {

@@ -77,7 +77,7 @@ public static class PrototypeFit
     /// Per-slot errors are deviations from the uniform scales, which the S-parameters fix: the uncertainty of those scales
     /// enters each slot's error as L_n σ(s_L) for the length and, for the coupling, the change of |c| that moves the
     /// conductance by σ(k_G)/k_G: Stevenson's g ∝ sin²(π x/a) gives δx = (a/2π) tan(π|x|/a) δk/k (A. F. Stevenson, J. Appl.
-    /// Phys. 19, 1948; physics-reference §4.1), and an edge slot's g ∝ sin²θ gives δθ = ½ tan|θ| δk/k. Added in quadrature.
+    /// Phys. 19, 1948), and an edge slot's g ∝ sin²θ gives δθ = ½ tan|θ| δk/k. Added in quadrature.
     /// </summary>
     private static IReadOnlyList<SlotGeometryError> WithCommonUncertainty(ArrayDesign asCut, IReadOnlyList<SlotGeometryError> slots,
         FittedValue? lengthScale, FittedValue? conductanceScale)
