@@ -48,10 +48,32 @@ public class CorePurityTests
         Assert.True(io.Count == 0, "Core must stay free of I/O (files, processes, console, network); it uses " + string.Join(", ", io));
     }
 
+    /// <summary>
+    /// The stages of Core, lowest first (DEVELOPERS.md, "The stages"): a folder uses only folders of earlier stages. A
+    /// folder not listed here is held to <see cref="Core_folders_form_no_cycle"/> only; add it where it belongs.
+    /// </summary>
+    private static readonly string[][] Stages =
+    [
+        ["Core"], ["Quantities"], ["Waveguides"], ["Patterns", "Coupling"], ["Tapers", "Slots"], ["Stick"],
+        ["Network", "Fabrication"], ["Design"], ["Tolerance", "Safety"], ["Verdicts", "Prototype"],
+    ];
+
+    private static readonly Lazy<Dictionary<(string From, string To), List<string>>> Edges = new(FolderEdges);
+
+    [Fact]
+    public void Core_folders_use_only_earlier_stages()
+    {
+        var stage = Stages.SelectMany((names, i) => names.Select(n => (n, i))).ToDictionary(x => x.n, x => x.i);
+        var upward = Edges.Value.Where(e => stage.TryGetValue(e.Key.From, out int from) && stage.TryGetValue(e.Key.To, out int to) && to >= from)
+            .Select(e => $"{e.Key.From} -> {e.Key.To}: {string.Join("; ", e.Value.Take(3))}").Order(StringComparer.Ordinal).ToList();
+        Assert.True(upward.Count == 0, "Core folders that reach up the pipeline or sideways (move the type to the stage that owns it):\n"
+            + string.Join("\n", upward));
+    }
+
     [Fact]
     public void Core_folders_form_no_cycle()
     {
-        var edges = FolderEdges();
+        var edges = Edges.Value;
         Assert.Contains(("Network", "Waveguides"), edges.Keys);   // the walk sees references: the network reads the guide
         var twoWay = edges.Keys.Where(e => string.CompareOrdinal(e.From, e.To) < 0 && edges.ContainsKey((e.To, e.From)))
             .Select(e => $"{e.From} <-> {e.To}: {edges[e][0]} / {edges[(e.To, e.From)][0]}").Order(StringComparer.Ordinal).ToList();
