@@ -20,7 +20,7 @@ namespace SlotArray.Cli.Commands;
 /// the overlays, the trim list and the next plate's outputs. Malformed files: <c>file:line: message</c>, exit 2; a
 /// measurement of another design: the reason, exit 2.
 /// </summary>
-public static class CompareCommand
+internal static class CompareCommand
 {
     /// <summary>Builds the command.</summary>
     public static Command Build(TextWriter output, TextWriter error)

@@ -17,7 +17,7 @@ namespace SlotArray.Cli.Commands;
 /// written and exits 4. Progress, warnings and errors go to stderr; with
 /// <c>--json</c> stdout carries the content of design.json and nothing else.
 /// </summary>
-public static class DesignCommand
+internal static class DesignCommand
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

@@ -19,7 +19,7 @@ namespace SlotArray.Core.Design;
 /// analysis evaluates each slot's y(f); default <see cref="FrequencyInterpolatedSlotModel.DefaultStep"/>; 0: solve the
 /// slot model directly at every frequency.
 /// </param>
-public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFraction = 0.15,
+internal sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFraction = 0.15,
     double AdmittanceStep = FrequencyInterpolatedSlotModel.DefaultStep)
 {
     /// <summary>The defaults.</summary>
@@ -58,7 +58,7 @@ public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFra
 /// <param name="BandVswr15">The continuous band with VSWR ≤ 1.5 containing the design frequency, or null.</param>
 /// <param name="BandVswr2">The continuous band with VSWR ≤ 2 containing the design frequency, or null.</param>
 /// <param name="Warnings">Every validity limit met on the way (taper, slot model, designer), in order, without repeats.</param>
-public sealed record ArrayResult(
+internal sealed record ArrayResult(
     ArrayRequest Request,
     TaperResult Taper,
     IShuntSlotModel SlotModel,
@@ -100,7 +100,7 @@ public sealed record ArrayResult(
 /// analysis across the band → pattern, directivity and gain. Each stage is a pure function of the previous
 /// stage's immutable result, so the tolerance analysis can re-run <see cref="Analyse"/> on perturbed designs.
 /// </summary>
-public static class ArrayPipeline
+internal static class ArrayPipeline
 {
     /// <summary>
     /// The slot model for the request from <paramref name="source"/> (chosen at the composition root; when null, the

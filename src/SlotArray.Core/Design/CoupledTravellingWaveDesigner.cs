@@ -13,7 +13,7 @@ namespace SlotArray.Core.Design;
 /// travelling-wave progression e^{jβz_n} (default true).</param>
 /// <param name="ToleranceDegrees">With <paramref name="CorrectPhase"/>: stop only when every slot-voltage phase is within this many
 /// degrees of the progression (mean removed); default 0.01, &gt; 0.</param>
-public sealed record CoupledTravellingWaveOptions(MutualImpedanceModel? Coupling = null, double ToleranceDb = 1e-4, int MaximumIterations = 100,
+internal sealed record CoupledTravellingWaveOptions(MutualImpedanceModel? Coupling = null, double ToleranceDb = 1e-4, int MaximumIterations = 100,
     bool CorrectPhase = true, double ToleranceDegrees = 0.01)
 {
     /// <summary>The defaults.</summary>
@@ -35,7 +35,7 @@ public sealed record CoupledTravellingWaveOptions(MutualImpedanceModel? Coupling
 /// <param name="AtDesign">The coupled network solution of <see cref="Design"/> at the design frequency (the last iterate).</param>
 /// <param name="PhaseErrorDegrees">Largest departure of the slot-voltage phases of <see cref="AtDesign"/> from the progression e^{jβz_n}
 /// (alternation sign and mean removed), degrees.</param>
-public sealed record CoupledTravellingWaveDesign(
+internal sealed record CoupledTravellingWaveDesign(
     ArrayDesign Design,
     TravellingWaveDesign Uncoupled,
     int Iterations,
@@ -82,7 +82,7 @@ public sealed record CoupledTravellingWaveDesign(
 /// <para>Without coupling, with phases off, and with a slot whose resonant conductance is Stevenson's Γ0 f_r², P̃_n equals
 /// the power into slot n, so the first iteration confirms the isolated-slot design and it is returned unchanged.</para>
 /// </remarks>
-public static class CoupledTravellingWaveDesigner
+internal static class CoupledTravellingWaveDesigner
 {
     /// <summary>Designs the array with the default options.</summary>
     /// <param name="request">The validated request (travelling-wave feed, longitudinal slots).</param>

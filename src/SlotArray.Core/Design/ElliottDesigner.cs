@@ -13,7 +13,7 @@ namespace SlotArray.Core.Design;
 /// <param name="Tolerance">Stop when no offset and no length changed by more than this between iterations; default 1e-4 mm.</param>
 /// <param name="MaximumIterations">Outer iterations allowed before <see cref="ConvergenceException"/>; default 60.</param>
 /// <param name="Coupling">Mutual-impedance model; null for <see cref="CoupledSlotImpedances.HalfCosineCentreReferred"/>.</param>
-public sealed record ElliottOptions(double Tolerance = 1e-7, int MaximumIterations = 60, MutualImpedanceModel? Coupling = null)
+internal sealed record ElliottOptions(double Tolerance = 1e-7, int MaximumIterations = 60, MutualImpedanceModel? Coupling = null)
 {
     /// <summary>The defaults.</summary>
     public static ElliottOptions Default { get; } = new();
@@ -40,7 +40,7 @@ public sealed record ElliottIteration(int Index, double MaximumOffsetChange, dou
 /// <param name="ActiveAdmittances">y^a_n from (E2) at the final geometry with the slot model's own (direct) admittances.</param>
 /// <param name="SurrogateError">Largest |y_surrogate − y_direct|/|y_direct| over the final slots: the surrogate's interpolation error where it mattered.</param>
 /// <param name="Tolerance">The tolerance the iteration met (m).</param>
-public sealed record ElliottResult(ArrayDesign Design, ArrayDesign Uncoupled, IReadOnlyList<ElliottIteration> Iterations,
+internal sealed record ElliottResult(ArrayDesign Design, ArrayDesign Uncoupled, IReadOnlyList<ElliottIteration> Iterations,
     IReadOnlyList<Complex> ActiveAdmittances, double SurrogateError, double Tolerance);
 
 /// <summary>
@@ -73,7 +73,7 @@ public sealed record ElliottResult(ArrayDesign Design, ArrayDesign Uncoupled, IR
 /// slot it differs from <see cref="StandingWaveDesigner"/> by the few-per-cent departure of g_r from Γ0 f_r² (the
 /// isolated design weights by power, Elliott's by slot voltage).</para>
 /// </remarks>
-public static class ElliottDesigner
+internal static class ElliottDesigner
 {
     private const int NewtonIterations = 60;
 

@@ -9,7 +9,7 @@ namespace SlotArray.Core.Design;
 /// the analysis band joined with the VSWR ≤ 2 band (else the VSWR ≤ 1.5 band) widened by a quarter of its width on
 /// each side, inside the VSWR search range and the guide's single-mode band.
 /// </summary>
-public static class MatchSpan
+internal static class MatchSpan
 {
     /// <summary>Default number of frequencies of the match sweep, 401.</summary>
     public const int DefaultPoints = 401;

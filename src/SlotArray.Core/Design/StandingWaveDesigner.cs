@@ -34,7 +34,7 @@ namespace SlotArray.Core.Design;
 /// <para>Isolated slots only: external mutual coupling and wall loss are not compensated (the network analysis
 /// shows their effect).</para>
 /// </remarks>
-public static class StandingWaveDesigner
+internal static class StandingWaveDesigner
 {
     /// <summary>Impedance ratio n² of the centre-feed series junction, z_feed = (z_left + z_right)/n² (see remarks).</summary>
     public const double CentreJunctionRatio = 2;

@@ -13,7 +13,7 @@ namespace SlotArray.Core.Design;
 /// <param name="ToleranceDb">Refinement stops when every slot's radiated power is within this many dB of its target
 /// (power dB; amplitude error is half); default 1e-4 dB, &gt; 0.</param>
 /// <param name="MaximumIterations">Refinement iterations before <see cref="ConvergenceException"/>; default 100, ≥ 1.</param>
-public sealed record TravellingWaveOptions(
+internal sealed record TravellingWaveOptions(
     TravellingWaveConductanceForm Form = TravellingWaveConductanceForm.SingleShunt,
     bool Refine = true,
     double ToleranceDb = 1e-4,
@@ -27,7 +27,7 @@ public sealed record TravellingWaveOptions(
 /// <param name="Iterations">Network solutions performed (0 when refinement was off).</param>
 /// <param name="ResidualDb">Final largest |10 log10(P_n/T_n)| over the slots, power dB (P_n radiated in the network, T_n the target).</param>
 /// <param name="History">That residual after each iteration, dB, first to last (the closed-form start first).</param>
-public sealed record TravellingWaveRefinement(int Iterations, double ResidualDb, IReadOnlyList<double> History);
+internal sealed record TravellingWaveRefinement(int Iterations, double ResidualDb, IReadOnlyList<double> History);
 
 /// <summary>A designed travelling-wave array and the figures of its design.</summary>
 /// <param name="Design">The array: slots from the load-end datum, matched load at z = 0, feed plane beyond the last slot.</param>
@@ -38,7 +38,7 @@ public sealed record TravellingWaveRefinement(int Iterations, double ResidualDb,
 /// <param name="AchievedErrorDb">Largest amplitude error |10 log10(P_n/T_n)|/2, dB, of the design re-analysed with the real slot model at the design frequency.</param>
 /// <param name="Squint">Main-beam direction at the design frequency from the phase condition (positive toward the load end), or null if not in real space.</param>
 /// <param name="ScanRate">dθ_b/df at the design frequency, rad/Hz, or null.</param>
-public sealed record TravellingWaveDesign(
+internal sealed record TravellingWaveDesign(
     ArrayDesign Design,
     double LoadFraction,
     IReadOnlyList<double> TargetPowers,
@@ -88,7 +88,7 @@ public sealed record TravellingWaveDesign(
 /// (<see cref="TravellingWaveDesign.AchievedErrorDb"/>).</para>
 /// <para>Isolated slots: external mutual coupling is not included.</para>
 /// </remarks>
-public static class TravellingWaveDesigner
+internal static class TravellingWaveDesigner
 {
     /// <summary>Distance from the end slots to the load flange and to the feed flange, in slot spacings (1: one spacing d).</summary>
     public const double EndDistanceInSpacings = 1.0;

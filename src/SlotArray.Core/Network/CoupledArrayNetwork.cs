@@ -41,7 +41,7 @@ namespace SlotArray.Core.Network;
 /// are the slot voltages, e_n = w_n/√Γ0, which equal <see cref="ArrayNetwork"/>'s power-based excitations when the
 /// slot has Stevenson's resonant conductance Γ0 f_r² (Stevenson 1948).</para>
 /// </remarks>
-public static class CoupledArrayNetwork
+internal static class CoupledArrayNetwork
 {
     /// <summary>Solves the coupled array at one frequency.</summary>
     /// <param name="design">A designed array of offset (longitudinal) slots.</param>

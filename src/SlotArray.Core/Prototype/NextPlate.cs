@@ -12,7 +12,7 @@ namespace SlotArray.Core.Prototype;
 /// coupled network; a design without coupling misses by exactly that, architecture.md), and without a prototype margin.
 /// The per-slot errors are this plate's machining, not the next one's, so they do not enter.
 /// </summary>
-public static class NextPlate
+internal static class NextPlate
 {
     /// <summary>The request and the slot model of the next plate.</summary>
     /// <param name="request">The prototype's request.</param>

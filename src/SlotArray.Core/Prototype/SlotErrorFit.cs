@@ -9,7 +9,7 @@ namespace SlotArray.Core.Prototype;
 /// <param name="Coupling">Offset error, mm (positive: farther from the centreline), or tilt error, deg.</param>
 /// <param name="Resolution">Mean diagonal of the resolution matrix for this slot's two errors (1 seen, 0 not).</param>
 /// <param name="Correlation">Correlation of the slot's length and coupling errors.</param>
-public sealed record SlotGeometryError(int Slot, FittedValue Length, FittedValue Coupling, double Resolution, double Correlation);
+internal sealed record SlotGeometryError(int Slot, FittedValue Length, FittedValue Coupling, double Resolution, double Correlation);
 
 /// <summary>
 /// Stage e: the per-slot length and offset (or tilt) errors that explain the pattern cuts, fitted to all cuts at once
@@ -19,7 +19,7 @@ public sealed record SlotGeometryError(int Slot, FittedValue Length, FittedValue
 /// <see cref="PriorSigmaMm"/> (Tikhonov, Gaussian-prior form; see <see cref="ExcitationReconstruction"/>), on MathNet's
 /// Levenberg–Marquardt minimiser. Parameters are in mm (and deg for tilts) inside the fit.
 /// </summary>
-public static class SlotErrorFit
+internal static class SlotErrorFit
 {
     /// <summary>Prior 1σ of each length and offset error: 0.3 mm (tilts: 3°).</summary>
     public const double PriorSigmaMm = 0.3;

@@ -16,7 +16,7 @@ namespace SlotArray.Core.Safety;
 /// <param name="Power">The power-handling check; null without <c>transmitter.peak_power</c>.</param>
 /// <param name="StandingWavePeakFactor">The array's own peak-field factor k (<see cref="StandingWavePeak"/>); null without a peak power.</param>
 /// <param name="Cautions">The standard caution, then the exposure and power cautions and their notes.</param>
-public sealed record ArraySafety(ExposureAssessment? Exposure, PowerHandling? Power, double? StandingWavePeakFactor, IReadOnlyList<DesignWarning> Cautions)
+internal sealed record ArraySafety(ExposureAssessment? Exposure, PowerHandling? Power, double? StandingWavePeakFactor, IReadOnlyList<DesignWarning> Cautions)
 {
     /// <summary>
     /// The power-handling margin at the peak power, dB: <see cref="PowerHandling.MarginDecibels"/>, less

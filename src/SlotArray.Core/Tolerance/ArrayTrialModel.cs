@@ -32,7 +32,7 @@ namespace SlotArray.Core.Tolerance;
 /// z_in Z'/Z at the feed flange (an impedance step between equal-height guides, the usual first approximation; D. M. Pozar,
 /// <i>Microwave Engineering</i>, 4th ed., Wiley 2012, Sec. 3.3 for Z_TE, from memory).</para>
 /// </remarks>
-public sealed class ArrayTrialModel : IToleranceTrialModel
+internal sealed class ArrayTrialModel : IToleranceTrialModel
 {
     private readonly ArrayDesign design;
     private readonly ToleranceRequest tolerance;

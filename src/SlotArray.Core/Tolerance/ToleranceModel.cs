@@ -12,14 +12,14 @@ namespace SlotArray.Core.Tolerance;
 /// <param name="Excitations">e_n, complex, any common scale.</param>
 /// <param name="S11">Reflection at the feed, referred to the nominal guide's wave impedance.</param>
 /// <param name="RadiatedPower">Σ P_n / P_inc.</param>
-public sealed record TrialNetwork(double[] Positions, Complex[] Excitations, Complex S11, double RadiatedPower);
+internal sealed record TrialNetwork(double[] Positions, Complex[] Excitations, Complex S11, double RadiatedPower);
 
 /// <summary>
 /// A source of Monte Carlo trials: the nominal network and, for a random stream, one perturbed network. The array
 /// model (<see cref="ArrayTrialModel"/>) reruns the slot model and the line network; tests may perturb excitations
 /// directly to check the statistics alone.
 /// </summary>
-public interface IToleranceTrialModel
+internal interface IToleranceTrialModel
 {
     /// <summary>The analysis frequency (the design frequency).</summary>
     Frequency Frequency { get; }

@@ -18,7 +18,7 @@ namespace SlotArray.Core.Tolerance;
 /// inputs; errors that are correlated from slot to slot (a guide-width error, a systematic error) break the
 /// independence the formula assumes and make the two differ.
 /// </remarks>
-public static class ToleranceMonteCarlo
+internal static class ToleranceMonteCarlo
 {
     private const int Chunk = 64;
 

@@ -28,7 +28,7 @@ public sealed record SlotSensitivity(int Slot, ToleranceQuantity Quantity, doubl
 /// stepped width) and the full network and pattern analysis of <see cref="ToleranceMonteCarlo"/>. Ranked by |dSLL|,
 /// then |dS11|, then slot and quantity.
 /// </summary>
-public static class ToleranceSensitivities
+internal static class ToleranceSensitivities
 {
     /// <summary>Every slot's four sensitivities, ranked.</summary>
     /// <param name="model">The array model (its surrogates hold the stepped-width admittances).</param>

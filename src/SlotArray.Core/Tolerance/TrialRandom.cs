@@ -17,7 +17,7 @@ namespace SlotArray.Core.Tolerance;
 /// random normal deviates", Ann. Math. Statist. 29, 610–611, 1958), one deviate per pair of uniforms (the second
 /// is discarded, which keeps the number of draws per error fixed).</para>
 /// </remarks>
-public struct TrialRandom
+internal struct TrialRandom
 {
     private ulong s0, s1, s2, s3;
 

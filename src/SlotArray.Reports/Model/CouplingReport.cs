@@ -35,7 +35,7 @@ public sealed record CouplingReport
         "coupling through the guide's higher-order modes and the finite ground plane are neglected";
 
     /// <summary>The report of a pipeline run, or null when it was designed without mutual coupling.</summary>
-    public static CouplingReport? Of(ArrayResult result)
+    internal static CouplingReport? Of(ArrayResult result)
     {
         ArgumentNullException.ThrowIfNull(result);
         if (result.CoupledTravellingWave is { } t)
@@ -76,7 +76,7 @@ public sealed record CoupledDesignFigures
     public required double PeakSidelobeDb { get; init; }
 
     /// <summary>From the Core figures.</summary>
-    public static CoupledDesignFigures Of(CoupledFigures f)
+    internal static CoupledDesignFigures Of(CoupledFigures f)
     {
         ArgumentNullException.ThrowIfNull(f);
         return new CoupledDesignFigures

@@ -34,7 +34,7 @@ namespace SlotArray.Reports.Model;
 /// exposure screen and the power-handling margin with the network's own standing-wave peak field.</item>
 /// </list>
 /// </remarks>
-public static class DesignReportBuilder
+internal static class DesignReportBuilder
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

@@ -11,7 +11,7 @@ namespace SlotArray.Reports;
 /// <c>#</c>, padded with empty fields; units are in the column names (mm, deg). Only formats the
 /// <see cref="FabricationPlan"/> of the report (geometry and tolerances are computed in Core/Fabrication).
 /// </summary>
-public static class CutListCsv
+internal static class CutListCsv
 {
     /// <summary>Columns for broad-wall (longitudinal) slots.</summary>
     public static readonly IReadOnlyList<string> OffsetColumns =

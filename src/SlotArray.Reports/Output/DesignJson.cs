@@ -12,7 +12,7 @@ namespace SlotArray.Reports;
 /// renamed). Numbers are written in the shortest round-trip form; a non-finite number is written as null.
 /// Keys are written in a fixed order, two-space indent, "\n" line ends, UTF-8 without byte-order mark.
 /// </summary>
-public static class DesignJson
+internal static class DesignJson
 {
     /// <summary>Writes the report as JSON to <paramref name="stream"/>.</summary>
     public static void Write(DesignReport report, Stream stream)

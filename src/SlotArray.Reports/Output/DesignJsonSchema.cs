@@ -10,7 +10,7 @@ namespace SlotArray.Reports;
 /// the writer; a test validates the designs of every bundled spec and of a coupled design against it, so the two
 /// cannot drift apart unnoticed.
 /// </summary>
-public static class DesignJsonSchema
+internal static class DesignJsonSchema
 {
     /// <summary>The schema's identifier.</summary>
     public const string Id = "urn:slotarray:design-json:1";

@@ -18,7 +18,7 @@ namespace SlotArray.Reports;
 /// Edge slots are drawn on the narrow face with the broad walls folded out above and below (developed view). Only
 /// formats: the geometry is Core's (<see cref="FabricationPlan"/>, <see cref="GuideFaces"/>).
 /// </summary>
-public static class LayoutSvg
+internal static class LayoutSvg
 {
     private const double Margin = 10, Text = 2.5, RowHeight = 4.5, TitleWidth = 180, TitleHeight = 40, OrdinateZone = 26;
 

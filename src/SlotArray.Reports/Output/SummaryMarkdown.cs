@@ -7,7 +7,7 @@ namespace SlotArray.Reports;
 /// <c>summary.md</c>: the human-readable report: inputs, key figures (units stated), the per-slot table, a
 /// pass/fail line per requirement, warnings, optional tolerance lines and the cautions. "\n" line ends.
 /// </summary>
-public static class SummaryMarkdown
+internal static class SummaryMarkdown
 {
     /// <summary>The caution printed when the report carries none of its own (issue 5, item 5).</summary>
     public const string StandardCaution =

@@ -10,7 +10,7 @@ namespace SlotArray.Reports;
 /// <c>tolerance.json</c>: the Monte Carlo statistics and the ranked sensitivities, keys with unit suffixes, numbers
 /// rounded to 6 decimals so that the same spec and seed give byte-identical files.
 /// </summary>
-public static class ToleranceJson
+internal static class ToleranceJson
 {
     /// <summary>Writes the document (UTF-8, indented, '\n' line ends).</summary>
     /// <param name="name">Array name.</param>

@@ -6,7 +6,7 @@ namespace SlotArray.Reports;
 /// <c>sensitivity.csv</c> (RFC 4180: CRLF record ends, a header record, no field needs quoting): the ranked per-slot
 /// sensitivities, the largest effect on the peak sidelobe first.
 /// </summary>
-public static class ToleranceSensitivityCsv
+internal static class ToleranceSensitivityCsv
 {
     /// <summary>The header fields.</summary>
     public static readonly IReadOnlyList<string> Columns = ["rank", "slot", "quantity", "dsll_db_per_mm", "ds11_db_per_mm"];

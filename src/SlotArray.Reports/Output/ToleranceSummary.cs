@@ -6,7 +6,7 @@ using SlotArray.Core.Tolerance;
 namespace SlotArray.Reports;
 
 /// <summary>The tolerance result in plain words, for <c>summary.md</c> and the terminal.</summary>
-public static class ToleranceSummary
+internal static class ToleranceSummary
 {
     /// <summary>
     /// The lines: what was applied and how many builds meet the target ("with ±0.02 mm on offsets and lengths, 87 % of

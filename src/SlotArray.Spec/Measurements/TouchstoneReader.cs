@@ -12,7 +12,7 @@ namespace SlotArray.Spec.Measurements;
 /// <param name="ReferenceResistances">Reference resistance of each port, Ω.</param>
 /// <param name="PortCount">Number of ports.</param>
 /// <param name="Points">Number of frequencies.</param>
-public sealed record TouchstoneHeader(string Version, string FrequencyUnit, string Parameter, string Format,
+internal sealed record TouchstoneHeader(string Version, string FrequencyUnit, string Parameter, string Format,
     IReadOnlyList<double> ReferenceResistances, int PortCount, int Points)
 {
     /// <summary>One line for the user: "Touchstone 1.x, 1 port, 201 points, frequencies in GHz, S in DB/angle, R = 50 Ω".</summary>
@@ -33,7 +33,7 @@ public sealed record TouchstoneHeader(string Version, string FrequencyUnit, stri
 /// frequency). Data may wrap across lines. Z and Y are normalised to R in version 1 and in ohms/siemens in version 2;
 /// they are converted to S with the reference resistance. H and G are refused.
 /// </summary>
-public static class TouchstoneReader
+internal static class TouchstoneReader
 {
     /// <summary>Reads a file.</summary>
     /// <exception cref="MeasurementFormatException">The file is malformed (file:line: message).</exception>

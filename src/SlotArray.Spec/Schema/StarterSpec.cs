@@ -3,7 +3,7 @@ using System.Text;
 namespace SlotArray.Spec.Schema;
 
 /// <summary>The kinds of starter spec <c>slotarray init</c> writes.</summary>
-public enum StarterKind
+internal enum StarterKind
 {
     /// <summary>Longitudinal broad-wall slots, standing-wave, end-fed against a short.</summary>
     StandingWave,
@@ -18,7 +18,7 @@ public enum StarterKind
 /// line on what it does. Keys the kind uses carry the values of an invented scenario (which designs as written);
 /// the others are commented out with their default or a typical value. New keys appear here without further work.
 /// </summary>
-public static class StarterSpec
+internal static class StarterSpec
 {
     /// <summary>The kinds as written on the command line.</summary>
     public static IReadOnlyList<KeyValuePair<string, StarterKind>> Kinds { get; } =
