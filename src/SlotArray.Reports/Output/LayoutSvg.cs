@@ -106,7 +106,6 @@ public static class LayoutSvg
         Ordinates(c, plan, own, tilt, number, count, range, left, faceTop, faceHeight, wrap, tableTop, viewLeft);
         SlotTable(c, report, own, tilt, tableTop, colW, blockW, rowsPerBlock);
         TitleBlock(c, report, plan, tilt, size, number, count);
-        c.Ln("</svg>");
         return c.ToString();
     }
 
