@@ -93,15 +93,18 @@ internal static class DesignCommand
         var request = Load(path, error);
         string folder = OutputFolderCheck.Prepare(outDir ?? DefaultFolder(request.Name), replacesWhole: true);
         var clock = Stopwatch.StartNew();
-        var result = Analyse(request, cache, error, progress);
+        var result = Analyse(request, cache, error, progress, out var source);
         var report = DesignReportBuilder.Build(result, document) with { SpecText = File.ReadAllText(path) };
         if (request.Tolerance is { } tol)
         {
-            // The short tolerance summary of issue 7 (the full output is the tolerance command's).
+            // The short tolerance summary of issue 7 (the full output is the tolerance command's), with the run's slot
+            // source: the surrogates' perturbed-guide solves come from (and go to) the same cache as the design's.
             error.WriteLine(string.Format(Inv, "tolerance: {0} Monte Carlo trials, seed {1} ...", tol.Trials, tol.Seed));
             var options = Core.Tolerance.ToleranceOptions.Default with { Cancellation = CommandLine.Cancellation };
-            var mc = ProgressDisplay.Run(progress, sink => Core.Tolerance.ToleranceAnalysis.Run(result, options: options,
-                progress: sink is null ? null : done => sink.Report(new Core.WorkProgress("Monte Carlo trials", done, tol.Trials))));
+            var mc = ProgressDisplay.Run(progress, sink => Core.Tolerance.ToleranceAnalysis.Run(result.Request, result.Design, result.SlotModel,
+                options: options, progress: sink is null ? null : done => sink.Report(new Core.WorkProgress("Monte Carlo trials", done, tol.Trials)),
+                source: source));
+            cache?.Save(request, source.Cache, error);
             report = report with { Tolerance = Reports.ToleranceSummary.Lines(mc) };
         }
         CommandLine.Cancellation.ThrowIfCancellationRequested();
@@ -168,8 +171,14 @@ internal static class DesignCommand
     /// progress bar when <paramref name="progress"/>; Ctrl-C stops it (<see cref="CommandLine.Cancellation"/>).
     /// </summary>
     internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error, bool progress, AnalysisOptions? options = null)
+        => Analyse(request, cache, error, progress, out _, options);
+
+    /// <summary>As <see cref="Analyse(ArrayRequest, SlotCache?, TextWriter, bool, AnalysisOptions?)"/>, also returning the run's slot source (its cache holds the run's solves).</summary>
+    internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error, bool progress, out SlotSource slotSource,
+        AnalysisOptions? options = null)
     {
         var source = SourceFor(request, cache, error, out int loaded);
+        slotSource = source;
         error.WriteLine(string.Format(Inv, "designing '{0}': {1} slots at {2:0.####} GHz, analysing {3:0.####} to {4:0.####} GHz{5} ...",
             request.Name, request.Slots.Count, request.DesignFrequency.Gigahertz, request.BandLow.Gigahertz, request.BandHigh.Gigahertz,
             cache is null ? "" : string.Format(Inv, " ({0} slot table(s) from the cache)", loaded)));

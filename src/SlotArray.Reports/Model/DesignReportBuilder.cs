@@ -87,18 +87,7 @@ internal static class DesignReportBuilder
             FrequencyHz = f0.Hertz,
             BandLowHz = request.BandLow.Hertz,
             BandHighHz = request.BandHigh.Hertz,
-            Guide = new GuideReport
-            {
-                Designation = guide.Designation == "custom"
-                    ? string.Create(Inv, $"custom tube {guide.BroadWall.Millimeters:0.###} × {guide.NarrowWall.Millimeters:0.###} mm inside")
-                    : guide.Designation,
-                A = guide.BroadWall.Meters,
-                B = guide.NarrowWall.Meters,
-                Wall = guide.WallThickness.Meters,
-                Metal = guide.MetalName,
-                GuideWavelength = design.GuideWavelength.Meters,
-                WaveImpedanceOhm = guide.WaveImpedance(f0),
-            },
+            Guide = GuideOf(design),
             Slots = slots,
             SlotData = SlotDataOf(result.SlotModel),
             Termination = new TerminationReport
@@ -108,21 +97,7 @@ internal static class DesignReportBuilder
                 FeedPosition = design.FeedPlane.Meters,
                 FarShortPosition = design.FarTermination is { } far ? (design.Slots[^1].Position + far.Distance).Meters : null,
             },
-            Pattern = new PatternReport
-            {
-                BeamDeg = atDesign.Metrics.BeamDirection.Degrees,
-                HpbwDeg = atDesign.Metrics.HalfPowerBeamwidth.Degrees,
-                PeakSidelobeDb = atDesign.Metrics.PeakSidelobeDb ?? double.NaN,
-                FirstSidelobeDb = atDesign.Metrics.FirstSidelobeDb ?? double.NaN,
-                DirectivityDbi = atDesign.DirectivityDbi,
-                GainDbi = atDesign.GainDbi,
-                DesignSidelobeDb = SidelobeTarget.OfTaper(request.Taper, result.Taper)?.LevelDb ?? double.NaN,
-                CutAngleDeg = [.. atDesign.Pattern.Theta.Select(t => t * 180 / Math.PI)],
-                CutLevelDb = atDesign.Pattern.RelativeDecibels(PatternFloorDb),
-                CrossPolarDb = atDesign.CrossPolar?.PeakLevelDb,
-                CrossPolarDirectionDeg = atDesign.CrossPolar?.PeakDirection.Degrees,
-                CrossCutLevelDb = atDesign.CrossPolar is { } x ? CrossLevels(x, atDesign.Pattern.PeakPower) : [],
-            },
+            Pattern = PatternOf(result),
             Match = new MatchReport
             {
                 S11DbAtDesign = 20 * Math.Log10(atDesign.Network.S11.Magnitude),
@@ -130,16 +105,7 @@ internal static class DesignReportBuilder
                 BandwidthVswr15Hz = result.BandVswr15?.Width.Hertz ?? 0,
                 BandwidthVswr2Hz = result.BandVswr2?.Width.Hertz ?? 0,
             },
-            Sweep = [.. result.SweepFigures.Select(p => new SweepPoint
-            {
-                FrequencyHz = p.Frequency.Hertz,
-                S11 = p.Network.S11,
-                BeamDeg = p.Metrics.BeamDirection.Degrees,
-                PeakSidelobeDb = p.Metrics.PeakSidelobeDb ?? double.NaN,
-                GainDbi = p.GainDbi,
-                HpbwDeg = p.Metrics.HalfPowerBeamwidth.Degrees,
-                CrossPolarDb = p.CrossPolar?.PeakLevelDb,
-            })],
+            Sweep = SweepOf(result),
             MatchSweep = [.. result.MatchSweep.Points.Select(n => new MatchPoint { FrequencyHz = n.Frequency.Hertz, S11 = n.S11 })],
             Inputs = new InputsSummary
             {
@@ -161,6 +127,59 @@ internal static class DesignReportBuilder
             TravellingWave = travelling is { } t ? TravellingWaveOf(result, t) : null,
             Coupling = CouplingReport.Of(result),
         };
+    }
+
+    private static GuideReport GuideOf(ArrayDesign design)
+    {
+        var guide = design.Guide;
+        var f0 = design.DesignFrequency;
+        return new GuideReport
+        {
+            Designation = guide.Designation == "custom"
+                ? string.Create(Inv, $"custom tube {guide.BroadWall.Millimeters:0.###} × {guide.NarrowWall.Millimeters:0.###} mm inside")
+                : guide.Designation,
+            A = guide.BroadWall.Meters,
+            B = guide.NarrowWall.Meters,
+            Wall = guide.WallThickness.Meters,
+            Metal = guide.MetalName,
+            GuideWavelength = design.GuideWavelength.Meters,
+            WaveImpedanceOhm = guide.WaveImpedance(f0),
+        };
+    }
+
+    private static PatternReport PatternOf(ArrayResult result)
+    {
+        var request = result.Request;
+        var atDesign = result.AtDesign;
+        return new PatternReport
+        {
+            BeamDeg = atDesign.Metrics.BeamDirection.Degrees,
+            HpbwDeg = atDesign.Metrics.HalfPowerBeamwidth.Degrees,
+            PeakSidelobeDb = atDesign.Metrics.PeakSidelobeDb ?? double.NaN,
+            FirstSidelobeDb = atDesign.Metrics.FirstSidelobeDb ?? double.NaN,
+            DirectivityDbi = atDesign.DirectivityDbi,
+            GainDbi = atDesign.GainDbi,
+            DesignSidelobeDb = SidelobeTarget.OfTaper(request.Taper, result.Taper)?.LevelDb ?? double.NaN,
+            CutAngleDeg = [.. atDesign.Pattern.Theta.Select(t => t * 180 / Math.PI)],
+            CutLevelDb = atDesign.Pattern.RelativeDecibels(PatternFloorDb),
+            CrossPolarDb = atDesign.CrossPolar?.PeakLevelDb,
+            CrossPolarDirectionDeg = atDesign.CrossPolar?.PeakDirection.Degrees,
+            CrossCutLevelDb = atDesign.CrossPolar is { } x ? CrossLevels(x, atDesign.Pattern.PeakPower) : [],
+        };
+    }
+
+    private static IReadOnlyList<SweepPoint> SweepOf(ArrayResult result)
+    {
+        return [.. result.SweepFigures.Select(p => new SweepPoint
+        {
+            FrequencyHz = p.Frequency.Hertz,
+            S11 = p.Network.S11,
+            BeamDeg = p.Metrics.BeamDirection.Degrees,
+            PeakSidelobeDb = p.Metrics.PeakSidelobeDb ?? double.NaN,
+            GainDbi = p.GainDbi,
+            HpbwDeg = p.Metrics.HalfPowerBeamwidth.Degrees,
+            CrossPolarDb = p.CrossPolar?.PeakLevelDb,
+        })];
     }
 
     /// <summary>Cross-polar cut in dB relative to the co-polar peak, floored at <see cref="PatternFloorDb"/>.</summary>

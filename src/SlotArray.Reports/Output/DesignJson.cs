@@ -39,6 +39,24 @@ internal static class DesignJson
     private static void WriteReport(Utf8JsonWriter w, DesignReport r)
     {
         w.WriteStartObject();
+        WriteHeader(w, r);
+        WriteSlots(w, r);
+        WriteTermination(w, r);
+        WriteTravellingWave(w, r);
+        WriteCoupling(w, r);
+        WritePattern(w, r);
+        WriteMatch(w, r);
+        WriteInputs(w, r);
+        WriteRequirements(w, r);
+        Strings(w, "warnings", r.Warnings);
+        Strings(w, "cautions", r.Cautions);
+        Strings(w, "tolerance", r.Tolerance);
+        w.WriteEndObject();
+    }
+
+    /// <summary>Name, frequency, normalisation, band and guide.</summary>
+    private static void WriteHeader(Utf8JsonWriter w, DesignReport r)
+    {
         w.WriteString("name", r.Name);
         Num(w, "frequency_hz", r.FrequencyHz);
         w.WriteString("normalisation", Invariant.Normalisation);
@@ -56,7 +74,11 @@ internal static class DesignJson
         Num(w, "guide_wavelength_m", r.Guide.GuideWavelength);
         Num(w, "wave_impedance_ohm", r.Guide.WaveImpedanceOhm);
         w.WriteEndObject();
+    }
 
+    /// <summary>One object per slot: geometry, conductance, target and achieved excitation.</summary>
+    private static void WriteSlots(Utf8JsonWriter w, DesignReport r)
+    {
         w.WriteStartArray("slots");
         foreach (var s in r.Slots)
         {
@@ -78,7 +100,11 @@ internal static class DesignJson
             w.WriteEndObject();
         }
         w.WriteEndArray();
+    }
 
+    /// <summary>The near termination and feed, then the fabrication plan.</summary>
+    private static void WriteTermination(Utf8JsonWriter w, DesignReport r)
+    {
         w.WriteStartObject("termination");
         w.WriteString("type", r.Termination.Type);
         Num(w, "distance_m", r.Termination.Distance);
@@ -86,7 +112,11 @@ internal static class DesignJson
         if (r.Termination.FarShortPosition is { } far) Num(w, "far_short_position_m", far);
         w.WriteEndObject();
         if (r.Fabrication is { } plan) WriteFabrication(w, r, plan);
+    }
 
+    /// <summary>Travelling-wave arrays: the load and the designer's figures.</summary>
+    private static void WriteTravellingWave(Utf8JsonWriter w, DesignReport r)
+    {
         if (r.Load is { } load)
         {
             w.WriteStartObject("load");
@@ -107,7 +137,11 @@ internal static class DesignJson
             Num(w, "phase_error_deg", tw.PhaseErrorDeg);
             w.WriteEndObject();
         }
+    }
 
+    /// <summary>Mutual-coupling designs: the coupled and isolated-slot figures and Elliott's iterations.</summary>
+    private static void WriteCoupling(Utf8JsonWriter w, DesignReport r)
+    {
         if (r.Coupling is { } c)
         {
             w.WriteStartObject("mutual_coupling");
@@ -130,7 +164,11 @@ internal static class DesignJson
             w.WriteEndArray();
             w.WriteEndObject();
         }
+    }
 
+    /// <summary>The pattern figures and cut at the design frequency.</summary>
+    private static void WritePattern(Utf8JsonWriter w, DesignReport r)
+    {
         var p = r.Pattern;
         w.WriteStartObject("pattern");
         Num(w, "beam_deg", p.BeamDeg);
@@ -148,7 +186,11 @@ internal static class DesignJson
         if (p.CrossPolarDb is { } xp) Num(w, "cross_polar_db", xp);
         if (p.CrossPolarDirectionDeg is { } xd) Num(w, "cross_polar_direction_deg", xd);
         w.WriteEndObject();
+    }
 
+    /// <summary>The match at the design frequency and the band sweep.</summary>
+    private static void WriteMatch(Utf8JsonWriter w, DesignReport r)
+    {
         w.WriteStartObject("match");
         Num(w, "s11_db_at_design", r.Match.S11DbAtDesign);
         Num(w, "vswr_at_design", r.Match.VswrAtDesign);
@@ -171,7 +213,11 @@ internal static class DesignJson
             w.WriteEndObject();
         }
         w.WriteEndArray();
+    }
 
+    /// <summary>The inputs in words and the user's slot table, if any.</summary>
+    private static void WriteInputs(Utf8JsonWriter w, DesignReport r)
+    {
         var i = r.Inputs;
         w.WriteStartObject("inputs");
         w.WriteString("slot_type", i.SlotType);
@@ -197,7 +243,11 @@ internal static class DesignJson
             w.WriteEndObject();
             w.WriteEndObject();
         }
+    }
 
+    /// <summary>One object per requirement verdict.</summary>
+    private static void WriteRequirements(Utf8JsonWriter w, DesignReport r)
+    {
         w.WriteStartArray("requirements");
         foreach (var q in r.Requirements)
         {
@@ -209,11 +259,6 @@ internal static class DesignJson
             w.WriteEndObject();
         }
         w.WriteEndArray();
-
-        Strings(w, "warnings", r.Warnings);
-        Strings(w, "cautions", r.Cautions);
-        Strings(w, "tolerance", r.Tolerance);
-        w.WriteEndObject();
     }
 
     /// <summary>The fabrication plan: datum A, tube length, features and each slot's tolerances (SI, from datum A).</summary>
@@ -324,22 +369,7 @@ internal static class DesignJson
                 GuideWavelength = D(g, "guide_wavelength_m"),
                 WaveImpedanceOhm = D(g, "wave_impedance_ohm"),
             },
-            Slots = [.. root.GetProperty("slots").EnumerateArray().Select(s => new SlotReport
-            {
-                Index = s.GetProperty("index").GetInt32(),
-                Position = D(s, "position_m"),
-                Offset = OptD(s, "offset_m"),
-                TiltDeg = OptD(s, "tilt_deg"),
-                CutDepth = OptD(s, "cut_depth_m"),
-                Length = D(s, "length_m"),
-                OverallLength = D(s, "overall_length_m"),
-                Width = D(s, "width_m"),
-                EndForm = Str(s, "end") == "round" ? SlotEndForm.Round : SlotEndForm.Square,
-                Conductance = D(s, "conductance"),
-                TargetAmplitude = D(s, "target_amplitude"),
-                AchievedAmplitude = D(s, "achieved_amplitude"),
-                AchievedPhaseDeg = D(s, "achieved_phase_deg"),
-            })],
+            Slots = ReadSlots(root),
             Termination = new TerminationReport
             {
                 Type = Str(t, "type"),
@@ -347,21 +377,7 @@ internal static class DesignJson
                 FeedPosition = OptD(t, "feed_position_m"),
                 FarShortPosition = OptD(t, "far_short_position_m"),
             },
-            Pattern = new PatternReport
-            {
-                BeamDeg = D(p, "beam_deg"),
-                HpbwDeg = D(p, "hpbw_deg"),
-                PeakSidelobeDb = D(p, "peak_sidelobe_db"),
-                FirstSidelobeDb = D(p, "first_sidelobe_db"),
-                DirectivityDbi = D(p, "directivity_dbi"),
-                GainDbi = D(p, "gain_dbi"),
-                DesignSidelobeDb = D(p, "design_sidelobe_db"),
-                CutAngleDeg = Doubles(p.GetProperty("cut").GetProperty("angle_deg")),
-                CutLevelDb = Doubles(p.GetProperty("cut").GetProperty("level_db")),
-                CrossCutLevelDb = p.GetProperty("cut").TryGetProperty("cross_level_db", out var xc) ? Doubles(xc) : [],
-                CrossPolarDb = OptD(p, "cross_polar_db"),
-                CrossPolarDirectionDeg = OptD(p, "cross_polar_direction_deg"),
-            },
+            Pattern = ReadPattern(p),
             Match = new MatchReport
             {
                 S11DbAtDesign = D(m, "s11_db_at_design"),
@@ -369,16 +385,7 @@ internal static class DesignJson
                 BandwidthVswr15Hz = D(m, "bandwidth_vswr15_hz"),
                 BandwidthVswr2Hz = D(m, "bandwidth_vswr2_hz"),
             },
-            Sweep = [.. root.GetProperty("sweep").EnumerateArray().Select(q => new SweepPoint
-            {
-                FrequencyHz = D(q, "frequency_hz"),
-                S11 = new Complex(D(q, "s11_re"), D(q, "s11_im")),
-                BeamDeg = D(q, "beam_deg"),
-                PeakSidelobeDb = D(q, "peak_sidelobe_db"),
-                GainDbi = D(q, "gain_dbi"),
-                HpbwDeg = OptD(q, "hpbw_deg") ?? double.NaN,
-                CrossPolarDb = OptD(q, "cross_polar_db"),
-            })],
+            Sweep = ReadSweep(root),
             Inputs = new InputsSummary
             {
                 SlotType = Str(inp, "slot_type"),
@@ -400,20 +407,78 @@ internal static class DesignJson
             Tolerance = StringList(root, "tolerance"),
             Load = root.TryGetProperty("load", out var ld)
                 ? new LoadReport { Fraction = D(ld, "fraction"), PowerWPerWIn = D(ld, "power_w_per_w_in") } : null,
-            TravellingWave = root.TryGetProperty("travelling_wave", out var tw)
-                ? new TravellingWaveReport
-                {
-                    SquintDeg = D(tw, "squint_deg"),
-                    ScanDegPer100MHz = D(tw, "scan_deg_per_100mhz"),
-                    ScanFromSweepDegPer100MHz = D(tw, "scan_from_sweep_deg_per_100mhz"),
-                    Efficiency = D(tw, "efficiency"),
-                    WallLossWPerWIn = D(tw, "wall_loss_w_per_w_in"),
-                    RefinementIterations = tw.GetProperty("refinement_iterations").GetInt32(),
-                    RefinementResidualDb = D(tw, "refinement_residual_db"),
-                    PhaseErrorDeg = D(tw, "phase_error_deg"),
-                }
-                : null,
+            TravellingWave = ReadTravellingWave(root),
         };
+    }
+
+    private static IReadOnlyList<SlotReport> ReadSlots(JsonElement root)
+    {
+        return [.. root.GetProperty("slots").EnumerateArray().Select(s => new SlotReport
+        {
+            Index = s.GetProperty("index").GetInt32(),
+            Position = D(s, "position_m"),
+            Offset = OptD(s, "offset_m"),
+            TiltDeg = OptD(s, "tilt_deg"),
+            CutDepth = OptD(s, "cut_depth_m"),
+            Length = D(s, "length_m"),
+            OverallLength = D(s, "overall_length_m"),
+            Width = D(s, "width_m"),
+            EndForm = Str(s, "end") == "round" ? SlotEndForm.Round : SlotEndForm.Square,
+            Conductance = D(s, "conductance"),
+            TargetAmplitude = D(s, "target_amplitude"),
+            AchievedAmplitude = D(s, "achieved_amplitude"),
+            AchievedPhaseDeg = D(s, "achieved_phase_deg"),
+        })];
+    }
+
+    private static PatternReport ReadPattern(JsonElement p)
+    {
+        return new PatternReport
+        {
+            BeamDeg = D(p, "beam_deg"),
+            HpbwDeg = D(p, "hpbw_deg"),
+            PeakSidelobeDb = D(p, "peak_sidelobe_db"),
+            FirstSidelobeDb = D(p, "first_sidelobe_db"),
+            DirectivityDbi = D(p, "directivity_dbi"),
+            GainDbi = D(p, "gain_dbi"),
+            DesignSidelobeDb = D(p, "design_sidelobe_db"),
+            CutAngleDeg = Doubles(p.GetProperty("cut").GetProperty("angle_deg")),
+            CutLevelDb = Doubles(p.GetProperty("cut").GetProperty("level_db")),
+            CrossCutLevelDb = p.GetProperty("cut").TryGetProperty("cross_level_db", out var xc) ? Doubles(xc) : [],
+            CrossPolarDb = OptD(p, "cross_polar_db"),
+            CrossPolarDirectionDeg = OptD(p, "cross_polar_direction_deg"),
+        };
+    }
+
+    private static IReadOnlyList<SweepPoint> ReadSweep(JsonElement root)
+    {
+        return [.. root.GetProperty("sweep").EnumerateArray().Select(q => new SweepPoint
+        {
+            FrequencyHz = D(q, "frequency_hz"),
+            S11 = new Complex(D(q, "s11_re"), D(q, "s11_im")),
+            BeamDeg = D(q, "beam_deg"),
+            PeakSidelobeDb = D(q, "peak_sidelobe_db"),
+            GainDbi = D(q, "gain_dbi"),
+            HpbwDeg = OptD(q, "hpbw_deg") ?? double.NaN,
+            CrossPolarDb = OptD(q, "cross_polar_db"),
+        })];
+    }
+
+    private static TravellingWaveReport? ReadTravellingWave(JsonElement root)
+    {
+        return root.TryGetProperty("travelling_wave", out var tw)
+            ? new TravellingWaveReport
+            {
+                SquintDeg = D(tw, "squint_deg"),
+                ScanDegPer100MHz = D(tw, "scan_deg_per_100mhz"),
+                ScanFromSweepDegPer100MHz = D(tw, "scan_from_sweep_deg_per_100mhz"),
+                Efficiency = D(tw, "efficiency"),
+                WallLossWPerWIn = D(tw, "wall_loss_w_per_w_in"),
+                RefinementIterations = tw.GetProperty("refinement_iterations").GetInt32(),
+                RefinementResidualDb = D(tw, "refinement_residual_db"),
+                PhaseErrorDeg = D(tw, "phase_error_deg"),
+            }
+            : null;
     }
 
     private static string Str(JsonElement e, string key) => e.GetProperty(key).GetString()

@@ -16,9 +16,6 @@ internal static class SummaryMarkdown
     /// <summary>Writes the summary of <paramref name="report"/>.</summary>
     public static void Write(DesignReport report, TextWriter writer)
     {
-        var g = report.Guide;
-        var i = report.Inputs;
-        bool tilt = CutListCsv.UsesTilt(report);
         void L(string line = "") { writer.Write(line); writer.Write('\n'); }
 
         L($"# {Escape(report.Name)}: slotted-waveguide array design");
@@ -28,8 +25,29 @@ internal static class SummaryMarkdown
             L($"- not met: {Escape(q.Description)}: required {Escape(q.Required)}, achieved {Escape(q.Achieved)}");
         foreach (string x in report.SafetyExceedances) L($"- **SAFETY LIMIT EXCEEDED**: {Escape(x)}");
         L();
-        L("## Inputs");
+        WriteInputs(report, L);
+        WriteSlotData(report, L);
+        WriteKeyFigures(report, L);
         L();
+        WriteScan(report, L);
+        L();
+        if (report.Coupling is { } coupling) CouplingSummary.Write(coupling, s => L(s));
+        L("## Requirements");
+        L();
+        if (report.Requirements.Count == 0) L("No requirements were given.");
+        foreach (var q in report.Requirements) L(RequirementLine(q));
+        L();
+        WriteSlotTable(report, L);
+        WriteNotes(report, L);
+    }
+
+    /// <summary>The inputs table.</summary>
+    private static void WriteInputs(DesignReport report, Action<string> L)
+    {
+        var g = report.Guide;
+        var i = report.Inputs;
+        L("## Inputs");
+        L("");
         L("| item | value |");
         L("| --- | --- |");
         L($"| guide | {Escape(g.Designation)}: a = {Invariant.Mm(g.A)} mm, b = {Invariant.Mm(g.B)} mm |");
@@ -42,24 +60,35 @@ internal static class SummaryMarkdown
         L($"| slot model | {Escape(i.SlotModelName)} |");
         L($"| datum A | {Escape(report.Fabrication?.Datum ?? i.DatumDescription)} |");
         L($"| cut tolerance | ± {Invariant.Mm(i.CutTolerance)} mm |");
-        L();
+        L("");
+    }
+
+    /// <summary>The user's slot table, when the slots were designed from one.</summary>
+    private static void WriteSlotData(DesignReport report, Action<string> L)
+    {
         if (report.SlotData is { } sd)
         {
             L("## Slot data");
-            L();
+            L("");
             L($"The slots were designed from the table `{Escape(sd.File)}` (SHA-256 `{sd.Sha256}`), {Invariant.Int(sd.Rows)} rows: {Escape(sd.Range)}.");
             L($"Fit residuals (leave-one-out): L_r rms {Invariant.Fixed(sd.Residuals[0] * 100, 4)} %, max {Invariant.Fixed(sd.Residuals[1] * 100, 4)} %; g_r rms {Invariant.Fixed(sd.Residuals[2] * 100, 4)} %, max {Invariant.Fixed(sd.Residuals[3] * 100, 4)} %; y/g_r rms {Invariant.Fixed(sd.Residuals[4], 4)}, max {Invariant.Fixed(sd.Residuals[5], 4)}.");
             int outside = report.Slots.Count(s => s.OutsideSlotTable);
             if (outside > 0) L($"{Invariant.Int(outside)} slot(s) lie outside the table and were extrapolated (slots.extrapolate: true); they are marked \"outside table\" below and in the cut list.");
-            L();
+            L("");
             L("Provenance (the table's comment lines):");
-            L();
+            L("");
             foreach (string line in sd.Provenance) L($"> {Escape(line)}");
             if (sd.Provenance.Count == 0) L("> (the table has no comment lines)");
-            L();
+            L("");
         }
+    }
+
+    /// <summary>The key figures table: guide, termination, tube, pattern, match, EIRP, load, travelling wave.</summary>
+    private static void WriteKeyFigures(DesignReport report, Action<string> L)
+    {
+        var g = report.Guide;
         L("## Key figures");
-        L();
+        L("");
         var p = report.Pattern;
         var m = report.Match;
         L("| quantity | value | unit |");
@@ -109,19 +138,17 @@ internal static class SummaryMarkdown
             L($"| designer: network refinement iterations, final residual | {Invariant.Int(tw.RefinementIterations)}, {Invariant.Fixed(tw.RefinementResidualDb, 6)} | –, dB |");
             L($"| largest slot phase departure from the travelling-wave progression | {Invariant.Fixed(tw.PhaseErrorDeg, 2)} | deg |");
         }
-        L();
-        WriteScan(report, L);
-        L();
-        if (report.Coupling is { } coupling) CouplingSummary.Write(coupling, s => L(s));
-        L("## Requirements");
-        L();
-        if (report.Requirements.Count == 0) L("No requirements were given.");
-        foreach (var q in report.Requirements) L(RequirementLine(q));
-        L();
+    }
+
+    /// <summary>The per-slot table (offset or tilt columns).</summary>
+    private static void WriteSlotTable(DesignReport report, Action<string> L)
+    {
+        var i = report.Inputs;
+        bool tilt = CutListCsv.UsesTilt(report);
         L("## Slots");
-        L();
+        L("");
         L($"Positions z from the {Escape(i.DatumDescription)} (z = 0; the cut list gives them from datum A, the tube's end face); {Invariant.Normalisation}; amplitudes linear, each normalised to its largest value; phase in degrees.");
-        L();
+        L("");
         if (tilt)
         {
             L("| slot | position (mm) | tilt (deg) | cut depth (mm) | length (mm) | overall (mm) | width (mm) | end | g | target amp. | achieved amp. | phase (deg) |");
@@ -139,25 +166,30 @@ internal static class SummaryMarkdown
                 : $"{Invariant.Mm(s.Offset!.Value)} | {CutListCsv.Side(s.Offset.Value)}";
             L($"| {Invariant.Int(s.Index)}{(s.OutsideSlotTable ? " (outside table)" : "")} | {Invariant.Mm(s.Position)} | {mid} | {Invariant.Mm(s.Length)} | {Invariant.Mm(s.OverallLength)} | {Invariant.Mm(s.Width)} | {(s.EndForm == SlotEndForm.Round ? "round" : "square")} | {Invariant.Fixed(s.Conductance, 5)} | {Invariant.Fixed(s.TargetAmplitude, 4)} | {Invariant.Fixed(s.AchievedAmplitude, 4)} | {Invariant.Fixed(s.AchievedPhaseDeg, 2)} |");
         }
-        L();
+        L("");
+    }
+
+    /// <summary>Tolerance lines, warnings and cautions.</summary>
+    private static void WriteNotes(DesignReport report, Action<string> L)
+    {
         if (report.Tolerance.Count > 0)
         {
             L("## Tolerance");
-            L();
+            L("");
             foreach (string t in report.Tolerance) L($"- {Escape(t)}");
-            L();
+            L("");
         }
         L("## Warnings");
-        L();
+        L("");
         if (report.Warnings.Count == 0) L("None.");
         foreach (string w in report.Warnings) L($"- {Escape(w)}");
-        L();
+        L("");
         L("## Cautions");
-        L();
+        L("");
         var cautions = report.Cautions.Count > 0 ? report.Cautions : [StandardCaution];
         for (int k = 0; k < cautions.Count; k++)
         {
-            if (k > 0) L();
+            if (k > 0) L("");
             L(Escape(cautions[k]));
         }
     }
