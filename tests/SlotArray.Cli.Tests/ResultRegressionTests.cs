@@ -41,7 +41,7 @@ public class ResultRegressionTests
         bits.AddRange(mc.PeakSidelobeSamples);
         if (mc.Envelope is { } e)
             foreach (var list in new[] { e.AnglesDeg, e.NominalDb, e.P5Db, e.P50Db, e.P95Db, e.MaximumDb }) bits.AddRange(list);
-        foreach (var s in r.Sensitivities) bits.AddRange([s.Slot, (int)s.Quantity, s.DsllDbPerMm, s.Ds11DbPerMm]);
+        foreach (var s in r.Sensitivities) bits.AddRange([s.Slot, (int)s.Quantity, s.DsllDbPerUnit, s.Ds11DbPerUnit]);
         var bytes = new byte[bits.Count * 8];
         for (int i = 0; i < bits.Count; i++) BitConverter.TryWriteBytes(bytes.AsSpan(8 * i), BitConverter.DoubleToInt64Bits(bits[i]));
         return Hex(bytes);

@@ -181,7 +181,7 @@ public sealed record Tolerance(Length Value, ErrorDistribution Distribution)
 }
 
 /// <summary>Machining tolerances for the Monte Carlo analysis.</summary>
-/// <param name="Offset">Slot offset from the centreline (or, for edge slots, taken as a tilt-equivalent error at the slot end).</param>
+/// <param name="Offset">Slot offset from the centreline (broad-wall slots; edge slots have none: their errors are <see cref="Tilt"/> and <see cref="Depth"/>).</param>
 /// <param name="Length">Slot length.</param>
 /// <param name="Position">Slot centre along the guide.</param>
 /// <param name="Width">Slot width.</param>
@@ -192,7 +192,14 @@ public sealed record Tolerance(Length Value, ErrorDistribution Distribution)
 /// <param name="Trials">Number of Monte Carlo trials, ≥ 1.</param>
 /// <param name="Seed">Random seed; the same seed gives identical results.</param>
 public sealed record ToleranceRequest(Tolerance Offset, Tolerance Length, Tolerance Position, Tolerance Width,
-    Tolerance GuideWidth, Tolerance Wall, Length SystematicLength, Length SystematicOffset, int Trials, int Seed);
+    Tolerance GuideWidth, Tolerance Wall, Length SystematicLength, Length SystematicOffset, int Trials, int Seed)
+{
+    /// <summary>Edge slots: tilt of each slot (none for broad-wall slots).</summary>
+    public SlotArray.Core.Tolerance.AngleTolerance Tilt { get; init; } = SlotArray.Core.Tolerance.AngleTolerance.None;
+
+    /// <summary>Edge slots: depth of cut into each broad wall (none for broad-wall slots); a slot that wraps lengthens by twice it.</summary>
+    public Tolerance Depth { get; init; } = Tolerance.None;
+}
 
 /// <summary>What the antenna must meet; each null entry is not checked.</summary>
 /// <param name="SidelobesDb">Peak sidelobe level, dB, negative; null: the taper's design level.</param>
