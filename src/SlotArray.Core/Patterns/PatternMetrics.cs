@@ -102,7 +102,7 @@ public sealed record PatternMetrics(
     }
 
     /// <summary>
-    /// Taper efficiency of a discrete aperture, η_t = |Σ a_n|² / (N Σ |a_n|²) (the standard definition, physics-reference §7.4 [D];
+    /// Taper efficiency of a discrete aperture, η_t = |Σ a_n|² / (N Σ |a_n|²) (the standard definition, e.g. R. C. Hansen, <i>Phased Array Antennas</i>, Wiley 1998, from memory;
     /// 1 for uniform excitation, less for any taper).
     /// </summary>
     /// <param name="weights">Element excitations (real).</param>

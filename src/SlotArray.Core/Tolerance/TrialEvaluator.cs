@@ -114,7 +114,7 @@ internal sealed class TrialEvaluator
 
     /// <summary>
     /// Taper efficiency toward the nominal beam, η_t = |AF(u_b)|²/(N Σ|e_n|²): the standard |Σ e_n|²/(N Σ|e_n|²)
-    /// (physics-reference §7.4) for a broadside beam, and the same with the phase progression of a squinted beam removed.
+    /// (the standard definition) for a broadside beam, and the same with the phase progression of a squinted beam removed.
     /// </summary>
     public double TaperEfficiency { get; }
 
