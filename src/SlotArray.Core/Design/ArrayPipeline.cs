@@ -44,6 +44,9 @@ public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFra
 
     /// <summary>Stops the run between steps, iterations and sweep points with an <see cref="OperationCanceledException"/>.</summary>
     public CancellationToken Cancellation { get; init; }
+
+    /// <summary><c>coupling: mutual</c> standing-wave designs: the limits of Elliott's iteration (<see cref="ElliottDesigner"/>); progress and cancellation are this run's.</summary>
+    public ElliottOptions Elliott { get; init; } = ElliottOptions.Default;
 }
 
 /// <summary>Everything one run computes: the taper, the slot model, the design and its analysis across the band.</summary>
@@ -258,7 +261,7 @@ public static class ArrayPipeline
     {
         if (request.Feed.Type == FeedType.TravellingWave) return RunCoupledTravelling(request, options, taper, slot);
         var elliott = ElliottDesigner.Design(request, slot, taper.Weights,
-            ElliottOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
+            options.Elliott with { Progress = options.Progress, Cancellation = options.Cancellation });
         options.Cancellation.ThrowIfCancellationRequested();
         var design = elliott.Design;
         SlotClearance.Require(design, request.Slots.Cutter);

@@ -4,6 +4,7 @@ using SlotArray.Core;
 using SlotArray.Core.Design;
 using SlotArray.Core.Fabrication;
 using SlotArray.Core.Network;
+using SlotArray.Core.Patterns;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Safety;
 using SlotArray.Core.Slots;
@@ -46,8 +47,9 @@ public static class DesignReportBuilder
     /// <summary>Builds the report of one pipeline run.</summary>
     /// <param name="result">The pipeline's result.</param>
     /// <param name="document">Drawing number, revision, date and spec checksum for the fabrication documents; null: <see cref="DocumentInfo.Unnamed"/>.</param>
+    /// <param name="plan">The fabrication plan, e.g. a next plate's with its changes flagged (<see cref="Core.Prototype.NextPlate.Plan"/>); null: the design's own, a first issue.</param>
     /// <exception cref="Core.InfeasibleDesignException">A slot cannot be cut as designed (it reaches the side wall, or the cutter is wider than the slot).</exception>
-    public static DesignReport Build(ArrayResult result, DocumentInfo? document = null)
+    public static DesignReport Build(ArrayResult result, DocumentInfo? document = null, FabricationPlan? plan = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         var request = result.Request;
@@ -55,7 +57,7 @@ public static class DesignReportBuilder
         var guide = design.Guide;
         var f0 = design.DesignFrequency;
         double tolerance = CutTolerance(request.Tolerance);
-        var plan = FabricationPlan.Build(request, design);
+        plan ??= FabricationPlan.Build(request, design);
         var atDesign = result.AtDesign;
         var slots = Slots(result, plan);
         var outside = SlotTableRangeCheck.Outside(design, result.SlotModel).Select(o => o.Index).ToHashSet();
@@ -114,6 +116,9 @@ public static class DesignReportBuilder
                 CrossPolarDb = atDesign.CrossPolar?.PeakLevelDb,
                 CrossPolarDirectionDeg = atDesign.CrossPolar?.PeakDirection.Degrees,
                 CrossCutLevelDb = atDesign.CrossPolar is { } x ? CrossLevels(x, atDesign.Pattern.PeakPower) : [],
+                TransverseFaceWidth = FiniteFaceBeamwidth.SlottedFaceWidth(design.Guide, design.CouplingKind == SlotCouplingKind.Tilt).Meters,
+                TransverseHpbwLowerBoundDeg = FiniteFaceBeamwidth.LowerBound(
+                    FiniteFaceBeamwidth.SlottedFaceWidth(design.Guide, design.CouplingKind == SlotCouplingKind.Tilt), request.DesignFrequency)?.Degrees ?? double.NaN,
             },
             Match = new MatchReport
             {
