@@ -66,6 +66,7 @@ public static class ToleranceSensitivities
         Parallel.For(0, n, new ParallelOptions { MaxDegreeOfParallelism = options.Threads }, i =>
         {
             var s = model.Surrogates[i];
+            var workspace = evaluator.NewWorkspace();
             double sign = Math.Sign(model.Design.Slots[i].Coupling);
             double hTilt = h / (s.Length / 2);
             for (int qi = 0; qi < quantities.Count; qi++)
@@ -89,7 +90,7 @@ public static class ToleranceSensitivities
                         case ToleranceQuantity.Depth: y[i] = s.Direct(0, model.LengthPerDepthError(i) * step * h); break;
                         default: z[i] += step * h; break;
                     }
-                    return evaluator.Evaluate(model.Solve(y, z, 0, t), false);
+                    return evaluator.Evaluate(model.Solve(y, z, 0, t), workspace, default);
                 }
                 var plus = At(+1);
                 var minus = At(-1);
