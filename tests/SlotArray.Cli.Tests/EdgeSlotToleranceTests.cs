@@ -113,18 +113,18 @@ public class EdgeSlotToleranceTests
         var (design, slot) = ToleranceAnalysis.Design(request);
         var none = request.Tolerance! with
         {
-            Length = Core.Design.Tolerance.None, Position = Core.Design.Tolerance.None, Width = Core.Design.Tolerance.None, Trials = 50,
+            Length = MachiningTolerance.None, Position = MachiningTolerance.None, Width = MachiningTolerance.None, Trials = 50,
         };
         var options = new ToleranceOptions(EnvelopePoints: 0, MaxThreads: 2);
-        var tiltOnly = ToleranceAnalysis.Run(request, design, slot, none with { Depth = Core.Design.Tolerance.None }, options).MonteCarlo;
+        var tiltOnly = ToleranceAnalysis.Run(request, design, slot, none with { Depth = MachiningTolerance.None }, options).MonteCarlo;
         var depthOnly = ToleranceAnalysis.Run(request, design, slot, none with { Tilt = AngleTolerance.None }, options).MonteCarlo;
-        var nothing = ToleranceAnalysis.Run(request, design, slot, none with { Tilt = AngleTolerance.None, Depth = Core.Design.Tolerance.None }, options).MonteCarlo;
+        var nothing = ToleranceAnalysis.Run(request, design, slot, none with { Tilt = AngleTolerance.None, Depth = MachiningTolerance.None }, options).MonteCarlo;
         Assert.True(tiltOnly.AmplitudeErrorRms > 1e-4, $"tilt alone: σ_a {tiltOnly.AmplitudeErrorRms}");
         Assert.True(depthOnly.AmplitudeErrorRms > 1e-4, $"depth alone: σ_a {depthOnly.AmplitudeErrorRms}");
         Assert.Equal(0, nothing.AmplitudeErrorRms, 12);
         Assert.Equal(0, nothing.PhaseErrorRms, 12);
 
-        var offset = request.Tolerance! with { Offset = new Core.Design.Tolerance(Length.FromMillimeters(0.02), ErrorDistribution.Uniform) };
+        var offset = request.Tolerance! with { Offset = new MachiningTolerance(Length.FromMillimeters(0.02), ErrorDistribution.Uniform) };
         var e = Assert.Throws<ArgumentException>(() => ToleranceAnalysis.Run(request, design, slot, offset, options));
         Assert.Contains("edge slots have no offset", e.Message);
     }

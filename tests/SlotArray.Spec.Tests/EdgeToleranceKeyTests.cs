@@ -1,4 +1,4 @@
-using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 
 namespace SlotArray.Spec.Tests;
 

@@ -1,4 +1,3 @@
-using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 
 namespace SlotArray.Core.Fabrication;
@@ -59,7 +58,7 @@ public sealed record FeatureTolerances(StatedTolerance Position, StatedTolerance
             "default: the routine ±0.025 mm of precision CNC milling at the slot's end, δθ = δx/(L/2) (common practice, no source)");
     }
 
-    private static StatedTolerance Of(Design.Tolerance? t, string key)
+    private static StatedTolerance Of(MachiningTolerance? t, string key)
     {
         if (t is null || !(t.Value.Meters > 0)) return Default;
         return t.Distribution == ErrorDistribution.Normal

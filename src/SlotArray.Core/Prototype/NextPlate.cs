@@ -1,5 +1,5 @@
-using SlotArray.Core.Fabrication;
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
 
@@ -59,7 +59,8 @@ public static class NextPlate
     {
         ArgumentNullException.ThrowIfNull(next);
         ArgumentNullException.ThrowIfNull(cut);
-        return FabricationPlan.Build(next.Request, next.Design).WithChangesFrom(FabricationPlan.Build(cut.Request, cut.Design));
+        static FabricationPlan Of(ArrayResult r) => FabricationPlan.Build(r.Design, r.Request.Feed.Type, r.Request.Slots.Cutter, r.Request.Tolerance);
+        return Of(next).WithChangesFrom(Of(cut));
     }
 
     /// <summary>

@@ -1,8 +1,10 @@
 using System.Numerics;
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Tolerance;
@@ -86,7 +88,7 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
         options ??= ToleranceOptions.Default;
         options.Validate();
         CheckApplies(design, tolerance);
-        double Range(Design.Tolerance t) => t.Distribution == ErrorDistribution.Normal ? options.NormalRange * t.Value.Meters : t.Value.Meters;
+        double Range(MachiningTolerance t) => t.Distribution == ErrorDistribution.Normal ? options.NormalRange * t.Value.Meters : t.Value.Meters;
         bool edge = design.CouplingKind == SlotCouplingKind.Tilt;
         double tiltRange = tolerance.Tilt.Range(options.NormalRange);
         double couplingRange = edge ? tiltRange : Range(tolerance.Offset) + Math.Abs(tolerance.SystematicOffset.Meters);

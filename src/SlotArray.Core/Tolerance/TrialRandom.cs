@@ -1,4 +1,5 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 
 namespace SlotArray.Core.Tolerance;
 
@@ -62,13 +63,13 @@ public struct TrialRandom
     /// One machining error, m: uniform in ±value or normal with σ = value. Always consumes two uniforms, so the stream
     /// stays aligned whatever the laws and whether a tolerance is zero (a zero tolerance gives exactly 0).
     /// </summary>
-    public double Draw(Design.Tolerance tolerance)
+    public double Draw(MachiningTolerance tolerance)
     {
         ArgumentNullException.ThrowIfNull(tolerance);
         return Draw(tolerance.Value.Meters, tolerance.Distribution);
     }
 
-    /// <summary>One tilt error, rad, by the same rule as <see cref="Draw(Design.Tolerance)"/>.</summary>
+    /// <summary>One tilt error, rad, by the same rule as <see cref="Draw(MachiningTolerance)"/>.</summary>
     public double Draw(AngleTolerance tolerance)
     {
         ArgumentNullException.ThrowIfNull(tolerance);

@@ -1,6 +1,7 @@
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Tolerance;
 
 namespace SlotArray.Reports;
@@ -91,10 +92,10 @@ public static class ToleranceJson
     }
 
     /// <summary>The spec's key of each random length tolerance, in the spec's order (the edge slots' depth only when given; the tilt, an angle, apart).</summary>
-    internal static IEnumerable<(string Key, Core.Design.Tolerance Value)> Tolerances(ToleranceRequest t) =>
+    internal static IEnumerable<(string Key, MachiningTolerance Value)> Tolerances(ToleranceRequest t) =>
     [
         ("offset", t.Offset), ("length", t.Length), ("position", t.Position), ("width", t.Width), ("guide_width", t.GuideWidth), ("wall", t.Wall),
-        .. t.Depth.Value.Meters != 0 ? [("depth", t.Depth)] : Array.Empty<(string, Core.Design.Tolerance)>(),
+        .. t.Depth.Value.Meters != 0 ? [("depth", t.Depth)] : Array.Empty<(string, MachiningTolerance)>(),
     ];
 
     /// <summary>The report name of a quantity.</summary>

@@ -1,6 +1,7 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
-using SlotArray.Core.Tolerance;
+using SlotArray.Core.Slots;
 using SlotArray.Spec.Schema;
 
 namespace SlotArray.Spec.Yaml;
@@ -90,11 +91,11 @@ internal sealed partial class SpecBuilder
         return e is { } x ? new AngleTolerance(Angle.FromRadians(x.Value), x.Law) : null;
     }
 
-    private Tolerance? OneTolerance(Section s, string key)
+    private MachiningTolerance? OneTolerance(Section s, string key)
     {
-        if (!s.Has(key)) return Core.Design.Tolerance.None;
+        if (!s.Has(key)) return MachiningTolerance.None;
         var e = Error(s, key, QuantityKind.Length, SigmaKeys, MaxTolerance, "0.02 mm", v => $"between 0 and 10 mm, got {Mm(v)}");
-        return e is { } x ? new Tolerance(Length.FromMeters(x.Value), x.Law) : null;
+        return e is { } x ? new MachiningTolerance(Length.FromMeters(x.Value), x.Law) : null;
     }
 
     /// <summary>One machining error, SI: a quantity (uniform ±) or `{sigma: …}` (normal), 0 to <paramref name="max"/>; null after an error.</summary>
@@ -192,7 +193,7 @@ internal sealed partial class SpecBuilder
         if (s is null) { ok = false; return 0; }
         if (!s.Has("prototype_margin")) return 0;
         double? m = Quantity(s, "prototype_margin", QuantityKind.Percent, false, "-0.5 %");
-        ok &= m is not null && Require(s, "prototype_margin", Math.Abs(m.Value) <= Core.Prototype.PrototypeMargin.Limit,
+        ok &= m is not null && Require(s, "prototype_margin", Math.Abs(m.Value) <= Core.Fabrication.PrototypeMargin.Limit,
             $"'prototype_margin' must lie within ±5 % (a first plate is usually cut about 0.5 % short: -0.5 %), got {Num(m.Value * 100)} %");
         return ok ? m!.Value : 0;
     }

@@ -1,7 +1,6 @@
-using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 
-namespace SlotArray.Core.Tolerance;
+namespace SlotArray.Core.Fabrication;
 
 /// <summary>One angular machining tolerance: the tilt of an edge slot.</summary>
 /// <param name="Value">Half-width (uniform ±) or standard deviation (normal), ≥ 0.</param>
