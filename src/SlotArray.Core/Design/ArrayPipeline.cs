@@ -54,49 +54,31 @@ public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFra
 /// <param name="Request">What was asked.</param>
 /// <param name="Taper">The synthesised aperture taper (target amplitudes).</param>
 /// <param name="SlotModel">The slot model the design used and the analysis re-used.</param>
-/// <param name="Design">Per-slot geometry and the terminations.</param>
+/// <param name="Design">Per-slot geometry and the terminations, as cut (with the prototype margin).</param>
+/// <param name="Procedure">How the design was made (isolated-slot or coupled, standing or travelling wave) and what that
+/// procedure alone reports; for a coupled procedure <paramref name="Design"/> is the coupled design and the sweep, the
+/// figures and the bands come from the coupled analysis.</param>
 /// <param name="Sweep">Network solutions across the analysis band, and at the design frequency.</param>
 /// <param name="AtDesign">Pattern, directivity and gain at the design frequency.</param>
 /// <param name="SweepFigures">Pattern, directivity and gain at each sweep frequency.</param>
 /// <param name="BandVswr15">The continuous band with VSWR ≤ 1.5 containing the design frequency, or null.</param>
 /// <param name="BandVswr2">The continuous band with VSWR ≤ 2 containing the design frequency, or null.</param>
+/// <param name="MatchSweep">The input match alone (network, no pattern) over the match span (<see cref="MatchSpan"/>; by
+/// default wide enough to show the VSWR band edges), with the analysis that made <paramref name="Sweep"/>.</param>
 /// <param name="Warnings">Every validity limit met on the way (taper, slot model, designer), in order, without repeats.</param>
 public sealed record ArrayResult(
     ArrayRequest Request,
     TaperResult Taper,
     IShuntSlotModel SlotModel,
     ArrayDesign Design,
+    DesignProcedure Procedure,
     FrequencySweep Sweep,
     FrequencyFigures AtDesign,
     IReadOnlyList<FrequencyFigures> SweepFigures,
     MatchBand? BandVswr15,
     MatchBand? BandVswr2,
-    IReadOnlyList<DesignWarning> Warnings)
-{
-    /// <summary>Travelling-wave feed: the designer's figures (targets, refinement, squint, scan rate); null for a standing-wave feed.</summary>
-    public TravellingWaveDesign? TravellingWave { get; init; }
-
-    /// <summary>
-    /// <c>coupling: mutual</c> only: Elliott's design with its iteration history, and the coupled and isolated-slot
-    /// designs side by side under the coupled analysis; null for <c>coupling: none</c>. When set, <see cref="Design"/> is
-    /// the coupled design and <see cref="Sweep"/>, the figures and the bands come from the coupled analysis.
-    /// </summary>
-    public ElliottComparison? Coupling { get; init; }
-
-    /// <summary>
-    /// <c>coupling: mutual</c> with a travelling-wave feed: the coupled travelling-wave design
-    /// (<see cref="CoupledTravellingWaveDesigner"/>) and the isolated-slot design side by side under the coupled analysis;
-    /// null otherwise. When set, <see cref="Design"/> is the coupled design and the sweep, figures and bands come from the
-    /// coupled analysis.
-    /// </summary>
-    public CoupledTravellingWaveComparison? CoupledTravellingWave { get; init; }
-
-    /// <summary>
-    /// The input match alone (network, no pattern) over the match span (<see cref="MatchSpan"/>; by default wide
-    /// enough to show the VSWR band edges), with the analysis that made <see cref="Sweep"/>; null when not computed.
-    /// </summary>
-    public FrequencySweep? MatchSweep { get; init; }
-}
+    FrequencySweep MatchSweep,
+    IReadOnlyList<DesignWarning> Warnings);
 
 /// <summary>
 /// The pipeline of architecture.md as one pure function: request → taper → slot model → designer → network
@@ -117,44 +99,48 @@ public static class ArrayPipeline
     }
 
     /// <summary>
-    /// The design <see cref="Run"/> delivers, without its band analysis: with <c>coupling: mutual</c> the coupled design
-    /// (Elliott's for a standing-wave feed, <see cref="CoupledTravellingWaveDesigner"/> for a travelling-wave feed), else
-    /// <see cref="Synthesise"/>'s. The tolerance analysis perturbs this design, so that its nominal figures are the key figures.
+    /// The design <see cref="Run"/> delivers, without its band analysis or prototype margin: with <c>coupling: mutual</c>
+    /// the coupled design (Elliott's for a standing-wave feed, <see cref="CoupledTravellingWaveDesigner"/> for a
+    /// travelling-wave feed), else <see cref="Synthesise"/>'s. The tolerance analysis perturbs this design, so that its
+    /// nominal figures are the key figures.
     /// </summary>
     /// <exception cref="InfeasibleDesignException">The request cannot be realised.</exception>
     public static ArrayDesign DeliveredDesign(ArrayRequest request, IShuntSlotModel slot, TaperResult taper)
     {
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(taper);
-        if (request.Coupling != CouplingMode.Mutual) return Synthesise(request, slot, taper);
-        return request.Feed.Type == FeedType.TravellingWave
-            ? CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights).Design
-            : ElliottDesigner.Design(request, slot, taper.Weights).Design;
+        return DesignStick(StickRequest.Of(request, slot, taper.Weights), request.Coupling).Design;
     }
 
-    /// <summary>The designer the feed type calls for.</summary>
+    /// <summary>The isolated-slot design the feed type calls for (<see cref="DesignStick"/> without coupling).</summary>
     public static ArrayDesign Synthesise(ArrayRequest request, IShuntSlotModel slot, TaperResult taper)
-        => SynthesiseWithFigures(request, slot, taper).Design;
-
-    /// <summary>
-    /// The designer the feed type calls for (standing-wave: <see cref="StandingWaveDesigner"/>; travelling-wave:
-    /// <see cref="TravellingWaveDesigner"/>), with the travelling-wave designer's own figures (null for a standing wave).
-    /// </summary>
-    public static (ArrayDesign Design, TravellingWaveDesign? TravellingWave) SynthesiseWithFigures(ArrayRequest request, IShuntSlotModel slot,
-        TaperResult taper)
     {
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(taper);
-        switch (request.Feed.Type)
+        return DesignStick(StickRequest.Of(request, slot, taper.Weights), CouplingMode.None).Design;
+    }
+
+    /// <summary>
+    /// Designs one stick with the designer its feed and coupling call for: standing-wave <see cref="StandingWaveDesigner"/>,
+    /// travelling-wave <see cref="TravellingWaveDesigner"/>; with <paramref name="coupling"/> mutual <see cref="ElliottDesigner"/>
+    /// or <see cref="CoupledTravellingWaveDesigner"/> (reporting progress and stopping on <paramref name="options"/>' token).
+    /// </summary>
+    /// <exception cref="InfeasibleDesignException">The stick cannot be realised; the message says what to change.</exception>
+    public static StickDesign DesignStick(StickRequest stick, CouplingMode coupling, AnalysisOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(stick);
+        options ??= AnalysisOptions.Default;
+        bool travelling = stick.Feed.Type == FeedType.TravellingWave;
+        if (coupling == CouplingMode.Mutual)
+            return travelling
+                ? CoupledTravellingWaveDesigner.Design(stick, CoupledTravellingWaveOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation })
+                : ElliottDesigner.Design(stick, options.Elliott with { Progress = options.Progress, Cancellation = options.Cancellation });
+        return stick.Feed.Type switch
         {
-            case FeedType.StandingWave:
-                return (StandingWaveDesigner.Design(request, slot, taper.Weights), null);
-            case FeedType.TravellingWave:
-                var tw = TravellingWaveDesigner.Design(request, slot, taper.Weights);
-                return (tw.Design, tw);
-            default:
-                throw new InfeasibleDesignException($"the '{request.Feed.Type}' feed has no designer: use a standing-wave or travelling-wave feed");
-        }
+            FeedType.StandingWave => StandingWaveDesigner.Design(stick),
+            FeedType.TravellingWave => TravellingWaveDesigner.Design(stick),
+            _ => throw new InfeasibleDesignException($"the '{stick.Feed.Type}' feed has no designer: use a standing-wave or travelling-wave feed"),
+        };
     }
 
     /// <summary>
@@ -227,11 +213,22 @@ public static class ArrayPipeline
         ArgumentNullException.ThrowIfNull(slot);
         options ??= AnalysisOptions.Default;
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
-        if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
-        var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
-        SlotClearance.Require(design, request.Slots.Cutter);
+        var stick = DesignStick(StickRequest.Of(request, slot, taper.Weights), request.Coupling, options);
         options.Cancellation.ThrowIfCancellationRequested();
-        design = PrototypeMargin.Apply(design, request.PrototypeMargin);
+        SlotClearance.Require(stick.Design, request.Slots.Cutter);
+        var design = PrototypeMargin.Apply(stick.Design, request.PrototypeMargin);
+        return stick is ElliottResult or CoupledTravellingWaveDesign
+            ? AnalyseCoupled(request, taper, slot, stick, design, options)
+            : AnalyseIsolated(request, taper, slot, stick, design, options);
+    }
+
+    /// <summary>
+    /// An isolated-slot design (<c>coupling: none</c>) as cut: the band through the isolated-slot network
+    /// (<see cref="ArrayNetwork"/>) with pattern figures at every point, the VSWR bands found by search, the match sweep.
+    /// </summary>
+    private static ArrayResult AnalyseIsolated(ArrayRequest request, TaperResult taper, IShuntSlotModel slot, StickDesign stick,
+        ArrayDesign design, AnalysisOptions options)
+    {
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
@@ -249,72 +246,43 @@ public static class ArrayPipeline
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
             .Concat(outside).DistinctBy(w => w.Message).ToList();
         var (mLo, mHi) = MatchSpan.Resolve(request, options, b15, b2);
-        if (options.MatchPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.MatchPoints, "the match sweep needs at least 2 points");
+        RequireMatchPoints(options);
         var match = ArrayNetwork.Sweep(design, analysis, mLo, mHi, options.MatchPoints);
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling, MatchSweep = match };
+        DesignProcedure procedure = stick is TravellingWaveDesign tw ? new TravellingWaveProcedure(tw) : new StandingWaveProcedure();
+        return new ArrayResult(request, taper, slot, design, procedure, sweep, atDesign, points, b15, b2, match, warnings);
     }
 
     /// <summary>
-    /// <c>coupling: mutual</c>: Elliott's design (<see cref="ElliottDesigner"/>), the band analysed with the coupled
-    /// network (<see cref="CoupledArrayNetwork"/>), VSWR bands from that sweep, and the comparison with the isolated-slot design.
+    /// A coupled design (<c>coupling: mutual</c>: <see cref="ElliottDesigner"/> or <see cref="CoupledTravellingWaveDesigner"/>)
+    /// as cut: the band analysed with the coupled network (<see cref="CoupledArrayNetwork"/>), VSWR bands from that sweep,
+    /// and the comparison with the isolated-slot design it started from. For a travelling wave the procedure carries the
+    /// isolated-slot designer's layout figures (targets, squint, scan rate) with its design replaced by the coupled one.
     /// </summary>
-    private static ArrayResult RunCoupled(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
+    private static ArrayResult AnalyseCoupled(ArrayRequest request, TaperResult taper, IShuntSlotModel slot, StickDesign stick,
+        ArrayDesign design, AnalysisOptions options)
     {
-        if (request.Feed.Type == FeedType.TravellingWave) return RunCoupledTravelling(request, options, taper, slot);
-        var elliott = ElliottDesigner.Design(request, slot, taper.Weights,
-            options.Elliott with { Progress = options.Progress, Cancellation = options.Cancellation });
-        options.Cancellation.ThrowIfCancellationRequested();
-        var design = elliott.Design;
-        SlotClearance.Require(design, request.Slots.Cutter);
-        design = PrototypeMargin.Apply(design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
-        var comparison = ElliottComparison.Of(elliott, analysis, AnalysisModel(request, elliott.Uncoupled, slot, options),
-            request.BandLow, request.BandHigh);
-        var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).DistinctBy(w => w.Message).ToList();
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
+        DesignProcedure procedure = stick switch
         {
-            Coupling = comparison,
-            MatchSweep = CoupledMatchSweep(request, options, design, analysis, sweep),
+            ElliottResult elliott => new ElliottProcedure(ElliottComparison.Of(elliott, analysis,
+                AnalysisModel(request, elliott.Uncoupled, slot, options), request.BandLow, request.BandHigh)),
+            CoupledTravellingWaveDesign coupled => new CoupledTravellingWaveProcedure(coupled.Uncoupled with { Design = design },
+                CoupledTravellingWaveComparison.Of(coupled, analysis, AnalysisModel(request, coupled.Uncoupled.Design, slot, options),
+                    request.BandLow, request.BandHigh)),
+            _ => throw new ArgumentException($"{stick.GetType().Name} is not a coupled design", nameof(stick)),
         };
-    }
-
-    /// <summary>
-    /// <c>coupling: mutual</c> with a travelling-wave feed: <see cref="CoupledTravellingWaveDesigner"/>, the band analysed
-    /// with the coupled network (matched load), VSWR bands from that sweep, and the comparison with the isolated-slot
-    /// design. <see cref="ArrayResult.TravellingWave"/> carries the isolated-slot designer's layout figures (targets,
-    /// squint, scan rate) with its design replaced by the coupled one.
-    /// </summary>
-    private static ArrayResult RunCoupledTravelling(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
-    {
-        var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights,
-            CoupledTravellingWaveOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
-        options.Cancellation.ThrowIfCancellationRequested();
-        var design = result.Design;
-        SlotClearance.Require(design, request.Slots.Cutter);
-        design = PrototypeMargin.Apply(design, request.PrototypeMargin);
-        var outside = SlotTableRangeCheck.Check(design, slot);
-        var analysis = AnalysisModel(request, design, slot, options);
-        var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
-        var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
-        var comparison = CoupledTravellingWaveComparison.Of(result, analysis, AnalysisModel(request, result.Uncoupled.Design, slot, options),
-            request.BandLow, request.BandHigh);
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).DistinctBy(w => w.Message).ToList();
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
-        {
-            TravellingWave = result.Uncoupled with { Design = design },
-            CoupledTravellingWave = comparison,
-            MatchSweep = CoupledMatchSweep(request, options, design, analysis, sweep),
-        };
-    }
-
-    /// <summary>The match sweep of a coupled design, through the coupled network, over <see cref="MatchSpan.Resolve"/>.</summary>
-    private static FrequencySweep CoupledMatchSweep(ArrayRequest request, AnalysisOptions options, ArrayDesign design, IShuntSlotModel analysis, FrequencySweep sweep)
-    {
         var (lo, hi) = MatchSpan.Resolve(request, options, sweep.Band(1.5), sweep.Band(2.0));
+        RequireMatchPoints(options);
+        var match = CoupledArrayNetwork.Sweep(design, analysis, lo, hi, options.MatchPoints);
+        return new ArrayResult(request, taper, slot, design, procedure, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), match, warnings);
+    }
+
+    private static void RequireMatchPoints(AnalysisOptions options)
+    {
         if (options.MatchPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.MatchPoints, "the match sweep needs at least 2 points");
-        return CoupledArrayNetwork.Sweep(design, analysis, lo, hi, options.MatchPoints);
     }
 }

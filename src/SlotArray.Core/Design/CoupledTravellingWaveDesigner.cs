@@ -42,7 +42,7 @@ public sealed record CoupledTravellingWaveDesign(
     double ResidualDb,
     IReadOnlyList<double> History,
     NetworkSolution AtDesign,
-    double PhaseErrorDegrees);
+    double PhaseErrorDegrees) : StickDesign(Design);
 
 /// <summary>
 /// Travelling-wave array of longitudinal broad-wall slots designed with the external mutual coupling included: the
@@ -84,36 +84,27 @@ public sealed record CoupledTravellingWaveDesign(
 /// </remarks>
 public static class CoupledTravellingWaveDesigner
 {
-    /// <summary>Designs the array with the default options.</summary>
-    /// <param name="request">The validated request (travelling-wave feed, longitudinal slots).</param>
-    /// <param name="slot">The isolated-slot model (offset coupling).</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n, slot 1 (nearest the load) first.</param>
-    public static CoupledTravellingWaveDesign Design(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes)
-        => Design(request, slot, amplitudes, CoupledTravellingWaveOptions.Default);
-
     /// <summary>
     /// Designs the array (see remarks). Throws <see cref="InfeasibleDesignException"/> naming the slot when one must
     /// absorb more than a shunt slot can (p &gt; 0.5) or more than the slot model's largest conductance, and
     /// <see cref="ConvergenceException"/> when the fixed point does not reach the tolerance.
     /// </summary>
-    /// <param name="request">The validated request (travelling-wave feed, longitudinal slots).</param>
-    /// <param name="slot">The isolated-slot model (offset coupling).</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n, slot 1 (nearest the load) first; non-zero.</param>
-    /// <param name="options">Coupling model and tolerances.</param>
-    public static CoupledTravellingWaveDesign Design(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes,
-        CoupledTravellingWaveOptions options)
+    /// <param name="stick">The stick (travelling-wave feed; the isolated-slot model of longitudinal, offset-coupled slots;
+    /// amplitudes a_n non-zero, slot 1 nearest the load first).</param>
+    /// <param name="options">Coupling model and tolerances; null for <see cref="CoupledTravellingWaveOptions.Default"/>.</param>
+    public static CoupledTravellingWaveDesign Design(StickRequest stick, CoupledTravellingWaveOptions? options = null)
     {
-        ArgumentNullException.ThrowIfNull(request);
-        ArgumentNullException.ThrowIfNull(slot);
-        ArgumentNullException.ThrowIfNull(amplitudes);
-        ArgumentNullException.ThrowIfNull(options);
+        ArgumentNullException.ThrowIfNull(stick);
+        options ??= CoupledTravellingWaveOptions.Default;
+        var slot = stick.Slot;
+        var amplitudes = stick.Amplitudes;
         if (slot.CouplingKind != SlotCouplingKind.Offset)
-            throw new ArgumentException("the coupled travelling-wave designer is for longitudinal (offset) slots", nameof(slot));
+            throw new ArgumentException("the coupled travelling-wave designer is for longitudinal (offset) slots", nameof(stick));
         if (!(options.ToleranceDb > 0)) throw new ArgumentOutOfRangeException(nameof(options), options.ToleranceDb, "the tolerance must be positive (dB)");
         if (options.MaximumIterations < 1) throw new ArgumentOutOfRangeException(nameof(options), options.MaximumIterations, "at least one iteration is needed");
 
-        var start = TravellingWaveDesigner.Design(request, slot, amplitudes);
-        var f0 = request.DesignFrequency;
+        var start = TravellingWaveDesigner.Design(stick);
+        var f0 = stick.DesignFrequency;
         double loadFraction = start.LoadFraction;
         int n = start.Design.Count;
         double sumSquares = amplitudes.Sum(a => a * a);

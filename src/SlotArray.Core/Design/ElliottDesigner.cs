@@ -44,7 +44,7 @@ public sealed record ElliottIteration(int Index, double MaximumOffsetChange, dou
 /// <param name="SurrogateError">Largest |y_surrogate − y_direct|/|y_direct| over the final slots: the surrogate's interpolation error where it mattered.</param>
 /// <param name="Tolerance">The tolerance the iteration met (m).</param>
 public sealed record ElliottResult(ArrayDesign Design, ArrayDesign Uncoupled, IReadOnlyList<ElliottIteration> Iterations,
-    IReadOnlyList<Complex> ActiveAdmittances, double SurrogateError, double Tolerance);
+    IReadOnlyList<Complex> ActiveAdmittances, double SurrogateError, double Tolerance) : StickDesign(Design);
 
 /// <summary>
 /// Elliott's design procedure for a standing-wave array of longitudinal broad-wall shunt slots with external mutual
@@ -96,29 +96,27 @@ public static class ElliottDesigner
     /// outside the slot model's range, and <see cref="ConvergenceException"/> when the iteration does not meet the
     /// tolerance (naming the slot and the residual); never returns a partly converged design.
     /// </summary>
-    /// <param name="request">A standing-wave request of longitudinal slots.</param>
-    /// <param name="slot">An offset-coupled slot model.</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n (signed; none zero).</param>
+    /// <param name="stick">A standing-wave stick of longitudinal slots: an offset-coupled slot model, amplitudes a_n (signed; none zero).</param>
     /// <param name="options">Tolerance, iteration limit, coupling model.</param>
-    public static ElliottResult Design(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes, ElliottOptions? options = null)
+    public static ElliottResult Design(StickRequest stick, ElliottOptions? options = null)
     {
-        ArgumentNullException.ThrowIfNull(request);
-        ArgumentNullException.ThrowIfNull(slot);
-        ArgumentNullException.ThrowIfNull(amplitudes);
+        ArgumentNullException.ThrowIfNull(stick);
+        var slot = stick.Slot;
+        var amplitudes = stick.Amplitudes;
         options ??= ElliottOptions.Default;
         if (!(options.Tolerance > 0)) throw new ArgumentOutOfRangeException(nameof(options), options.Tolerance, "the tolerance must be positive");
         if (options.MaximumIterations < 1 || options.NewtonIterations < 1)
             throw new ArgumentOutOfRangeException(nameof(options), "Elliott's iteration needs at least one outer and one Newton iteration");
         if (slot.CouplingKind != SlotCouplingKind.Offset)
             throw new InfeasibleDesignException("Elliott's design with mutual coupling is implemented for longitudinal (offset) slots only: use coupling: none for edge slots");
-        var uncoupled = StandingWaveDesigner.Design(request, slot, amplitudes);
+        var uncoupled = StandingWaveDesigner.Design(stick).Design;
         var coupling = options.Coupling ?? CoupledSlotImpedances.HalfCosineCentreReferred;
-        var f0 = request.DesignFrequency;
-        var guide = request.Guide;
+        var f0 = stick.DesignFrequency;
+        var guide = stick.Guide;
         int n = uncoupled.Count;
         var surrogate = SurrogateFor(slot, f0);
         double scale = 1 / (ElliottDesignEquations.Gamma0(guide, f0) * PhysicalConstants.HalfWaveDipoleResistance);
-        double halves = request.Feed.Position == FeedPosition.Centre ? StandingWaveDesigner.CentreJunctionRatio : 1;
+        double halves = stick.Feed.Position == FeedPosition.Centre ? StandingWaveDesigner.CentreJunctionRatio : 1;
 
         var side = uncoupled.Slots.Select(s => (double)Math.Sign(s.Coupling)).ToArray();
         var x = uncoupled.Slots.Select(s => Math.Abs(s.Coupling)).ToArray();
@@ -163,7 +161,7 @@ public static class ElliottDesigner
             }
             history.Add(new ElliottIteration(it, dxMax, dlMax, worst + 1, (total - halves).Magnitude));
             if (Math.Max(dxMax, dlMax) < options.Tolerance)
-                return Finish(request, slot, uncoupled, surrogate, coupling, side, x, len, a, target, history, options.Tolerance);
+                return Finish(slot, uncoupled, surrogate, coupling, side, x, len, a, target, history, options.Tolerance);
         }
         var lastIt = history[^1];
         throw new ConvergenceException((
@@ -173,12 +171,12 @@ public static class ElliottDesigner
             options.MaximumIterations, Math.Max(lastIt.MaximumOffsetChange, lastIt.MaximumLengthChange));
     }
 
-    private static ElliottResult Finish(ArrayRequest request, IShuntSlotModel slot, ArrayDesign uncoupled, ElliottSlotSurrogate surrogate,
+    private static ElliottResult Finish(IShuntSlotModel slot, ArrayDesign uncoupled, ElliottSlotSurrogate surrogate,
         MutualImpedanceModel coupling, double[] side, double[] x, double[] len, double[] a, double[] target, List<ElliottIteration> history, double tolerance)
     {
         int n = x.Length;
-        var f0 = request.DesignFrequency;
-        var guide = request.Guide;
+        var f0 = uncoupled.DesignFrequency;
+        var guide = uncoupled.Guide;
         var z = coupling(Placements(uncoupled, side, x, len), uncoupled.Slots[0].Width, f0);
         var direct = new Complex[n];
         var fn = new double[n];

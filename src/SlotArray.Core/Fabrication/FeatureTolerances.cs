@@ -46,6 +46,21 @@ public sealed record FeatureTolerances(StatedTolerance Position, StatedTolerance
     }
 
     /// <summary>
+    /// The one ± tolerance printed on every cut-list row: the tightest of the spec's offset, length, position and width
+    /// tolerances (a normal σ counts as ±2σ, the 95 % band); without a tolerance block, or when none of them is positive,
+    /// routine precision CNC milling, ±0.025 mm (<see cref="GeneralTolerances.PrecisionMilling"/>, common practice, no source).
+    /// </summary>
+    /// <param name="spec">The spec's tolerance block, or null.</param>
+    public static Length CutListTolerance(ToleranceRequest? spec)
+    {
+        if (spec is null) return GeneralTolerances.PrecisionMilling;
+        var values = new[] { spec.Offset, spec.Length, spec.Position, spec.Width }
+            .Select(t => t.Distribution == ErrorDistribution.Normal ? 2 * t.Value.Meters : t.Value.Meters)
+            .Where(v => v > 0).ToArray();
+        return values.Length > 0 ? Quantities.Length.FromMeters(values.Min()) : GeneralTolerances.PrecisionMilling;
+    }
+
+    /// <summary>
     /// The tilt tolerance of an edge slot of length L: <see cref="Tilt"/> when the spec gives one; else the default
     /// milling tolerance ±0.025 mm taken as the error of the cutter's position at the slot's end, δθ = δx/(L/2) rad
     /// (common practice, no source: a CNC mill positions each end of the cut to its routine accuracy).

@@ -54,7 +54,7 @@ public static class ComparisonReportBuilder
         ArgumentNullException.ThrowIfNull(trim);
         var d = design.Design;
         var f0 = d.DesignFrequency;
-        bool coupledDesign = design.Coupling is not null || design.CoupledTravellingWave is not null;
+        bool coupledDesign = design.Procedure is ElliottProcedure or CoupledTravellingWaveProcedure;
         var analysis = ArrayPipeline.AnalysisModel(design.Request, d, design.SlotModel, AnalysisOptions.Default);
         NetworkSolution Predict(Frequency f) => coupledDesign ? CoupledArrayNetwork.Solve(d, analysis, f) : ArrayNetwork.Solve(d, analysis, f);
         var model = diagnosis.Model;

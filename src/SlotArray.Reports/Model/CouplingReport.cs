@@ -38,8 +38,9 @@ public sealed record CouplingReport
     public static CouplingReport? Of(ArrayResult result)
     {
         ArgumentNullException.ThrowIfNull(result);
-        if (result.CoupledTravellingWave is { } t)
-            return new CouplingReport
+        return result.Procedure switch
+        {
+            CoupledTravellingWaveProcedure { Comparison: var t } => new CouplingReport
             {
                 Coupled = CoupledDesignFigures.Of(t.Coupled),
                 Uncoupled = CoupledDesignFigures.Of(t.Uncoupled),
@@ -47,15 +48,16 @@ public sealed record CouplingReport
                 Tolerance = 0,
                 SurrogateError = double.NaN,
                 TravellingWaveResidualsDb = t.Result.History,
-            };
-        if (result.Coupling is not { } c) return null;
-        return new CouplingReport
-        {
-            Coupled = CoupledDesignFigures.Of(c.Coupled),
-            Uncoupled = CoupledDesignFigures.Of(c.Uncoupled),
-            Iterations = c.Elliott.Iterations,
-            Tolerance = c.Elliott.Tolerance,
-            SurrogateError = c.Elliott.SurrogateError,
+            },
+            ElliottProcedure { Comparison: var c } => new CouplingReport
+            {
+                Coupled = CoupledDesignFigures.Of(c.Coupled),
+                Uncoupled = CoupledDesignFigures.Of(c.Uncoupled),
+                Iterations = c.Elliott.Iterations,
+                Tolerance = c.Elliott.Tolerance,
+                SurrogateError = c.Elliott.SurrogateError,
+            },
+            _ => null,
         };
     }
 }

@@ -58,7 +58,7 @@ public static class DesignReportBuilder
         var design = result.Design;
         var guide = design.Guide;
         var f0 = design.DesignFrequency;
-        double tolerance = CutTolerance(request.Tolerance);
+        double tolerance = FeatureTolerances.CutListTolerance(request.Tolerance).Meters;
         plan ??= FabricationPlan.Build(design, request.Feed.Type, request.Slots.Cutter, request.Tolerance);
         var atDesign = result.AtDesign;
         var slots = Slots(result, plan);
@@ -71,11 +71,17 @@ public static class DesignReportBuilder
         foreach (var b in new[] { result.BandVswr15, result.BandVswr2 })
             if (b is { } band && (band.LowLimited || band.HighLimited))
                 warnings.Add(string.Create(Inv, $"the VSWR ≤ {band.VswrLimit:0.0#} band reaches the edge of the search range ({band.Low} to {band.High}): it is at least as wide as reported"));
+        var travelling = result.Procedure switch
+        {
+            TravellingWaveProcedure p => p.TravellingWave,
+            CoupledTravellingWaveProcedure p => p.TravellingWave,
+            _ => null,
+        };
         var safety = ArraySafety.Assess(result);
         var verdicts = RequirementChecks.Evaluate(result, safety);
         warnings.AddRange(verdicts.Notes.Select(n => n.Message));
         // Over-stress is a FAIL verdict and also a warning, so the console shows it as it happens.
-        warnings.AddRange(safety.Cautions.Where(c => c.Code == "power-handling-exceeded").Select(c => c.Message));
+        warnings.AddRange(safety.OverStress.Select(c => c.Message));
 
         return new DesignReport
         {
@@ -139,9 +145,7 @@ public static class DesignReportBuilder
                 HpbwDeg = p.Metrics.HalfPowerBeamwidth.Degrees,
                 CrossPolarDb = p.CrossPolar?.PeakLevelDb,
             })],
-            MatchSweep = result.MatchSweep is { } ms
-                ? [.. ms.Points.Select(n => new MatchPoint { FrequencyHz = n.Frequency.Hertz, S11 = n.S11 })]
-                : [],
+            MatchSweep = [.. result.MatchSweep.Points.Select(n => new MatchPoint { FrequencyHz = n.Frequency.Hertz, S11 = n.S11 })],
             Inputs = new InputsSummary
             {
                 SlotType = SlotTypeName(request.Slots.Type),
@@ -155,15 +159,11 @@ public static class DesignReportBuilder
             Fabrication = plan,
             Document = document ?? DocumentInfo.Unnamed,
             Cautions = [.. safety.Cautions.Select(c => c.Message)],
-            SafetyExceedances = [.. safety.Cautions.Where(c => c.Code.EndsWith("-exceeded", StringComparison.Ordinal)).Select(c => c.Message)],
-            Eirp = request.Transmitter is { } tx ? new EirpReport
-            {
-                PeakW = tx.PeakPower is { } pk ? EffectiveRadiatedPower.Watts(pk, atDesign.GainDbi) : null,
-                AverageW = tx.AveragePower is { } av ? EffectiveRadiatedPower.Watts(av, atDesign.GainDbi) : null,
-            } : null,
+            SafetyExceedances = [.. safety.Exceedances.Select(c => c.Message)],
+            Eirp = request.Transmitter is not null ? new EirpReport { PeakW = safety.PeakEirpWatts, AverageW = safety.AverageEirpWatts } : null,
             Requirements = Requirements(verdicts, result),
-            Load = result.TravellingWave is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
-            TravellingWave = result.TravellingWave is { } t ? TravellingWaveOf(result, t) : null,
+            Load = travelling is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
+            TravellingWave = travelling is { } t ? TravellingWaveOf(result, t) : null,
             Coupling = CouplingReport.Of(result),
         };
     }
@@ -175,16 +175,7 @@ public static class DesignReportBuilder
     private static TravellingWaveReport TravellingWaveOf(ArrayResult result, TravellingWaveDesign tw)
     {
         var n = result.AtDesign.Network;
-        // Least-squares slope of the network beam direction against frequency over the sweep.
-        var pts = result.SweepFigures;
-        double slope = double.NaN;
-        if (pts.Count >= 2)
-        {
-            double mf = pts.Average(p => p.Frequency.Hertz), mb = pts.Average(p => p.Metrics.BeamDirection.Degrees);
-            double sxy = pts.Sum(p => (p.Frequency.Hertz - mf) * (p.Metrics.BeamDirection.Degrees - mb));
-            double sxx = pts.Sum(p => (p.Frequency.Hertz - mf) * (p.Frequency.Hertz - mf));
-            slope = sxx > 0 ? sxy / sxx * 1e8 : double.NaN;
-        }
+        double slope = BeamScan.DegreesPer100MHz(result.SweepFigures);
         return new TravellingWaveReport
         {
             SquintDeg = tw.Squint?.Degrees ?? double.NaN,
@@ -198,36 +189,15 @@ public static class DesignReportBuilder
         };
     }
 
-    /// <summary>
-    /// The ± tolerance printed on every cut-list row: the tightest of the spec's offset, length, position and width
-    /// tolerances (a normal σ counts as ±2σ, the 95 % band); without a tolerance block, routine precision CNC milling,
-    /// ±0.025 mm (<see cref="GeneralTolerances.PrecisionMilling"/>, common practice, no source).
-    /// </summary>
-    /// <param name="tolerance">The spec's tolerance block, or null.</param>
-    public static double CutTolerance(ToleranceRequest? tolerance)
-    {
-        if (tolerance is null) return GeneralTolerances.PrecisionMilling.Meters;
-        var values = new[] { tolerance.Offset, tolerance.Length, tolerance.Position, tolerance.Width }
-            .Select(t => t.Distribution == ErrorDistribution.Normal ? 2 * t.Value.Meters : t.Value.Meters)
-            .Where(v => v > 0).ToArray();
-        return values.Length > 0 ? values.Min() : GeneralTolerances.PrecisionMilling.Meters;
-    }
-
     private static List<SlotReport> Slots(ArrayResult result, FabricationPlan plan)
     {
         var design = result.Design;
-        var e = result.AtDesign.Network.Excitations;
-        double targetPeak = design.Slots.Max(s => Math.Abs(s.TargetAmplitude));
-        double achievedPeak = e.Max(x => x.Magnitude);
-        int reference = Enumerable.Range(0, e.Count).First(i => e[i].Magnitude == achievedPeak);
-        double phase0 = e[reference].Phase;
+        var excitation = RelativeExcitation.Of(design, result.AtDesign.Network);
         var list = new List<SlotReport>(design.Count);
         for (int i = 0; i < design.Count; i++)
         {
             var s = design.Slots[i];
             var row = plan.Slots[i].Row;
-            double phase = (e[i].Phase - phase0) * 180 / Math.PI;
-            phase = Math.IEEERemainder(phase, 360);
             list.Add(new SlotReport
             {
                 Index = s.Index,
@@ -240,9 +210,9 @@ public static class DesignReportBuilder
                 Width = s.Width.Meters,
                 EndForm = row.End.Form == Core.Fabrication.SlotEndForm.Round ? SlotEndForm.Round : SlotEndForm.Square,
                 Conductance = s.Conductance,
-                TargetAmplitude = s.TargetAmplitude / targetPeak,
-                AchievedAmplitude = e[i].Magnitude / achievedPeak,
-                AchievedPhaseDeg = phase,
+                TargetAmplitude = excitation[i].TargetAmplitude,
+                AchievedAmplitude = excitation[i].AchievedAmplitude,
+                AchievedPhaseDeg = excitation[i].AchievedPhaseDegrees,
             });
         }
         return list;
