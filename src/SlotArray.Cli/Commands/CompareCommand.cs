@@ -39,6 +39,28 @@ internal static class CompareCommand
         return cmd;
     }
 
+    /// <summary>
+    /// The cut plate's drawing number, revision and sheet from its design.json (fabrication section); revision A and the
+    /// array's name when the folder has none (an older design folder).
+    /// </summary>
+    private static DocumentInfo CutDocument(string dir)
+    {
+        string path = Path.Combine(dir, "design.json");
+        if (!File.Exists(path)) return DocumentInfo.Unnamed;
+        try
+        {
+            using var doc = System.Text.Json.JsonDocument.Parse(File.ReadAllText(path));
+            if (!doc.RootElement.TryGetProperty("fabrication", out var fab)) return DocumentInfo.Unnamed;
+            string? Str(string key) => fab.TryGetProperty(key, out var v) && v.ValueKind == System.Text.Json.JsonValueKind.String ? v.GetString() : null;
+            string revision = Str("revision") is { Length: 1 or 2 } r && r.All(char.IsAsciiLetterUpper) && r != "ZZ" ? r : "A";
+            return DocumentInfo.Unnamed with { DrawingNumber = Str("drawing_number"), Revision = revision };
+        }
+        catch (System.Text.Json.JsonException)
+        {
+            throw new UserInputException($"{path}: not readable JSON: give the output folder of 'slotarray design' unchanged (or design again)");
+        }
+    }
+
     private static int Run(string dir, string[] files, string? outDir, string? cutFrequency, string? cutPlane, string? cutPolarisation,
         SlotCache? cache, TextWriter output, TextWriter error)
     {
@@ -128,11 +150,18 @@ internal static class CompareCommand
         if (next is not null)
         {
             string original = File.ReadAllText(spec);
-            var nextReport = DesignReportBuilder.Build(next) with
+            string nextSpec = "# Next plate designed by 'slotarray compare' on the slot model corrected by the prototype's fit.\n"
+                + "# This spec is the prototype's: designing it again does not reproduce this plate (see comparison.md).\n" + original;
+            // The next plate is the next revision of the cut plate's drawing: its letter advanced, the rows that changed flagged.
+            var cutDocument = CutDocument(dir);
+            var document = cutDocument with
             {
-                SpecText = "# Next plate designed by 'slotarray compare' on the slot model corrected by the prototype's fit.\n"
-                    + "# This spec is the prototype's: designing it again does not reproduce this plate (see comparison.md).\n" + original,
+                Revision = NextPlate.NextRevision(cutDocument.Revision),
+                Date = null,
+                SpecSha256 = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(System.Text.Encoding.UTF8.GetBytes(nextSpec))),
             };
+            var nextReport = DesignReportBuilder.Build(next, document, NextPlate.Plan(next, result)) with { SpecText = nextSpec };
+            error.WriteLine($"next plate: revision {document.Revision} of drawing {document.DrawingNumber ?? request.Name} ({nextReport.Fabrication?.Changed.Count ?? 0} features changed)");
             OutputFolder.WriteAll(nextReport, Path.Combine(folder, "next-plate"));
         }
         output.Write(text);

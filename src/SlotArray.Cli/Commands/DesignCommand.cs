@@ -167,6 +167,13 @@ internal static class DesignCommand
     }
 
     /// <summary>
+    /// Composition-root seam for the command-line tests: Elliott's iteration limits for the runs started in the current
+    /// asynchronous flow (null: the defaults). Lets a test drive a real spec into a non-converging iteration and check the
+    /// command's exit code and message, without touching other runs in the same process.
+    /// </summary>
+    internal static readonly AsyncLocal<ElliottOptions?> ElliottLimits = new();
+
+    /// <summary>
     /// Runs the pipeline with the slot cache (when given), printing what it does to <paramref name="error"/>, with a
     /// progress bar when <paramref name="progress"/>; Ctrl-C stops it (<see cref="CommandLine.Cancellation"/>).
     /// </summary>
@@ -177,6 +184,7 @@ internal static class DesignCommand
     internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error, bool progress, out SlotSource slotSource,
         AnalysisOptions? options = null)
     {
+        if (ElliottLimits.Value is { } limits) options = (options ?? AnalysisOptions.Default) with { Elliott = limits };
         var source = SourceFor(request, cache, error, out int loaded);
         slotSource = source;
         error.WriteLine(string.Format(Inv, "designing '{0}': {1} slots at {2:0.####} GHz, analysing {3:0.####} to {4:0.####} GHz{5} ...",

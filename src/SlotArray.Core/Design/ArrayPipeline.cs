@@ -45,6 +45,9 @@ internal sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchF
 
     /// <summary>Stops the run between steps, iterations and sweep points with an <see cref="OperationCanceledException"/>.</summary>
     public CancellationToken Cancellation { get; init; }
+
+    /// <summary><c>coupling: mutual</c> standing-wave designs: the limits of Elliott's iteration (<see cref="ElliottDesigner"/>); progress and cancellation are this run's.</summary>
+    public ElliottOptions Elliott { get; init; } = ElliottOptions.Default;
 }
 
 /// <summary>Everything one run computes: the taper, the slot model, the design and its analysis across the band.</summary>
@@ -131,7 +134,7 @@ internal static class ArrayPipeline
         if (coupling == CouplingMode.Mutual)
             return travelling
                 ? CoupledTravellingWaveDesigner.Design(stick, CoupledTravellingWaveOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation })
-                : ElliottDesigner.Design(stick, ElliottOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
+                : ElliottDesigner.Design(stick, options.Elliott with { Progress = options.Progress, Cancellation = options.Cancellation });
         return stick.Feed.Type switch
         {
             FeedType.StandingWave => StandingWaveDesigner.Design(stick),

@@ -23,6 +23,9 @@ internal sealed record ElliottOptions(double Tolerance = 1e-7, int MaximumIterat
 
     /// <summary>Stops the iteration with an <see cref="OperationCanceledException"/>.</summary>
     public CancellationToken Cancellation { get; init; }
+
+    /// <summary>Newton steps allowed per slot and outer iteration before <see cref="ConvergenceException"/>; default 60, ≥ 1.</summary>
+    public int NewtonIterations { get; init; } = 60;
 }
 
 /// <summary>One outer iteration of Elliott's procedure.</summary>
@@ -75,8 +78,6 @@ internal sealed record ElliottResult(ArrayDesign Design, ArrayDesign Uncoupled, 
 /// </remarks>
 internal static class ElliottDesigner
 {
-    private const int NewtonIterations = 60;
-
     private static readonly ConditionalWeakTable<IShuntSlotModel, ConcurrentDictionary<double, ElliottSlotSurrogate>> Surrogates = new();
 
     /// <summary>
@@ -104,6 +105,8 @@ internal static class ElliottDesigner
         var amplitudes = stick.Amplitudes;
         options ??= ElliottOptions.Default;
         if (!(options.Tolerance > 0)) throw new ArgumentOutOfRangeException(nameof(options), options.Tolerance, "the tolerance must be positive");
+        if (options.MaximumIterations < 1 || options.NewtonIterations < 1)
+            throw new ArgumentOutOfRangeException(nameof(options), "Elliott's iteration needs at least one outer and one Newton iteration");
         if (slot.CouplingKind != SlotCouplingKind.Offset)
             throw new InfeasibleDesignException("Elliott's design with mutual coupling is implemented for longitudinal (offset) slots only: use coupling: none for edge slots");
         var uncoupled = StandingWaveDesigner.Design(stick).Design;
@@ -148,7 +151,7 @@ internal static class ElliottDesigner
             int worst = 0;
             for (int i = 0; i < n; i++)
             {
-                var (xi, li) = SolveSlot(surrogate, guide, f0, i, x[i], len[i], c[i], target[i]);
+                var (xi, li) = SolveSlot(surrogate, guide, f0, i, x[i], len[i], c[i], target[i], options.NewtonIterations);
                 double dx = Math.Abs(xi - x[i]), dl = Math.Abs(li - len[i]);
                 if (Math.Max(dx, dl) > Math.Max(dxMax, dlMax)) worst = i;
                 dxMax = Math.Max(dxMax, dx);
@@ -216,7 +219,7 @@ internal static class ElliottDesigner
     /// Damped 2-D Newton for slot i: 1/y(x, L) + C/f(x, L)² − 1/T = 0 (real and imaginary parts), scaled by T.
     /// </summary>
     private static (double X, double L) SolveSlot(ElliottSlotSurrogate s, Waveguides.RectangularWaveguide guide, Frequency f0, int i,
-        double x, double l, Complex c, double t)
+        double x, double l, Complex c, double t, int newtonIterations)
     {
         double xMin = 0.25 * s.MinimumOffset, xMax = s.MaximumOffset;
         Complex R(double xx, double ll)
@@ -225,7 +228,7 @@ internal static class ElliottDesigner
             return t * (1 / s.Admittance(xx, ll) + c / (ff * ff)) - 1;
         }
         var r = R(x, l);
-        for (int k = 0; k < NewtonIterations; k++)
+        for (int k = 0; k < newtonIterations; k++)
         {
             double res = r.Magnitude;
             if (res < 1e-13) return (x, l);
@@ -264,7 +267,8 @@ internal static class ElliottDesigner
                 FormattableString.Invariant($"and lengths {ElliottSlotSurrogate.MinimumRatio:0.00}–{ElliottSlotSurrogate.MaximumRatio:0.00} of resonance (stopped at x = {x * 1e3:0.###} mm, ") +
                 FormattableString.Invariant($"L = {l * 1e3:0.###} mm, residual {r.Magnitude:G3}): use more slots or a gentler taper")));
         throw new ConvergenceException((
-            FormattableString.Invariant($"slot {i + 1}: Newton on Elliott's equations stopped with residual {r.Magnitude:G3} at x = {x * 1e3:0.####} mm, L = {l * 1e3:0.####} mm")),
-            NewtonIterations, r.Magnitude);
+            FormattableString.Invariant($"slot {i + 1}: Newton on Elliott's equations stopped with residual {r.Magnitude:G3} at x = {x * 1e3:0.####} mm, L = {l * 1e3:0.####} mm ") +
+            FormattableString.Invariant($"(active conductance {t:0.0000} asked of it): the coupling is too strong for this slot; use a gentler taper, more slots or coupling: none")),
+            newtonIterations, r.Magnitude);
     }
 }

@@ -66,8 +66,19 @@ internal struct TrialRandom
     public double Draw(MachiningTolerance tolerance)
     {
         ArgumentNullException.ThrowIfNull(tolerance);
-        double v = tolerance.Value.Meters;
-        if (tolerance.Distribution == ErrorDistribution.Normal) return v == 0 ? Discard(0.0) : v * NextNormal();
+        return Draw(tolerance.Value.Meters, tolerance.Distribution);
+    }
+
+    /// <summary>One tilt error, rad, by the same rule as <see cref="Draw(MachiningTolerance)"/>.</summary>
+    public double Draw(AngleTolerance tolerance)
+    {
+        ArgumentNullException.ThrowIfNull(tolerance);
+        return Draw(tolerance.Value.Radians, tolerance.Distribution);
+    }
+
+    private double Draw(double v, ErrorDistribution law)
+    {
+        if (law == ErrorDistribution.Normal) return v == 0 ? Discard(0.0) : v * NextNormal();
         double u = NextUniform();
         NextUniform();
         return v == 0 ? 0.0 : v * (2 * u - 1);

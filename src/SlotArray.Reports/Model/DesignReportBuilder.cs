@@ -6,6 +6,7 @@ using SlotArray.Core;
 using SlotArray.Core.Design;
 using SlotArray.Core.Fabrication;
 using SlotArray.Core.Network;
+using SlotArray.Core.Patterns;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Safety;
 using SlotArray.Core.Slots;
@@ -48,8 +49,9 @@ internal static class DesignReportBuilder
     /// <summary>Builds the report of one pipeline run.</summary>
     /// <param name="result">The pipeline's result.</param>
     /// <param name="document">Drawing number, revision, date and spec checksum for the fabrication documents; null: <see cref="DocumentInfo.Unnamed"/>.</param>
+    /// <param name="plan">The fabrication plan, e.g. a next plate's with its changes flagged (<see cref="Core.Prototype.NextPlate.Plan"/>); null: the design's own, a first issue.</param>
     /// <exception cref="Core.InfeasibleDesignException">A slot cannot be cut as designed (it reaches the side wall, or the cutter is wider than the slot).</exception>
-    public static DesignReport Build(ArrayResult result, DocumentInfo? document = null)
+    public static DesignReport Build(ArrayResult result, DocumentInfo? document = null, FabricationPlan? plan = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         var request = result.Request;
@@ -57,7 +59,7 @@ internal static class DesignReportBuilder
         var guide = design.Guide;
         var f0 = design.DesignFrequency;
         double tolerance = FeatureTolerances.CutListTolerance(request.Tolerance).Meters;
-        var plan = FabricationPlan.Build(design, request.Feed.Type, request.Slots.Cutter, request.Tolerance);
+        plan ??= FabricationPlan.Build(design, request.Feed.Type, request.Slots.Cutter, request.Tolerance);
         var atDesign = result.AtDesign;
         var slots = Slots(result, plan);
         var outside = SlotTableRangeCheck.Outside(design, result.SlotModel).Select(o => o.Index).ToHashSet();
@@ -151,6 +153,8 @@ internal static class DesignReportBuilder
     {
         var request = result.Request;
         var atDesign = result.AtDesign;
+        var design = result.Design;
+        var face = FiniteFaceBeamwidth.SlottedFaceWidth(design.Guide, design.CouplingKind == SlotCouplingKind.Tilt);
         return new PatternReport
         {
             BeamDeg = atDesign.Metrics.BeamDirection.Degrees,
@@ -165,6 +169,8 @@ internal static class DesignReportBuilder
             CrossPolarDb = atDesign.CrossPolar?.PeakLevelDb,
             CrossPolarDirectionDeg = atDesign.CrossPolar?.PeakDirection.Degrees,
             CrossCutLevelDb = atDesign.CrossPolar is { } x ? CrossLevels(x, atDesign.Pattern.PeakPower) : [],
+            TransverseFaceWidth = face.Meters,
+            TransverseHpbwLowerBoundDeg = FiniteFaceBeamwidth.LowerBound(face, request.DesignFrequency)?.Degrees ?? double.NaN,
         };
     }
 

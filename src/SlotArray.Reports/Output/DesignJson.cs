@@ -185,6 +185,8 @@ internal static class DesignJson
         w.WriteEndObject();
         if (p.CrossPolarDb is { } xp) Num(w, "cross_polar_db", xp);
         if (p.CrossPolarDirectionDeg is { } xd) Num(w, "cross_polar_direction_deg", xd);
+        Num(w, "transverse_face_width_m", p.TransverseFaceWidth);
+        Num(w, "transverse_hpbw_lower_bound_deg", p.TransverseHpbwLowerBoundDeg);
         w.WriteEndObject();
     }
 
@@ -447,6 +449,8 @@ internal static class DesignJson
             CrossCutLevelDb = p.GetProperty("cut").TryGetProperty("cross_level_db", out var xc) ? Doubles(xc) : [],
             CrossPolarDb = OptD(p, "cross_polar_db"),
             CrossPolarDirectionDeg = OptD(p, "cross_polar_direction_deg"),
+            TransverseFaceWidth = D(p, "transverse_face_width_m"),
+            TransverseHpbwLowerBoundDeg = D(p, "transverse_hpbw_lower_bound_deg"),
         };
     }
 

@@ -118,7 +118,11 @@ internal static class DesignJsonSchema
         ("design_sidelobe_db", N("the taper's design sidelobe level, dB"), true),
         ("cut", Obj("the pattern cut", ("angle_deg", NumArr("angles, deg"), true), ("level_db", NumArr("co-polar level, dB"), true),
             ("cross_level_db", NumArr("cross-polar level, dB (edge slots)"), false)), true),
-        ("cross_polar_db", N("peak cross-polar level, dB"), false), ("cross_polar_direction_deg", N("its direction, deg"), false));
+        ("cross_polar_db", N("peak cross-polar level, dB"), false), ("cross_polar_direction_deg", N("its direction, deg"), false),
+        ("transverse_face_width_m", N("outside width of the slotted face (a + 2t broad-wall, b + 2t edge slots), m"), true),
+        ("transverse_hpbw_lower_bound_deg", N("lower bound on the transverse-plane (E-plane) half-power beamwidth from that width "
+            + "(uniform aperture of the face's width; the true beam is broader, edge diffraction); null when the face is narrower "
+            + "than 0.443 wavelength and the pattern wraps behind the tube, deg"), true));
 
     /// <summary>The fabrication plan.</summary>
     private static JsonObject FabricationSchema() => Obj("the fabrication plan: datum A (the tube's machined end face), tube length, features and each slot's tolerances, SI, from datum A",

@@ -105,6 +105,10 @@ internal static class SummaryMarkdown
         }
         L($"| beam direction from broadside | {Invariant.Fixed(p.BeamDeg, 2)} | deg |");
         L($"| half-power beamwidth | {Invariant.Fixed(p.HpbwDeg, 2)} | deg |");
+        if (!double.IsNaN(p.TransverseFaceWidth))
+            L(double.IsNaN(p.TransverseHpbwLowerBoundDeg)
+                ? $"| transverse-plane (E-plane) half-power beamwidth, slotted face {Invariant.Mm(p.TransverseFaceWidth)} mm wide | no beam: wider than the front half-space | (see note) |"
+                : $"| transverse-plane (E-plane) half-power beamwidth, slotted face {Invariant.Mm(p.TransverseFaceWidth)} mm wide | ≥ {Invariant.Fixed(p.TransverseHpbwLowerBoundDeg, 1)} | deg (lower bound, see note) |");
         L($"| peak sidelobe (design level {Invariant.Fixed(p.DesignSidelobeDb, 1)} dB) | {Invariant.Fixed(p.PeakSidelobeDb, 2)} | dB |");
         L($"| first sidelobe | {Invariant.Fixed(p.FirstSidelobeDb, 2)} | dB |");
         L($"| directivity | {Invariant.Fixed(p.DirectivityDbi, 2)} | dBi |");
@@ -137,6 +141,17 @@ internal static class SummaryMarkdown
             L($"| scan rate, phase condition / network sweep | {Invariant.Fixed(tw.ScanDegPer100MHz, 3)} / {Invariant.Fixed(tw.ScanFromSweepDegPer100MHz, 3)} | deg per 100 MHz |");
             L($"| designer: network refinement iterations, final residual | {Invariant.Int(tw.RefinementIterations)}, {Invariant.Fixed(tw.RefinementResidualDb, 6)} | –, dB |");
             L($"| largest slot phase departure from the travelling-wave progression | {Invariant.Fixed(tw.PhaseErrorDeg, 2)} | deg |");
+        }
+        if (!double.IsNaN(p.TransverseFaceWidth))
+        {
+            L("");
+            L("Transverse plane (perpendicular to the guide axis, the slots' E-plane): on an infinite ground plane a slot radiates "
+              + "uniformly over the half-space in this plane, so the beam here is set by the width w of the slotted face alone. "
+              + "Model: a lower bound, the uniform aperture of width w, HPBW ≥ 2 asin(0.443 λ/w) (about 50.8 λ/w deg for w ≫ λ; "
+              + "Balanis, Antenna Theory, 3rd ed., 2005, Table 12.1). Limit: the face is not uniformly lit; its edges diffract the "
+              + "slot's grazing field (GTD), which broadens and ripples the beam and radiates behind the tube, so the true beamwidth is "
+              + "wider; a face narrower than 0.443 λ forms no beam at all (the pattern wraps round the tube, as in an omnidirectional "
+              + "slotted tube). For sector and omnidirectional builds measure it or model the tube full-wave.");
         }
     }
 

@@ -139,6 +139,9 @@ internal static class StarterSpec
                 common["name"] = "deck-radar-32";
                 common["frequency"] = "9.41 GHz"; common["band"] = "[9.35 GHz, 9.47 GHz]";
                 common["slots.type"] = "edge"; common["slots.count"] = "32";
+                // Edge slots' machining errors are the tilt and the depth of cut, not an offset.
+                common.Remove("tolerance.offset"); common.Remove("tolerance.systematic.offset");
+                common["tolerance.tilt"] = "0.1 deg"; common["tolerance.depth"] = "0.02 mm";
                 common["feed.type"] = "travelling-wave"; common["feed.spacing"] = "20 mm"; common["feed.load"] = "5 %";
                 common["taper.sidelobes"] = "-25 dB";
                 common["requirements.sidelobes"] = "-20 dB";
