@@ -147,25 +147,28 @@ internal static class CompareCommand
             var overlay = report.Cuts[i];
             AtomicFile.Write(Path.Combine(folder, string.Format(CultureInfo.InvariantCulture, "cut-{0}.png", i + 1)), s => PlotExport.Write(ComparePlots.Cut(overlay), s, "png"));
         }
-        if (next is not null)
-        {
-            string original = File.ReadAllText(spec);
-            string nextSpec = "# Next plate designed by 'slotarray compare' on the slot model corrected by the prototype's fit.\n"
-                + "# This spec is the prototype's: designing it again does not reproduce this plate (see comparison.md).\n" + original;
-            // The next plate is the next revision of the cut plate's drawing: its letter advanced, the rows that changed flagged.
-            var cutDocument = CutDocument(dir);
-            var document = cutDocument with
-            {
-                Revision = NextPlate.NextRevision(cutDocument.Revision),
-                Date = null,
-                SpecSha256 = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(System.Text.Encoding.UTF8.GetBytes(nextSpec))),
-            };
-            var nextReport = DesignReportBuilder.Build(next, document, NextPlate.Plan(next, result)) with { SpecText = nextSpec };
-            error.WriteLine($"next plate: revision {document.Revision} of drawing {document.DrawingNumber ?? request.Name} ({nextReport.Fabrication?.Changed.Count ?? 0} features changed)");
-            OutputFolder.WriteAll(nextReport, Path.Combine(folder, "next-plate"));
-        }
+        if (next is not null) WriteNextPlate(spec, dir, folder, next, result, request, error);
         output.Write(text);
         error.WriteLine($"wrote {folder}/: comparison.md, trim.csv{(data.Network is null ? "" : ", return-loss.png, vswr.png")}{string.Concat(report.Cuts.Select((_, i) => $", cut-{i + 1}.png"))}{(next is null ? "" : ", next-plate/")}");
         return ExitCodes.Ok;
+    }
+
+    /// <summary>The next plate: the next revision of the cut plate's drawing, its letter advanced, the changed rows flagged.</summary>
+    private static void WriteNextPlate(string spec, string dir, string folder, ArrayResult next, ArrayResult result, ArrayRequest request, TextWriter error)
+    {
+        string original = File.ReadAllText(spec);
+        string nextSpec = "# Next plate designed by 'slotarray compare' on the slot model corrected by the prototype's fit.\n"
+            + "# This spec is the prototype's: designing it again does not reproduce this plate (see comparison.md).\n" + original;
+        // The next plate is the next revision of the cut plate's drawing: its letter advanced, the rows that changed flagged.
+        var cutDocument = CutDocument(dir);
+        var document = cutDocument with
+        {
+            Revision = NextPlate.NextRevision(cutDocument.Revision),
+            Date = null,
+            SpecSha256 = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(System.Text.Encoding.UTF8.GetBytes(nextSpec))),
+        };
+        var nextReport = DesignReportBuilder.Build(next, document, NextPlate.Plan(next, result)) with { SpecText = nextSpec };
+        error.WriteLine($"next plate: revision {document.Revision} of drawing {document.DrawingNumber ?? request.Name} ({nextReport.Fabrication?.Changed.Count ?? 0} features changed)");
+        OutputFolder.WriteAll(nextReport, Path.Combine(folder, "next-plate"));
     }
 }

@@ -21,7 +21,7 @@ namespace SlotArray.Core.Patterns;
 /// the pattern fills it and wraps behind the tube, the omnidirectional behaviour of a slotted narrow tube, and no
 /// beamwidth is given (<see cref="LowerBound"/> returns null). Use a full-wave model or a measurement for the figure itself.</para>
 /// </remarks>
-public static class FiniteFaceBeamwidth
+internal static class FiniteFaceBeamwidth
 {
     /// <summary>x₁/₂ with sin x / x = 1/√2: the half-power argument of the uniform line source.</summary>
     public const double HalfPowerArgument = 1.3915573782515103;
