@@ -144,7 +144,7 @@ internal static class TravellingWaveDesigner
         var history = new List<double>();
         if (options.Refine)
             targets = Refine(new LineNetwork(guide, positions, Termination.MatchedLoadAt(end), null, feedPlane), f0, signs, shape,
-                loadFraction, g, history, options);
+                loadFraction, g, history, options, DesignAdmittance(slot, f0));
 
         CheckConductances(g, slot, f0, loadFraction);
         var warnings = new List<DesignWarning>();
@@ -187,13 +187,13 @@ internal static class TravellingWaveDesigner
     /// isolated-slot line, one residual per network solution appended to <paramref name="history"/>; returns the last targets T_n.
     /// </summary>
     private static double[] Refine(LineNetwork line, Frequency f0, double[] signs, double[] shape, double loadFraction, double[] g,
-        List<double> history, TravellingWaveOptions options)
+        List<double> history, TravellingWaveOptions options, Func<double, Complex> admittanceOf)
     {
         int n = g.Length;
         var y = new Complex[n];
         while (true)
         {
-            for (int i = 0; i < n; i++) y[i] = g[i];
+            for (int i = 0; i < n; i++) y[i] = admittanceOf(g[i]);
             var sol = line.Solve(f0, y, signs);
             int iterations = history.Count + 1;
             double budget = 1 - loadFraction - sol.WallLoss - sol.ReflectedPower;
@@ -220,6 +220,23 @@ internal static class TravellingWaveDesigner
                 g[i] = TravellingWaveConductances.SingleShuntConductance(p);
             }
         }
+    }
+
+    /// <summary>
+    /// The admittance a slot designed for conductance g presents at f0: g itself for a model whose design cut is resonant;
+    /// the complex y of the cut <see cref="IShuntSlotModel.ForConductance"/> gives when the model says the cut may carry a
+    /// susceptance (<see cref="IShuntSlotModel.DesignsOffResonance"/>), so the refinement balances the powers the slots
+    /// really take.
+    /// </summary>
+    internal static Func<double, Complex> DesignAdmittance(IShuntSlotModel slot, Frequency f0)
+    {
+        if (!slot.DesignsOffResonance) return g => g;
+        return g =>
+        {
+            if (g > slot.MaximumConductance(f0)) return g;
+            var r = slot.ForConductance(g, f0);
+            return slot.Admittance(r.Coupling, r.ResonantLength, f0);
+        };
     }
 
     /// <summary>

@@ -70,11 +70,15 @@ internal sealed partial class SpecBuilder
             cutterOk = false;
         SlotModelKind? model = s.Has("model") ? Choice(s, "model", SpecNames.SlotModels, false) : SlotModelKind.MomentMethod;
         var (data, extrapolate, dataOk) = SlotData(s, type, guide);
-        if (type is null || count is null || width is null || !cutterOk || model is null || !dataOk) return null;
+        EdgeSlotSurround? surround = s.Has("surround") ? Choice(s, "surround", SpecNames.Surrounds, false) : EdgeSlotSurround.Tube;
+        if (surround is not null && s.Has("surround") && type is not null && type != SlotType.Edge
+            && !Require(s, "surround", false, "'surround' picks the edge-slot calibration; remove it for longitudinal or inclined series slots")) surround = null;
+        if (type is null || count is null || width is null || !cutterOk || model is null || !dataOk || surround is null) return null;
         return new SlotRequest(type.Value, count.Value, Length.FromMeters(width.Value), cutter is null ? null : Length.FromMeters(cutter.Value), model.Value)
         {
             Data = data,
             Extrapolate = extrapolate,
+            Surround = surround.Value,
         };
     }
 
