@@ -122,6 +122,7 @@ public static class ArrayPipeline
     {
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(taper);
+        request = TravellingWaveLoad.Resolve(request, slot, taper.Weights);
         if (request.Coupling != CouplingMode.Mutual) return Synthesise(request, slot, taper);
         return request.Feed.Type == FeedType.TravellingWave
             ? CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights).Design
@@ -134,7 +135,8 @@ public static class ArrayPipeline
 
     /// <summary>
     /// The designer the feed type calls for (standing-wave: <see cref="StandingWaveDesigner"/>; travelling-wave:
-    /// <see cref="TravellingWaveDesigner"/>), with the travelling-wave designer's own figures (null for a standing wave).
+    /// <see cref="TravellingWaveDesigner"/> with its phases corrected by <see cref="TravellingWavePointing"/>), with the
+    /// travelling-wave designer's own figures (null for a standing wave).
     /// </summary>
     public static (ArrayDesign Design, TravellingWaveDesign? TravellingWave) SynthesiseWithFigures(ArrayRequest request, IShuntSlotModel slot,
         TaperResult taper)
@@ -146,7 +148,7 @@ public static class ArrayPipeline
             case FeedType.StandingWave:
                 return (StandingWaveDesigner.Design(request, slot, taper.Weights), null);
             case FeedType.TravellingWave:
-                var tw = TravellingWaveDesigner.Design(request, slot, taper.Weights);
+                var tw = TravellingWavePointing.Design(request, slot, taper.Weights);
                 return (tw.Design, tw);
             default:
                 throw new InfeasibleDesignException($"the '{request.Feed.Type}' feed has no designer: use a standing-wave or travelling-wave feed");
@@ -223,6 +225,12 @@ public static class ArrayPipeline
         ArgumentNullException.ThrowIfNull(slot);
         options ??= AnalysisOptions.Default;
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
+        return TravellingWaveLoad.Explained(request, r => TravellingWavePointing.Design(r, slot, TaperSynthesis.Synthesize(r.Taper, r.Slots.Count).Weights),
+            () => RunResolved(TravellingWaveLoad.Resolve(request, slot, taper.Weights), slot, options, taper));
+    }
+
+    private static ArrayResult RunResolved(ArrayRequest request, IShuntSlotModel slot, AnalysisOptions options, TaperResult taper)
+    {
         if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
         var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
         SlotClearance.Require(design, request.Slots.Cutter);
@@ -300,7 +308,13 @@ public static class ArrayPipeline
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).DistinctBy(w => w.Message).ToList();
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
         {
-            TravellingWave = result.Uncoupled with { Design = design },
+            TravellingWave = result.Uncoupled with { Design = design } with
+            {
+                Correction = CoupledTravellingWaveOptions.Default.CorrectPhase ? PointingCorrection.LengthDetuning : PointingCorrection.None,
+                AskedBeam = result.Uncoupled.Squint,
+                PhaseErrorDegrees = result.PhaseErrorDegrees,
+                PhaseIterations = result.Iterations,
+            },
             CoupledTravellingWave = comparison,
             MatchSweep = CoupledMatchSweep(request, options, design, analysis, sweep),
         };

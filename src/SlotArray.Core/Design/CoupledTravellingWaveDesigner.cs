@@ -108,10 +108,30 @@ public static class CoupledTravellingWaveDesigner
         ArgumentNullException.ThrowIfNull(options);
         if (slot.CouplingKind != SlotCouplingKind.Offset)
             throw new ArgumentException("the coupled travelling-wave designer is for longitudinal (offset) slots", nameof(slot));
+        var start = TravellingWaveDesigner.Design(request, slot, amplitudes);
+        var f0 = request.DesignFrequency;
+        return Iterate(request, slot, amplitudes, options, start, d => CoupledArrayNetwork.Solve(d, slot, f0, options.Coupling), " under mutual coupling");
+    }
+
+    /// <summary>
+    /// The fixed point of the remarks on a given network: <paramref name="solve"/> returns the network solution of a
+    /// geometry at the design frequency (the coupled network here; the isolated-slot line for
+    /// <see cref="TravellingWavePointing"/>, which corrects the phases of an uncoupled design the same way).
+    /// </summary>
+    /// <param name="request">The validated request.</param>
+    /// <param name="slot">The isolated-slot model.</param>
+    /// <param name="amplitudes">Aperture amplitudes a_n, slot 1 first.</param>
+    /// <param name="options">Tolerances and the phase switch (<see cref="CoupledTravellingWaveOptions.Coupling"/> is not read).</param>
+    /// <param name="start">The isolated-slot design to start from.</param>
+    /// <param name="solve">Network solution of a geometry at the design frequency.</param>
+    /// <param name="context">Words added to the error messages after "the power arriving at it", e.g. " under mutual coupling".</param>
+    /// <param name="phaseSlope">κ of the phase progression e^{jκz_n} the slot voltages are brought to, rad/m; null: β of the guide.</param>
+    internal static CoupledTravellingWaveDesign Iterate(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes,
+        CoupledTravellingWaveOptions options, TravellingWaveDesign start, Func<ArrayDesign, NetworkSolution> solve, string context,
+        double? phaseSlope = null)
+    {
         if (!(options.ToleranceDb > 0)) throw new ArgumentOutOfRangeException(nameof(options), options.ToleranceDb, "the tolerance must be positive (dB)");
         if (options.MaximumIterations < 1) throw new ArgumentOutOfRangeException(nameof(options), options.MaximumIterations, "at least one iteration is needed");
-
-        var start = TravellingWaveDesigner.Design(request, slot, amplitudes);
         var f0 = request.DesignFrequency;
         double loadFraction = start.LoadFraction;
         int n = start.Design.Count;
@@ -122,18 +142,18 @@ public static class CoupledTravellingWaveDesigner
         var design = start.Design;
         var history = new List<double>();
         var lengthShift = new double[n];
-        double beta = start.Design.Guide.PhaseConstant(f0);
+        double beta = phaseSlope ?? start.Design.Guide.PhaseConstant(f0);
         int iterations = 0;
         while (true)
         {
             options.Cancellation.ThrowIfCancellationRequested();
-            var sol = CoupledArrayNetwork.Solve(design, slot, f0, options.Coupling);
+            var sol = solve(design);
             iterations++;
             options.Progress?.Report(new WorkProgress("coupled travelling-wave iterations", iterations, options.MaximumIterations));
             double budget = 1 - loadFraction - sol.WallLoss - sol.ReflectedPower;
             if (!(budget > 0))
                 throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                    $"with mutual coupling, wall loss {sol.WallLoss:0.###} and reflection {sol.ReflectedPower:0.###} leave nothing to radiate after the {loadFraction * 100:0.###} % for the load: leave less for the load or move the spacing away from 0.5 guide wavelength"));
+                    $"wall loss {sol.WallLoss:0.###} and reflection {sol.ReflectedPower:0.###}{context} leave nothing to radiate after the {loadFraction * 100:0.###} % for the load: leave less for the load or move the spacing away from 0.5 guide wavelength"));
             double e2Sum = sol.Excitations.Sum(e => e.Magnitude * e.Magnitude);
             double scale = sol.RadiatedPower / e2Sum;
             var effective = sol.Excitations.Select(e => e.Magnitude * e.Magnitude * scale).ToArray();
@@ -151,7 +171,7 @@ public static class CoupledTravellingWaveDesigner
             }
             if (iterations >= options.MaximumIterations)
                 throw new ConvergenceException(string.Create(CultureInfo.InvariantCulture,
-                    $"the coupled travelling-wave design did not bring every slot voltage within {options.ToleranceDb} dB of the taper (residual in power dB; phases {phaseError:0.###} deg off the progression): strong coupling between neighbours; increase the spacing or use a gentler taper"),
+                    $"the travelling-wave design{context} did not bring every slot voltage within {options.ToleranceDb} dB of the taper (residual in power dB; phases {phaseError:0.###} deg off the progression): strong coupling between neighbours; increase the spacing or use a gentler taper"),
                     iterations, residual);
             var slots = new SlotDesign[n];
             for (int i = 0; i < n; i++)
@@ -160,11 +180,11 @@ public static class CoupledTravellingWaveDesigner
                 double p = shape[i] * budget / arriving;
                 if (!(p > 0 && p <= 0.5))
                     throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                        $"slot {i + 1} must absorb p = {p:0.###} of the power arriving at it under mutual coupling, beyond the 0.5 a shunt slot on a matched line can take: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
+                        $"slot {i + 1} must absorb p = {p:0.###} of the power arriving at it{context}, beyond the 0.5 a shunt slot on a matched line can take: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
                 g[i] = TravellingWaveConductances.SingleShuntConductance(p);
                 if (g[i] > gMax)
                     throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                        $"slot {i + 1} needs g = {g[i]:0.000} under mutual coupling, above the {gMax:0.000} the {slot.Name} can give at {f0}: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
+                        $"slot {i + 1} needs g = {g[i]:0.000}{context}, above the {gMax:0.000} the {slot.Name} can give at {f0}: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
                 var r = slot.ForConductance(g[i], f0);
                 var s0 = design.Slots[i];
                 if (options.CorrectPhase)

@@ -188,6 +188,16 @@ public static class DesignReportBuilder
             RefinementIterations = tw.Refinement.Iterations,
             RefinementResidualDb = tw.Refinement.ResidualDb,
             PhaseErrorDeg = tw.PhaseErrorDegrees,
+            BeamAskedDeg = (tw.AskedBeam ?? tw.Squint)?.Degrees ?? double.NaN,
+            BeamResidualDeg = TravellingWavePointing.ResidualDegrees(tw.AskedBeam ?? tw.Squint, result.AtDesign.Metrics.BeamDirection) ?? double.NaN,
+            PointingCorrection = tw.Correction switch
+            {
+                PointingCorrection.LengthDetuning => "length-detuning",
+                PointingCorrection.Spacing => "spacing",
+                _ => "none",
+            },
+            SpacingM = result.Design.Spacing.Meters,
+            LoadAuto = result.Request.Feed.AutoLoad,
         };
     }
 

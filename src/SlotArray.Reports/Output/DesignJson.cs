@@ -103,6 +103,11 @@ public static class DesignJson
             w.WriteNumber("refinement_iterations", tw.RefinementIterations);
             Num(w, "refinement_residual_db", tw.RefinementResidualDb);
             Num(w, "phase_error_deg", tw.PhaseErrorDeg);
+            Num(w, "beam_asked_deg", tw.BeamAskedDeg);
+            Num(w, "beam_residual_deg", tw.BeamResidualDeg);
+            w.WriteString("pointing_correction", tw.PointingCorrection);
+            Num(w, "spacing_m", tw.SpacingM);
+            w.WriteBoolean("load_auto", tw.LoadAuto);
             w.WriteEndObject();
         }
 
@@ -409,6 +414,11 @@ public static class DesignJson
                     RefinementIterations = tw.GetProperty("refinement_iterations").GetInt32(),
                     RefinementResidualDb = D(tw, "refinement_residual_db"),
                     PhaseErrorDeg = D(tw, "phase_error_deg"),
+                    BeamAskedDeg = tw.TryGetProperty("beam_asked_deg", out _) ? D(tw, "beam_asked_deg") : double.NaN,
+                    BeamResidualDeg = tw.TryGetProperty("beam_residual_deg", out _) ? D(tw, "beam_residual_deg") : double.NaN,
+                    PointingCorrection = tw.TryGetProperty("pointing_correction", out var pc) ? pc.GetString() ?? "none" : "none",
+                    SpacingM = tw.TryGetProperty("spacing_m", out _) ? D(tw, "spacing_m") : double.NaN,
+                    LoadAuto = tw.TryGetProperty("load_auto", out var la) && la.GetBoolean(),
                 }
                 : null,
         };

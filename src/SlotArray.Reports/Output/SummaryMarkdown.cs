@@ -108,6 +108,8 @@ public static class SummaryMarkdown
             L($"| scan rate, phase condition / network sweep | {Invariant.Fixed(tw.ScanDegPer100MHz, 3)} / {Invariant.Fixed(tw.ScanFromSweepDegPer100MHz, 3)} | deg per 100 MHz |");
             L($"| designer: network refinement iterations, final residual | {Invariant.Int(tw.RefinementIterations)}, {Invariant.Fixed(tw.RefinementResidualDb, 6)} | –, dB |");
             L($"| largest slot phase departure from the travelling-wave progression | {Invariant.Fixed(tw.PhaseErrorDeg, 2)} | deg |");
+            L($"| beam asked / achieved residual (pointing correction: {tw.PointingCorrection}) | {Invariant.Fixed(tw.BeamAskedDeg, 3)} / {Invariant.Fixed(tw.BeamResidualDeg, 3)} | deg |");
+            L($"| slot spacing of the design{(tw.LoadAuto ? "; load chosen by load: auto" : "")} | {Invariant.Fixed(tw.SpacingM * 1e3, 3)} | mm |");
         }
         L();
         WriteScan(report, L);

@@ -85,13 +85,20 @@ internal static class SpecKeys
     [
         new("type", Words(SpecNames.FeedTypes), "standing-wave (ends in a short) or travelling-wave (ends in a load)") { Required = true, Example = "standing-wave" },
         new("spacing", GuideDistance("between 0 and 1 guide-wavelength"), "slot spacing along the guide, in guide wavelengths or a length")
-            { Default = "0.5 guide-wavelength", DefaultText = "0.5 guide-wavelength (standing-wave); required for travelling-wave", RequiredFor = TravellingWave },
+            { Default = "0.5 guide-wavelength", DefaultText = "0.5 guide-wavelength (standing-wave); travelling-wave: give spacing or beam" },
+        new("beam", Q(QuantityKind.Angle, "-80 deg to +80 deg, + toward the load end"),
+            "travelling-wave: main-beam direction asked for, instead of spacing; the spacing is solved from sin θ = λ/λg − λ/(2d) and reported")
+            { DefaultText = "none: the spacing sets the beam", AppliesTo = TravellingWave, Example = "-4.5 deg" },
         new("position", Words(SpecNames.FeedPositions), "where a standing-wave array is fed") { Default = "end", AppliesTo = StandingWave },
-        new("load", Q(QuantityKind.Percent, "between 0 % and 100 % (exclusive)"), "fraction of the input power left for the load")
+        new("load", new AnyOfValue([Q(QuantityKind.Percent, "between 0 % and 100 % (exclusive)"), new ChoiceValue(["auto"], [], WordFolding.Words)]),
+            "fraction of the input power left for the load; auto: the smallest the slots can deliver for the count and taper")
             { Default = "5 %", DefaultText = "5 % (warning)", AppliesTo = TravellingWave },
         new("short", GuideDistance("between 0 and 1 guide-wavelength"), "last slot centre to the end short")
             { Default = "0.25 guide-wavelength", AppliesTo = StandingWave },
-    ]);
+    ])
+    {
+        Exclusive = [("spacing", "beam")],
+    };
 
     private static readonly string[] SidelobeTapers = TaperWords(Core.Design.TaperType.Chebyshev, Core.Design.TaperType.Taylor,
         Core.Design.TaperType.Villeneuve, Core.Design.TaperType.TaylorOneParameter, Core.Design.TaperType.Bayliss);
