@@ -195,7 +195,7 @@ public static class DesignCommand
         {
             o.WriteLine(string.Format(Inv, "  squint, scan rate      {0:0.00} deg (+ toward the load), {1:0.000} deg per 100 MHz", tw.SquintDeg, tw.ScanFromSweepDegPer100MHz));
             o.WriteLine(string.Format(Inv, "  beam asked, residual   {0:0.000} deg, {1:+0.000;-0.000} deg (correction: {2}; spacing {3:0.000} mm{4})",
-                tw.BeamAskedDeg, tw.BeamResidualDeg, tw.PointingCorrection, tw.SpacingM * 1e3, tw.LoadAuto ? $", load {load.Fraction * 100:0.##} % by load: auto" : ""));
+                tw.BeamAskedDeg, Math.Round(tw.BeamResidualDeg, 3) + 0.0, tw.PointingCorrection, tw.SpacingM * 1e3, tw.LoadAuto ? $", load {load.Fraction * 100:0.##} % by load: auto" : ""));
             o.WriteLine(string.Format(Inv, "  load power, efficiency {0:0.00} % of input (asked {1:0.##} %), {2:0.0} % radiated", load.PowerWPerWIn * 100, load.Fraction * 100, tw.Efficiency * 100));
         }
         if (r.Coupling is { } c)

@@ -92,6 +92,13 @@ public sealed record ArrayResult(
     /// enough to show the VSWR band edges), with the analysis that made <see cref="Sweep"/>; null when not computed.
     /// </summary>
     public FrequencySweep? MatchSweep { get; init; }
+
+    /// <summary>
+    /// The polarisation filter (<c>filter</c>) and the cross-polar levels before and after it; null without a filter or
+    /// without a cross-polarised cut. When set, <see cref="AtDesign"/> and <see cref="SweepFigures"/> are the figures
+    /// behind the filter.
+    /// </summary>
+    public Marine.FilterOutcome? Filter { get; init; }
 }
 
 /// <summary>
@@ -239,6 +246,10 @@ public static class ArrayPipeline
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
+        Marine.FilterOutcome? filter = null;
+        if (request.Filter is { } asked)
+            (atDesign, points, filter) = Marine.CrossPolarFilterDesign.Apply(asked, request.Requirements.CrossPolarDb, atDesign, points,
+                atDesign.Metrics.BeamDirection);
         var f0 = request.DesignFrequency;
         MatchBand? b15 = null, b2 = null;
         if (options.BandSearchFraction > 0)
@@ -251,11 +262,11 @@ public static class ArrayPipeline
             b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
         }
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
-            .Concat(outside).DistinctBy(w => w.Message).ToList();
+            .Concat(outside).Concat(filter?.Warnings ?? []).DistinctBy(w => w.Message).ToList();
         var (mLo, mHi) = MatchSpan.Resolve(request, options, b15, b2);
         if (options.MatchPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.MatchPoints, "the match sweep needs at least 2 points");
         var match = ArrayNetwork.Sweep(design, analysis, mLo, mHi, options.MatchPoints);
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling, MatchSweep = match };
+        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling, MatchSweep = match, Filter = filter };
     }
 
     /// <summary>

@@ -39,6 +39,9 @@ public sealed record ArrayRequest(
     /// practice, no source); 0 (default) cuts the designed lengths. The analysis and every output describe the plate as cut.
     /// </summary>
     public double PrototypeMargin { get; init; }
+
+    /// <summary><c>filter</c>: the polarisation filter in front of edge slots (<see cref="Marine.CrossPolarFilter"/>), or null for none.</summary>
+    public Marine.FilterRequest? Filter { get; init; }
 }
 
 /// <summary>Kind of radiating slot.</summary>

@@ -134,7 +134,7 @@ public static class TravellingWavePointing
                 residual = AchievedBeam(design.Design, slot).Degrees - asked.Degrees;
                 if (Math.Abs(residual) > AcceptedResidualDegrees)
                     throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                        $"the beam cannot be put at {asked.Degrees:0.000} deg: detuning the slots for phase fails ({why}), and moving the spacing toward it stops at {d * 1e3:0.000} mm with the beam {residual:+0.000;-0.000} deg off, because {limit.Message}"));
+                        $"the beam cannot be put at {asked.Degrees:0.000} deg: detuning the slots for phase fails ({why}), and moving the spacing toward it stops at {d * 1e3:0.000} mm with the beam {Math.Round(residual, 3) + 0.0:+0.000;-0.000} deg off, because {limit.Message}"));
                 break;
             }
             d = next;
@@ -142,7 +142,7 @@ public static class TravellingWavePointing
             residual = AchievedBeam(design.Design, slot).Degrees - asked.Degrees;
         }
         var warning = new DesignWarning("travelling-wave-spacing-corrected", string.Create(CultureInfo.InvariantCulture,
-            $"the resonant slots' reflections slow the wave per cell, which moves the beam toward the feed; detuning the slot lengths to correct the phases is not possible here ({why}), so the spacing was moved from {start.Design.Spacing.Meters * 1e3:0.000} mm to {d * 1e3:0.000} mm to point the beam at {asked.Degrees:0.000} deg (residual {residual:+0.000;-0.000} deg); the slot phases still ripple by up to {design.PhaseErrorDegrees:0.#} deg"));
+            $"the resonant slots' reflections slow the wave per cell, which moves the beam toward the feed; detuning the slot lengths to correct the phases is not possible here ({why}), so the spacing was moved from {start.Design.Spacing.Meters * 1e3:0.000} mm to {d * 1e3:0.000} mm to point the beam at {asked.Degrees:0.000} deg (residual {Math.Round(residual, 3) + 0.0:+0.000;-0.000} deg); the slot phases still ripple by up to {design.PhaseErrorDegrees:0.#} deg"));
         return design with { Design = design.Design with { Warnings = [.. design.Design.Warnings, warning] } }
             with { Correction = PointingCorrection.Spacing, AskedBeam = asked, PhaseIterations = iterations };
     }

@@ -81,6 +81,9 @@ public sealed record DesignReport
     /// <summary>Travelling-wave arrays: squint, scan rate, efficiency and the designer's refinement; null otherwise.</summary>
     public TravellingWaveReport? TravellingWave { get; init; }
 
+    /// <summary>The polarisation filter (<c>filter</c>); null without one.</summary>
+    public FilterReport? Filter { get; init; }
+
     /// <summary><c>coupling: mutual</c>: the coupled and isolated-slot designs side by side; null otherwise.</summary>
     public CouplingReport? Coupling { get; init; }
 

@@ -26,7 +26,7 @@ public static class RequirementWords
             RequirementKind.Vswr => ("VSWR over the whole analysis band", string.Create(Inv, $"≤ {v.Limit:0.0##}"),
                 string.Create(Inv, $"{v.Achieved:0.000} worst, at {v.At.Gigahertz:0.####} GHz {sweep}")),
             RequirementKind.CrossPolar => ("peak cross-polar level, worst over the analysis band", string.Create(Inv, $"≤ {v.Limit:0.0#} dB"),
-                string.Create(Inv, $"{v.Achieved:0.00} dB worst; {v.DetailDb:0.00} dB at {v.Direction?.Degrees:0.#} deg at the design frequency (bare slots, no polarisation filter modelled)")),
+                string.Create(Inv, $"{v.Achieved:0.00} dB worst; {v.DetailDb:0.00} dB at {v.Direction?.Degrees:0.#} deg at the design frequency {(request.Filter is null ? "(bare slots, no polarisation filter)" : "(behind the polarisation filter)")}")),
             RequirementKind.PowerHandling => ("peak power within the waveguide's derated power handling",
                 string.Create(Inv, $"≤ {Kw(v.Limit)} kW peak (derated, at {v.At.Gigahertz:0.####} GHz)"),
                 string.Create(Inv, $"{Kw(v.Achieved)} kW peak, margin {v.DetailDb:0.0} dB")),

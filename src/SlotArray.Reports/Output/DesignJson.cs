@@ -111,6 +111,28 @@ public static class DesignJson
             w.WriteEndObject();
         }
 
+        if (r.Filter is { } flt)
+        {
+            w.WriteStartObject("filter");
+            Num(w, "spacing_m", flt.SpacingM);
+            Num(w, "depth_m", flt.DepthM);
+            Num(w, "thickness_m", flt.ThicknessM);
+            Strings(w, "chosen", flt.Chosen);
+            Num(w, "cutoff_te1_hz", flt.CutoffTe1Hz);
+            Num(w, "attenuation_db_per_mm_at_design", flt.AttenuationDbPerMmAtDesign);
+            Num(w, "attenuation_at_design_db", flt.AttenuationAtDesignDb);
+            Num(w, "smallest_attenuation_db", flt.SmallestAttenuationDb);
+            Num(w, "wanted_loss_db", flt.WantedLossDb);
+            Num(w, "margin_db", flt.MarginDb);
+            Num(w, "bare_worst_db", flt.BareWorstDb);
+            Num(w, "bare_worst_frequency_hz", flt.BareWorstFrequencyHz);
+            Num(w, "filtered_worst_db", flt.FilteredWorstDb);
+            Num(w, "filtered_worst_frequency_hz", flt.FilteredWorstFrequencyHz);
+            if (flt.RequirementDb is { } fr) Num(w, "requirement_db", fr);
+            NumArray(w, "bare_cross_level_db", flt.BareCrossCutLevelDb);
+            w.WriteEndObject();
+        }
+
         if (r.Coupling is { } c)
         {
             w.WriteStartObject("mutual_coupling");

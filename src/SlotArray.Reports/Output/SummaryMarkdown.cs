@@ -95,7 +95,7 @@ public static class SummaryMarkdown
             if (eirp.AverageW is { } av) L($"| EIRP on the beam axis at the average transmitter power (P G) | {Invariant.Fixed(Dbw(av), 2)} | dBW ({Watts(av)}) |");
         }
         if (p.CrossPolarDb is { } xpol)
-            L($"| peak cross-polar level (edge-slot tilts, no polarisation filter) at {Invariant.Fixed(p.CrossPolarDirectionDeg ?? double.NaN, 1)} deg | {Invariant.Fixed(xpol, 2)} | dB |");
+            L($"| peak cross-polar level (edge-slot tilts, {(report.Filter is null ? "no polarisation filter" : "behind the polarisation filter")}) at {Invariant.Fixed(p.CrossPolarDirectionDeg ?? double.NaN, 1)} deg | {Invariant.Fixed(xpol, 2)} | dB |");
         if (report.Load is { } load)
         {
             L($"| power into the matched load (asked {Invariant.Fixed(load.Fraction * 100, 2)} %) | {Invariant.Fixed(load.PowerWPerWIn * 100, 3)} | % of input |");
@@ -112,6 +112,7 @@ public static class SummaryMarkdown
             L($"| slot spacing of the design{(tw.LoadAuto ? "; load chosen by load: auto" : "")} | {Invariant.Fixed(tw.SpacingM * 1e3, 3)} | mm |");
         }
         L();
+        if (report.Filter is { } flt) MarineSummary.WriteFilter(flt, report.FrequencyHz, s => L(s));
         WriteScan(report, L);
         L();
         if (report.Coupling is { } coupling) CouplingSummary.Write(coupling, s => L(s));

@@ -34,9 +34,22 @@ public static class DesignPlots
             // Edge slots: the cross-polarised cut on the same scale (relative to the co-polar peak).
             m.Legends.Add(new Legend { LegendPosition = LegendPosition.TopRight });
             s.Title = "co-polar";
-            var x = new LineSeries { Title = "cross-polar", Color = OxyColors.DarkOrange, StrokeThickness = 1.2 };
+            bool filtered = report.Filter is { } f && f.BareCrossCutLevelDb.Count == angles.Count;
+            if (filtered)
+            {
+                var bare = new LineSeries { Title = "cross-polar, bare slots", Color = OxyColors.DarkOrange, LineStyle = LineStyle.Dot, StrokeThickness = 1.0 };
+                for (int i = 0; i < angles.Count; i++) bare.Points.Add(new DataPoint(angles[i], Math.Max(report.Filter!.BareCrossCutLevelDb[i], -200)));
+                m.Series.Add(bare);
+            }
+            var x = new LineSeries { Title = filtered ? "cross-polar, behind the filter" : "cross-polar", Color = OxyColors.DarkOrange, StrokeThickness = 1.2 };
             for (int i = 0; i < angles.Count; i++) x.Points.Add(new DataPoint(angles[i], Math.Max(report.Pattern.CrossCutLevelDb[i], -200)));
             m.Series.Add(x);
+            if (report.Filter?.RequirementDb is { } xreq)
+                m.Annotations.Add(new LineAnnotation
+                {
+                    Type = LineAnnotationType.Horizontal, Y = xreq, LineStyle = LineStyle.DashDot, Color = OxyColors.DarkOrange, StrokeThickness = 1.0,
+                    Text = $"cross-polar requirement {Invariant.Fixed(xreq, 1)} dB", TextColor = OxyColors.DarkOrange, TextHorizontalAlignment = HorizontalAlignment.Left, TextLinePosition = 0,
+                });
         }
         m.Annotations.Add(new LineAnnotation
         {

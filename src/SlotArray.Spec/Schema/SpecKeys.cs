@@ -159,6 +159,20 @@ internal static class SpecKeys
         new("average_power", Q(QuantityKind.Power, "above 0, up to the peak power"), "average transmitter power") { DefaultText = "no estimate", Example = "20 W" },
     ]);
 
+    private static readonly ChoiceValue AutoWord = new(["auto"], [], WordFolding.Words);
+
+    /// <summary><c>filter</c>: the polarisation filter of plates in front of edge slots.</summary>
+    public static readonly SpecSection Filter = new("filter", "polarisation filter: thin metal plates across the aperture, normal to the guide axis (edge slots)",
+    [
+        new("spacing", new AnyOfValue([Q(QuantityKind.Length, "above the thickness, below half a wavelength plus the thickness"), AutoWord]),
+            "plate pitch along the guide axis, centre to centre; auto: a clear gap of 0.35 wavelength at the top of the band")
+            { DefaultText = "auto", Example = "12 mm" },
+        new("depth", new AnyOfValue([Q(QuantityKind.Length, "above 0, up to 1 m"), AutoWord]),
+            "plate depth out from the slotted face; auto: the depth that meets requirements.cross_polar with a 3 dB margin")
+            { DefaultText = "auto", Example = "15 mm" },
+        new("thickness", Q(QuantityKind.Length, "0 or more, below the spacing"), "plate thickness") { Default = "0.5 mm" },
+    ]);
+
     /// <summary><c>fabrication</c>: how the plate is to be cut.</summary>
     public static readonly SpecSection Fabrication = new("fabrication", "how the plate is to be cut",
     [
@@ -185,8 +199,9 @@ internal static class SpecKeys
         new("requirements", new BlockValue(Requirements), Requirements.Description) { DefaultText = "none" },
         new("transmitter", new BlockValue(Transmitter), Transmitter.Description) { DefaultText = "no exposure estimate" },
         new("fabrication", new BlockValue(Fabrication), Fabrication.Description) { DefaultText = "the designed lengths" },
+        new("filter", new AnyOfValue([new BlockValue(Filter), AutoWord]), Filter.Description + "; auto: every dimension chosen") { DefaultText = "none" },
     ]);
 
     /// <summary>Every block, the top level first.</summary>
-    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, Requirements, Transmitter, Fabrication];
+    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, Requirements, Transmitter, Fabrication, Filter];
 }

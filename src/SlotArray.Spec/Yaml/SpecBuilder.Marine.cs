@@ -1,0 +1,55 @@
+using SlotArray.Core.Design;
+using SlotArray.Core.Marine;
+using SlotArray.Core.Quantities;
+using SlotArray.Spec.Schema;
+
+namespace SlotArray.Spec.Yaml;
+
+/// <summary>The marine-antenna blocks: the polarisation filter in front of the slots.</summary>
+internal sealed partial class SpecBuilder
+{
+    private static IReadOnlyList<string> FilterKeys => SpecKeys.Filter.Names;
+
+    /// <summary>Whether a key's scalar is the word <c>auto</c>.</summary>
+    private static bool IsAuto(SpecNode? node) => node is ScalarNode { IsNull: false } sc && sc.Value.Trim().Equals("auto", StringComparison.OrdinalIgnoreCase);
+
+    /// <summary>
+    /// <c>filter</c> (optional): <c>auto</c>, or a block of spacing and depth (each a length or <c>auto</c>, default auto)
+    /// and thickness (default 0.5 mm). Edge slots only (the other slots radiate no cross-polarised field in this model).
+    /// </summary>
+    private FilterRequest? Filter(Section root, SlotRequest? slots, out bool ok)
+    {
+        ok = true;
+        if (!root.Has("filter")) return null;
+        if (slots is not null && slots.Type != SlotType.Edge)
+        {
+            ok = Require(root, "filter", false, "'filter' is a polarisation filter for edge slots (their tilted fields radiate the cross-polarised lobes); remove it for broad-wall slots");
+            return null;
+        }
+        if (IsAuto(root["filter"])) return FilterRequest.Auto;
+        var s = Sub(root, "filter", FilterKeys, false);
+        if (s is null) { ok = false; return null; }
+        bool good = true;
+        Length? Dimension(string key, string example)
+        {
+            if (!s.Has(key) || IsAuto(s[key])) return null;
+            var v = Quantity(s, key, QuantityKind.Length, false, example);
+            if (v is null) { good = false; return null; }
+            good &= Require(s, key, v > 0 && v <= 1, $"'{key}' must be a length above 0 and up to 1 m, got {Num(v.Value * 1e3)} mm");
+            return Length.FromMeters(v.Value);
+        }
+        var spacing = Dimension("spacing", "12 mm");
+        var depth = Dimension("depth", "15 mm");
+        ok = good;
+        Length? thickness = null;
+        if (s.Has("thickness"))
+        {
+            var t = Quantity(s, "thickness", QuantityKind.Length, false, "0.5 mm");
+            if (t is null) ok = false;
+            else if (Require(s, "thickness", t >= 0 && (spacing is null || t < spacing.Value.Meters),
+                $"'thickness' must be 0 or more and below the spacing, got {Num(t.Value * 1e3)} mm")) thickness = Length.FromMeters(t.Value);
+            else ok = false;
+        }
+        return ok ? new FilterRequest(spacing, depth, thickness) : null;
+    }
+}
