@@ -217,6 +217,12 @@ public static class DesignCommand
         }
         if (p.CrossPolarDb is { } xpol)
             o.WriteLine(string.Format(Inv, "  cross-polar peak       {0:0.00} dB at {1:0.0} deg", xpol, p.CrossPolarDirectionDeg ?? double.NaN));
+        if (r.Flare is { } fl)
+            o.WriteLine(string.Format(Inv, "  flare (vertical beam)  HPBW {0:0.00} deg, aperture {1:0.0} mm, depth {2:0.0} mm, phase error {3:0} deg; antenna gain {4:0.00} dBi",
+                fl.VerticalHpbwDeg, fl.ApertureM * 1e3, fl.LengthM * 1e3, fl.PhaseErrorDeg, fl.TotalGainDbi));
+        if (r.Filter is { } flt)
+            o.WriteLine(string.Format(Inv, "  polarisation filter    plates {0:0.0} mm pitch, {1:0.0} mm deep, {2:0.0} mm thick: cross-polar {3:0.00} dB bare, {4:0.00} dB behind it (worst over the band)",
+                flt.SpacingM * 1e3, flt.DepthM * 1e3, flt.ThicknessM * 1e3, flt.BareWorstDb, flt.FilteredWorstDb));
         foreach (var q in r.Requirements)
             o.WriteLine($"  {(q.Passed ? "PASS" : "FAIL")}  {q.Description}: required {q.Required}, achieved {q.Achieved}");
         if (r.Tolerance.Count > 0) o.WriteLine($"  tolerance              {r.Tolerance[0]}");

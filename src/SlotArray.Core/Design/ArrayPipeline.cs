@@ -99,6 +99,9 @@ public sealed record ArrayResult(
     /// behind the filter.
     /// </summary>
     public Marine.FilterOutcome? Filter { get; init; }
+
+    /// <summary>The flare (<c>flare</c>): vertical beam, throat loss and the antenna's total gain; null without a flare.</summary>
+    public Marine.FlareOutcome? Flare { get; init; }
 }
 
 /// <summary>
@@ -250,6 +253,7 @@ public static class ArrayPipeline
         if (request.Filter is { } asked)
             (atDesign, points, filter) = Marine.CrossPolarFilterDesign.Apply(asked, request.Requirements.CrossPolarDb, atDesign, points,
                 atDesign.Metrics.BeamDirection);
+        var flare = request.Flare is { } fl ? Marine.FlareDesign.Analyse(fl, request.Guide, atDesign, request.Requirements.VerticalBeamwidth) : null;
         var f0 = request.DesignFrequency;
         MatchBand? b15 = null, b2 = null;
         if (options.BandSearchFraction > 0)
@@ -262,11 +266,11 @@ public static class ArrayPipeline
             b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
         }
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
-            .Concat(outside).Concat(filter?.Warnings ?? []).DistinctBy(w => w.Message).ToList();
+            .Concat(outside).Concat(filter?.Warnings ?? []).Concat(flare?.Warnings ?? []).DistinctBy(w => w.Message).ToList();
         var (mLo, mHi) = MatchSpan.Resolve(request, options, b15, b2);
         if (options.MatchPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.MatchPoints, "the match sweep needs at least 2 points");
         var match = ArrayNetwork.Sweep(design, analysis, mLo, mHi, options.MatchPoints);
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling, MatchSweep = match, Filter = filter };
+        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling, MatchSweep = match, Filter = filter, Flare = flare };
     }
 
     /// <summary>

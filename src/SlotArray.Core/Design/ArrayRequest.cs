@@ -42,6 +42,9 @@ public sealed record ArrayRequest(
 
     /// <summary><c>filter</c>: the polarisation filter in front of edge slots (<see cref="Marine.CrossPolarFilter"/>), or null for none.</summary>
     public Marine.FilterRequest? Filter { get; init; }
+
+    /// <summary><c>flare</c>: the plates diverging from the slotted face that set the vertical beam (<see cref="Marine.SectoralFlare"/>), or null for none.</summary>
+    public Marine.FlareRequest? Flare { get; init; }
 }
 
 /// <summary>Kind of radiating slot.</summary>
@@ -212,6 +215,9 @@ public sealed record Requirements(double? SidelobesDb, double? CrossPolarDb, dou
 {
     /// <summary>No explicit requirement.</summary>
     public static Requirements None { get; } = new(null, null, null);
+
+    /// <summary><c>requirements.vertical_beamwidth</c>: the vertical half-power beamwidth asked of the flare (met within ±<see cref="Verdicts.RequirementChecks.VerticalBeamwidthToleranceDegrees"/>), or null.</summary>
+    public Quantities.Angle? VerticalBeamwidth { get; init; }
 }
 
 /// <summary>Transmitter powers for the safety checks.</summary>

@@ -83,6 +83,12 @@ public sealed record CoupledTravellingWaveDesign(
 /// </remarks>
 public static class CoupledTravellingWaveDesigner
 {
+    /// <summary>Largest length change of one phase-correction step, as a fraction of the slot's resonant length (0.05).</summary>
+    public const double MaximumStepFraction = 0.05;
+
+    /// <summary>Largest total detuning of a slot, as a fraction of its resonant length (0.25), before the design is refused.</summary>
+    public const double MaximumDetuningFraction = 0.25;
+
     /// <summary>Designs the array with the default options.</summary>
     /// <param name="request">The validated request (travelling-wave feed, longitudinal slots).</param>
     /// <param name="slot">The isolated-slot model (offset coupling).</param>
@@ -188,7 +194,16 @@ public static class CoupledTravellingWaveDesigner
                 var r = slot.ForConductance(g[i], f0);
                 var s0 = design.Slots[i];
                 if (options.CorrectPhase)
-                    lengthShift[i] += LengthForPhase(slot, r.Coupling, r.ResonantLength.Meters + lengthShift[i], -departure[i], f0, i);
+                {
+                    // A secant step of arg y(l) can overshoot far from resonance: take at most 5 % of the length per
+                    // iteration, and refuse a slot detuned by more than a quarter of its resonant length (its admittance
+                    // phase then saturates near ±90° and no length gives the phase asked).
+                    double resonant = r.ResonantLength.Meters, step = LengthForPhase(slot, r.Coupling, resonant + lengthShift[i], -departure[i], f0, i);
+                    lengthShift[i] += Math.Clamp(step, -MaximumStepFraction * resonant, MaximumStepFraction * resonant);
+                    if (Math.Abs(lengthShift[i]) > MaximumDetuningFraction * resonant)
+                        throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
+                            $"slot {i + 1} would have to be detuned by more than {MaximumDetuningFraction:P0} of its resonant length ({resonant * 1e3:0.###} mm) to turn its phase by {-departure[i] * 180 / Math.PI:0.#} deg{context}: move the spacing away from 0.5 guide-wavelength"));
+                }
                 slots[i] = s0 with
                 {
                     Coupling = Math.Sign(s0.Coupling) * Math.Abs(r.Coupling),

@@ -142,7 +142,9 @@ public static class TravellingWaveLoad
         catch (InfeasibleDesignException e) when (request.Feed.Type == FeedType.TravellingWave)
         {
             string nearest = NearestFeasible(request, design);
-            if (nearest.Length == 0) throw;
+            if (nearest.Length == 0)
+                throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
+                    $"{e.Message.TrimEnd('.')}. No load fraction up to {Largest * 100:0} % with {request.Slots.Count} slots designs, nor {request.Feed.LoadFraction * 100:0.##} % with up to {Math.Min(4 * request.Slots.Count, 1000)} slots: change the spacing or the taper."));
             throw new InfeasibleDesignException($"{e.Message.TrimEnd('.')}. Nearest feasible: {nearest}.");
         }
     }

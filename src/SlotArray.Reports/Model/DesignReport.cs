@@ -84,6 +84,9 @@ public sealed record DesignReport
     /// <summary>The polarisation filter (<c>filter</c>); null without one.</summary>
     public FilterReport? Filter { get; init; }
 
+    /// <summary>The flare (<c>flare</c>); null without one.</summary>
+    public FlareReport? Flare { get; init; }
+
     /// <summary><c>coupling: mutual</c>: the coupled and isolated-slot designs side by side; null otherwise.</summary>
     public CouplingReport? Coupling { get; init; }
 

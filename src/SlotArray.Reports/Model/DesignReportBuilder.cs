@@ -157,6 +157,7 @@ public static class DesignReportBuilder
             Requirements = Requirements(verdicts, result),
             Load = result.TravellingWave is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
             TravellingWave = result.TravellingWave is { } t ? TravellingWaveOf(result, t) : null,
+            Flare = result.Flare is { } fo ? FlareReport.Of(fo, request.Requirements.VerticalBeamwidth) : null,
             Filter = result.Filter is { } flt && atDesign.CrossPolar is { } xc
                 ? FilterReport.Of(flt, request.DesignFrequency, CrossLevels(xc, atDesign.Pattern.PeakPower), request.Requirements.CrossPolarDb) : null,
             Coupling = CouplingReport.Of(result),

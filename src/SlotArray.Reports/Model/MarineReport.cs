@@ -89,3 +89,81 @@ public sealed record FilterReport
         };
     }
 }
+
+/// <summary>The flare: its plates, the vertical beam and the antenna's total gain.</summary>
+public sealed record FlareReport
+{
+    /// <summary>Throat height (the slotted face, b + 2 × wall), m.</summary>
+    public required double ThroatM { get; init; }
+
+    /// <summary>Aperture height, m.</summary>
+    public required double ApertureM { get; init; }
+
+    /// <summary>Axial depth from the slotted face to the aperture, m.</summary>
+    public required double LengthM { get; init; }
+
+    /// <summary>Which dimensions the tool chose ("length", "aperture"); empty when both were given.</summary>
+    public required IReadOnlyList<string> Chosen { get; init; }
+
+    /// <summary>Vertical half-power beamwidth at the design frequency, degrees.</summary>
+    public required double VerticalHpbwDeg { get; init; }
+
+    /// <summary>First vertical sidelobe, dB; NaN when none.</summary>
+    public required double FirstSidelobeDb { get; init; }
+
+    /// <summary>Largest phase error at the aperture edge, degrees.</summary>
+    public required double PhaseErrorDeg { get; init; }
+
+    /// <summary>Broadside gain lost to the phase error, dB.</summary>
+    public required double PhaseErrorLossDb { get; init; }
+
+    /// <summary>Field decay through the evanescent throat stretch, dB (reactive; not in the gain).</summary>
+    public required double ThroatLossDb { get; init; }
+
+    /// <summary>Where the plates reach λ/2 apart, from the slotted face, m.</summary>
+    public required double CutoffPlaneM { get; init; }
+
+    /// <summary>The antenna's total directivity (array × flare), dBi.</summary>
+    public required double TotalDirectivityDbi { get; init; }
+
+    /// <summary>The antenna's total gain, dBi.</summary>
+    public required double TotalGainDbi { get; init; }
+
+    /// <summary>requirements.vertical_beamwidth, degrees; null when not given.</summary>
+    public double? RequiredVerticalHpbwDeg { get; init; }
+
+    /// <summary>Elevations of the vertical cut, degrees.</summary>
+    public IReadOnlyList<double> CutElevationDeg { get; init; } = [];
+
+    /// <summary>The vertical cut, dB relative to boresight.</summary>
+    public IReadOnlyList<double> CutLevelDb { get; init; } = [];
+
+    /// <summary>The report of a flare outcome.</summary>
+    /// <param name="o">What the flare does.</param>
+    /// <param name="required">requirements.vertical_beamwidth, or null.</param>
+    public static FlareReport Of(FlareOutcome o, Core.Quantities.Angle? required)
+    {
+        ArgumentNullException.ThrowIfNull(o);
+        var chosen = new List<string>();
+        if (o.Asked.Length is null) chosen.Add("length");
+        if (o.Asked.Aperture is null) chosen.Add("aperture");
+        return new FlareReport
+        {
+            ThroatM = o.Flare.Throat.Meters,
+            ApertureM = o.Flare.Aperture.Meters,
+            LengthM = o.Flare.Length.Meters,
+            Chosen = chosen.AsReadOnly(),
+            VerticalHpbwDeg = o.VerticalBeamwidth.Degrees,
+            FirstSidelobeDb = o.FirstSidelobeDb ?? double.NaN,
+            PhaseErrorDeg = o.PhaseError.Degrees,
+            PhaseErrorLossDb = o.PhaseErrorLossDb,
+            ThroatLossDb = o.ThroatLossDb,
+            CutoffPlaneM = o.CutoffPlane.Meters,
+            TotalDirectivityDbi = o.TotalDirectivityDbi,
+            TotalGainDbi = o.TotalGainDbi,
+            RequiredVerticalHpbwDeg = required?.Degrees,
+            CutElevationDeg = o.CutElevationDeg,
+            CutLevelDb = o.CutLevelDb,
+        };
+    }
+}

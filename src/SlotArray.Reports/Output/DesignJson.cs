@@ -111,6 +111,26 @@ public static class DesignJson
             w.WriteEndObject();
         }
 
+        if (r.Flare is { } fl)
+        {
+            w.WriteStartObject("flare");
+            Num(w, "throat_m", fl.ThroatM);
+            Num(w, "aperture_m", fl.ApertureM);
+            Num(w, "length_m", fl.LengthM);
+            Strings(w, "chosen", fl.Chosen);
+            Num(w, "vertical_hpbw_deg", fl.VerticalHpbwDeg);
+            if (fl.RequiredVerticalHpbwDeg is { } rv) Num(w, "required_vertical_hpbw_deg", rv);
+            Num(w, "first_sidelobe_db", fl.FirstSidelobeDb);
+            Num(w, "phase_error_deg", fl.PhaseErrorDeg);
+            Num(w, "phase_error_loss_db", fl.PhaseErrorLossDb);
+            Num(w, "throat_loss_db", fl.ThroatLossDb);
+            Num(w, "cutoff_plane_m", fl.CutoffPlaneM);
+            Num(w, "total_directivity_dbi", fl.TotalDirectivityDbi);
+            Num(w, "total_gain_dbi", fl.TotalGainDbi);
+            NumArray(w, "cut_elevation_deg", fl.CutElevationDeg);
+            NumArray(w, "cut_level_db", fl.CutLevelDb);
+            w.WriteEndObject();
+        }
         if (r.Filter is { } flt)
         {
             w.WriteStartObject("filter");

@@ -28,4 +28,29 @@ internal static class MarineSummary
         line("Limits: infinitely wide, perfectly conducting plates; the attenuation is the TE1 mode's decay applied to the whole cross-polarised cut (higher modes decay faster); edge diffraction and the plates' loading of the slots are not modelled. With the pitch below half a wavelength no grating order of the plates reaches real space.");
         line("");
     }
+
+    /// <summary>The flare's plates, the vertical beam, the throat and the antenna's beamwidths and total gain.</summary>
+    /// <param name="f">The flare report.</param>
+    /// <param name="report">The whole report (horizontal beam).</param>
+    /// <param name="line">Writes one line.</param>
+    public static void WriteFlare(FlareReport f, DesignReport report, Action<string> line)
+    {
+        string chosen = f.Chosen.Count == 0 ? "as given" : $"{string.Join(", ", f.Chosen)} chosen by the tool";
+        line("## Flare and the whole antenna");
+        line("");
+        line($"Two plates diverging from the slotted narrow-wall face ({chosen}). The slots' field (E along the guide) is parallel to the plates, so the flare is an H-plane sectoral horn: cos(πy/A) across the aperture with the quadratic phase of the plates' apex (C. A. Balanis, Antenna Theory, 4th ed., 2016, §13.2); the vertical cut is its aperture integral with the obliquity factor.");
+        line("");
+        line("| quantity | value | unit |");
+        line("| --- | ---: | --- |");
+        line($"| throat (slotted face) / aperture / depth from the face | {Invariant.Fixed(f.ThroatM * 1e3, 2)} / {Invariant.Fixed(f.ApertureM * 1e3, 2)} / {Invariant.Fixed(f.LengthM * 1e3, 2)} | mm |");
+        line($"| horizontal / vertical half-power beamwidth | {Invariant.Fixed(report.Pattern.HpbwDeg, 2)} / {Invariant.Fixed(f.VerticalHpbwDeg, 2)}{(f.RequiredVerticalHpbwDeg is { } q ? $" (required {Invariant.Fixed(q, 2)})" : "")} | deg |");
+        line($"| beam squint (horizontal, + toward the load end) | {Invariant.Fixed(report.Pattern.BeamDeg, 3)} | deg |");
+        line($"| first vertical sidelobe | {Invariant.Fixed(f.FirstSidelobeDb, 2)} | dB |");
+        line($"| largest phase error at the aperture edge / gain lost to it | {Invariant.Fixed(f.PhaseErrorDeg, 1)} deg / {Invariant.Fixed(f.PhaseErrorLossDb, 3)} dB | |");
+        line($"| evanescent throat: plates reach λ/2 apart at / field decay before that (reactive: lowers the slots' conductance, not in the gain) | {Invariant.Fixed(f.CutoffPlaneM * 1e3, 2)} mm / {Invariant.Fixed(f.ThroatLossDb, 3)} dB | |");
+        line($"| antenna directivity / gain (array × flare, D = d_H d_V / π) | {Invariant.Fixed(f.TotalDirectivityDbi, 2)} / {Invariant.Fixed(f.TotalGainDbi, 2)} | dBi |");
+        line("");
+        line("Limits: infinite, perfectly conducting plates without edge diffraction (far vertical sidelobes and the back lobe are not modelled); the slots' detuning by the narrow throat is not modelled (check one slot in the throat full-wave); the total gain assumes a separable aperture and narrow beams in both planes.");
+        line("");
+    }
 }

@@ -112,6 +112,7 @@ public static class SummaryMarkdown
             L($"| slot spacing of the design{(tw.LoadAuto ? "; load chosen by load: auto" : "")} | {Invariant.Fixed(tw.SpacingM * 1e3, 3)} | mm |");
         }
         L();
+        if (report.Flare is { } flare) MarineSummary.WriteFlare(flare, report, s => L(s));
         if (report.Filter is { } flt) MarineSummary.WriteFilter(flt, report.FrequencyHz, s => L(s));
         WriteScan(report, L);
         L();

@@ -64,6 +64,25 @@ public static class DesignPlots
         return m;
     }
 
+    /// <summary>The flare's vertical pattern cut (dB, −40…0) against elevation, with the required beamwidth's half-power points marked.</summary>
+    public static PlotModel Vertical(DesignReport report)
+    {
+        var m = PlotExport.NewModel($"{report.Name}: vertical pattern of the flare at {Invariant.Ghz(report.FrequencyHz)} GHz");
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Bottom, Title = "Elevation from boresight (deg)", Minimum = -90, Maximum = 90, MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = OxyColor.FromRgb(225, 225, 225) });
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Left, Title = "Relative level (dB)", Minimum = -40, Maximum = 0, MajorStep = 10, MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = OxyColor.FromRgb(225, 225, 225) });
+        if (report.Flare is not { } f) return m;
+        var s = new LineSeries { Title = "vertical cut (H-plane sectoral horn)", Color = OxyColors.Navy, StrokeThickness = 1.5 };
+        for (int i = 0; i < f.CutElevationDeg.Count; i++) s.Points.Add(new DataPoint(f.CutElevationDeg[i], Math.Max(f.CutLevelDb[i], -200)));
+        m.Series.Add(s);
+        m.Annotations.Add(new LineAnnotation
+        {
+            Type = LineAnnotationType.Horizontal, Y = -3.0103, LineStyle = LineStyle.Dash, Color = OxyColors.Firebrick, StrokeThickness = 1.0,
+            Text = $"HPBW {Invariant.Fixed(f.VerticalHpbwDeg, 2)} deg" + (f.RequiredVerticalHpbwDeg is { } q ? $" (required {Invariant.Fixed(q, 2)} deg)" : ""),
+            TextColor = OxyColors.Firebrick,
+        });
+        return m;
+    }
+
     /// <summary>
     /// Aperture amplitude per slot, designed (taper) and achieved, in dB, each normalised to its own peak so the
     /// shapes compare.

@@ -150,6 +150,8 @@ internal static class SpecKeys
         new("cross_polar", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "highest cross-polar level allowed") { DefaultText = "not checked", Example = "-25 dB" },
         new("vswr", new AnyOfValue([new NumberValue(1, 100, ExclusiveMinimum: true), new TextValue(VswrPattern)]),
             "highest VSWR over the whole band, e.g. 1.5 or '1.5:1'") { DefaultText = "not checked", Example = "1.5" },
+        new("vertical_beamwidth", Q(QuantityKind.Angle, "above 0 deg, below 180 deg"), "vertical half-power beamwidth of the flare, met within ±1 deg; flare: auto chooses the aperture for it")
+            { DefaultText = "not checked", Example = "22 deg" },
     ]);
 
     /// <summary><c>transmitter</c>: powers for the exposure and power-handling screening.</summary>
@@ -171,6 +173,19 @@ internal static class SpecKeys
             "plate depth out from the slotted face; auto: the depth that meets requirements.cross_polar with a 3 dB margin")
             { DefaultText = "auto", Example = "15 mm" },
         new("thickness", Q(QuantityKind.Length, "0 or more, below the spacing"), "plate thickness") { Default = "0.5 mm" },
+    ]);
+
+    /// <summary><c>flare</c>: two plates diverging from the slotted face (edge slots), setting the vertical beam.</summary>
+    public static readonly SpecSection Flare = new("flare", "two plates diverging from the slotted narrow-wall face that set the vertical beam (edge slots)",
+    [
+        new("length", new AnyOfValue([Q(QuantityKind.Length, "above 0, up to 10 m"), AutoWord]),
+            "depth from the slotted face to the aperture; auto: from the aperture and the phase error")
+            { DefaultText = "auto", Example = "150 mm" },
+        new("aperture", new AnyOfValue([Q(QuantityKind.Length, "above half a wavelength, up to 10 m"), AutoWord]),
+            "aperture height between the plates' outer edges; auto: the height that gives requirements.vertical_beamwidth")
+            { DefaultText = "auto", Example = "100 mm" },
+        new("phase_error", Q(QuantityKind.Angle, "above 0 deg, up to 360 deg"), "largest phase error at the aperture edge an automatic flare may have")
+            { Default = "90 deg" },
     ]);
 
     /// <summary><c>fabrication</c>: how the plate is to be cut.</summary>
@@ -200,8 +215,9 @@ internal static class SpecKeys
         new("transmitter", new BlockValue(Transmitter), Transmitter.Description) { DefaultText = "no exposure estimate" },
         new("fabrication", new BlockValue(Fabrication), Fabrication.Description) { DefaultText = "the designed lengths" },
         new("filter", new AnyOfValue([new BlockValue(Filter), AutoWord]), Filter.Description + "; auto: every dimension chosen") { DefaultText = "none" },
+        new("flare", new AnyOfValue([new BlockValue(Flare), AutoWord]), Flare.Description + "; auto: length and aperture chosen") { DefaultText = "none" },
     ]);
 
     /// <summary>Every block, the top level first.</summary>
-    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, Requirements, Transmitter, Fabrication, Filter];
+    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, Requirements, Transmitter, Fabrication, Filter, Flare];
 }

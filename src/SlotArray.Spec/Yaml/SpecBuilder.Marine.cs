@@ -52,4 +52,45 @@ internal sealed partial class SpecBuilder
         }
         return ok ? new FilterRequest(spacing, depth, thickness) : null;
     }
+
+    private static IReadOnlyList<string> FlareKeys => SpecKeys.Flare.Names;
+
+    /// <summary>
+    /// <c>flare</c> (optional): <c>auto</c>, or a block of length and aperture (each a length or <c>auto</c>, default
+    /// auto) and phase_error (default 90 deg). Edge slots only (the flare is modelled as an H-plane horn, E along the guide).
+    /// </summary>
+    private FlareRequest? Flare(Section root, SlotRequest? slots, out bool ok)
+    {
+        ok = true;
+        if (!root.Has("flare")) return null;
+        if (slots is not null && slots.Type != SlotType.Edge)
+        {
+            ok = Require(root, "flare", false, "'flare' is modelled for edge slots (E along the guide, parallel to the plates); remove it for broad-wall slots");
+            return null;
+        }
+        if (IsAuto(root["flare"])) return FlareRequest.Auto;
+        var s = Sub(root, "flare", FlareKeys, false);
+        if (s is null) { ok = false; return null; }
+        bool good = true;
+        Length? Dimension(string key, string example)
+        {
+            if (!s.Has(key) || IsAuto(s[key])) return null;
+            var v = Quantity(s, key, QuantityKind.Length, false, example);
+            if (v is null) { good = false; return null; }
+            good &= Require(s, key, v > 0 && v <= 10, $"'{key}' must be a length above 0 and up to 10 m, got {Num(v.Value * 1e3)} mm");
+            return Length.FromMeters(v.Value);
+        }
+        var length = Dimension("length", "150 mm");
+        var aperture = Dimension("aperture", "100 mm");
+        var phase = FlareDesign.DefaultPhaseError;
+        if (s.Has("phase_error"))
+        {
+            var p = Quantity(s, "phase_error", QuantityKind.Angle, false, "90 deg");
+            if (p is not null && Require(s, "phase_error", p > 0 && p <= 2 * Math.PI, $"'phase_error' must lie above 0 deg and up to 360 deg, got {Num(p.Value * 180 / Math.PI)} deg"))
+                phase = Angle.FromRadians(p.Value);
+            else good = false;
+        }
+        ok = good;
+        return ok ? new FlareRequest(length, aperture, phase) : null;
+    }
 }

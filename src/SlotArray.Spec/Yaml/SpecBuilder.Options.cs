@@ -115,7 +115,15 @@ internal sealed partial class SpecBuilder
                 ok = false;
             }
         }
-        return ok ? new Requirements(sll, xpol, vswr) : null;
+        Angle? vertical = null;
+        if (s.Has("vertical_beamwidth"))
+        {
+            var v = Quantity(s, "vertical_beamwidth", QuantityKind.Angle, false, "22 deg");
+            if (v is not null && Require(s, "vertical_beamwidth", v > 0 && v < Math.PI, $"'vertical_beamwidth' must lie between 0 deg and 180 deg, got {Num(v.Value * 180 / Math.PI)} deg"))
+                vertical = Angle.FromRadians(v.Value);
+            else ok = false;
+        }
+        return ok ? new Requirements(sll, xpol, vswr) { VerticalBeamwidth = vertical } : null;
     }
 
     /// <summary>Transmitter (optional): peak_power and average_power (W, kW, MW), positive, average ≤ peak.</summary>
