@@ -49,10 +49,10 @@ public class NetworkBenchmarks
         return s.Band(2.0)!.Width.Hertz + (s.Band(1.5)?.Width.Hertz ?? 0);
     }
 
-    /// <summary>Closed-form stand-in slot: g_r = K sin²(πx/a) (Stevenson, physics-reference §2.1), y = g_r/(1 + jQ(L/L_r − L_r/L)).</summary>
+    /// <summary>Closed-form stand-in slot: g_r = K sin²(πx/a) (Stevenson), y = g_r/(1 + jQ(L/L_r − L_r/L)).</summary>
     private sealed class ClosedFormSlot(RectangularWaveguide guide) : IShuntSlotModel
     {
-        private const double Q = 5, K = 1.237057;   // K: WR-90 at 9.375 GHz, physics-reference §2.1 [N]
+        private const double Q = 5, K = 1.237057;   // K: WR-90 at 9.375 GHz, Stevenson 1948 [N]
         public RectangularWaveguide Guide { get; } = guide;
         public Length Width => Length.FromMillimeters(1.6);
         public SlotCouplingKind CouplingKind => SlotCouplingKind.Offset;

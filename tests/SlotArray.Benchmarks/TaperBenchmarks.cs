@@ -5,7 +5,7 @@ namespace SlotArray.Benchmarks;
 
 /// <summary>
 /// Issue 3 target: Dolph–Chebyshev weights for N = 10,000 in ≤ 50 ms and still accurate. The setup compares the FFT
-/// weights with the O(N²) direct DFT of physics-reference §6.1 once and prints the largest difference.
+/// weights with the O(N²) direct DFT of Dolph 1946 once and prints the largest difference.
 /// </summary>
 [MemoryDiagnoser]
 public class TaperBenchmarks

@@ -57,8 +57,8 @@ public class CliTests
         Assert.Equal("harbour-surveillance-16", doc.GetProperty("name").GetString());
         Check.Relative(9.41e9, doc.GetProperty("frequency_hz").GetDouble(), 1e-12, "as written in the spec");
         Check.Relative(GuideWavelengthMm(0.02286, 9.41e9), doc.GetProperty("guide_wavelength_mm").GetDouble(), 1e-7, "Pozar Sec. 3.3 closed form; output rounded to 1e-6 mm");
-        // TE10 cutoff of WR-90, c/(2a) = 6.557140 GHz (physics-reference §1.2 check value)
-        Check.Relative(6.557140e9, doc.GetProperty("cutoff_te10_hz").GetDouble(), 1e-6, "physics-reference §1.2, 7 significant figures");
+        // TE10 cutoff of WR-90, c/(2a) = 6.557140 GHz (Pozar 2012, Sec. 3.3 check value)
+        Check.Relative(6.557140e9, doc.GetProperty("cutoff_te10_hz").GetDouble(), 1e-6, "Pozar 2012, Sec. 3.3, 7 significant figures");
         Check.Relative(13.11428e9, doc.GetProperty("single_mode_band_hz")[1].GetDouble(), 1e-6, "TE20 cutoff c/a, Pozar Sec. 3.3, computed here");
         var guide = doc.GetProperty("guide");
         Assert.Equal("WR-90", guide.GetProperty("designation").GetString());

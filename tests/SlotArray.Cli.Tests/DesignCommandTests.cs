@@ -128,7 +128,7 @@ public class DesignCommandTests(DemoRuns demo) : IClassFixture<DemoRuns>
     public void Demo_is_matched_at_the_design_frequency()
     {
         // Σ g_n = 1 with the short λg/4 beyond the last slot makes the input admittance 1 at resonance
-        // (physics-reference §5.1, match rule); issue 5 asks for S11 below −25 dB from the network analysis.
+        // (Elliott 1981, Ch. 8, match rule); issue 5 asks for S11 below −25 dB from the network analysis.
         double s11 = demo.Json.GetProperty("match").GetProperty("s11_db_at_design").GetDouble();
         Assert.True(s11 < -25, $"S11 at the design frequency {s11:0.00} dB");
         Check.Absolute(1.0, demo.Json.GetProperty("match").GetProperty("vswr_at_design").GetDouble(), 0.12, "VSWR of |S11| < −25 dB is < 1.119");
@@ -137,7 +137,7 @@ public class DesignCommandTests(DemoRuns demo) : IClassFixture<DemoRuns>
     [Fact]
     public void Achieved_aperture_amplitudes_equal_the_taper_within_0_1_dB()
     {
-        // Isolated-slot design: g_n ∝ a_n² gives P_n ∝ a_n² (physics-reference §5.1); the network analysis (each slot's
+        // Isolated-slot design: g_n ∝ a_n² gives P_n ∝ a_n² (Elliott 1981, Ch. 8); the network analysis (each slot's
         // own y(f0) on the lossy line) must return the taper within 0.1 dB (issue 5).
         foreach (var s in demo.Json.GetProperty("slots").EnumerateArray())
         {
@@ -145,7 +145,7 @@ public class DesignCommandTests(DemoRuns demo) : IClassFixture<DemoRuns>
             double achieved = s.GetProperty("achieved_amplitude").GetDouble();
             double db = 20 * Math.Log10(achieved / target);
             Assert.True(Math.Abs(db) <= 0.1, $"slot {s.GetProperty("index").GetInt32()}: achieved/target = {db:0.000} dB");
-            Assert.True(Math.Abs(s.GetProperty("achieved_phase_deg").GetDouble()) < 1, "in-phase excitation at resonance (physics-reference §5.1 alternation)");
+            Assert.True(Math.Abs(s.GetProperty("achieved_phase_deg").GetDouble()) < 1, "in-phase excitation at resonance (Elliott 1981, Ch. 8 alternation)");
         }
     }
 
@@ -153,12 +153,12 @@ public class DesignCommandTests(DemoRuns demo) : IClassFixture<DemoRuns>
     public void Conductances_sum_to_one_and_offsets_alternate()
     {
         var slots = demo.Json.GetProperty("slots").EnumerateArray().ToList();
-        Check.Absolute(1.0, slots.Sum(s => s.GetProperty("conductance").GetDouble()), 1e-12, "physics-reference §5.1: Σ g_n = 1 (end feed)");
+        Check.Absolute(1.0, slots.Sum(s => s.GetProperty("conductance").GetDouble()), 1e-12, "Elliott 1981, Ch. 8: Σ g_n = 1 (end feed)");
         for (int i = 0; i < slots.Count; i++)
-            Assert.Equal(i % 2 == 0 ? 1 : -1, Math.Sign(slots[i].GetProperty("offset_m").GetDouble()));   // §5.1 alternation
+            Assert.Equal(i % 2 == 0 ? 1 : -1, Math.Sign(slots[i].GetProperty("offset_m").GetDouble()));   // alternation (Elliott 1981, Ch. 8)
         double lg = demo.Json.GetProperty("guide").GetProperty("guide_wavelength_m").GetDouble();
-        for (int i = 0; i < slots.Count; i++)   // §5.1: z_n = λg/4 + (n − 1) λg/2 from the short's inner face
-            Check.Absolute(lg / 4 + i * lg / 2, slots[i].GetProperty("position_m").GetDouble(), 1e-12, "physics-reference §5.1 spacing and short");
+        for (int i = 0; i < slots.Count; i++)   // Elliott 1981, Ch. 8: z_n = λg/4 + (n − 1) λg/2 from the short's inner face
+            Check.Absolute(lg / 4 + i * lg / 2, slots[i].GetProperty("position_m").GetDouble(), 1e-12, "Elliott 1981, Ch. 8 spacing and short");
     }
 
     [Fact]
@@ -260,9 +260,9 @@ public class DesignCommandFailureTests
     [Fact]
     public void An_infeasible_spec_exits_1_names_the_slot_and_leaves_no_output()
     {
-        // Σ g = 1 with g_n ∝ a_n² (physics-reference §5.1): weights 0.2, 1, 0.2 ask g_2 = 1/1.08 = 0.926 of the middle
+        // Σ g = 1 with g_n ∝ a_n² (Elliott 1981, Ch. 8): weights 0.2, 1, 0.2 ask g_2 = 1/1.08 = 0.926 of the middle
         // slot, above the ≈ 0.6 a longitudinal slot gives in WR-90 at 9.375 GHz at its largest usable offset a/4
-        // (Stevenson's formula, physics-reference §2.1: 2.09 (a/b)(λg/λ) cos²(πλ/2λg) sin²(π/4) = 0.62).
+        // (Stevenson's formula: 2.09 (a/b)(λg/λ) cos²(πλ/2λg) sin²(π/4) = 0.62).
         string spec = DesignRuns.Spec("infeasible", Wr90Head + "\nslots: {type: longitudinal, count: 3, width: 1.6 mm}\ntaper: {type: given, weights: [0.2, 1, 0.2]}\n");
         string outDir = Path.Combine(Path.GetDirectoryName(spec)!, "out");
         var (code, _, err) = DesignRuns.Run("design", spec, "-o", outDir, "--no-cache");

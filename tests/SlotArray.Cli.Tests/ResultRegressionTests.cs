@@ -14,7 +14,11 @@ namespace SlotArray.Cli.Tests;
 /// results of the example specs, recorded from the code before that work (commit 82b3090 of main; the design.json
 /// digests re-recorded when main's report gained the requirement verdicts and safety fields, commit 6e42ef1, the
 /// speed work's changes then unchanged and passing against the old digests), and the same
-/// digests for every thread count. A digest covers design.json (doubles in shortest round-trip form) or every double
+/// digests for every thread count. The tolerance digests were re-recorded once, deliberately, when the trials' pattern sum
+/// changed from complex Horner to Goertzel's recurrence with fused multiply-adds on a mirrored grid (same sum, different
+/// rounding): against the earlier program, on 10,000 trials of the 64-slot spec and 2,000 of the harbour example, the
+/// probability of meeting the target, the S11 and error statistics and the whole percentile envelope were bit-identical,
+/// every peak sidelobe within 3.2e-13 dB, the pointing within 1.3e-13 deg and the sensitivities within 1.8e-11 dB/mm. A digest covers design.json (doubles in shortest round-trip form) or every double
 /// of the Monte Carlo result bit for bit; the reference is the earlier program itself, so a change here means a
 /// changed result, to be explained or reverted.
 /// </summary>
@@ -59,8 +63,8 @@ public class ResultRegressionTests
     }
 
     [Theory]
-    [InlineData("arrays/harbour-surveillance-16.yaml", 300, "79db4412008e6aaaa5b3f8ff224ede75")]
-    [InlineData("scripts/perf/wr90-64-taylor30.yaml", 200, "81021f36f872c25958c311488b8c1a10")]
+    [InlineData("arrays/harbour-surveillance-16.yaml", 300, "bfce198146a7570e74f623752c2fdb60")]
+    [InlineData("scripts/perf/wr90-64-taylor30.yaml", 200, "f9f321f1d8025adba63184ab5cf04e92")]
     public void Tolerance_results_are_unchanged_and_the_same_on_1_2_and_3_threads(string spec, int trials, string expected)
     {
         var request = Load(Path.Combine(RepoFiles.Root, spec));

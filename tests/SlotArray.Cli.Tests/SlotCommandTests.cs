@@ -28,14 +28,14 @@ public class SlotCommandTests
         Check.Relative(2, r.GetProperty("offset_mm").GetDouble(), 1e-12, "the input");
         Check.Relative(1.27, r.GetProperty("wall_mm").GetDouble(), 1e-12, "the input");
         Check.Relative(1.5875, r.GetProperty("width_mm").GetDouble(), 1e-12, "the input");
-        // Stevenson at x = 2 mm, physics-reference §2.1 table [N].
-        Check.Relative(0.09112, r.GetProperty("stevenson_conductance").GetDouble(), 1e-4, "physics-reference §2.1");
-        // The thick wall lengthens the slot beyond the thin-wall P = 5 regression length 14.5993 mm (physics-reference §3.2, §3.1).
+        // Stevenson 1948 at x = 2 mm, numpy [N].
+        Check.Relative(0.09112, r.GetProperty("stevenson_conductance").GetDouble(), 1e-4, "Stevenson 1948");
+        // The thick wall lengthens the slot beyond the thin-wall P = 5 regression length 14.5993 mm (moment method after Stern & Elliott 1985, numpy).
         Assert.InRange(r.GetProperty("resonant_length_mm").GetDouble(), 14.6, 16.0);
-        Check.Relative(0.09112, r.GetProperty("resonant_conductance").GetDouble(), 0.05, "Stevenson, physics-reference §2.1 (g_r changes modestly with wall)");
+        Check.Relative(0.09112, r.GetProperty("resonant_conductance").GetDouble(), 0.05, "Stevenson (g_r changes modestly with wall)");
         var adm = r.GetProperty("admittance");
         Assert.Equal(11, adm.GetArrayLength());
-        Assert.True(adm[0].GetProperty("b").GetDouble() > 0 && adm[10].GetProperty("b").GetDouble() < 0, "Im y > 0 below resonance, < 0 above (physics-reference §3.3 item 7)");
+        Assert.True(adm[0].GetProperty("b").GetDouble() > 0 && adm[10].GetProperty("b").GetDouble() < 0, "Im y > 0 below resonance, < 0 above (moment method after Stern & Elliott 1985)");
         Assert.Equal(0, r.GetProperty("warnings").GetArrayLength());
     }
 
@@ -84,8 +84,8 @@ public class SlotCommandTests
         var (code, output, _) = Run("slot", "--guide", "WR-90", "--frequency", "9.375GHz", "--tilt", "15deg", "--wall", "1.27mm", "--json");
         Assert.Equal(ExitCodes.Ok, code);
         var r = JsonDocument.Parse(output).RootElement;
-        // physics-reference §2.3 [N]: g(15°) = 0.10395 in WR-90 at 9.375 GHz.
-        Check.Relative(0.10395, r.GetProperty("resonant_conductance").GetDouble(), 1e-4, "physics-reference §2.3");
+        // edge-slot formula (Stevenson 1948; Silver 1949) [N]: g(15°) = 0.10395 in WR-90 at 9.375 GHz.
+        Check.Relative(0.10395, r.GetProperty("resonant_conductance").GetDouble(), 1e-4, "edge-slot formula (Stevenson 1948; Silver 1949)");
         Check.Relative(15, r.GetProperty("tilt_deg").GetDouble(), 1e-12, "the input");
         Assert.True(r.GetProperty("cut_depth_mm").GetDouble() > 1.27, "the cut must go deeper than the wall to open the guide");
     }

@@ -37,12 +37,12 @@ public class TaperCommandTests
             Check.Absolute(Scipy16[i], w[i], 1e-9, "scipy.signal.windows.taylor(16, 4, 30, norm=False)/max");
             Check.Absolute(Scipy16[i], w[15 - i], 1e-9, "scipy (symmetric)");
         }
-        Check.Absolute(-30.05, r.GetProperty("peak_sidelobe_db").GetDouble(), 0.006, "physics-reference §6.3: −30.05 dB");
-        Check.Relative(0.85339, r.GetProperty("taper_efficiency").GetDouble(), 6e-6, "physics-reference §6.3");
+        Check.Absolute(-30.05, r.GetProperty("peak_sidelobe_db").GetDouble(), 0.006, "Taylor 1955 sampled, numpy [N]: −30.05 dB");
+        Check.Relative(0.85339, r.GetProperty("taper_efficiency").GetDouble(), 6e-6, "Taylor 1955 sampled, numpy [N]");
         Assert.True(r.GetProperty("first_sidelobe_db").GetDouble() < 0);
         Assert.True(r.GetProperty("hpbw_deg").GetDouble() > 0);
         Assert.True(r.GetProperty("null_to_null_deg").GetDouble() > r.GetProperty("hpbw_deg").GetDouble());
-        // Isotropic directivity of a λ/2 array is N·η_t exactly (the sinc cross terms vanish; physics-reference §7.3–§7.4).
+        // Isotropic directivity of a λ/2 array is N·η_t exactly (the sinc cross terms vanish; IEEE Std 145-2013 directivity).
         Check.Absolute(10 * Math.Log10(16 * 0.853385875), r.GetProperty("directivity_dbi").GetDouble(), 1e-6, "D = N η_t at λ/2");
         Assert.Equal(0, r.GetProperty("warnings").GetArrayLength());
     }

@@ -9,12 +9,12 @@ namespace SlotArray.Reports.Tests;
 
 /// <summary>
 /// The adapter from the pipeline's result to the report, on the uniform 10-slot WR-90 array at 9.375 GHz with the
-/// Stevenson model (physics-reference §5.1 and §11 #29). The analysis runs at three frequencies with direct solves
+/// Stevenson model (Elliott 1981, Ch. 8). The analysis runs at three frequencies with direct solves
 /// (the Stevenson model needs the moment-method resonant lengths at every frequency), without the band searches.
 /// </summary>
 public class DesignReportBuilderTests
 {
-    private const string Ref51 = "physics-reference §5.1 / §11 #29 [N]";
+    private const string Ref51 = "Elliott 1981, Ch. 8 [N]";
     private static readonly Frequency F0 = Frequency.FromGigahertz(9.375);
     private static readonly Length Width = Length.FromMillimeters(1.5875);
 
@@ -49,17 +49,17 @@ public class DesignReportBuilderTests
             var s = r.Slots[i];
             Check.Absolute(0.1, s.Conductance, 1e-12, Ref51 + ": g_n = 1/N");
             Check.Absolute(2.0978e-3, Math.Abs(s.Offset!.Value), 0.5e-7, Ref51 + ": |x_n| = 2.0978 mm");
-            Assert.Equal(i % 2 == 0 ? 1 : -1, Math.Sign(s.Offset.Value));   // §5.1 alternation
+            Assert.Equal(i % 2 == 0 ? 1 : -1, Math.Sign(s.Offset.Value));   // alternation (Elliott 1981, Ch. 8)
             Check.Absolute(11.1857e-3 + i * 22.3714e-3, s.Position, 0.5e-7 * (i + 1), Ref51 + ": λg/4 + (n − 1) λg/2 from the short's inner face");
-            // physics-reference §11 #36 [N]: w = 1.5875 mm, cutter = width: L_o − L_eq = 0.3407 mm (equal-area rule [C])
-            Check.Absolute(0.3407e-3, s.OverallLength - s.Length, 0.5e-7, "physics-reference §11 #36");
+            // w = 1.5875 mm, cutter = width: L_o − L_eq = 0.3407 mm (equal-area rule [C])
+            Check.Absolute(0.3407e-3, s.OverallLength - s.Length, 0.5e-7, "equal-area rule, common practice");
             Assert.Equal(SlotEndForm.Round, s.EndForm);
             Check.Absolute(1.0, s.TargetAmplitude, 1e-15, "uniform taper, normalised to a peak of 1");
         }
         Check.Absolute(11.1857e-3, r.Termination.Distance, 0.5e-7, Ref51 + ": short λg/4");
         Assert.Equal("short", r.Termination.Type);
-        Check.Absolute(44.74288e-3, r.Guide.GuideWavelength, 0.5e-8, "physics-reference §1.2 [N]: λg of WR-90 at 9.375 GHz");
-        Check.Absolute(527.115, r.Guide.WaveImpedanceOhm, 0.0005, "physics-reference §1.2 [N]: Z_TE of WR-90 at 9.375 GHz");
+        Check.Absolute(44.74288e-3, r.Guide.GuideWavelength, 0.5e-8, "Pozar 2012, Sec. 3.3 [N]: λg of WR-90 at 9.375 GHz");
+        Check.Absolute(527.115, r.Guide.WaveImpedanceOhm, 0.0005, "Pozar 2012, Sec. 3.3 [N]: Z_TE of WR-90 at 9.375 GHz");
         Assert.Equal(1.0, r.Slots.Max(s => s.AchievedAmplitude));   // normalised so the peak is 1
     }
 

@@ -23,8 +23,8 @@ public class InvariantTests
     }
 }
 
-// Approval test (house style §14): the cut list of the fixture is frozen in Approved/cutlist.eight.approved.csv,
-// a file reviewed by eye against physics-reference §9.1–9.3. A deliberate format change updates that file.
+// Approval test: the cut list of the fixture is frozen in Approved/cutlist.eight.approved.csv,
+// a file reviewed by eye against the equal-area round-end rule and baseline dimensioning (common practice [C]). A deliberate format change updates that file.
 public class CutListApprovalTests
 {
     private static string Dir([CallerFilePath] string path = "") => Path.Combine(Path.GetDirectoryName(path)!, "Approved");

@@ -11,14 +11,14 @@ namespace SlotArray.Reports.Tests;
 
 /// <summary>
 /// An invented 8-slot standing-wave array in WR-90 at 9.375 GHz, for the writer tests. The guide figures are the
-/// physics-reference §1.2 check values (λg = 44.74288 mm, Z_TE = 527.115 Ω); spacing λg/2 and short distance λg/4
-/// follow §5.1; overall lengths use the equal-area round-end rule of §9.1. Amplitudes, conductances and pattern
+/// Pozar 2012, Sec. 3.3 check values (λg = 44.74288 mm, Z_TE = 527.115 Ω); spacing λg/2 and short distance λg/4
+/// follow Elliott 1981, Ch. 8; overall lengths use the equal-area round-end rule (common practice [C]). Amplitudes, conductances and pattern
 /// figures are made up: the writers only print them.
 /// </summary>
 internal static class ReportFixture
 {
-    public const double LambdaG = 44.74288e-3;          // physics-reference §1.2 [N]
-    public const double WaveImpedance = 527.115;        // physics-reference §1.2 [N]
+    public const double LambdaG = 44.74288e-3;          // Pozar 2012, Sec. 3.3 [N]
+    public const double WaveImpedance = 527.115;        // Pozar 2012, Sec. 3.3 [N]
     public const double SlotWidth = 1.5875e-3;          // 1/16 in cutter
 
     /// <summary>The 8-slot model; the guide designation contains a comma and the name a double quote (CSV quoting).</summary>
@@ -41,7 +41,7 @@ internal static class ReportFixture
                 TiltDeg = tilt ? (i % 2 == 0 ? 1 : -1) * (8.0 + 0.7 * i) : null,
                 CutDepth = tilt ? 3.1e-3 + 0.05e-3 * i : null,
                 Length = len,
-                OverallLength = len + (1 - Math.PI / 4) * SlotWidth, // physics-reference §9.1 equal-area rule
+                OverallLength = len + (1 - Math.PI / 4) * SlotWidth, // equal-area rule [C]
                 Width = SlotWidth,
                 EndForm = SlotEndForm.Round,
                 Conductance = g,

@@ -38,7 +38,7 @@ public class TravellingWaveReportTests
         var tw = report.TravellingWave!;
         var d = result.Design.Spacing.Meters;
         double lam = F0.FreeSpaceWavelength.Meters, lg = result.Design.GuideWavelength.Meters;
-        Check.Absolute(Math.Asin(lam / lg - lam / (2 * d)) * 180 / Math.PI, tw.SquintDeg, 1e-9, "physics-reference §5.2: sin θ = λ/λg − λ/(2d)");
+        Check.Absolute(Math.Asin(lam / lg - lam / (2 * d)) * 180 / Math.PI, tw.SquintDeg, 1e-9, "Elliott 1981, Ch. 8: sin θ = λ/λg − λ/(2d)");
         Check.Absolute(tw.SquintDeg, report.Pattern.BeamDeg, 0.1, "the network pattern's beam agrees with the phase condition");
         Assert.InRange(tw.Efficiency, 0.8, 0.9);   // 10 % to the load plus ~2 % wall loss (definition: radiated / accepted)
         Assert.Equal("matched-load", report.Termination.Type);

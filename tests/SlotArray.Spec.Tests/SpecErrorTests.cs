@@ -119,7 +119,7 @@ public class SpecErrorTests
     [Fact]
     public void Frequency_below_the_TE10_cutoff()
     {
-        // TE10 cutoff of WR-90 = c/(2a) = 6.55714 GHz (Pozar Sec. 3.3; physics-reference §1.2 gives 6.557140 GHz)
+        // TE10 cutoff of WR-90 = c/(2a) = 6.55714 GHz (Pozar Sec. 3.3 gives 6.557140 GHz)
         var r = SpecLoader.Parse(With((3, "frequency: 6 GHz"), (4, "band: [5.9 GHz, 6.1 GHz]")), "t.yaml");
         At(r.Errors[0], 3, 12, "6 GHz is below the TE10 cutoff 6.55714 GHz");
         At(r.Errors[1], 4, 7, "at or below the TE10 cutoff");
@@ -171,7 +171,7 @@ public class SpecErrorTests
     [Fact]
     public void Frequency_outside_the_recommended_band_is_a_warning()
     {
-        // WR-90 recommended band 8.20–12.40 GHz (physics-reference §1.3); 8.0 GHz is single-mode (above 6.557 GHz) but outside it.
+        // WR-90 recommended band 8.20–12.40 GHz (EIA RS-261-B); 8.0 GHz is single-mode (above 6.557 GHz) but outside it.
         var r = SpecLoader.Parse(With((3, "frequency: 8.0 GHz"), (4, "band: [7.9 GHz, 8.1 GHz]")), "t.yaml");
         Assert.Empty(r.Errors);
         var w = Assert.Single(r.Warnings);

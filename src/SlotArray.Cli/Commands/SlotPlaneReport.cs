@@ -2,6 +2,7 @@ using System.Globalization;
 using System.Numerics;
 using System.Text.Json;
 using SlotArray.Core;
+using SlotArray.Core.Coupling;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
 
@@ -39,7 +40,7 @@ public static class SlotPlaneReport
         if (!(width.Meters > 0) || !(width.Meters < length.Meters / 2))
             throw new UserInputException($"--width must be positive and below half the slot length, got {width}");
 
-        var zd = GroundPlaneSlot.DipoleImpedance(length, 0.25 * width, f);
+        var zd = GroundPlaneSlot.DipoleImpedance(length, StripEquivalentRadius.Of(width), f);
         var resonant = GroundPlaneSlot.ResonantLength(width, f);
         var cases = new[] { false, true }.Select(oneSided =>
         {
@@ -68,7 +69,7 @@ public static class SlotPlaneReport
                 ["length_mm"] = Math.Round(length.Millimeters, 6),
                 ["width_mm"] = Math.Round(width.Millimeters, 6),
                 ["target_ohm"] = targetResistance,
-                ["equivalent_radius_mm"] = Math.Round(width.Millimeters / 4, 6),
+                ["equivalent_radius_mm"] = Math.Round(StripEquivalentRadius.Of(width).Millimeters, 6),
                 ["resonant_length_mm"] = Math.Round(resonant.Millimeters, 6),
                 ["dipole_impedance_ohm"] = Z(zd),
                 ["two_sided"] = Case(false, cases[0].Analysis, cases[0].Reason),
@@ -82,7 +83,7 @@ public static class SlotPlaneReport
             var ci = CultureInfo.InvariantCulture;
             output.WriteLine(string.Format(ci, "slot in a ground plane: length {0:F4} mm, width {1:F4} mm, {2:F6} GHz, target {3:G6} ohm",
                 length.Millimeters, width.Millimeters, f.Gigahertz, targetResistance));
-            output.WriteLine(string.Format(ci, "complementary strip dipole (radius w/4 = {0:F4} mm): Z_d = {1}", width.Millimeters / 4, Ohms(zd)));
+            output.WriteLine(string.Format(ci, "complementary strip dipole (radius w/4 = {0:F4} mm): Z_d = {1}", StripEquivalentRadius.Of(width).Millimeters, Ohms(zd)));
             output.WriteLine(string.Format(ci, "resonant slot length for this width: {0:F4} mm", resonant.Millimeters));
             foreach (var c in cases)
             {

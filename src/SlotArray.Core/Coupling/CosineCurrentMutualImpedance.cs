@@ -6,8 +6,8 @@ namespace SlotArray.Core.Coupling;
 
 /// <summary>
 /// Mutual impedance of two parallel thin dipoles carrying the half-cosine currents I(ζ) = I(0) cos(πζ/(2h)) (zero at
-/// the ends), the distribution behind Elliott's coupling function (physics-reference §4.1, §4.3 "for full
-/// consistency with the f-function"), referred to the centre currents I(0). Fixed-order Gauss–Legendre.
+/// the ends), the distribution behind Elliott's coupling function (R. S. Elliott, "An improved design procedure for
+/// small arrays of shunt slots", IEEE Trans. AP-31, 48–53, 1983), referred to the centre currents I(0). Fixed-order Gauss–Legendre.
 /// </summary>
 /// <remarks>
 /// <para>Reaction in mixed-potential form (the induced-EMF integral of Carter 1932 after one integration by parts,

@@ -12,8 +12,7 @@ namespace SlotArray.Core.Coupling;
 /// <para>Structure from R. S. Elliott and L. A. Kurtz, "The design of small slot arrays", IEEE Trans. AP-26,
 /// 214–219, 1978, and R. S. Elliott, "An improved design procedure for small arrays of shunt slots", IEEE Trans.
 /// AP-31, 48–53, 1983 (also Elliott, <i>Antenna Theory and Design</i>, Prentice-Hall 1981, Ch. 8), as
-/// remembered in physics-reference §4 [M]. <b>The constants are not the published ones:</b> physics-reference §4.2
-/// derives them [D] by calibrating the equations against Stevenson's resonant conductance (A. F. Stevenson,
+/// remembered [M]. <b>The constants are not the published ones:</b> they are derived here [D] by calibrating the equations against Stevenson's resonant conductance (A. F. Stevenson,
 /// "Theory of slots in rectangular wave-guides", J. Appl. Phys. 19, 24–38, 1948), the way the published constants
 /// arise. They must be checked against the papers when available; published constants must give identical results
 /// when both use the same normalisation of f.</para>
@@ -24,7 +23,7 @@ public static class ElliottDesignEquations
 {
     /// <summary>
     /// Elliott's coupling function for the assumed aperture distribution cos(πz/(2l)) (zero at the slot ends):
-    /// f(x, l) = [(π/(2kl)) cos(βl) / ((π/(2kl))² − (β/k)²)] · sin(πx/a) (physics-reference §4.1, form after
+    /// f(x, l) = [(π/(2kl)) cos(βl) / ((π/(2kl))² − (β/k)²)] · sin(πx/a) (form after
     /// Elliott 1983 [M], derivation [D]). The removable point βl = π/2 is evaluated by its limit. At kl = π/2 it is
     /// f_r = cos(πλ/(2λg)) (2a/λ)² sin(πx/a). Signed: it follows the sign of the offset x.
     /// </summary>
@@ -48,7 +47,7 @@ public static class ElliottDesignEquations
 
     /// <summary>
     /// The coupling function for a dipole-like aperture distribution sin(k(l − |z|)):
-    /// f(x, l) = [(cos βl − cos kl) / ((1 − (β/k)²) sin kl)] · sin(πx/a) (physics-reference §4.1 [D]). Equal to
+    /// f(x, l) = [(cos βl − cos kl) / ((1 − (β/k)²) sin kl)] · sin(πx/a) (derived here [D] as for Elliott 1983). Equal to
     /// <see cref="CouplingFunction"/> at kl = π/2. Requires 0 &lt; kl &lt; π (the distribution's loop must exist).
     /// </summary>
     /// <param name="guide">The guide (broad wall a; β of TE10).</param>
@@ -69,7 +68,7 @@ public static class ElliottDesignEquations
 
     /// <summary>
     /// Γ0 = (30 Ω/(π R_d)) λ³ λg/(a³ b) (dimensionless), Stevenson's resonant conductance divided by f_r²
-    /// (physics-reference §4.2 [D]; R_d = 73 Ω, 30 Ω = η_S/(4π)). WR-90 at 9.375 GHz: 1.57688 [N].
+    /// (derived here [D] from Stevenson 1948; R_d = 73 Ω, 30 Ω = η_S/(4π)). WR-90 at 9.375 GHz: 1.57688 [N].
     /// </summary>
     public static double Gamma0(RectangularWaveguide guide, Frequency frequency)
     {
@@ -80,7 +79,7 @@ public static class ElliottDesignEquations
     }
 
     /// <summary>
-    /// The active admittances of (E2) (physics-reference §4.2 [D; structure Elliott 1983 [M]]):
+    /// The active admittances of (E2) ([D; structure Elliott 1983 [M]]):
     /// Y_n^a/G0 = f_n² / [ f_n²/(Y_n/G0) + (1/Γ0) Σ_{m≠n} (V_m^s/V_n^s) Z_mn/R_d ],
     /// evaluated in the equivalent form y_n/(1 + y_n C_n/f_n²), C_n the coupling sum, so that it is defined for
     /// y_n = 0 and returns exactly y_n when there is no coupling (Z_mn = 0).
@@ -89,7 +88,7 @@ public static class ElliottDesignEquations
     /// <param name="couplingFunctions">f_n = f(x_n, l_n) (<see cref="CouplingFunction"/>); must not be zero.</param>
     /// <param name="slotVoltages">Slot voltages V_n^s (any common scale and phase); must not be zero.</param>
     /// <param name="mutualImpedances">
-    /// Z_mn (Ω) of the equivalent dipoles referred to the loop currents, as physics-reference §4.2–§4.3 specify
+    /// Z_mn (Ω) of the equivalent dipoles referred to the loop currents (Carter 1932 induced EMF), as (E2) needs them
     /// (<see cref="SlotMutualCoupling.EquivalentDipoleImpedances"/>); the diagonal is not used. Note for the designer:
     /// V^s is the slot voltage at the slot centre, where a sinusoidal distribution of half-length l has
     /// sin(kl) times its loop value; referred to centre values Z_mn would be Z_mn/(sin kl_m sin kl_n), about 2 %

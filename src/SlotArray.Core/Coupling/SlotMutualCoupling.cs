@@ -17,7 +17,7 @@ public readonly record struct LongitudinalSlotPlacement(Length Position, Length 
 /// the dipole impedances of <see cref="DipoleMutualImpedance"/> and the Babinet–Booker maps to slot admittances.
 /// </summary>
 /// <remarks>
-/// <para>Babinet mapping (physics-reference §4.3 [D] and §7.2 [M]): a slot of length 2l and width w, carrying its
+/// <para>Babinet mapping ([D], after H. G. Booker, J. IEE 93 Pt IIIA, 1946 [M]): a slot of length 2l and width w, carrying its
 /// magnetic current along its length, maps to a dipole of the same length and position on the slot axis, a strip
 /// of width w, i.e. a round wire of equivalent radius w/4 (C. M. Butler, "A formulation of the finite-length
 /// narrow slot or strip equation", IEEE Trans. AP-30, 1254–1257, 1982). H. G. Booker, "Slot aerials and their
@@ -34,14 +34,11 @@ public readonly record struct LongitudinalSlotPlacement(Length Position, Length 
 /// </remarks>
 public static class SlotMutualCoupling
 {
-    /// <summary>Equivalent round-wire radius of a strip (or slot) of width w: w/4 (Butler 1982).</summary>
-    public static Length EquivalentRadius(Length width) => 0.25 * width;
-
-    /// <summary>One-sided slot admittance from the dual dipole impedance: Y = 2 Z_d/η0² (S) (Booker 1946; physics-reference §7.2).</summary>
+    /// <summary>One-sided slot admittance from the dual dipole impedance: Y = 2 Z_d/η0² (S) (Booker 1946).</summary>
     public static Complex OneSidedSlotAdmittance(Complex dipoleImpedance)
         => 2 * dipoleImpedance / (PhysicalConstants.Eta0 * PhysicalConstants.Eta0);
 
-    /// <summary>Two-sided slot impedance from the dual dipole impedance: Z_slot = η0²/(4 Z_d) (Ω) (Booker 1946; physics-reference §7.2).</summary>
+    /// <summary>Two-sided slot impedance from the dual dipole impedance: Z_slot = η0²/(4 Z_d) (Ω) (Booker 1946).</summary>
     public static Complex TwoSidedSlotImpedance(Complex dipoleImpedance)
         => PhysicalConstants.Eta0 * PhysicalConstants.Eta0 / (4 * dipoleImpedance);
 
@@ -79,7 +76,7 @@ public static class SlotMutualCoupling
         }
         CheckNoOverlap(slots, x, z, h, k * width.Meters);
 
-        double kr = k * EquivalentRadius(width).Meters;
+        double kr = k * StripEquivalentRadius.Of(width).Meters;
         var values = new Complex[n * n];
         // Fold row i with row n−1−i so that every work item holds n − 1 pairs (balanced across threads).
         int items = (n + 1) / 2;
@@ -92,7 +89,7 @@ public static class SlotMutualCoupling
         return CouplingMatrix.Adopt(n, values);
     }
 
-    /// <summary>The one-sided mutual-admittance matrix Y_mn = 2 Z_mn/η0² (S) of the slots (physics-reference §7.2).</summary>
+    /// <summary>The one-sided mutual-admittance matrix Y_mn = 2 Z_mn/η0² (S) of the slots (Booker 1946).</summary>
     public static CouplingMatrix OneSidedAdmittances(IReadOnlyList<LongitudinalSlotPlacement> slots, Length width,
         Frequency frequency, int maxDegreeOfParallelism = 2)
         => EquivalentDipoleImpedances(slots, width, frequency, maxDegreeOfParallelism)

@@ -50,7 +50,7 @@ public sealed record CoupledTravellingWaveDesign(
 /// </summary>
 /// <remarks>
 /// <para>Why not Elliott's equal-voltage form: R. S. Elliott's design equations (IEEE Trans. AP-31, 48–53, 1983, eqs.
-/// (E1), (E2); physics-reference §4.2) fix the mode voltages V_n by the feed; for a standing-wave array they are equal
+/// (E1), (E2)) fix the mode voltages V_n by the feed; for a standing-wave array they are equal
 /// in magnitude. On a travelling-wave line they are set by the line itself (the power taken by the slots feed-side of
 /// slot n), so they are unknowns of the same system. The coupled network solves exactly that system (line and slot
 /// voltages together), and this designer iterates on it.</para>
@@ -68,7 +68,7 @@ public sealed record CoupledTravellingWaveDesign(
 /// reflections turn each slot voltage off the progression e^{jβz_n}. Each iteration measures the departure δ_n (alternation
 /// sign and circular mean removed) and moves slot n's length by −δ_n/(d arg y_n/dl), the slope of the isolated slot's
 /// admittance phase from the slot model (central difference): with the line and the neighbours fixed, w_n turns with y_n to
-/// first order through the self term f_n²/y_n of the Galerkin equation (Elliott 1983, physics-reference §4.2). The length
+/// first order through the self term f_n²/y_n of the Galerkin equation (Elliott 1983). The length
 /// shift is kept per slot and added to the resonant length of the updated conductance; the amplitude step absorbs the
 /// |y_n| lost off resonance, since it is driven by the measured |e_n|. Stop: the amplitude residual below
 /// <see cref="CoupledTravellingWaveOptions.ToleranceDb"/> and every |δ_n| below
@@ -237,7 +237,7 @@ public static class CoupledTravellingWaveDesigner
     /// <summary>
     /// Length change that turns the isolated slot's admittance phase by <paramref name="turn"/> (one secant step of
     /// arg y(l) from the slot model): with the coupling and the line fixed, the slot voltage w_n turns with y_n to first
-    /// order (the self term f_n²/y_n of the Galerkin equation, physics-reference §4.2).
+    /// order (the self term f_n²/y_n of the Galerkin equation, Elliott 1983).
     /// </summary>
     private static double LengthForPhase(IShuntSlotModel slot, double coupling, double length, double turn, Quantities.Frequency f, int index)
     {

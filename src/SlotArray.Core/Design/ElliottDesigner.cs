@@ -50,13 +50,13 @@ public sealed record ElliottResult(ArrayDesign Design, ArrayDesign Uncoupled, IR
 /// <remarks>
 /// <para>Equations: R. S. Elliott and L. A. Kurtz, "The design of small slot arrays", IEEE Trans. AP-26, 214–219, 1978;
 /// R. S. Elliott, "An improved design procedure for small arrays of shunt slots", IEEE Trans. AP-31, 48–53, 1983;
-/// as in physics-reference §4.2 and §4.4 [M, constants D]. At λg/2 spacing all mode voltages have one magnitude
+/// structure from memory [M], constants derived here [D]. At λg/2 spacing all mode voltages have one magnitude
 /// (alternation absorbed by the offset sides), so (E1) Y^a_n ∝ f_n V^s_n and the match Σ y^a_n = 1 give the targets
 /// T_n = f_n|a_n| / Σ_m f_m|a_m| (real: every active admittance resonant). (E2) with V^s_m/V^s_n = a_m/a_n reads
 /// 1/y(x_n, L_n) + C_n/f(x_n, L_n)² = 1/T_n, C_n = Σ_{m≠n} (a_m/a_n) Z_mn/(Γ0 R_d): two real equations in the two
 /// unknowns (x_n, L_n), solved by damped 2-D Newton on <see cref="ElliottSlotSurrogate"/> (a smooth spline surrogate
 /// of the slot model at the design frequency) with finite-difference Jacobian. The f_m in the targets and the geometry
-/// in C_n are those of the previous iteration (Elliott's iteration, §4.4 steps 2–5), which is repeated until no offset
+/// in C_n are those of the previous iteration (Elliott's iteration, Elliott 1983), which is repeated until no offset
 /// or length changes by more than <see cref="ElliottOptions.Tolerance"/>. Centre feed: targets 2 f_n|a_n|/Σ f_m|a_m|
 /// (Σ y^a = 1 per half for a symmetric taper), as in <see cref="StandingWaveDesigner"/>.</para>
 /// <para>Current reference: f is the coupling function of the cos(πz/(2l)) aperture distribution with V^s the slot

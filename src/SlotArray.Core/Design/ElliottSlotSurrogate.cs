@@ -13,7 +13,7 @@ namespace SlotArray.Core.Design;
 /// </summary>
 /// <remarks>
 /// <para>Why this form: Elliott's observation that the admittance curves of different offsets nearly collapse when
-/// written as g_r(x)·h(L/L_r(x)) (physics-reference §3.1 [M]; R. S. Elliott, <i>Antenna Theory and Design</i>,
+/// written as g_r(x)·h(L/L_r(x)) ([M]; R. S. Elliott, <i>Antenna Theory and Design</i>,
 /// Prentice-Hall 1981, Ch. 8) and Stevenson's g_r ∝ sin²(πx/a) (A. F. Stevenson, J. Appl. Phys. 19, 24–38, 1948)
 /// make q slowly varying in both variables, so a coarse grid interpolates it to well below the moment method's own
 /// convergence (the tests check the surrogate against direct solves between the nodes). Even in x: the admittance

@@ -9,10 +9,10 @@ namespace SlotArray.Core.Design;
 /// alternating coupling sign, conductances g_n ∝ a_n² with Σ g_n = 1 (end feed; 1 per half for the centre feed), the short λg/4 (or 3λg/4) beyond the last slot.
 /// </summary>
 /// <remarks>
-/// <para>Design rules: physics-reference §5.1 [M: R. S. Elliott, <i>Antenna Theory and Design</i>, Prentice-Hall 1981,
+/// <para>Design rules [M: R. S. Elliott, <i>Antenna Theory and Design</i>, Prentice-Hall 1981,
 /// Ch. 8; S. Silver, <i>Microwave Antenna Theory and Design</i>, MIT Rad. Lab. Ser. vol. 12, 1949]. At λg/2 spacing
 /// every resonant slot sees the same mode-voltage magnitude with alternating sign; alternating the offset side
-/// (the sign of the coupling function f ∝ sin(πx/a), physics-reference §4.1) cancels that sign, so all slots radiate in
+/// (the sign of the coupling function f ∝ sin(πx/a), Elliott 1983) cancels that sign, so all slots radiate in
 /// phase and the power radiated by slot n is ∝ g_n. Hence g_n = a_n²/Σ a_m² and, with the short a quarter guide
 /// wavelength beyond the last slot (an open circuit at that slot), the input admittance at resonance is Σ g_n = 1: matched.
 /// A negative amplitude a_n flips the offset side of slot n.</para>
@@ -27,7 +27,7 @@ namespace SlotArray.Core.Design;
 /// Σ_half g_n = 1, i.e. g_n = 2 a_n²/Σ a_m² (Σ_all g_n = 2), and z_feed = (G_left + G_right)/2 = 1. The series current
 /// makes the mode-voltage magnitude equal at every slot of both halves, so g_n ∝ a_n² holds across the junction.
 /// Each half is then a resonant array of N/2 slots with its own Σ g = 1: half the stored energy per radiated watt of an
-/// end-fed array of N slots, hence about twice its bandwidth (physics-reference §5.1 [C]; measured in the tests).
+/// end-fed array of N slots, hence about twice its bandwidth (common practice, no source [C]; measured in the tests).
 /// The series junction reverses E_y across it (symmetric excitation of an E-plane tee gives antiphase collinear
 /// arms), so the offset alternation continues unbroken across the junction.</para>
 /// <para>Isolated slots only: external mutual coupling and wall loss are not compensated (the network analysis

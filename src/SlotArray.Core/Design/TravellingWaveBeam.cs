@@ -5,7 +5,7 @@ namespace SlotArray.Core.Design;
 
 /// <summary>
 /// Main-beam direction (squint) of a slot array fed by a wave travelling along the guide, and its frequency-scan rate
-/// (physics-reference §5.2).
+/// (R. S. Elliott, <i>Antenna Theory and Design</i>, Prentice-Hall 1981, Ch. 8, travelling-wave arrays).
 /// </summary>
 /// <remarks>
 /// <para>Phase condition [D; M: standard, e.g. R. S. Elliott, <i>Antenna Theory and Design</i>, Prentice-Hall 1981,
@@ -13,7 +13,7 @@ namespace SlotArray.Core.Design;
 /// offsets or tilts alternate; the fields add in phase where k d sin θ_b = β d − π·[alternating] − 2πm, m chosen so
 /// that |sin θ_b| ≤ 1 (the smallest |sin θ_b| is the main beam, any other real solution a grating lobe). For
 /// alternating slots sin θ_b = λ/λg − λ/(2d); for same-side slots sin θ_b = λ/λg − λ/d.</para>
-/// <para>Sign (architecture.md "Axes", physics-reference §5.2): θ_b &gt; 0 points toward the load end (the wave's
+/// <para>Sign (architecture.md "Axes"; Elliott 1981): θ_b &gt; 0 points toward the load end (the wave's
 /// direction of travel), θ_b &lt; 0 toward the feed. λ is the free-space wavelength (the slots radiate into air);
 /// λg the guide wavelength, which includes any dielectric filling of the guide.</para>
 /// </remarks>
@@ -67,7 +67,7 @@ public static class TravellingWaveBeam
 
     /// <summary>
     /// Whether a second beam (grating lobe) of the travelling-wave phase condition enters real space:
-    /// d (1 + |sin θ_b|) ≥ λ (physics-reference §5.1, scanned beams).
+    /// d (1 + |sin θ_b|) ≥ λ (the grating-lobe condition of a scanned array, Elliott 1981, Ch. 8).
     /// </summary>
     /// <param name="guide">The guide.</param>
     /// <param name="spacing">Slot spacing d.</param>

@@ -16,26 +16,26 @@ public enum TravellingWaveConductanceForm
 
 /// <summary>
 /// Isolated-slot conductances of a travelling-wave (matched-load) array from the power each slot must radiate,
-/// slot by slot from the feed, with the line loss of each section (physics-reference §5.2).
+/// slot by slot from the feed, with the line loss of each section.
 /// </summary>
 /// <remarks>
 /// <para>Small-g form [M: R. S. Elliott, <i>Antenna Theory and Design</i>, Prentice-Hall 1981, Ch. 8 (travelling-wave
-/// arrays); R. C. Hansen, <i>Phased Array Antennas</i>, Wiley 1998; physics-reference §5.2, High]: a slot of small
+/// arrays); R. C. Hansen, <i>Phased Array Antennas</i>, Wiley 1998; from memory, High confidence]: a slot of small
 /// conductance g radiates g times the power arriving at it, so g_n = P_n / A_n, with A_n the power arriving at slot n.
 /// Lossless, A_n = P_L + Σ_{m≥n} P_m.</para>
-/// <para>Single shunt on a matched line [D: physics-reference §5.2, derived from the reflection Γ = −g/(2 + g) of a
+/// <para>Single shunt on a matched line [D: derived here from the reflection Γ = −g/(2 + g) of a
 /// shunt conductance between matched lines]: the slot absorbs p = 4g/(2 + g)² of the arriving power, reflects
 /// g²/(2 + g)² and passes 4/(2 + g)². Inverting, g = 2[(1 − p) − √(1 − 2p)]/p (the root with g ≤ 2); p ≤ 0.5 is the
 /// hard limit reached at g = 2. The reflected power is booked as lost, so the power arriving at the next slot is
 /// (A_n − P_n − R_n) e^{−2αd}. Neither form includes the phase-dependent recombination of the reflections: the
 /// network refinement of <see cref="TravellingWaveDesigner"/> does.</para>
 /// <para>Line loss: each section of length d between slots multiplies the power travelling on by e^{−2αd}
-/// (α the TE10 attenuation in Np/m, physics-reference §1 and §5.2).</para>
+/// (α the TE10 attenuation in Np/m, D. M. Pozar, <i>Microwave Engineering</i>, 4th ed., 2012, eq. 3.96).</para>
 /// </remarks>
 public static class TravellingWaveConductances
 {
     /// <summary>
-    /// Fraction of the arriving power a shunt conductance g on a matched line absorbs: p = 4g/(2 + g)² (physics-reference §5.2 [D]).
+    /// Fraction of the arriving power a shunt conductance g on a matched line absorbs: p = 4g/(2 + g)² ([D], see remarks).
     /// </summary>
     /// <param name="conductance">Normalised conductance g = G/G0, ≥ 0.</param>
     public static double AbsorbedFraction(double conductance)
@@ -56,7 +56,7 @@ public static class TravellingWaveConductances
 
     /// <summary>
     /// The conductance g ≤ 2 of a shunt on a matched line that absorbs the fraction p of the arriving power:
-    /// g = 2[(1 − p) − √(1 − 2p)]/p (physics-reference §5.2 [D]); written as g = 2p/[(1 − p) + √(1 − 2p)] (the same
+    /// g = 2[(1 − p) − √(1 − 2p)]/p ([D], the inverse of <see cref="AbsorbedFraction"/>); written as g = 2p/[(1 − p) + √(1 − 2p)] (the same
     /// value, free of cancellation at small p). Throws <see cref="InfeasibleDesignException"/> for p &gt; 0.5.
     /// </summary>
     /// <param name="fraction">p, 0 ≤ p ≤ 0.5.</param>

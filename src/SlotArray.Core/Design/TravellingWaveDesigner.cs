@@ -77,7 +77,7 @@ public sealed record TravellingWaveDesign(
 /// <summary>
 /// Travelling-wave (non-resonant) array of shunt slots: spacing d ≠ λg/2, alternating offsets or tilts, a matched load
 /// beyond the last slot, each slot radiating its share P_n ∝ a_n² of the taper, and the fraction P_L of the input
-/// power left for the load (physics-reference §5.2).
+/// power left for the load (small-g form, Elliott 1981, Ch. 8; see <c>TravellingWaveConductances</c>).
 /// </summary>
 /// <remarks>
 /// <para>Layout and datum: the longitudinal datum is the inner face of the load-end flange, z = 0, where the matched
@@ -85,7 +85,7 @@ public sealed record TravellingWaveDesign(
 /// feed plane (the inner face of the feed flange) lies the same distance beyond slot N. The wave travels from the
 /// feed toward the datum, so the beam squints toward the load end for θ_b &gt; 0 (architecture.md "Axes",
 /// <see cref="TravellingWaveBeam"/>), the sign the pattern analysis (<see cref="ArrayFigures"/>) uses.</para>
-/// <para>Method. (1) Closed-form start, slot by slot from the feed (<see cref="TravellingWaveConductances"/>):
+/// <para>Method. (1) Closed-form start, slot by slot from the feed (<c>TravellingWaveConductances</c>):
 /// T_n = c a_n² with the scale c found (bisection, 1e-12 relative) so that, with the section losses e^{−2αd}
 /// and (single-shunt form) the reflections booked as lost, exactly P_L reaches the load. (2) Refinement on the full
 /// network model: the same lossy line the analysis uses (<see cref="ArrayNetwork"/>'s line network, matched load,

@@ -54,7 +54,8 @@ public sealed record CutList(Datums Datums, CutListGuide Guide, IReadOnlyList<Cu
 {
     /// <summary>
     /// Builds the rows from generic per-slot inputs: overall length by the equal-area rule (<see cref="RoundEndedSlot"/>,
-    /// physics-reference §9.1 [C]), transverse position and depth of cut by <see cref="Fabrication.Datums"/> (§9.3 [C]).
+    /// common practice [C]), transverse position and depth of cut by <see cref="Fabrication.Datums"/> (ASME Y14.5 baseline
+    /// dimensioning [C]).
     /// </summary>
     /// <param name="guide">The guide.</param>
     /// <param name="slots">The slots (any order; numbers unique).</param>

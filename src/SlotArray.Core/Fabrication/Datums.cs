@@ -27,7 +27,7 @@ public enum TransverseDatumSide
 /// The drawing's datums and the dimensioning rules for slot positions.
 /// </summary>
 /// <remarks>
-/// Principle [C: physics-reference §9.3, after ASME Y14.5 baseline dimensioning]: every slot centre is dimensioned from
+/// Principle [C: common practice, after ASME Y14.5 baseline dimensioning]: every slot centre is dimensioned from
 /// one datum so that errors do not accumulate (baseline, not chain dimensioning); transverse positions of broad-wall
 /// slots are given from the outside of a datum narrow wall as t + a/2 ± x; edge slots carry their centre along the
 /// narrow wall, their signed tilt and the depth of cut into each broad wall from the outer narrow-wall face.
@@ -61,7 +61,7 @@ public sealed record Datums(LongitudinalDatumKind Longitudinal, TransverseDatumS
 
     /// <summary>
     /// Transverse position of a broad-wall longitudinal slot's centre from the OUTSIDE of the datum narrow wall:
-    /// t + a/2 + x from the −x wall, t + a/2 − x from the +x wall (physics-reference §9.3 [C]).
+    /// t + a/2 + x from the −x wall, t + a/2 − x from the +x wall (baseline dimensioning from a side-wall datum [C]).
     /// </summary>
     /// <param name="sideWallThickness">Thickness t of the datum narrow wall, ≥ 0.</param>
     /// <param name="broadWall">Inside broad dimension a, &gt; 0.</param>
@@ -86,7 +86,7 @@ public sealed record Datums(LongitudinalDatumKind Longitudinal, TransverseDatumS
     /// crosses the narrow wall over b/cos θ and runs (D − t) into each broad wall, so its path length is
     /// b/cos θ + 2(D − t). Setting that path equal to the slot's equivalent length L is an approximation [C: common
     /// practice, no source]; production edge-slot arrays calibrate depth against measured or full-wave resonance
-    /// (physics-reference §2.3 caveats).
+    /// (an edge slot wraps into both broad walls because b &lt; λ/2; see <c>EdgeSlotConductance</c>).
     /// </remarks>
     /// <param name="slotLength">Equivalent slot length L along the cut path, &gt; 0.</param>
     /// <param name="tilt">Tilt θ from the direction perpendicular to the guide axis, |θ| &lt; 90°.</param>

@@ -23,10 +23,10 @@ public sealed record GeneralToleranceRow(Iso2768Class Class, Length Above, Lengt
 /// </summary>
 /// <remarks>
 /// ISO 2768-1:1989 "General tolerances — Part 1: Tolerances for linear and angular dimensions without individual
-/// tolerance indications", Table 1, classes f and m, nominal sizes 0.5–2000 mm [M, Medium: physics-reference §9.2, values
-/// from memory]. The sheet gives class f as ±0.05 mm up to 6 mm (0.5–3 and 3–6 mm share it); for nominal sizes below
+/// tolerance indications", Table 1, classes f and m, nominal sizes 0.5–2000 mm [M, Medium: values
+/// from memory]. Class f is taken as as ±0.05 mm up to 6 mm (0.5–3 and 3–6 mm share it); for nominal sizes below
 /// 0.5 mm ISO 2768-1 asks for the tolerance to be stated next to the dimension, so none is returned.
-/// Slot-specific figures [C: common practice, physics-reference §9.2]: ±0.025 mm (±0.001 in) on slot length, width and
+/// Slot-specific figures [C: common practice, no source]: ±0.025 mm (±0.001 in) on slot length, width and
 /// position is routine precision CNC milling for X-band arrays; ±0.05 mm is commodity work.
 /// </remarks>
 public static class GeneralTolerances

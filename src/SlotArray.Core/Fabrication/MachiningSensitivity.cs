@@ -4,14 +4,14 @@ using SlotArray.Core.Waveguides;
 namespace SlotArray.Core.Fabrication;
 
 /// <summary>
-/// How machining errors move the electrical quantities, to size tolerances (physics-reference §9.2 [D; N]).
+/// How machining errors move the electrical quantities, to size tolerances (derived here from the cited formulas [D]; WR-90 values by numpy [N]).
 /// </summary>
 public static class MachiningSensitivity
 {
     /// <summary>
     /// Relative change of a longitudinal slot's Stevenson conductance per unit offset error, d(ln g)/dx = (2π/a) cot(πx/a)
     /// (1/m). From g ∝ sin²(πx/a) (A. F. Stevenson, "Theory of slots in rectangular wave-guides", J. Appl. Phys. 19,
-    /// 24–38, 1948; physics-reference §2.1), differentiated [D] (§9.2: WR-90, x = 2.098 mm → 0.927 /mm).
+    /// 24–38, 1948), differentiated [D] ([N]: WR-90, x = 2.098 mm → 0.927 /mm).
     /// </summary>
     /// <param name="offset">Offset x from the centreline, 0 &lt; |x| &lt; a/2 (the sign does not matter).</param>
     /// <param name="broadWall">Inside broad dimension a.</param>
@@ -26,7 +26,7 @@ public static class MachiningSensitivity
     /// <summary>
     /// Sensitivity of the guide wavelength to the broad dimension, (dλg/λg)/(da/a) = −u/(1 − u), u = (λ/2a)², λ the
     /// wavelength in the filling. From λg = λ/√(1 − (λ/2a)²) (D. M. Pozar, <i>Microwave Engineering</i>, 4th ed., 2012,
-    /// Sec. 3.3) differentiated [D] (physics-reference §9.2: −0.958 for WR-90 at 9.375 GHz).
+    /// Sec. 3.3) differentiated [D] ([N]: −0.958 for WR-90 at 9.375 GHz).
     /// </summary>
     /// <param name="guide">The guide.</param>
     /// <param name="f">Frequency, above the TE10 cutoff.</param>
@@ -42,7 +42,7 @@ public static class MachiningSensitivity
     /// <summary>
     /// Phase error accumulated over a length of line when the broad dimension is off by Δa:
     /// Δφ = −β ℓ (dλg/λg) = −(2π ℓ/λg) S Δa/a, S from <see cref="GuideWavelengthWidthSensitivity"/> [D]
-    /// (physics-reference §9.2: ±0.076 mm on WR-90 at 9.375 GHz gives about 0.58° per λg/2 section).
+    /// ([N]: ±0.076 mm on WR-90 at 9.375 GHz gives about 0.58° per λg/2 section).
     /// Positive when the guide is wider than designed (λg shorter, more phase).
     /// </summary>
     /// <param name="guide">The guide as designed.</param>
@@ -58,7 +58,7 @@ public static class MachiningSensitivity
 
     /// <summary>
     /// Relative shift of a slot's resonant frequency for a length error, Δf/f ≈ −ΔL/L (resonance scales about as 1/L)
-    /// [D; physics-reference §9.2: ±0.025 mm on 15 mm ≈ ∓0.17 %].
+    /// [D; ±0.025 mm on 15 mm ≈ ∓0.17 %].
     /// </summary>
     /// <param name="slotLength">Slot length L, &gt; 0.</param>
     /// <param name="lengthError">ΔL, signed.</param>

@@ -7,10 +7,10 @@ namespace SlotArray.Core.Fabrication;
 /// the equivalent rectangular length the electrical models assume.
 /// </summary>
 /// <remarks>
-/// Equal-area rule [C: common practice, no authoritative source found; physics-reference §9.1]: the round-ended slot
+/// Equal-area rule [C: common practice, no authoritative source found]: the round-ended slot
 /// has the area of the rectangular slot of length L_eq and the same width. With a cutter of diameter D_t equal to the
 /// width w the ends are semicircles of radius w/2 and L_o = L_eq + (1 − π/4) w (w = 1.5875 mm: +0.3407 mm,
-/// physics-reference §11 #36 [N]). With a cutter narrower than the slot (several passes) the four corners keep the cutter
+/// [N]). With a cutter narrower than the slot (several passes) the four corners keep the cutter
 /// radius r = D_t/2; the same rule then gives L_o = L_eq + (4 − π) r²/w [D: this project, the area of the four corner
 /// fillets], which reduces to the first form at r = w/2. Oliner (1957, Part II) measured a difference between round and
 /// rectangular ends but no numeric correction was confirmed, so treat this as a default to calibrate.

@@ -17,7 +17,7 @@ public enum SlotEndForm
 /// <param name="CutterDiameter">End-mill diameter for round ends; null for square ends.</param>
 public sealed record SlotEnd(SlotEndForm Form, Length? CutterDiameter)
 {
-    /// <summary>The note a drawing must carry for square-ended slots (physics-reference §9.1 [C]).</summary>
+    /// <summary>The note a drawing must carry for square-ended slots (common practice [C]).</summary>
     public const string SquareEndNote = "square-ended slots cannot be milled: they need EDM, broaching or a punch";
 
     /// <summary>Round ends from an end mill of the given diameter.</summary>

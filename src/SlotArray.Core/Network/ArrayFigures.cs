@@ -31,9 +31,9 @@ public sealed record FrequencyFigures(NetworkSolution Network, Pattern Pattern, 
 /// <summary>
 /// Far-field figures from the network's slot excitations: the array factor of the excitations
 /// <see cref="NetworkSolution.Excitations"/> at the slot positions times the half-wave slot's element pattern in the
-/// plane of the guide axis (physics-reference §7.1; pattern multiplication, C. A. Balanis, <i>Antenna Theory</i>,
+/// plane of the guide axis (<c>ElementPatterns.HalfWaveSlotHPlane</c>; pattern multiplication, C. A. Balanis, <i>Antenna Theory</i>,
 /// 3rd ed., Wiley 2005, Sec. 6.2), the metrics of the Patterns library, the half-space directivity
-/// (physics-reference §7.3) and gain = D × η_rad × (1 − |S11|²) (η_rad = radiated/accepted power; the IEEE Std 145
+/// (the IEEE Std 145-2013 definition over the front half-space) and gain = D × η_rad × (1 − |S11|²) (η_rad = radiated/accepted power; the IEEE Std 145
 /// gain times the mismatch factor, i.e. the realised gain). Isolated slots: no mutual coupling, infinite ground plane.
 /// </summary>
 /// <remarks>
@@ -85,7 +85,7 @@ public static class ArrayFigures
             var coMetrics = PatternMetrics.Measure(coPattern);
             var cross = CrossPolarPattern.Compute(positions, excitations, tilts, k, coPattern);
             // Uniform element over the half-space: ∫|AF|² du = 2 Σ a_m a_n* sinc(kΔz), so the half-space directivity is exactly
-            // twice the isotropic full-sphere one (physics-reference §7.3), in closed form.
+            // twice the isotropic full-sphere one (IEEE Std 145-2013 definition), in closed form.
             double dCo = 2 * Patterns.Directivity.Isotropic(positions, co, k, coMetrics.BeamDirection.Radians);
             double dEdge = dCo / (1 + cross.PowerRatio);
             return new FrequencyFigures(network, coPattern, coMetrics, dEdge, dEdge * network.RadiatedPower) { CrossPolar = cross };

@@ -12,13 +12,13 @@ namespace SlotArray.Core.Network;
 /// </summary>
 /// <remarks>
 /// <para>Slot excitation for the pattern. In Elliott's formulation the slot voltage is V_n^s ∝ y_n V_n / f(x_n)
-/// (physics-reference §4.2, (E1) with Y^a = Y for isolated slots; R. S. Elliott, <i>Antenna Theory and Design</i>,
-/// Prentice-Hall 1981, Ch. 8, from memory), with f ∝ sin(πx_n/a) the coupling function of §4.1, odd in the offset.
+/// ((E1) of Elliott 1983 with Y^a = Y for isolated slots; R. S. Elliott, <i>Antenna Theory and Design</i>,
+/// Prentice-Hall 1981, Ch. 8, from memory), with f ∝ sin(πx_n/a) the coupling function (Elliott 1983), odd in the offset.
 /// For an isolated-slot model that f is not available, so this analysis uses the equivalent form
 /// e_n = sign(c_n) · √P_n · e^{j arg(y_n V_n)}, P_n = ½ Re(y_n)|V_n|²/P_inc: the phase of y_n V_n plus the offset
 /// side's sign (the sign of f), and the magnitude of a slot whose exterior pattern is fixed (the half-wave slot) and
 /// whose radiated power is P_n. It equals V_n^s up to one constant factor whenever |f_n|² ∝ Re y_n at resonance, as
-/// for Stevenson's slot (g_r = Γ0 f_r², physics-reference §4.2).</para>
+/// for Stevenson's slot (g_r = Γ0 f_r², Stevenson 1948).</para>
 /// <para>Powers are fractions of the incident power; the balance radiated + wall loss + load + reflected = 1 holds
 /// to rounding (<see cref="NetworkSolution.PowerBalanceError"/>).</para>
 /// </remarks>

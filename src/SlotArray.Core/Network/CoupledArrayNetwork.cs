@@ -14,7 +14,7 @@ namespace SlotArray.Core.Network;
 /// </summary>
 /// <remarks>
 /// <para>Formulation (structure of R. S. Elliott and L. A. Kurtz, IEEE Trans. AP-26, 214–219, 1978, and R. S. Elliott,
-/// IEEE Trans. AP-31, 48–53, 1983, as in physics-reference §4.2 [M, D]). Slot n has mode voltage V_n (the TE10 line
+/// IEEE Trans. AP-31, 48–53, 1983; structure from memory [M], constants derived here [D]). Slot n has mode voltage V_n (the TE10 line
 /// voltage at its centre) and a scaled slot voltage w_n (the aperture voltage at its centre, in units in which the
 /// slot's shunt current is i_n = f_n w_n, f_n = f(x_n, l_n) Elliott's coupling function). The Galerkin condition of
 /// slot n with self and external mutual terms reads
@@ -39,7 +39,7 @@ namespace SlotArray.Core.Network;
 /// the same V and S11) to get wall loss, powers and the peak field; the power into slot n, Re(i_n V_n*), may be
 /// negative for a slot that takes power from its neighbours, and their sum is the radiated power. The excitations
 /// are the slot voltages, e_n = w_n/√Γ0, which equal <see cref="ArrayNetwork"/>'s power-based excitations when the
-/// slot has Stevenson's resonant conductance Γ0 f_r² (physics-reference §4.2).</para>
+/// slot has Stevenson's resonant conductance Γ0 f_r² (Stevenson 1948).</para>
 /// </remarks>
 public static class CoupledArrayNetwork
 {

@@ -18,7 +18,7 @@ public delegate CouplingMatrix MutualImpedanceModel(IReadOnlyList<LongitudinalSl
 /// Elliott's equations with the same aperture distribution and the same reference point.
 /// </summary>
 /// <remarks>
-/// <para>Reference of the currents (physics-reference §4.2–§4.3). Elliott's coupling function f(x, l)
+/// <para>Reference of the currents (Elliott 1983; Carter 1932). Elliott's coupling function f(x, l)
 /// (<see cref="ElliottDesignEquations.CouplingFunction"/>) is derived for the aperture distribution cos(πz/(2l)) and
 /// multiplies the slot voltage V^s at the slot centre. The mutual impedance that belongs with it is therefore the
 /// reaction of two half-cosine currents referred to their centre values:

@@ -24,7 +24,7 @@ namespace SlotArray.Core.Network;
 /// Largest |V(z)| anywhere on the line between the terminations and the feed plane, in units of the incident wave's
 /// voltage: the peak E field inside the guide is this factor times the peak field of the incident wave alone (a matched
 /// line of the same wave impedance carrying the same incident power), the standing-wave factor for power-handling checks
-/// (physics-reference §1.1). Centre feed: each half carries part of the power, so the factor is about 1/√2 at resonance.
+/// (common practice [C], see <c>PowerHandling</c>). Centre feed: each half carries part of the power, so the factor is about 1/√2 at resonance.
 /// </param>
 /// <param name="PeakPosition">z (from the datum) where that peak occurs.</param>
 public sealed record NetworkSolution(

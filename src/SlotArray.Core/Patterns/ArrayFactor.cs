@@ -8,7 +8,7 @@ namespace SlotArray.Core.Patterns;
 /// Far-field array factor of N elements on a line (the z axis) with complex excitations:
 /// AF(θ) = Σ_n a_n exp(j k z_n sin θ), θ from broadside in the plane containing the axis, θ &gt; 0 toward +z
 /// (C. A. Balanis, <i>Antenna Theory</i>, 3rd ed., Wiley 2005, eq. 6-52 (equation number from memory) with the angle measured from broadside;
-/// physics-reference §6, ψ = k d sin θ). With this sign a progressive phase a_n ∝ exp(−j k z_n sin θ0) steers the
+/// ψ = k d sin θ). With this sign a progressive phase a_n ∝ exp(−j k z_n sin θ0) steers the
 /// beam to θ0. The total field is E(θ)·AF(θ) for an element pattern E (pattern multiplication, Balanis §6.2).
 /// </summary>
 public static class ArrayFactor

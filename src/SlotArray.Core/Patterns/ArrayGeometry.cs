@@ -5,7 +5,7 @@ public static class ArrayGeometry
 {
     /// <summary>
     /// N equally spaced positions centred on z = 0: z_n = (n − (N − 1)/2)·d, n = 0 … N − 1
-    /// (physics-reference §6, "Pattern variable").
+    /// (Balanis, <i>Antenna Theory</i>, 3rd ed., 2005, Sec. 6.3, array centred on the origin).
     /// </summary>
     /// <param name="count">Number of elements, ≥ 1.</param>
     /// <param name="spacing">Element spacing d, m, &gt; 0.</param>

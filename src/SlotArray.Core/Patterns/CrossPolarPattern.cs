@@ -12,7 +12,7 @@ public sealed record CrossPolarFigures(Pattern Pattern, double PeakLevelDb, Angl
 
 /// <summary>
 /// Co- and cross-polarised far field of narrow-wall (edge) slots tilted ±θ_n, in the plane containing the guide axis
-/// and the narrow-wall normal: a second array factor for the cross-polarised components (physics-reference §2.3 [D]).
+/// and the narrow-wall normal: a second array factor for the cross-polarised components (derived here [D]; see <c>EdgeSlotCrossPolarization</c>).
 /// </summary>
 /// <remarks>
 /// <para>Decomposition [D: this project, from the far field of a magnetic current, E ∝ r̂ × M; C. A. Balanis,
@@ -21,7 +21,7 @@ public sealed record CrossPolarFigures(Pattern Pattern, double PeakLevelDb, Angl
 /// In the plane of the guide axis and the wall normal x̂, with r̂ = cos ψ x̂ + sin ψ ẑ (ψ from broadside):
 /// r̂ × ŷ has unit length, so the ŷ component (∝ cos θ_n) radiates the co-polarised field (E in the plane of the cut:
 /// horizontal polarisation for a horizontal guide) UNIFORMLY over the half-space: in that plane the slot is seen in
-/// its E-plane (physics-reference §7.1: the plane perpendicular to the slot axis is uniform over the half-space);
+/// its E-plane (Balanis 2005, slot as the dual of the half-wave dipole: the plane perpendicular to the slot axis is uniform over the half-space);
 /// |r̂ × ẑ| = cos ψ, so the ẑ component (∝ sin θ_n) radiates the cross-polarised field (E along ŷ) with the element
 /// pattern cos ψ. The half-wave slot's own length factor F(u) = cos(πu/2)/(1 − u²), u = ŝ·r̂ = sin θ_n sin ψ, stays above 0.94
 /// for the tilts in use (|sin θ_n| ≤ 0.5; above 0.99 for θ_n = 15°, ψ = 45°) and is omitted for both. Finite narrow face: the wall is only b + 2t tall, so
@@ -32,7 +32,7 @@ public sealed record CrossPolarFigures(Pattern Pattern, double PeakLevelDb, Angl
 /// no longer alternates with the tilts. The cross-polarised sources therefore lack the π alternation: for a
 /// standing-wave array (broadside co-polar beam) they add in phase at sin ψ = ±λ/(2d), for a travelling-wave array at
 /// sin ψ = sin θ_b ± λ/(2d), with a peak tan θ below the co-polar beam for equal tilts before element weighting
-/// (physics-reference §2.3).</para>
+/// ([D], <c>EdgeSlotCrossPolarization</c>).</para>
 /// </remarks>
 public static class CrossPolarPattern
 {

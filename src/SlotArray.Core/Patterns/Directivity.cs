@@ -4,7 +4,7 @@ using Complex = System.Numerics.Complex;
 namespace SlotArray.Core.Patterns;
 
 /// <summary>
-/// Directivity D(θ0) = 4π U(θ0) / ∫∫ U dΩ of a linear array (physics-reference §7.3; the standard definition,
+/// Directivity D(θ0) = 4π U(θ0) / ∫∫ U dΩ of a linear array (the standard definition,
 /// IEEE Std 145-2013, "directivity"; C. A. Balanis, <i>Antenna Theory</i>, 3rd ed., Wiley 2005, eq. 2-16, number from memory).
 /// The array lies on the z axis; θ is measured from broadside in a plane containing the axis, and the pattern is
 /// taken as rotationally symmetric about the axis within the region integrated, so with u = sin θ (the cosine of
@@ -16,7 +16,7 @@ public static class Directivity
     /// <summary>
     /// Isotropic elements radiating into the full sphere, closed form:
     /// D(θ0) = |AF(θ0)|² / Σ_m Σ_n a_m a_n* sinc(k(z_m − z_n)), sinc x = sin x / x (from ∫ e^{jkΔz u} du/2 over
-    /// [−1, 1]; physics-reference §7.3, Balanis 2005 Sec. 6.10 for the uniform case, from memory). O(N²); equally spaced
+    /// [−1, 1]; Balanis 2005 Sec. 6.10 for the uniform case, from memory). O(N²); equally spaced
     /// positions use the lag sums of the excitations so that each sinc is evaluated once.
     /// </summary>
     /// <param name="positions">Element positions z_n, m.</param>
@@ -58,7 +58,7 @@ public static class Directivity
     /// <summary>
     /// Elements with pattern E(θ) in front of an infinite ground plane, radiating into the half-space only, the
     /// field independent of φ there (φ-range π): D(θ0) = 4 |E·AF|²(θ0) / ∫_{−1}^{1} |E·AF|² du
-    /// (physics-reference §7.3). Integrated by composite 16-point Gauss–Legendre in u, with a panel for every
+    /// (IEEE Std 145-2013 definition over the front half-space). Integrated by composite 16-point Gauss–Legendre in u, with a panel for every
     /// π/(k·span) of u (≥ 8 panels), which resolves the array factor's oscillation.
     /// </summary>
     /// <param name="positions">Element positions, m.</param>

@@ -9,7 +9,7 @@ public static class ElementPatterns
     /// <summary>
     /// Half-wave slot in an infinite ground plane, H-plane cut (the plane of the slot axis and the normal, i.e. the
     /// array-axis plane of collinear longitudinal slots): E(θ) = cos((π/2) sin θ) / cos θ, θ from the normal.
-    /// Source: physics-reference §7.1, the dual of the half-wave dipole (C. A. Balanis, <i>Antenna Theory</i>,
+    /// Source: the dual of the half-wave dipole (C. A. Balanis, <i>Antenna Theory</i>,
     /// 3rd ed., Wiley 2005, slot antennas via Babinet's principle, and eq. 4-84 for the dipole). Its limit at
     /// θ = ±90° is 0, returned there.
     /// </summary>

@@ -74,11 +74,13 @@ public sealed record PatternMetrics(
     /// to the bit), for loops that need no other figure (the tolerance trials).
     /// </summary>
     internal static (double BeamDirection, double? PeakSidelobeDb) BeamAndPeakSidelobe(Pattern pattern)
+        => BeamAndPeakSidelobe(pattern.Theta, pattern.Power, pattern.PeakPower);
+
+    /// <summary><see cref="BeamAndPeakSidelobe(Pattern)"/> of a power cut <paramref name="p"/> at the angles <paramref name="th"/> whose largest value is <paramref name="peakPower"/>.</summary>
+    internal static (double BeamDirection, double? PeakSidelobeDb) BeamAndPeakSidelobe(ImmutableArray<double> th, ImmutableArray<double> p, double peakPower)
     {
-        if (!(pattern.PeakPower > 0)) throw new ArgumentException("The pattern is zero everywhere: check the excitations.", nameof(pattern));
-        var th = pattern.Theta;
-        var p = pattern.Power;
-        int i0 = p.IndexOf(pattern.PeakPower);
+        if (!(peakPower > 0)) throw new ArgumentException("The pattern is zero everywhere: check the excitations.", nameof(p));
+        int i0 = p.IndexOf(peakPower);
         var (beam, peak) = LobeSearch.RefineMaximum(th, p, i0);
         int iL = LobeSearch.DescendTo(p, i0, -1), iR = LobeSearch.DescendTo(p, i0, +1);
         var (psl, _) = PeakSidelobe(th, p, iL, iR);
@@ -102,7 +104,7 @@ public sealed record PatternMetrics(
     }
 
     /// <summary>
-    /// Taper efficiency of a discrete aperture, η_t = |Σ a_n|² / (N Σ |a_n|²) (the standard definition, physics-reference §7.4 [D];
+    /// Taper efficiency of a discrete aperture, η_t = |Σ a_n|² / (N Σ |a_n|²) (the standard definition, e.g. R. C. Hansen, <i>Phased Array Antennas</i>, Wiley 1998, from memory;
     /// 1 for uniform excitation, less for any taper).
     /// </summary>
     /// <param name="weights">Element excitations (real).</param>

@@ -2,7 +2,7 @@ using SlotArray.Core.Quantities;
 
 namespace SlotArray.Core.Safety;
 
-/// <summary>Region of an aperture's field at a distance, by the OET-65 boundaries (physics-reference §8.4 [M, Medium]).</summary>
+/// <summary>Region of an aperture's field at a distance, by the OET-65 boundaries (FCC OET Bulletin 65, Ed. 97-01, 1997 [M, Medium]).</summary>
 public enum FieldRegion
 {
     /// <summary>Closer than D²/(4λ): radiating near field; the on-axis density is bounded by 4P/A.</summary>
@@ -69,8 +69,8 @@ public sealed record ExposureAssessment(
         [.. new[] { 1.0, 2, 5, 10, 20, 50, 100 }.Select(Length.FromMeters)];
 
     /// <summary>
-    /// Builds the assessment. Formulas: <see cref="PowerDensity"/> (physics-reference §8.1, §8.4); levels:
-    /// <see cref="Icnirp2020"/> (§8.2). The larger of the two aperture dimensions is taken as D.
+    /// Builds the assessment. Formulas: <see cref="PowerDensity"/> (Friis 1946; FCC OET Bulletin 65, 1997); levels:
+    /// <see cref="Icnirp2020"/> (ICNIRP 2020). The larger of the two aperture dimensions is taken as D.
     /// </summary>
     /// <param name="averagePower">Time-averaged power accepted by the antenna, W; ≥ 0.</param>
     /// <param name="gainDbi">Gain on the beam axis, dBi.</param>

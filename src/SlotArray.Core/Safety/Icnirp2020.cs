@@ -8,7 +8,7 @@ namespace SlotArray.Core.Safety;
 /// <remarks>
 /// Source: International Commission on Non-Ionizing Radiation Protection (ICNIRP), "Guidelines for limiting
 /// exposure to electromagnetic fields (100 kHz to 300 GHz)", Health Physics 118(5):483–524, 2020, Tables 5 and 6,
-/// as restated in the project's physics reference §8.2:
+/// with the provenance of each value:
 /// <list type="bullet">
 /// <item>Table 5, whole body, &gt;2–300 GHz, 30 min: 10 W/m² general public, 50 W/m² occupational [M, High].</item>
 /// <item>Table 6, local, &gt;2–6 GHz, 6 min: 40 W/m² general public, 200 W/m² occupational [S: the table as

@@ -4,11 +4,11 @@ namespace SlotArray.Core.Safety;
 
 /// <summary>
 /// IEEE C95.1-2019 power-density reference levels, for comparison with ICNIRP 2020. [M, Medium]: the tables could not be
-/// retrieved when the physics reference was written (§8.3); verify against the standard before relying on them.
+/// retrieved when this was written; verify against the standard before relying on them.
 /// </summary>
 /// <remarks>
 /// Source: IEEE Std C95.1-2019, "IEEE Standard for Safety Levels with Respect to Human Exposure to Electric, Magnetic,
-/// and Electromagnetic Fields, 0 Hz to 300 GHz", 2019 (title [S], values [M, Medium], physics-reference §8.3).
+/// and Electromagnetic Fields, 0 Hz to 300 GHz", 2019 (title [S], values [M, Medium]).
 /// "Unrestricted environment" maps to <see cref="ExposureTier.GeneralPublic"/>, "restricted" to
 /// <see cref="ExposureTier.Occupational"/>. Whole body 2–300 GHz: 10 / 50 W/m² (30 min); local above 6 GHz:
 /// 55 f_G^−0.177 / 275 f_G^−0.177 W/m² over 4 cm², harmonised with ICNIRP 2020.
@@ -51,7 +51,7 @@ public static class IeeeC95_1_2019
 
 /// <summary>
 /// US regulatory limits for comparison: FCC 47 CFR §1.1310 Table 1, 1.5–100 GHz: 1 mW/cm² = 10 W/m² general
-/// population/uncontrolled (30 min), 5 mW/cm² = 50 W/m² occupational/controlled (6 min) [M, High; physics-reference §8.3].
+/// population/uncontrolled (30 min), 5 mW/cm² = 50 W/m² occupational/controlled (6 min) [M, High].
 /// </summary>
 public static class Fcc47Cfr1310
 {

@@ -8,14 +8,14 @@ namespace SlotArray.Core.Safety;
 /// </summary>
 /// <remarks>
 /// The far-field formula S = P G/(4π R²) is the Friis free-space power density (H. T. Friis, "A note on a simple
-/// transmission formula", Proc. IRE 34, 254–256, 1946; from memory) as restated in physics-reference §8.1 [N].
+/// transmission formula", Proc. IRE 34, 254–256, 1946; from memory).
 /// It holds beyond the far-field distance 2D²/λ; closer in it over-estimates the on-axis density of a focused
-/// (in-phase) aperture and is used only as a conservative screen (physics-reference §8.4).
+/// (in-phase) aperture and is used only as a conservative screen (FCC OET Bulletin 65, Ed. 97-01, 1997).
 /// </remarks>
 public static class PowerDensity
 {
     /// <summary>
-    /// Far-field power density on the beam axis, S = P G/(4π R²) (W/m²). physics-reference §8.1.
+    /// Far-field power density on the beam axis, S = P G/(4π R²) (W/m²) (Friis 1946).
     /// </summary>
     /// <param name="averagePower">Time-averaged power accepted by the antenna, W; ≥ 0 (P_avg = P_peak × duty cycle).</param>
     /// <param name="gainDbi">Antenna gain on the beam axis, dBi.</param>
@@ -30,7 +30,7 @@ public static class PowerDensity
 
     /// <summary>
     /// The on-axis distance at which the far-field density falls to <paramref name="powerDensity"/>:
-    /// R = √(P G/(4π S)), the inverse of <see cref="FarFieldOnAxis"/>. physics-reference §8.1.
+    /// R = √(P G/(4π S)), the inverse of <see cref="FarFieldOnAxis"/>.
     /// </summary>
     /// <param name="averagePower">Time-averaged power, W; ≥ 0.</param>
     /// <param name="gainDbi">Gain, dBi.</param>
@@ -45,7 +45,7 @@ public static class PowerDensity
     }
 
     /// <summary>
-    /// Far-field (Fraunhofer) distance 2D²/λ, D the largest aperture dimension (physics-reference §8.1 and §8.4 [N];
+    /// Far-field (Fraunhofer) distance 2D²/λ, D the largest aperture dimension (
     /// the conventional 2D²/λ criterion, e.g. IEEE Std 145, from memory).
     /// </summary>
     /// <param name="largestDimension">Largest aperture dimension D, &gt; 0.</param>
@@ -53,16 +53,14 @@ public static class PowerDensity
     public static Length FarFieldDistance(Length largestDimension, Frequency f) => Scaled(largestDimension, f, 2.0);
 
     /// <summary>
-    /// Near-field / transition boundary of OET-65, D²/(4λ) [M, Medium] (FCC OET Bulletin 65, Ed. 97-01, 1997;
-    /// physics-reference §8.4).
+    /// Near-field / transition boundary of OET-65, D²/(4λ) [M, Medium] (FCC OET Bulletin 65, Ed. 97-01, 1997).
     /// </summary>
     /// <param name="largestDimension">Largest aperture dimension D, &gt; 0.</param>
     /// <param name="f">Frequency.</param>
     public static Length NearFieldBoundary(Length largestDimension, Frequency f) => Scaled(largestDimension, f, 0.25);
 
     /// <summary>
-    /// Start of the far field as OET-65 places it, 0.6 D²/λ [M, Medium] (FCC OET Bulletin 65, Ed. 97-01, 1997;
-    /// physics-reference §8.4).
+    /// Start of the far field as OET-65 places it, 0.6 D²/λ [M, Medium] (FCC OET Bulletin 65, Ed. 97-01, 1997).
     /// </summary>
     /// <param name="largestDimension">Largest aperture dimension D, &gt; 0.</param>
     /// <param name="f">Frequency.</param>
@@ -70,8 +68,7 @@ public static class PowerDensity
 
     /// <summary>
     /// Upper bound of the on-axis power density in the near field of an aperture, S_max ≈ 4P/A (W/m²), A the physical
-    /// aperture area [M] (FCC OET Bulletin 65, Ed. 97-01, 1997, near-field formula with aperture efficiency 1;
-    /// physics-reference §8.4).
+    /// aperture area [M] (FCC OET Bulletin 65, Ed. 97-01, 1997, near-field formula with aperture efficiency 1).
     /// </summary>
     /// <param name="averagePower">Time-averaged power, W; ≥ 0.</param>
     /// <param name="apertureLength">Aperture length, &gt; 0.</param>
@@ -86,7 +83,7 @@ public static class PowerDensity
 
     /// <summary>
     /// Time-averaging factor for a rotating antenna, θ_3dB/360° (the fraction of each turn a point spends in the
-    /// main beam) [C: common practice, no source; physics-reference §8.1].
+    /// main beam) [C: common practice, no source].
     /// </summary>
     /// <param name="azimuthBeamwidth">Half-power beamwidth in the plane of rotation; 0 &lt; θ ≤ 360°.</param>
     public static double RotationFactor(Angle azimuthBeamwidth)

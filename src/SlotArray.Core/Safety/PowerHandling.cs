@@ -11,19 +11,19 @@ namespace SlotArray.Core.Safety;
 /// P_allowed = P_max × AltitudeFactor / (MismatchFactor × StandingWaveFactor × SafetyFactor), with
 /// <list type="bullet">
 /// <item>P_max = a b E_bd²/(4 Z_TE), E_bd = 3 MV/m read as a peak field (D. M. Pozar, <i>Microwave Engineering</i>,
-/// 4th ed., Wiley 2012, Sec. 3.3; physics-reference §1.1, 0.9914 MW for WR-90 at 9.375 GHz [N]);</item>
+/// 4th ed., Wiley 2012, Sec. 3.3; 0.9914 MW for WR-90 at 9.375 GHz [N]);</item>
 /// <item>MismatchFactor = (1 + |Γ|)², |Γ| = (VSWR − 1)/(VSWR + 1): the peak field of a line with a reflection grows
-/// by 1 + |Γ| [C: physics-reference §1.1];</item>
+/// by 1 + |Γ| [C: common practice, no source];</item>
 /// <item>StandingWaveFactor = k², k the peak field of the standing wave inside a resonant array relative to the
 /// travelling wave, default k = 2 (power factor 4): a full standing wave, as near the end short, has a peak field twice
-/// its forward wave [C: physics-reference §1.1]. For an ideal matched resonant array at its design frequency this project's
+/// its forward wave [C: common practice, no source]. For an ideal matched resonant array at its design frequency this project's
 /// line model finds the peak field in the array equal to the input travelling wave (k = 1, the slots sit at voltage
 /// maxima and λg/2 sections keep |V|); off resonance it rose to about 1.2–1.25. The default 2 is therefore conservative;
 /// 1 is the figure for a travelling-wave array;</item>
 /// <item>SafetyFactor, default 2 (design to 25–50 % of P_max) for humidity, surface finish, dust and pulse length
-/// [C: common practice, physics-reference §1.1];</item>
+/// [C: common practice, no source];</item>
 /// <item>AltitudeFactor = (p/p0)²: the breakdown field of air scales roughly with pressure, power with its square
-/// [C: physics-reference §1.1], p/p0 from <see cref="StandardAtmosphere"/>.</item>
+/// [C: common practice, no source], p/p0 from <see cref="StandardAtmosphere"/>.</item>
 /// </list>
 /// The factors are multiplied, which is conservative: the input mismatch and the standing wave in the array are not
 /// independent.
@@ -59,9 +59,9 @@ public sealed record PowerHandling(
     double? PeakPower,
     double? MarginDecibels)
 {
-    /// <summary>Default safety factor on power, 2 [C: common practice, physics-reference §1.1].</summary>
+    /// <summary>Default safety factor on power, 2 [C: common practice, no source].</summary>
     public const double DefaultSafetyFactor = 2.0;
-    /// <summary>Default peak-field factor of the standing wave in a resonant array, 2 [C: physics-reference §1.1].</summary>
+    /// <summary>Default peak-field factor of the standing wave in a resonant array, 2 [C: common practice, no source].</summary>
     public const double ResonantArrayFieldFactor = 2.0;
 
     /// <summary>The product of all derating factors, P_max / P_allowed.</summary>

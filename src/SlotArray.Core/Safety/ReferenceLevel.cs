@@ -32,8 +32,8 @@ public enum ExposureExtent
 /// <param name="PowerDensity">The reference level, W/m²; &gt; 0.</param>
 /// <param name="AveragingTimeSeconds">Averaging time of the level, s (30 min = 1800 s whole body, 6 min = 360 s local).</param>
 /// <param name="Averaging">Spatial averaging in words ("whole body", "4 cm²").</param>
-/// <param name="Provenance">Provenance tag as the physics reference gives it, e.g. "[M, High]" or "[S: …]".</param>
-/// <param name="Source">Full citation, with the physics-reference section.</param>
+/// <param name="Provenance">Provenance tag (DEVELOPERS.md, "Provenance tags"), e.g. "[M, High]" or "[S: …]".</param>
+/// <param name="Source">Full citation: document, year, table.</param>
 public sealed record ReferenceLevel(
     string Guideline,
     string Table,

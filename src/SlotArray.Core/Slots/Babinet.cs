@@ -9,7 +9,7 @@ namespace SlotArray.Core.Slots;
 /// </summary>
 /// <remarks>
 /// Source: H. G. Booker, "Slot aerials and their relation to complementary wire aerials (Babinet's principle)",
-/// J. IEE 93 Pt IIIA, 620–626, 1946 (pages from memory), as restated in physics-reference §7.2 [M]:
+/// J. IEE 93 Pt IIIA, 620–626, 1946 (pages from memory) [M]:
 /// two-sided radiation Z_slot Z_dipole = η²/4; a slot radiating into one half-space only (waveguide or cavity
 /// behind it) has twice the impedance, Z = η²/(2 Z_d), Y = 2 Z_d/η². The reactance changes sign: a slot a little
 /// shorter than resonance is inductive as an aperture. The strip of width w has the equivalent round-wire radius

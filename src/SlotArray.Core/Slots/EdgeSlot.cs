@@ -18,29 +18,29 @@ namespace SlotArray.Core.Slots;
 /// <para>
 /// Geometry (tube of uniform wall thickness t = <see cref="RectangularWaveguide.WallThickness"/>): the cut crosses the
 /// narrow wall at tilt θ and wraps into each broad wall to a depth D measured from the outer narrow-wall face
-/// (physics-reference §9.3, the cut-list datum). The slot couples to the guide through its INNER aperture, so the
+/// (the cut-list datum, <c>Fabrication.Datums</c>). The slot couples to the guide through its INNER aperture, so the
 /// developed length is taken along the inside of the guide: across the inside height b at tilt θ, a run of b/cos θ,
 /// plus D − t into each broad wall beyond the inner narrow-wall face:
 /// L = b/cos θ + 2(D − t) (the convention of <see cref="Fabrication.Datums.EdgeSlotDepthOfCut"/>). The path on the
 /// outer surface, (b + 2t)/cos θ + 2D, was rejected: with a 1.27 mm WR-90 wall it leaves a resonant cut shallower
 /// than the wall itself, which cannot open the guide. The slot is taken as resonant when L equals L_r = κ λ/2 with κ = <see cref="ResonanceFraction"/>:
-/// thin narrow slots resonate a few per cent below λ/2 (physics-reference §2 assumptions; the thin-wall moment-method
-/// values of physics-reference §3.2 give 0.452–0.480 λ for a broad-wall slot). κ = 0.95 is an approximate mid value
+/// thin narrow slots resonate a few per cent below λ/2 (Stevenson 1948, assumptions; the thin-wall moment-method
+/// values of <c>LongitudinalSlotMomentMethod</c> give 0.452–0.480 λ for a broad-wall slot). κ = 0.95 is an approximate mid value
 /// (common practice, no source); wall thickness, the corner bends and the slot width, none modelled here, shift it.
 /// Hence D = t + (κλ/2 − b/cos θ)/2; the slot is realisable only when κλ/2 &gt; b/cos θ (it must span the inside height).
 /// </para>
 /// <para>
 /// Length response: y(L) = g_r(θ) h(L/L_r), h(ρ) = 1/(1 + j Q_s (ρ − 1/ρ)), the single-pole shape of a series-resonant
-/// branch in shunt (Im y &gt; 0 below resonance, &lt; 0 above; sign convention of physics-reference §3.3 item 7).
+/// branch in shunt (Im y &gt; 0 below resonance, &lt; 0 above; the sign of the moment-method admittance, Stern &amp; Elliott 1985).
 /// Q_s = <see cref="SeriesResonanceQ"/> was fitted (least squares on the complex y) to the five moment-method values of
-/// physics-reference §3.3 item 7 (broad-wall longitudinal slot, WR-90, 9.375 GHz, x = 2 mm, thin wall,
+/// <c>LongitudinalSlotMomentMethod</c> (P = 5; broad-wall longitudinal slot, WR-90, 9.375 GHz, x = 2 mm, thin wall,
 /// L_r = 0.45654 λ, g_r = 0.09183): minimiser 6.1087, kept to four digits; rms complex residual 0.0038 (4 % of g_r), largest 0.0061 at L/λ = 0.50. The edge
 /// slot's own Q is not known here; borrowing the broad-wall slot's value is an assumption.
 /// </para>
 /// <para>
 /// Maximum tilt 30°: the cross-polarised lobes of alternating tilts reach tan 30° = −4.8 dB before element weighting
-/// (physics-reference §2.3), and X-band edge-slot arrays are commonly built with tilts of about 10–16°
-/// (physics-reference §2.3 [C]); beyond about 30° the idealised closed form is stretched far from its use.
+/// (<see cref="EdgeSlotCrossPolarization"/>), and X-band edge-slot arrays are commonly built with tilts of about 10–16°
+/// (common practice, no source [C]); beyond about 30° the idealised closed form is stretched far from its use.
 /// The slot width is carried for the cut list but does not enter this first-order model.
 /// </para>
 /// </remarks>
@@ -50,7 +50,7 @@ public sealed record EdgeSlot : IShuntSlotModel
     public const double ResonanceFraction = 0.95;
 
     /// <summary>
-    /// Q_s of the single-pole length response, fitted to the moment-method values of physics-reference §3.3 item 7
+    /// Q_s of the single-pole length response, fitted to five moment-method admittances (WR-90, 9.375 GHz, x = 2 mm)
     /// (rms complex residual 0.0038; see remarks).
     /// </summary>
     public const double SeriesResonanceQ = 6.109;

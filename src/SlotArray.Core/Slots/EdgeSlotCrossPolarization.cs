@@ -3,14 +3,14 @@ using SlotArray.Core.Quantities;
 namespace SlotArray.Core.Slots;
 
 /// <summary>
-/// Cross-polarised lobes of an array of edge slots with alternating tilts ±θ (physics-reference §2.3 [D]).
+/// Cross-polarised lobes of an array of edge slots with alternating tilts ±θ (derived here [D]).
 /// </summary>
 /// <remarks>
 /// The cross-polarised field components of alternately tilted slots alternate in sign along the array, so they
 /// add in phase in the directions sin ψ = ±λ/(2d) from broadside (d = slot spacing), with a peak level of tan θ
 /// relative to the co-polar main beam before element-pattern and taper weighting. For d = λg/2 this is
 /// sin ψ = λ/λg (WR-90 at 9.375 GHz: ψ = ±45.6°); θ = 15° gives −11.4 dB. Derivation: array factor of
-/// alternating-sign sources, as in physics-reference §2.3; the co-polar field of a tilted slot goes as cos θ and the
+/// alternating-sign sources (Balanis 2005, Sec. 6.3); the co-polar field of a tilted slot goes as cos θ and the
 /// cross-polar as sin θ.
 /// </remarks>
 public static class EdgeSlotCrossPolarization

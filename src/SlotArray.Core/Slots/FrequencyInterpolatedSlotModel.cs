@@ -15,7 +15,7 @@ namespace SlotArray.Core.Slots;
 /// <para>Method: polynomial interpolation on equally spaced nodes; the error of the degree-(n − 1) interpolant through n
 /// nodes is |y⁽ⁿ⁾(ξ)/n!| ∏|f − f_k| (E. Isaacson and H. B. Keller, <i>Analysis of Numerical Methods</i>, Wiley 1966,
 /// Ch. 6, Theorem 1, from memory), i.e. O((h/F)ⁿ) when y varies on a frequency scale F. A slot's admittance near
-/// resonance varies on the scale of its own bandwidth, several per cent of f (physics-reference §3.1: y vs l/l_r), so
+/// resonance varies on the scale of its own bandwidth, several per cent of f (Elliott 1981, Ch. 8: y vs l/l_r), so
 /// with h = 0.4 % and n = 6 the interpolation error is far below the model's accuracy; the tests compare it with
 /// direct solves. At a node, including f_ref itself, the value is the inner model's exactly.</para>
 /// <para>Deterministic: a node's value depends only on the slot geometry and the node frequency, never on the order in

@@ -17,7 +17,7 @@ namespace SlotArray.Core.Slots;
 /// R_m = η/(2π) {γ + ln(kL) − Ci(kL) + ½ sin(kL)[Si(2kL) − 2Si(kL)] + ½ cos(kL)[γ + ln(kL/2) + Ci(2kL) − 2Ci(kL)]},
 /// X_m = η/(4π) {2Si(kL) + cos(kL)[2Si(kL) − Si(2kL)] − sin(kL)[2Ci(kL) − Ci(2kL) − Ci(2kρ²/L)]},
 /// and at the centre terminals Z_d = Z_m/sin²(kL/2) (Balanis eq. (8-61a), from memory). For L = λ/2 this gives the
-/// thin-dipole value 73.08 + j42.51 Ω (physics-reference §4.3 [N]; Orfanidis's toolbox documentation [S]).</para>
+/// thin-dipole value 73.08 + j42.51 Ω ([N]; Orfanidis's toolbox documentation [S]).</para>
 /// <para>Feed offset: transmission-line model of the slot (common practice, no authoritative source located): the slot
 /// voltage falls as sin(k s) towards the shorted ends, so for constant radiated power the impedance seen by a feed at
 /// distance s from one end is Z(s) = Z_centre sin²(ks)/sin²(kL/2), which for L = λ/2 is R(s) = R_centre sin²(ks).
@@ -78,7 +78,7 @@ public static class GroundPlaneSlot
             throw new ArgumentOutOfRangeException(nameof(width), width.ToString(), $"the slot width must be positive and below half the length {length}, got {width}");
         if (!(targetResistance > 0) || !double.IsFinite(targetResistance))
             throw new ArgumentOutOfRangeException(nameof(targetResistance), targetResistance, "the target resistance must be a positive number of ohms");
-        var radius = 0.25 * width;
+        var radius = StripEquivalentRadius.Of(width);
         var zd = DipoleImpedance(length, radius, f);
         var two = Babinet.SlotImpedance(zd, oneSided: false);
         var one = Babinet.SlotImpedance(zd, oneSided: true);
@@ -121,7 +121,7 @@ public static class GroundPlaneSlot
         if (!(feedOffset.Meters > 0) || feedOffset.Meters > length.Meters / 2 * (1 + 1e-12))
             throw new ArgumentOutOfRangeException(nameof(feedOffset), feedOffset.ToString(), $"the feed offset must lie in (0, L/2], got {feedOffset}");
         double k = f.FreeSpaceWavenumber;
-        var centre = Babinet.SlotImpedance(DipoleImpedance(length, 0.25 * width, f), oneSided);
+        var centre = Babinet.SlotImpedance(DipoleImpedance(length, StripEquivalentRadius.Of(width), f), oneSided);
         return centre * Math.Pow(Math.Sin(k * feedOffset.Meters), 2) / Math.Pow(Math.Sin(k * length.Meters / 2), 2);
     }
 
@@ -130,7 +130,7 @@ public static class GroundPlaneSlot
     /// <param name="f">Frequency.</param>
     public static Length ResonantLength(Length width, Frequency f)
     {
-        double lam = f.FreeSpaceWavelength.Meters, rho = width.Meters / 4;
+        double lam = f.FreeSpaceWavelength.Meters, rho = StripEquivalentRadius.Of(width).Meters;
         double root = Brent.FindRoot(l => DipoleImpedance(Length.FromMeters(l), Length.FromMeters(rho), f).Imaginary,
             Math.Max(0.3 * lam, 2.5 * rho), 0.5 * lam, 1e-13, 200);
         return Length.FromMeters(root);

@@ -4,13 +4,13 @@ using MathNet.Numerics.Integration;
 namespace SlotArray.Core.Slots;
 
 /// <summary>
-/// The exterior (half-space) Galerkin block of a narrow slot in an infinite ground plane, physics-reference §3.3
-/// item 4: Y^ext_qp = (2w/(jωμ0)) ∫∫ [k² f_q(z) f_p(z′) − f_q′(z) f_p′(z′)] e^(−jkR)/(4πR) dz dz′ with the reduced kernel
+/// The exterior (half-space) Galerkin block of a narrow slot in an infinite ground plane (mixed-potential form
+/// after Stern &amp; Elliott 1985): Y^ext_qp = (2w/(jωμ0)) ∫∫ [k² f_q(z) f_p(z′) − f_q′(z) f_p′(z′)] e^(−jkR)/(4πR) dz dz′ with the reduced kernel
 /// R = √((z − z′)² + r_e²), r_e the equivalent strip radius.
 /// </summary>
 /// <remarks>
 /// <para>Equivalent radius r_e = w/4: C. M. Butler, "A formulation of the finite-length narrow slot or strip equation",
-/// IEEE Trans. AP-30, 1254–1257, 1982 (physics-reference §3.1 [S]).</para>
+/// IEEE Trans. AP-30, 1254–1257, 1982 (abstract: "width/4 emerges as the value of the equivalent radius").</para>
 /// <para>Quadrature (derived here): the kernel depends on u = z − z′ only, so the double integral is
 /// ∫₀^L K(u) [C_qp(u) + C_pq(u)] du with the correlations C_qp(u) = ∫ f_q(z) f_p(z − u) dz of the sine basis in closed
 /// form. The near-singular 1/R is removed by u = r_e sinh τ (du/R = dτ), leaving the smooth integrand

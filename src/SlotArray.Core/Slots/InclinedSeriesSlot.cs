@@ -12,16 +12,16 @@ namespace SlotArray.Core.Slots;
 /// Source: A. F. Stevenson, "Theory of slots in rectangular wave-guides", J. Appl. Phys. 19, 24–38 (1948), the
 /// centred inclined series slot (form as tabulated in S. Silver, <i>Microwave Antenna Theory and Design</i>, MIT
 /// Rad. Lab. Ser. vol. 12, 1949, pp. 291–295, and R. S. Elliott, <i>Antenna Theory and Design</i>, 1981; equation
-/// numbers not re-checked), as re-derived and restated in physics-reference §2.2 [M; D]:
+/// numbers not re-checked) [M], re-derived by reciprocity [D]:
 /// r = (30/(π R_d)) (λ³/(a b λg)) [I(θ) sin θ + (λg/(2a)) J(θ) cos θ]², with c(u) = cos(πu/2)/(1 − u²),
 /// ξ = (λ/λg) cos θ + (λ/(2a)) sin θ, ζ = (λ/λg) cos θ − (λ/(2a)) sin θ, I = c(ζ) + c(ξ), J = c(ζ) − c(ξ).
-/// The sign of J matters (J = c(ξ) − c(ζ) is wrong; physics-reference §2.2). At θ = 90° the form reduces exactly
+/// The sign of J matters (J = c(ξ) − c(ζ) is wrong: checked by direct numerical integration of the coupling integral [D]). At θ = 90° the form reduces exactly
 /// to Stevenson's transverse series slot r = (120/(π R_d)) (λg/λ)³ (λ²/(ab)) cos²(πλ/(4a)) (the "0.523").
 /// R_d = 73 Ω as in Stevenson's constants (30/(π·73) = 0.13081, the classic "0.131").
 /// Assumptions (validity): zero wall thickness, narrow slot, slot resonant with full length λ/2 and a cosine field,
 /// radiation into a half-space over an infinite ground plane, TE10 only, isolated slot. Real resonant lengths are a
 /// few per cent shorter than λ/2. Series slots are spaced λg/2 with alternating tilt; the short goes λg/2 beyond the
-/// last slot centre (physics-reference §2.2, after Elliott 1981).
+/// last slot centre (Elliott 1981, from memory).
 /// </remarks>
 public static class InclinedSeriesSlot
 {
@@ -30,7 +30,7 @@ public static class InclinedSeriesSlot
 
     /// <summary>
     /// Normalised resonant series resistance r = R/Z_TE of a centred slot rotated by <paramref name="tilt"/> from
-    /// the guide axis (physics-reference §2.2; Stevenson 1948). Even in θ; r(0) = 0, r(90°) = transverse slot.
+    /// the guide axis (Stevenson 1948). Even in θ; r(0) = 0, r(90°) = transverse slot.
     /// </summary>
     /// <param name="guide">The guide (inside a, b; air filled is assumed by the formula).</param>
     /// <param name="tilt">Rotation of the slot axis from the guide axis; |θ| ≤ 90°.</param>

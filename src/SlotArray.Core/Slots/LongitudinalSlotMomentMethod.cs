@@ -11,7 +11,7 @@ namespace SlotArray.Core.Slots;
 /// <param name="ClosedFormTerms">N_A, the n terms of the closed-form m-sum before its analytic tail. Default 24.</param>
 /// <param name="QuadraturePanels">Panels of the exterior τ quadrature. Default 6.</param>
 /// <param name="QuadratureOrder">Gauss–Legendre points per panel. Default 12.</param>
-/// <param name="EquivalentRadiusFactor">r_e/w of the reduced exterior kernel; Butler's 0.25 by default.</param>
+/// <param name="EquivalentRadiusFactor">r_e/w of the reduced exterior kernel; Butler's 1/4 by default (<see cref="Coupling.StripEquivalentRadius"/>).</param>
 /// <param name="ExtrapolationBasisFunctions">
 /// P2 &gt; P for Richardson extrapolation in the basis count, X∞ = (P2 X(P2) − P X(P))/(P2 − P) applied to the scattered
 /// amplitudes B and C; 0 turns it off. Default 15. It assumes the 1/P convergence found for finite walls (checked to P = 41
@@ -24,7 +24,7 @@ public sealed record MomentMethodOptions(
     int ClosedFormTerms = 24,
     int QuadraturePanels = 6,
     int QuadratureOrder = 12,
-    double EquivalentRadiusFactor = 0.25,
+    double EquivalentRadiusFactor = Coupling.StripEquivalentRadius.WidthFraction,
     int ExtrapolationBasisFunctions = 15)
 {
     /// <summary>The default, converged options.</summary>
@@ -46,7 +46,7 @@ public readonly record struct SlotScattering(Complex Admittance, Complex Backwar
 /// wall thickness. Thread-safe; the length-independent sums are cached per offset and frequency (bounded).
 /// </summary>
 /// <remarks>
-/// <para>Formulation: physics-reference §3.3 [D; structure M: V. H. Khac and C. T. Carson, "Impedance properties of a
+/// <para>Formulation: Galerkin method [D; structure M: V. H. Khac and C. T. Carson, "Impedance properties of a
 /// longitudinal slot antenna in the broad face of a rectangular waveguide", IEEE Trans. AP-21, 708–710, 1973;
 /// G. J. Stern and R. S. Elliott, IEEE Trans. AP-33(11), 1264–1271, 1985; L. G. Josefsson, "Analysis of longitudinal
 /// slots in rectangular waveguides", IEEE Trans. AP-35(12), 1351–1357, 1987]. Aperture field uniform across the width,
@@ -58,7 +58,7 @@ public readonly record struct SlotScattering(Complex Admittance, Complex Backwar
 /// Y11 = Y22 = κ_p coth(γ_p t), Y12 = κ_p csch(γ_p t), κ_p = j l γ_p/(ωμ0) (diagonal in p). With V1, V2 the inner- and
 /// outer-face coefficients: (Y^int + Y11) V1 − Y12 V2 = I and −Y12 V1 + (Y22 + Y^ext) V2 = 0. As t → 0, V2 → V1 and
 /// Y11 − Y12 → 0, which restores (Y^int + Y^ext) V = I. t = 0 uses the thin-wall system directly.</para>
-/// <para>Scattered amplitudes from V1 (physics-reference §3.3 item 5): B = −j (π/(a² b β)) cos(πx_c/a) sinc_1
+/// <para>Scattered amplitudes from V1 (modal excitation, R. E. Collin, <i>Field Theory of Guided Waves</i>, from memory): B = −j (π/(a² b β)) cos(πx_c/a) sinc_1
 /// Σ V_p ∫ f_p e^(−jβz) dz, C the same with e^(+jβz); y = −2B/(1 + B).</para>
 /// <para>Convergence (measured here, WR-90, 9.375 GHz, w = 1.5875 mm, x = 2 mm): the interior sums are converged to
 /// ~3e-5 |y| at Γ = 4Pk and the exterior quadrature to 1e-7 at 6 × 12 points. In the basis count, the 1.27 mm wall's
@@ -98,7 +98,7 @@ public sealed class LongitudinalSlotMomentMethod
 
     /// <summary>
     /// Core solve. <paramref name="bruteForceModes"/> replaces the accelerated interior sum by the brute-force
-    /// Σ_{m≤M, n≤N} of physics-reference §3.3 (tests and the convergence study only).
+    /// Σ_{m≤M, n≤N} of <c>WaveguideSlotModalSums</c> (tests and the convergence study only).
     /// </summary>
     internal SlotScattering Solve(double offset, double length, double frequency, (int M, int N)? bruteForceModes)
     {

@@ -9,8 +9,8 @@ namespace SlotArray.Core.Slots;
 /// <remarks>
 /// g = (480 Ω/(π R_d)) (a/b) (λg/λ) cos²(πλ/(2λg)) sin²(πx/a), R_d = 73 Ω, 480 Ω = 4 η_S/π with η_S = 120π Ω:
 /// A. F. Stevenson, "Theory of slots in rectangular wave-guides", J. Appl. Phys. 19, 24–38, 1948, as tabulated in
-/// S. Silver, <i>Microwave Antenna Theory and Design</i>, MIT Rad. Lab. Ser. 12, 1949, pp. 291–295 (physics-reference §2.1
-/// [M, D]). Assumptions: zero wall thickness, narrow resonant half-wave slot, TE10 only, isolated slot radiating into a
+/// S. Silver, <i>Microwave Antenna Theory and Design</i>, MIT Rad. Lab. Ser. 12, 1949, pp. 291–295 (forms from
+/// memory [M], re-derived by reciprocity [D]). Assumptions: zero wall thickness, narrow resonant half-wave slot, TE10 only, isolated slot radiating into a
 /// half-space. λ is the wavelength in the guide's filling.
 /// </remarks>
 public static class StevensonLongitudinalSlot

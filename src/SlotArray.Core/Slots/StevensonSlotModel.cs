@@ -13,7 +13,7 @@ namespace SlotArray.Core.Slots;
 /// <para>Exactly: g_r(x, f) = <see cref="StevensonLongitudinalSlot.Conductance"/>; L_r(x, f) = the moment-method resonant
 /// length (finite wall, <see cref="ResonantCharacterisation"/>); y(x, L, f) = g_r(x, f) · h(L/L_r(x, f)).</para>
 /// <para>h is Elliott's near-universal normalised admittance (R. S. Elliott, <i>Antenna Theory and Design</i>, 1981: measured
-/// Y/G0 curves for different offsets nearly collapse on one function of l/l_r; physics-reference §3.1 [M, Medium]).
+/// Y/G0 curves for different offsets nearly collapse on one function of l/l_r; from memory [M, Medium]).
 /// Here h(ν) = y_MoM(x_ref, ν L_r(x_ref))/g_r,MoM(x_ref), computed once at the design frequency and the reference offset
 /// x_ref = a/8, on 0.6 ≤ ν ≤ 1.35 (for a slot wider than 0.3 L_r from just above 2w/L_r, since the moment method needs
 /// L &gt; 2w; 61 points, natural cubic splines of Re h and Im h). h(1) = 1 by construction.</para>

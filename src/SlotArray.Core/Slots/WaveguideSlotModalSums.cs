@@ -4,10 +4,10 @@ namespace SlotArray.Core.Slots;
 
 /// <summary>
 /// The interior (waveguide-side) Galerkin block of a longitudinal broad-wall slot: the modal double sum of
-/// physics-reference §3.3 item 4, evaluated by an accelerated scheme, plus the brute-force sum it is tested against.
+/// the Galerkin formulation (Stern &amp; Elliott 1985; Josefsson 1987), evaluated by an accelerated scheme, plus the brute-force sum it is tested against.
 /// </summary>
 /// <remarks>
-/// <para>Notation (physics-reference §3.3 [D]; structure after G. J. Stern and R. S. Elliott, "Resonant length of
+/// <para>Notation ([D]; structure after G. J. Stern and R. S. Elliott, "Resonant length of
 /// longitudinal slots and validity of circuit representation: theory and experiment", IEEE Trans. AP-33(11),
 /// 1264–1271, 1985): Y^int_qp = (1/(jωμ0)) Σ_m Σ_n W_mn T_qp(γ_mn) with the mode weight
 /// W_mn = (ε_m ε_n/(ab)) w cos²(mπx_c/a) sinc_m² and the bracket T_qp = k_c² D_qp(γ) − l δ_qp.</para>
@@ -107,7 +107,7 @@ internal sealed class WaveguideSlotModalSums
     }
 
     /// <summary>
-    /// The interior Galerkin block Y^int (P×P, siemens-like units of the §3.3 normalisation) for a slot of half length l.
+    /// The interior Galerkin block Y^int (P×P, siemens-like units of this normalisation) for a slot of half length l.
     /// </summary>
     public Complex[,] Block(double halfLength, int basisCount, double omegaMu0)
     {
@@ -220,7 +220,7 @@ internal sealed class WaveguideSlotModalSums
 
     /// <summary>
     /// The brute-force interior block: Σ over 0 ≤ m ≤ M, 0 ≤ n ≤ N of W_mn [k_c² D_qp(γ) − l δ_qp] exactly as written in
-    /// physics-reference §3.3 item 4. Slow; the reference for the accelerated <see cref="Block"/>.
+    /// the remarks above. Slow; the reference for the accelerated <see cref="Block"/>.
     /// </summary>
     public Complex[,] BruteForceBlock(double halfLength, int basisCount, double omegaMu0, int modesM, int modesN)
     {

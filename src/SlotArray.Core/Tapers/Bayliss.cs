@@ -5,13 +5,13 @@ namespace SlotArray.Core.Tapers;
 /// <summary>
 /// Bayliss difference (monopulse) line source: an odd distribution whose pattern has a null at boresight and
 /// near-equal sidelobes (E. T. Bayliss, "Design of monopulse antenna difference patterns with low sidelobes", Bell
-/// Syst. Tech. J. 47(5), 623–650, 1968; physics-reference §6.5). The first four zeros ξ1…ξ4 and A come from
+/// Syst. Tech. J. 47(5), 623–650, 1968). The first four zeros ξ1…ξ4 and A come from
 /// Bayliss's quartic fits in the sidelobe level (the table "below Fig. 4"), the rest are √(A² + n²).
 /// </summary>
 public static class Bayliss
 {
     // Rows A, ξ1, ξ2, ξ3, ξ4, p0; columns c0…c4 of P(S) = Σ c_i S^i, S the level in dB entered as a negative
-    // number (physics-reference §6.5, Bayliss 1968 table below Fig. 4).
+    // number (Bayliss 1968, table below Fig. 4).
     private static readonly double[][] Fits =
     [
         [0.30387530, -0.05042922, -0.00027989, -0.00000343, -0.00000002],
@@ -22,7 +22,8 @@ public static class Bayliss
         [0.47972120, -0.01456692, -0.00018739, -0.00000218, -0.00000001],
     ];
 
-    /// <summary>Levels beyond which the polynomial fits are no longer trusted (physics-reference §6.5, library note).</summary>
+    /// <summary>Levels beyond which the polynomial fits are no longer trusted (below about −45 dB; the U.S. NRL Tracker Component Library note on
+    /// <c>BaylissLinearTapering</c>).</summary>
     public const double FitLimitDb = -45;
 
     /// <summary>The parameters of one design.</summary>
@@ -50,13 +51,13 @@ public static class Bayliss
         return c[0] + s * (c[1] + s * (c[2] + s * (c[3] + s * c[4])));
     }
 
-    /// <summary>Zero z_n of the undilated pattern: ξ_n for n ≤ 4, √(A² + n²) beyond (§6.5).</summary>
+    /// <summary>Zero z_n of the undilated pattern: ξ_n for n ≤ 4, √(A² + n²) beyond (Bayliss 1968).</summary>
     private static double Zero(int n, double a, double[] xi) => n <= 4 ? xi[n - 1] : Math.Sqrt(a * a + n * (double)n);
 
     /// <summary>
     /// The design for a level and n̄. B_m ∝ (−1)^m (m + ½)² Π_{n=1}^{n̄−1}(1 − ((m + ½)/(σ z_n))²) /
-    /// Π_{n=0, n≠m}^{n̄−1}(1 − ((m + ½)/(n + ½))²) (§6.5). Pitfall: a public implementation writes (m − ½)² here;
-    /// (m + ½)² is the factor that reproduces Bayliss's pattern F(u) (physics-reference §6.5 and §10 item 4).
+    /// Π_{n=0, n≠m}^{n̄−1}(1 − ((m + ½)/(n + ½))²) (Bayliss 1968). Pitfall: a public implementation writes (m − ½)² here;
+    /// (m + ½)² is the factor that reproduces Bayliss's pattern F(u) (checked numerically here, ratio constant to 1e-6 [D]).
     /// </summary>
     /// <param name="sidelobeLevelDb">Design sidelobe level, negative dB, −15 … −60 (fits trusted to −45).</param>
     /// <param name="nbar">n̄, 2 … 100.</param>
@@ -82,7 +83,7 @@ public static class Bayliss
     }
 
     /// <summary>
-    /// Weights sampled at the element centres with L = N d: p_n = 2π(n − (N − 1)/2)/N (§6.5); odd, normalised to
+    /// Weights sampled at the element centres with L = N d: p_n = 2π(n − (N − 1)/2)/N (Bayliss 1968); odd, normalised to
     /// max |a| = 1, negative on the −z half.
     /// </summary>
     /// <param name="count">Number of elements, 2 … 100,000.</param>

@@ -7,11 +7,11 @@ namespace SlotArray.Core.Tapers;
 /// Dolph–Chebyshev taper: the narrowest beam for a given equal-ripple sidelobe level (C. L. Dolph, "A current
 /// distribution for broadside arrays which optimizes the relationship between beam width and side-lobe level",
 /// Proc. IRE 34, 335–348, 1946). Pattern AF(ψ) = T_{N−1}(x0 cos(ψ/2)), x0 = cosh(acosh(R)/(N − 1))
-/// (physics-reference §6.1).
+/// (Dolph 1946).
 /// </summary>
 public static class DolphChebyshev
 {
-    /// <summary>x0 = cosh(acosh(R)/(N − 1)), the argument that maps the main-beam peak to T_{N−1}(x0) = R (§6.1).</summary>
+    /// <summary>x0 = cosh(acosh(R)/(N − 1)), the argument that maps the main-beam peak to T_{N−1}(x0) = R (Dolph 1946).</summary>
     /// <param name="count">Number of elements, ≥ 2.</param>
     /// <param name="sidelobeLevelDb">Design sidelobe level, negative dB.</param>
     public static double X0(int count, double sidelobeLevelDb)
@@ -26,7 +26,7 @@ public static class DolphChebyshev
     public static double ArrayFactor(int count, double x0, double psi) => TaperMath.ChebyshevT(count - 1, x0 * Math.Cos(psi / 2));
 
     /// <summary>
-    /// Pattern zeros ψ_p = 2 acos(cos((2p − 1)π/(2(N − 1)))/x0), p = 1 … N − 1, increasing (physics-reference §6.1).
+    /// Pattern zeros ψ_p = 2 acos(cos((2p − 1)π/(2(N − 1)))/x0), p = 1 … N − 1, increasing (Dolph 1946).
     /// </summary>
     /// <param name="count">Number of elements, ≥ 2.</param>
     /// <param name="sidelobeLevelDb">Design sidelobe level, negative dB.</param>
@@ -39,7 +39,7 @@ public static class DolphChebyshev
 
     /// <summary>
     /// Exact weights for any N: sample the pattern at ψ_q = 2πq/N and invert the DFT,
-    /// I_n = (1/N) Σ_q AF(ψ_q) e^{−j x̃_n ψ_q}, x̃_n = n − (N − 1)/2 (physics-reference §6.1 [D]). The sum is one FFT
+    /// I_n = (1/N) Σ_q AF(ψ_q) e^{−j x̃_n ψ_q}, x̃_n = n − (N − 1)/2 (derived here [D]). The sum is one FFT
     /// of b_q = AF(ψ_q) e^{jπq(N−1)/N} (MathNet Fourier, Bluestein for N not a power of two), O(N log N).
     /// Normalised to max |I| = 1; equal to scipy.signal.windows.chebwin to rounding.
     /// </summary>
@@ -65,7 +65,7 @@ public static class DolphChebyshev
     }
 
     /// <summary>
-    /// The same weights by the direct O(N²) DFT of §6.1, summed with the cosine form
+    /// The same weights by the direct O(N²) DFT of <see cref="Weights"/>, summed with the cosine form
     /// I_n = (1/N) Σ_q AF(ψ_q) cos(x̃_n ψ_q) (the pattern is real and even). The reference for the FFT path.
     /// </summary>
     /// <param name="count">Number of elements.</param>

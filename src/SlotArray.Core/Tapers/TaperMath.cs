@@ -6,7 +6,7 @@ internal static class TaperMath
     /// <summary>Main-lobe-to-sidelobe voltage ratio R = 10^(SLL/20) from a level given as a negative dB value.</summary>
     public static double RatioFromLevel(double sidelobeLevelDb) => Math.Pow(10, -sidelobeLevelDb / 20);
 
-    /// <summary>Element position in units of the aperture length L = N d: x_n/L = (n − (N − 1)/2)/N (physics-reference §6.2).</summary>
+    /// <summary>Element position in units of the aperture length L = N d: x_n/L = (n − (N − 1)/2)/N (the sampling of Taylor 1955 that scipy.signal.windows.taylor uses).</summary>
     public static double CellCentre(int n, int count) => (n - (count - 1) / 2.0) / count;
 
     /// <summary>Divides by the largest magnitude so that max |a| = 1.</summary>
@@ -21,7 +21,7 @@ internal static class TaperMath
 
     /// <summary>
     /// Chebyshev polynomial of the first kind: cos(n acos x) for |x| ≤ 1, cosh(n acosh x) for x &gt; 1 and
-    /// (−1)^n cosh(n acosh(−x)) for x &lt; −1 (physics-reference §6.1; Abramowitz &amp; Stegun 22.3.15, from memory).
+    /// (−1)^n cosh(n acosh(−x)) for x &lt; −1 (Abramowitz &amp; Stegun 22.3.15, from memory).
     /// </summary>
     public static double ChebyshevT(int n, double x)
     {

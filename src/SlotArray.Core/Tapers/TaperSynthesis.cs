@@ -7,7 +7,7 @@ namespace SlotArray.Core.Tapers;
 
 /// <summary>
 /// Facade over the taper methods: one call from a <see cref="TaperRequest"/> to normalised weights with the
-/// validity warnings of physics-reference §6 as data. Invalid parameters throw
+/// validity warnings of each method (cited in its own type) as data. Invalid parameters throw
 /// <see cref="ArgumentException"/> with a message that says what to change.
 /// </summary>
 public static class TaperSynthesis

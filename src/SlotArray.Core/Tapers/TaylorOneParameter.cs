@@ -5,7 +5,7 @@ namespace SlotArray.Core.Tapers;
 
 /// <summary>
 /// Taylor one-parameter line source (T. T. Taylor, Hughes Aircraft Co. Tech. Memo. 324, 1953; R. C. Hansen,
-/// <i>Phased Array Antennas</i>, Wiley; physics-reference §6.4): g(p) = I0(πB√(1 − p²)), p = 2x/L ∈ [−1, 1], pattern
+/// <i>Phased Array Antennas</i>, Wiley): g(p) = I0(πB√(1 − p²)), p = 2x/L ∈ [−1, 1], pattern
 /// sinh(π√(B² − u²))/(π√(B² − u²)); the sidelobes fall off like 1/u.
 /// </summary>
 public static class TaylorOneParameter
@@ -17,7 +17,7 @@ public static class TaylorOneParameter
     public const double UniformFirstSidelobe = 0.2172336282112217;
 
     /// <summary>
-    /// B from the sidelobe level: SLL = 20 log10(sinh(πB)/(πB) / 0.2172336) (§6.4), solved by Brent's method on (0, 20].
+    /// B from the sidelobe level: SLL = 20 log10(sinh(πB)/(πB) / 0.2172336) (Taylor 1953), solved by Brent's method on (0, 20].
     /// </summary>
     /// <param name="sidelobeLevelDb">Design sidelobe level, negative dB, −13.3 … −150.</param>
     public static double B(double sidelobeLevelDb)
@@ -27,7 +27,7 @@ public static class TaylorOneParameter
         return FindRoots.OfFunction(b => Math.Log(Math.Sinh(Math.PI * b) / (Math.PI * b)) - Math.Log(target), 1e-6, 20, 1e-13, 200);
     }
 
-    /// <summary>The distribution g(p) = I0(πB√(1 − p²)), p = 2x/L (§6.4), not normalised (g(±1) = 1).</summary>
+    /// <summary>The distribution g(p) = I0(πB√(1 − p²)), p = 2x/L (Taylor 1953), not normalised (g(±1) = 1).</summary>
     /// <param name="b">Taylor's B.</param>
     /// <param name="p">Normalised position, −1 … 1.</param>
     public static double Distribution(double b, double p) => SpecialFunctions.BesselI0(Math.PI * b * Math.Sqrt(Math.Max(0, 1 - p * p)));
@@ -45,7 +45,7 @@ public static class TaylorOneParameter
     }
 
     /// <summary>
-    /// Taper efficiency of the continuous source, |∫g dp|² / (2 ∫g² dp) over p ∈ [−1, 1] (§7.4), by 64-point
+    /// Taper efficiency of the continuous source, |∫g dp|² / (2 ∫g² dp) over p ∈ [−1, 1] (the standard definition), by 64-point
     /// Gauss–Legendre quadrature.
     /// </summary>
     /// <param name="b">Taylor's B.</param>
@@ -56,7 +56,7 @@ public static class TaylorOneParameter
         return s * s / (2 * s2);
     }
 
-    /// <summary>Edge illumination g(±1)/g(0) = 1/I0(πB), dB (§6.4 table).</summary>
+    /// <summary>Edge illumination g(±1)/g(0) = 1/I0(πB), dB.</summary>
     /// <param name="b">Taylor's B.</param>
     public static double EdgeIlluminationDb(double b) => -20 * Math.Log10(SpecialFunctions.BesselI0(Math.PI * b));
 }

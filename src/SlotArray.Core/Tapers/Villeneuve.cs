@@ -2,12 +2,12 @@ namespace SlotArray.Core.Tapers;
 
 /// <summary>
 /// Villeneuve n̄ taper for discrete arrays (A. T. Villeneuve, "Taylor patterns for discrete arrays", IEEE Trans.
-/// AP-32(10), 1089–1093, 1984; physics-reference §6.3): the first n̄ − 1 zeros of the N-element Dolph–Chebyshev
+/// AP-32(10), 1089–1093, 1984): the first n̄ − 1 zeros of the N-element Dolph–Chebyshev
 /// pattern are dilated by σ_V = (2πn̄/N)/ψ^C_{n̄}, the rest placed at the uniform array's zeros 2πp/N.
 /// </summary>
 public static class Villeneuve
 {
-    /// <summary>σ_V = (2π n̄/N)/ψ^C_{n̄} (§6.3).</summary>
+    /// <summary>σ_V = (2π n̄/N)/ψ^C_{n̄} (Villeneuve 1984).</summary>
     /// <param name="count">Number of elements.</param>
     /// <param name="sidelobeLevelDb">Design sidelobe level, negative dB.</param>
     /// <param name="nbar">n̄.</param>
@@ -16,7 +16,7 @@ public static class Villeneuve
 
     /// <summary>
     /// The zeros ψ_p, p = 1 … ⌊(N − 1)/2⌋ (each a pair ±ψ_p; for even N the pattern also has its single zero at ψ = π):
-    /// σ_V ψ^C_p for p &lt; n̄, 2πp/N for p ≥ n̄ (§6.3).
+    /// σ_V ψ^C_p for p &lt; n̄, 2πp/N for p ≥ n̄ (Villeneuve 1984).
     /// </summary>
     /// <param name="count">Number of elements.</param>
     /// <param name="sidelobeLevelDb">Design sidelobe level, negative dB.</param>
@@ -31,7 +31,7 @@ public static class Villeneuve
     /// <summary>
     /// Weights from the pattern samples at ψ_q = 2πq/N, of which only q &lt; n̄ are non-zero:
     /// I_n = (1/N)[AF(0) + 2 Σ_{q=1}^{n̄−1} AF(2πq/N) cos(2πq x̃_n/N)], x̃_n = n − (N − 1)/2, with
-    /// AF(ψ) ∝ Π_p (cos ψ − cos ψ_p) × cos(ψ/2) for even N (§6.3 [D]), each factor divided by its value at ψ = 0.
+    /// AF(ψ) ∝ Π_p (cos ψ − cos ψ_p) × cos(ψ/2) for even N ([D]), each factor divided by its value at ψ = 0.
     /// Normalised to max 1.
     /// </summary>
     /// <param name="count">Number of elements, 4 … 100,000.</param>

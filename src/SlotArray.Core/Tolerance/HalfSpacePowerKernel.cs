@@ -11,7 +11,7 @@ namespace SlotArray.Core.Tolerance;
 /// (composite 16-point Gauss–Legendre, a panel per π/(k·span) of u plus 8), so with all δ = 0 this is that rule's value.
 /// </summary>
 /// <remarks>
-/// Source: the directivity definition D = 4πU/∫∫U dΩ over the front half-space (physics-reference §7.3; the φ-integral is π),
+/// Source: the directivity definition D = 4πU/∫∫U dΩ over the front half-space (IEEE Std 145-2013; the φ-integral is π),
 /// expanded in a Taylor series in the small displacements — derived here, checked in the tolerance tests against
 /// <c>Directivity.HalfSpace</c> of the displaced slots (agreement 1e-9).
 /// Terms are kept while (2k max|δ|)^{q}/q! exceeds 1e-12 (q ≤ 6); beyond that <see cref="TryPower"/> returns false and the

@@ -37,26 +37,30 @@ public static class ToleranceMonteCarlo
         options ??= ToleranceOptions.Default;
         options.Validate();
         var evaluator = new TrialEvaluator(model.Nominal, model.Frequency.FreeSpaceWavenumber, options);
-        var nominal = evaluator.Evaluate(model.Nominal, true);
+        int m = evaluator.EnvelopeAngles.Length;
+        var nominalEnvelope = new float[m];
+        var nominal = evaluator.Evaluate(model.Nominal, evaluator.NewWorkspace(), nominalEnvelope);
         var outcomes = new TrialOutcome[trials];
+        var envelopes = new float[(long)trials * m];   // trial-major: row i is trial i's envelope
         int done = 0;
         int chunks = (trials + Chunk - 1) / Chunk;
         Parallel.For(0, chunks, new ParallelOptions { MaxDegreeOfParallelism = options.Threads, CancellationToken = options.Cancellation }, c =>
         {
+            var workspace = evaluator.NewWorkspace();
             int end = Math.Min(trials, (c + 1) * Chunk);
             for (int i = c * Chunk; i < end; i++)
             {
                 var random = new TrialRandom(seed, i);
-                outcomes[i] = evaluator.Evaluate(model.Trial(ref random), true);
+                outcomes[i] = evaluator.Evaluate(model.Trial(ref random), workspace, envelopes.AsSpan((int)((long)i * m), m));
             }
             int now = Interlocked.Add(ref done, end - c * Chunk);
             progress?.Invoke(now);
         });
-        return Reduce(model, seed, targetDb, evaluator, nominal, outcomes, options.Threads);
+        return Reduce(model, seed, targetDb, evaluator, nominal, outcomes, m == 0 ? null : (nominalEnvelope, envelopes), options.Threads);
     }
 
     private static MonteCarloResult Reduce(IToleranceTrialModel model, int seed, double targetDb, TrialEvaluator evaluator,
-        TrialOutcome nominal, TrialOutcome[] outcomes, int threads)
+        TrialOutcome nominal, TrialOutcome[] outcomes, (float[] Nominal, float[] Trials)? envelopes, int threads)
     {
         int trials = outcomes.Length, n = model.Nominal.Excitations.Length;
         var psl = new double[trials];
@@ -86,28 +90,31 @@ public static class ToleranceMonteCarlo
         var figures = new NominalFigures(nominal.PeakSidelobeDb, nominal.BeamDirection * 180 / Math.PI, nominal.S11Db, nominal.Gain);
         return new MonteCarloResult(trials, seed, targetDb, figures, SampleSummary.Of(psl), (double)meets / trials,
             SampleSummary.Of(loss), SampleSummary.Of(point), SampleSummary.Of(s11), Math.Sqrt(sa2), Math.Sqrt(sp2), Math.Sqrt(sz2), eta,
-            analytic, mcFloor, Array.AsReadOnly(psl), Envelope(evaluator, nominal, outcomes, threads));
+            analytic, mcFloor, Array.AsReadOnly(psl), envelopes is { } e ? Envelope(evaluator, e.Nominal, e.Trials, trials, threads) : null);
     }
 
-    private static PatternEnvelope? Envelope(TrialEvaluator evaluator, TrialOutcome nominal, TrialOutcome[] outcomes, int threads)
+    /// <summary>
+    /// The percentile bands of the trials' envelopes (trial-major rows of <paramref name="trials"/>): per angle, the order
+    /// statistics that <see cref="SampleSummary.Percentile"/> reads, found by selection (the same values as a full sort).
+    /// </summary>
+    private static PatternEnvelope Envelope(TrialEvaluator evaluator, float[] nominal, float[] envelopes, int trials, int threads)
     {
-        if (nominal.Envelope is null) return null;
-        int m = nominal.Envelope.Length;
+        int m = nominal.Length;
         var p5 = new double[m];
         var p50 = new double[m];
         var p95 = new double[m];
         var max = new double[m];
-        Parallel.For(0, m, new ParallelOptions { MaxDegreeOfParallelism = threads }, j =>
+        Parallel.For(0, m, new ParallelOptions { MaxDegreeOfParallelism = threads }, () => new double[trials], (j, _, column) =>
         {
-            var column = new double[outcomes.Length];
-            for (int i = 0; i < column.Length; i++) column[i] = outcomes[i].Envelope![j];
-            Array.Sort(column);
-            p5[j] = SampleSummary.Percentile(column, 0.05);
-            p50[j] = SampleSummary.Percentile(column, 0.50);
-            p95[j] = SampleSummary.Percentile(column, 0.95);
-            max[j] = column[^1];
-        });
+            for (int i = 0; i < trials; i++) column[i] = envelopes[(long)i * m + j];
+            var select = new OrderStatistics(column);
+            p5[j] = select.Percentile(0.05);
+            p50[j] = select.Percentile(0.50);
+            p95[j] = select.Percentile(0.95);
+            max[j] = select.Percentile(1.0);
+            return column;
+        }, _ => { });
         return new PatternEnvelope(evaluator.EnvelopeAngles.Select(t => t * 180 / Math.PI).ToArray(),
-            nominal.Envelope.Select(v => (double)v).ToArray(), p5, p50, p95, max);
+            nominal.Select(v => (double)v).ToArray(), p5, p50, p95, max);
     }
 }

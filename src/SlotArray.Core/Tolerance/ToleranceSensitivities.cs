@@ -46,6 +46,7 @@ public static class ToleranceSensitivities
         Parallel.For(0, n, new ParallelOptions { MaxDegreeOfParallelism = options.Threads }, i =>
         {
             var s = model.Surrogates[i];
+            var workspace = evaluator.NewWorkspace();
             double hc = h * model.CouplingPerOffsetError(i);
             foreach (var q in quantities)
             {
@@ -60,7 +61,7 @@ public static class ToleranceSensitivities
                         case ToleranceQuantity.Width: y[i] = sign > 0 ? s.WidthPlus : s.WidthMinus; break;
                         default: z[i] += sign * h; break;
                     }
-                    return evaluator.Evaluate(model.Solve(y, z, 0), false);
+                    return evaluator.Evaluate(model.Solve(y, z, 0), workspace, default);
                 }
                 var plus = At(+1);
                 var minus = At(-1);

@@ -14,9 +14,8 @@ namespace SlotArray.Core.Tolerance;
 /// <param name="AmplitudeErrorSquares">Σ_n (ln|r_n|)² of the relative excitation errors r_n (common factor removed).</param>
 /// <param name="PhaseErrorSquares">Σ_n (arg r_n)², rad².</param>
 /// <param name="PositionPhaseSquares">Σ_n k² δz_n²/3: the position errors' mean-square phase k δz u over the visible u.</param>
-/// <param name="Envelope">The cut in dB relative to its peak at the envelope angles, or null.</param>
 internal readonly record struct TrialOutcome(double PeakSidelobeDb, double BeamDirection, double S11Db, double Gain, double FloorPower,
-    double AmplitudeErrorSquares, double PhaseErrorSquares, double PositionPhaseSquares, float[]? Envelope);
+    double AmplitudeErrorSquares, double PhaseErrorSquares, double PositionPhaseSquares);
 
 /// <summary>
 /// The per-trial analysis at one frequency on fixed grids: array factor × half-wave slot element on the cut, the
@@ -84,7 +83,7 @@ internal sealed class TrialEvaluator
             powerKernel = new HalfSpacePowerKernel(nominalPatternPositions, k, e);
             nominalFloorField = floorSum.Evaluate(nominal.Excitations, new double[nominal.Excitations.Length]);
         }
-        var (nominalBeam, _) = PatternOf(nominalPatternPositions, nominal.Excitations, new double[nominal.Excitations.Length], out _);
+        var (nominalBeam, _) = PatternOf(nominalPatternPositions, nominal.Excitations, new double[nominal.Excitations.Length], NewWorkspace());
         var af0 = ArrayFactor.AtSines(nominalPatternPositions, nominal.Excitations, k, [Math.Sin(nominalBeam)])[0];
         nominalPeakPower = af0.Real * af0.Real + af0.Imaginary * af0.Imaginary;
         double sumSquares = nominal.Excitations.Sum(c => c.Real * c.Real + c.Imaginary * c.Imaginary);
@@ -97,7 +96,7 @@ internal sealed class TrialEvaluator
 
     /// <summary>
     /// Taper efficiency toward the nominal beam, η_t = |AF(u_b)|²/(N Σ|e_n|²): the standard |Σ e_n|²/(N Σ|e_n|²)
-    /// (physics-reference §7.4) for a broadside beam, and the same with the phase progression of a squinted beam removed.
+    /// (the standard definition) for a broadside beam, and the same with the phase progression of a squinted beam removed.
     /// </summary>
     public double TaperEfficiency { get; }
 
@@ -109,27 +108,53 @@ internal sealed class TrialEvaluator
         return d != 0;
     }
 
-    /// <summary>The cut for excitations at the pattern positions <paramref name="patternPositions"/> = nominal + <paramref name="offsets"/>.</summary>
-    /// <returns>The beam direction (rad) and the peak sidelobe (dB) of <see cref="PatternMetrics.Measure"/>.</returns>
-    private (double Beam, double? PeakSidelobeDb) PatternOf(double[] patternPositions, Complex[] excitations, double[] offsets, out Pattern pattern)
+    /// <summary>Working arrays for <see cref="Evaluate(TrialNetwork, Workspace, Span{float})"/>: one per thread, reused from trial to trial.</summary>
+    public Workspace NewWorkspace() => new(this);
+
+    /// <summary>
+    /// The beam direction (rad) and peak sidelobe (dB) of the cut (<see cref="PatternMetrics"/>'s rule) for excitations at the
+    /// pattern positions <paramref name="patternPositions"/> = nominal + <paramref name="offsets"/>; the cut's power is left
+    /// in <see cref="Workspace.Power"/>.
+    /// </summary>
+    private (double Beam, double? PeakSidelobeDb) PatternOf(double[] patternPositions, ReadOnlySpan<Complex> excitations, double[] offsets, Workspace w)
     {
-        var af = gridSum is not null ? gridSum.Evaluate(excitations, offsets) : ArrayFactor.AtSines(patternPositions, excitations, k, grid.Sines.AsSpan());
-        for (int i = 0; i < af.Length; i++) af[i] *= element[i];
-        pattern = new Pattern(grid, System.Runtime.InteropServices.ImmutableCollectionsMarshal.AsImmutableArray(af));   // af is not used again: no copy
-        return PatternMetrics.BeamAndPeakSidelobe(pattern);
+        if (gridSum is not null) gridSum.Evaluate(excitations, offsets, w.FieldRe, w.FieldIm, w.GridScratch!);
+        else
+        {
+            var af = ArrayFactor.AtSines(patternPositions, excitations.ToArray(), k, grid.Sines.AsSpan());
+            for (int i = 0; i < af.Length; i++) { w.FieldRe[i] = af[i].Real; w.FieldIm[i] = af[i].Imaginary; }
+        }
+        double peak = 0;
+        for (int i = 0; i < w.Power.Length; i++)
+        {
+            double fr = w.FieldRe[i] * element[i], fi = w.FieldIm[i] * element[i];
+            double p = fr * fr + fi * fi;
+            w.Power[i] = p;
+            if (p > peak) peak = p;
+        }
+        w.PeakPower = peak;
+        // The workspace's power array is read only during this call: wrapping it without a copy is safe here.
+        return PatternMetrics.BeamAndPeakSidelobe(grid.Theta, System.Runtime.InteropServices.ImmutableCollectionsMarshal.AsImmutableArray(w.Power), peak);
     }
 
-    public TrialOutcome Evaluate(TrialNetwork t, bool keepEnvelope)
+    /// <summary>One trial's figures (allocates its own workspace; no envelope).</summary>
+    public TrialOutcome Evaluate(TrialNetwork t) => Evaluate(t, NewWorkspace(), default);
+
+    /// <summary>
+    /// One trial's figures; the cut's envelope samples (dB relative to its peak) go to <paramref name="envelope"/> when it is
+    /// not empty (length <see cref="EnvelopeAngles"/>).
+    /// </summary>
+    public TrialOutcome Evaluate(TrialNetwork t, Workspace w, Span<float> envelope)
     {
         int n = t.Positions.Length;
-        var pos = new double[n];
-        var offsets = new double[n];
+        var pos = w.Positions;
+        var offsets = w.Offsets;
         for (int i = 0; i < n; i++)
         {
             pos[i] = -t.Positions[i];
             offsets[i] = pos[i] - nominalPatternPositions[i];
         }
-        var (beam, peakSidelobeDb) = PatternOf(pos, t.Excitations, offsets, out var pattern);
+        var (beam, peakSidelobeDb) = PatternOf(pos, t.Excitations, offsets, w);
 
         // Half-space directivity D = 4 |E·AF|²(θb) / ∫ |E·AF|² du (Directivity.HalfSpace, same rule).
         var afBeam = ArrayFactor.AtSines(pos, t.Excitations, k, [Math.Sin(beam)])[0];
@@ -152,8 +177,7 @@ internal sealed class TrialEvaluator
         }
         Complex common = num / den;
         double amp2 = 0, phase2 = 0, pos2 = 0;
-        var both = new double[2 * n];
-        var diff = new Complex[2 * n];
+        var scaled = w.Scaled;
         for (int i = 0; i < n; i++)
         {
             Complex r = t.Excitations[i] / (common * nominal.Excitations[i]);
@@ -162,37 +186,70 @@ internal sealed class TrialEvaluator
             phase2 += ph * ph;
             double dz = t.Positions[i] - nominal.Positions[i];
             pos2 += k * k * dz * dz / 3;
-            both[i] = pos[i];
-            diff[i] = t.Excitations[i] / common;
-            both[n + i] = nominalPatternPositions[i];
-            diff[n + i] = -nominal.Excitations[i];
+            scaled[i] = t.Excitations[i] / common;
         }
-        Complex[] err;
+        double floor = 0;
         if (floorSum is not null)
         {
-            var scaled = new Complex[n];
-            for (int i = 0; i < n; i++) scaled[i] = diff[i];
-            err = floorSum.Evaluate(scaled, offsets);
-            for (int j = 0; j < err.Length; j++) err[j] -= nominalFloorField![j];
+            floorSum.Evaluate(scaled, offsets, w.FloorRe, w.FloorIm, w.FloorScratch!);
+            for (int j = 0; j < w.FloorRe.Length; j++)
+            {
+                double er = w.FloorRe[j] - nominalFloorField![j].Real, ei = w.FloorIm[j] - nominalFloorField[j].Imaginary;
+                floor += er * er + ei * ei;
+            }
         }
-        else err = ArrayFactor.AtSines(both, diff, k, floorSines);
-        double floor = 0;
-        foreach (var v in err) floor += v.Real * v.Real + v.Imaginary * v.Imaginary;
-        floor /= err.Length * nominalPeakPower;
-
-        float[]? envelope = null;
-        if (keepEnvelope && envelopeStride > 0)
+        else
         {
-            envelope = new float[EnvelopeAngles.Length];
-            double peak = pattern.PeakPower;
+            var both = new double[2 * n];
+            var diff = new Complex[2 * n];
+            for (int i = 0; i < n; i++)
+            {
+                both[i] = pos[i];
+                diff[i] = scaled[i];
+                both[n + i] = nominalPatternPositions[i];
+                diff[n + i] = -nominal.Excitations[i];
+            }
+            foreach (var v in ArrayFactor.AtSines(both, diff, k, floorSines)) floor += v.Real * v.Real + v.Imaginary * v.Imaginary;
+        }
+        floor /= floorSines.Length * nominalPeakPower;
+
+        if (!envelope.IsEmpty)
+        {
+            double peak = w.PeakPower;
             for (int j = 0; j < envelope.Length; j++)
             {
-                double p = pattern.Power[j * envelopeStride];
+                double p = w.Power[j * envelopeStride];
                 envelope[j] = (float)(p > 0 ? Math.Max(-300, 10 * Math.Log10(p / peak)) : -300);
             }
         }
         double s11 = t.S11.Magnitude;
         return new TrialOutcome(peakSidelobeDb ?? -300, beam, s11 > 0 ? 20 * Math.Log10(s11) : -300,
-            directivity * t.RadiatedPower, floor, amp2, phase2, pos2, envelope);
+            directivity * t.RadiatedPower, floor, amp2, phase2, pos2);
+    }
+
+    /// <summary>The per-thread working arrays of one evaluator.</summary>
+    internal sealed class Workspace
+    {
+        internal Workspace(TrialEvaluator e)
+        {
+            int n = e.nominalPatternPositions.Length, m = e.grid.Count;
+            Positions = new double[n]; Offsets = new double[n]; Scaled = new Complex[n];
+            FieldRe = new double[m]; FieldIm = new double[m]; Power = new double[m];
+            FloorRe = new double[e.floorSines.Length]; FloorIm = new double[e.floorSines.Length];
+            GridScratch = e.gridSum?.NewScratch();
+            FloorScratch = e.floorSum?.NewScratch();
+        }
+
+        internal double[] Positions { get; }
+        internal double[] Offsets { get; }
+        internal Complex[] Scaled { get; }
+        internal double[] FieldRe { get; }
+        internal double[] FieldIm { get; }
+        internal double[] Power { get; }
+        internal double PeakPower { get; set; }
+        internal double[] FloorRe { get; }
+        internal double[] FloorIm { get; }
+        internal NearUniformArrayFactor.Scratch? GridScratch { get; }
+        internal NearUniformArrayFactor.Scratch? FloorScratch { get; }
     }
 }

@@ -10,7 +10,7 @@ namespace SlotArray.Core.Waveguides;
 /// </summary>
 /// <remarks>
 /// Formulas: D. M. Pozar, <i>Microwave Engineering</i>, 4th ed., Wiley 2012, Sec. 3.3 (TE_mn cutoff,
-/// β, λg, Z_TE; conductor attenuation of TE10, eq. 3.96), as restated in the project's physics reference §1.1.
+/// β, λg, Z_TE; conductor attenuation of TE10, eq. 3.96).
 /// Walls are non-magnetic (μ = μ0); the filling is lossless with relative permittivity εr ≥ 1.
 /// Surface roughness raises conductor loss by the Hammerstad factor
 /// K = 1 + (2/π) atan(1.4 (Δ/δ)²) (E. Hammerstad and Ø. Jensen, "Accurate models for microstrip

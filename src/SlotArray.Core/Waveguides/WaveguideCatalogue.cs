@@ -3,8 +3,8 @@ namespace SlotArray.Core.Waveguides;
 /// <summary>Standard rectangular waveguides, WR-650 down to WR-28.</summary>
 /// <remarks>
 /// Sources: EIA RS-261-B (1979), "Rectangular Waveguides (WR3 to WR2300)", for the WR numbers and inside
-/// dimensions in inches; IEC 60153-2 (2016) for the R numbers; the recommended bands as tabulated in the
-/// project's physics reference §1.3 (RF Cafe waveguide selection chart; scikit-rf <c>skrf/instances.py</c>
+/// dimensions in inches; IEC 60153-2 (2016) for the R numbers; the recommended bands from the
+/// (RF Cafe waveguide selection chart; scikit-rf <c>skrf/instances.py</c>
 /// for WR-51 to WR-28). Dimensions are stored in inches, the standard's unit, so millimetres are exact.
 /// </remarks>
 public static class WaveguideCatalogue

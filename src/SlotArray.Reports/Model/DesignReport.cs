@@ -172,7 +172,7 @@ public sealed record LoadReport
 /// <summary>Travelling-wave figures at the design frequency and across the band.</summary>
 public sealed record TravellingWaveReport
 {
-    /// <summary>Beam squint from the phase condition sin θ = λ/λg − λ/(2d), degrees, positive toward the load end (physics-reference §5.2).</summary>
+    /// <summary>Beam squint from the phase condition sin θ = λ/λg − λ/(2d), degrees, positive toward the load end (Elliott 1981, Ch. 8).</summary>
     public required double SquintDeg { get; init; }
 
     /// <summary>Scan rate dθ/df from the phase condition at the design frequency, degrees per 100 MHz.</summary>

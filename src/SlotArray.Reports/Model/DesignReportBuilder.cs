@@ -21,7 +21,7 @@ namespace SlotArray.Reports.Model;
 /// z axis, architecture.md "Axes"); offsets signed, positive toward the +x side wall.</item>
 /// <item>Lengths: the equivalent rectangular length the slot model resonated, and the overall tip-to-tip length by
 /// <see cref="FabricationPlan.Build"/> (round ends from the spec's cutter by the equal-area rule of <see cref="RoundEndedSlot"/>,
-/// physics-reference §9.1; square ends without a cutter).</item>
+/// common practice; square ends without a cutter).</item>
 /// <item>Amplitudes: the target is the taper weight, the achieved one the magnitude of the network's slot excitation
 /// <see cref="NetworkSolution.Excitations"/> at the design frequency; both are normalised so that their largest
 /// magnitude is 1. The achieved phase is that of the excitation relative to the slot of largest achieved amplitude.</item>
@@ -207,7 +207,7 @@ public static class DesignReportBuilder
     /// <summary>
     /// The ± tolerance printed on every cut-list row: the tightest of the spec's offset, length, position and width
     /// tolerances (a normal σ counts as ±2σ, the 95 % band); without a tolerance block, routine precision CNC milling,
-    /// ±0.025 mm (<see cref="GeneralTolerances.PrecisionMilling"/>, common practice, physics-reference §9.2).
+    /// ±0.025 mm (<see cref="GeneralTolerances.PrecisionMilling"/>, common practice, no source).
     /// </summary>
     /// <param name="tolerance">The spec's tolerance block, or null.</param>
     public static double CutTolerance(ToleranceRequest? tolerance)

@@ -5,7 +5,7 @@ namespace SlotArray.Core.Tests.Coupling;
 
 /// <summary>
 /// Half-cosine-current mutual impedance: at kh = π/2 the half-cosine is the sinusoid, so the result must equal the
-/// induced-EMF closed form and the physics-reference §4.3 tables; reciprocity for unequal lengths.
+/// induced-EMF closed form and Carter 1932 induced-EMF values computed with numpy [N]; reciprocity for unequal lengths.
 /// </summary>
 public class CosineCurrentMutualImpedanceTests
 {
@@ -19,8 +19,8 @@ public class CosineCurrentMutualImpedanceTests
     public void Half_wave_equals_the_sinusoidal_closed_form_and_the_tables(double d, double s, double r, double x)
     {
         var z = CosineCurrentMutualImpedance.MutualElectrical(K * d, K * s, K * 0.25, K * 0.25);
-        Check.Absolute(r, z.Real, 0.006, "physics-reference §4.3 [N] tables");
-        Check.Absolute(x, z.Imaginary, 0.006, "physics-reference §4.3 [N] tables");
+        Check.Absolute(r, z.Real, 0.006, "Carter 1932 induced EMF, numpy [N]");
+        Check.Absolute(x, z.Imaginary, 0.006, "Carter 1932 induced EMF, numpy [N]");
         var closed = DipoleMutualImpedance.MutualElectrical(K * d, K * s, K * 0.25, K * 0.25);
         Check.Absolute(closed.Real, z.Real, 1e-12 * closed.Magnitude, "induced-EMF closed form (cos(πz/2h) = sin(k(h − |z|)) at kh = π/2)");
         Check.Absolute(closed.Imaginary, z.Imaginary, 1e-12 * closed.Magnitude, "induced-EMF closed form");

@@ -6,13 +6,13 @@ using SlotArray.Tests.Shared;
 namespace SlotArray.Core.Tests.Coupling;
 
 /// <summary>
-/// Mutual and self impedance of thin dipoles: the tables of physics-reference §4.3 (numpy/scipy closed form and
-/// quadrature, agreeing there to 0.01 Ω), the classic textbook numbers, the thin half-wave self impedance, an
+/// Mutual and self impedance of thin dipoles: Carter 1932 induced-EMF values (numpy/scipy closed form and
+/// quadrature, agreeing to 0.01 Ω), the classic textbook numbers, the thin half-wave self impedance, an
 /// independent quadrature of the reaction integral, and reciprocity for unequal lengths.
 /// </summary>
 public class DipoleMutualImpedanceTests
 {
-    private const string Table = "physics-reference §4.3 [N] (Carter/induced EMF, η0), values to 0.01 Ω";
+    private const string Table = "Carter 1932 induced EMF, numpy/scipy [N] (η0), values to 0.01 Ω";
     private const double TableTolerance = 0.006;   // the table is rounded to 0.01 Ω
     private static readonly Frequency F = Frequency.FromGigahertz(1);
     private static Length Lambda(double fraction) => fraction * F.FreeSpaceWavelength;
@@ -82,7 +82,7 @@ public class DipoleMutualImpedanceTests
     [Fact]
     public void Thin_half_wave_dipole_self_impedance()
     {
-        const string orfanidis = "73.079 + j42.515 Ω, Orfanidis imped.m documentation (physics-reference §4.3 [S])";
+        const string orfanidis = "73.079 + j42.515 Ω, Orfanidis imped.m documentation [S]";
         var z = DipoleMutualImpedance.Self(Lambda(0.25), Lambda(1e-6), F);
         Check.Absolute(73.079, z.Real, 0.001, orfanidis);
         Check.Absolute(42.515, z.Imaginary, 0.001, orfanidis);

@@ -6,7 +6,7 @@ namespace SlotArray.Core.Tests.Coupling;
 /// <summary>
 /// An independent reference for the closed-form mutual impedance: the induced-EMF reaction integral
 /// Z21 = (jη/4π) ∫ [e^(−jkR1)/R1 + e^(−jkR2)/R2 − 2 cos(kh1) e^(−jkr)/r] sin(k(h2 − |z − s|)) dz
-/// (Carter 1932; Balanis, Antenna Theory, 3rd ed., Sec. 8.6, from memory; physics-reference §4.3), integrated by
+/// (Carter 1932; Balanis, Antenna Theory, 3rd ed., Sec. 8.6, from memory), integrated by
 /// composite Gauss–Legendre (MathNet's rule) on panels graded toward the near-singular points of the kernel.
 /// Written straight from the field formula, sharing no code with the closed form. Electrical units (k = 1).
 /// </summary>

@@ -6,7 +6,7 @@ using SlotArray.Tests.Shared;
 namespace SlotArray.Core.Tests.Coupling;
 
 /// <summary>
-/// Babinet–Booker maps (physics-reference §7.2 [N] worked values) and the slot coupling matrix: geometry mapping,
+/// Babinet–Booker maps (Booker 1946, numpy worked values [N]) and the slot coupling matrix: geometry mapping,
 /// symmetry, diagonal, determinism across thread counts, and the one-sided admittance factor 2/η².
 /// </summary>
 public class SlotMutualCouplingTests
@@ -17,7 +17,7 @@ public class SlotMutualCouplingTests
     [Fact]
     public void Babinet_worked_values()
     {
-        const string source = "physics-reference §7.2 [N], Booker 1946, Z_d = 73 + j42.5 Ω, η0";
+        const string source = "Booker 1946, numpy [N], Z_d = 73 + j42.5 Ω, η0";
         var zd = new Complex(73, 42.5);
         var zs = SlotMutualCoupling.TwoSidedSlotImpedance(zd);
         Check.Absolute(363.01, zs.Real, 0.006, source);
@@ -28,12 +28,12 @@ public class SlotMutualCouplingTests
         var thin = SlotMutualCoupling.TwoSidedSlotImpedance(new Complex(73.079, 42.511));
         Check.Absolute(362.77, thin.Real, 0.006, source + " (thin-wire Z_d)");
         Check.Absolute(-211.02, thin.Imaginary, 0.006, source + " (thin-wire Z_d)");
-        Check.Relative(0.25 * Width.Meters, SlotMutualCoupling.EquivalentRadius(Width).Meters, 1e-15, "Butler 1982: equivalent radius w/4");
+        Check.Relative(0.25 * Width.Meters, StripEquivalentRadius.Of(Width).Meters, 1e-15, "Butler 1982: equivalent radius w/4");
     }
 
     private static LongitudinalSlotPlacement[] Array(int n)
     {
-        // Standing-wave layout: λg/2 spacing (WR-90 at 9.375 GHz: 22.37144 mm, physics-reference §11 row 29),
+        // Standing-wave layout: λg/2 spacing (WR-90 at 9.375 GHz: 22.37144 mm, Pozar 2012 Sec. 3.3, numpy [N]),
         // alternating offsets, slightly different lengths.
         var slots = new LongitudinalSlotPlacement[n];
         for (int i = 0; i < n; i++)
@@ -53,11 +53,11 @@ public class SlotMutualCouplingTests
             {
                 Assert.Equal(z[m, n], z[n, m]);
                 var expected = m == n
-                    ? DipoleMutualImpedance.Self(slots[m].HalfLength, 0.25 * Width, F0)
+                    ? DipoleMutualImpedance.Self(slots[m].HalfLength, StripEquivalentRadius.Of(Width), F0)
                     : DipoleMutualImpedance.Mutual(Length.FromMeters(Math.Abs(slots[m].Offset.Meters - slots[n].Offset.Meters)),
                         slots[n].Position - slots[m].Position, slots[m].HalfLength, slots[n].HalfLength, F0);
-                Check.Absolute(expected.Real, z[m, n].Real, 1e-9, "d = |x_m − x_n|, s = z_n − z_m (physics-reference §4.3)");
-                Check.Absolute(expected.Imaginary, z[m, n].Imaginary, 1e-9, "d = |x_m − x_n|, s = z_n − z_m (physics-reference §4.3)");
+                Check.Absolute(expected.Real, z[m, n].Real, 1e-9, "d = |x_m − x_n|, s = z_n − z_m (Carter 1932 induced EMF)");
+                Check.Absolute(expected.Imaginary, z[m, n].Imaginary, 1e-9, "d = |x_m − x_n|, s = z_n − z_m (Carter 1932 induced EMF)");
             }
         // Neighbours at λg/2 ≈ 0.7 λ, nearly collinear: of the order of the collinear table value at 0.75 λ, 2.04 − j7.97 Ω.
         Assert.InRange(z[0, 1].Magnitude, 3, 15);
@@ -81,7 +81,7 @@ public class SlotMutualCouplingTests
         double factor = 2 / (PhysicalConstants.Eta0 * PhysicalConstants.Eta0);
         for (int m = 0; m < 4; m++)
             for (int n = 0; n < 4; n++)
-                Check.Relative((factor * z[m, n]).Magnitude, y[m, n].Magnitude, 1e-15, "physics-reference §7.2: Y_mn = 2 Z_mn/η²");
+                Check.Relative((factor * z[m, n]).Magnitude, y[m, n].Magnitude, 1e-15, "Booker 1946: Y_mn = 2 Z_mn/η²");
     }
 
     [Fact]
@@ -108,7 +108,7 @@ public class SlotMutualCouplingTests
         };
         var z = SlotMutualCoupling.EquivalentDipoleImpedances(slots, Width, F0);
         var expected = DipoleMutualImpedance.Mutual(Length.FromMillimeters(4), Length.Zero, Length.FromMillimeters(7.3), Length.FromMillimeters(7.3), F0);
-        Check.Absolute(expected.Real, z[0, 1].Real, 1e-12, "d = 2|x| for opposite offsets (physics-reference §4.3)");
-        Check.Absolute(expected.Imaginary, z[0, 1].Imaginary, 1e-12, "d = 2|x| for opposite offsets (physics-reference §4.3)");
+        Check.Absolute(expected.Real, z[0, 1].Real, 1e-12, "d = 2|x| for opposite offsets (Carter 1932 induced EMF)");
+        Check.Absolute(expected.Imaginary, z[0, 1].Imaginary, 1e-12, "d = 2|x| for opposite offsets (Carter 1932 induced EMF)");
     }
 }

@@ -6,13 +6,13 @@ using static SlotArray.Core.Tests.DesignTests.TestArrays;
 namespace SlotArray.Core.Tests.DesignTests;
 
 /// <summary>
-/// The standing-wave designer against physics-reference §5.1 and §11 #29 (WR-90 at 9.375 GHz; values computed there
-/// with numpy from Stevenson's formula, §2.1). The test double's g_r is Stevenson's, so the offsets check the
+/// The standing-wave designer against the design rules of Elliott 1981, Ch. 8 (WR-90 at 9.375 GHz; values computed
+/// with numpy [N] from Stevenson's formula). The test double's g_r is Stevenson's, so the offsets check the
 /// designer's conductance scaling end to end.
 /// </summary>
 public class StandingWaveDesignerTests
 {
-    private const string Ref51 = "physics-reference §5.1 / §11 #29 [N]";
+    private const string Ref51 = "Elliott 1981, Ch. 8 [N]";
     private static StevensonTestSlot Slot => new(Wr90, Width);
 
     [Fact]
@@ -20,9 +20,9 @@ public class StandingWaveDesignerTests
     {
         var d = StandingWaveDesigner.Design(Request(10), Slot, Uniform(10));
 
-        Check.Absolute(1.0, d.TotalConductance, 1e-12, "Σ g_n = 1 by construction (physics-reference §5.1 match rule)");
+        Check.Absolute(1.0, d.TotalConductance, 1e-12, "Σ g_n = 1 by construction (Elliott 1981, Ch. 8 match rule)");
         Check.Absolute(22.3714e-3, d.Spacing.Meters, 0.5e-7, Ref51 + ": λg/2");
-        Check.Absolute(44.74288e-3, d.GuideWavelength.Meters, 0.5e-8, "physics-reference §1.2 [N]: λg");
+        Check.Absolute(44.74288e-3, d.GuideWavelength.Meters, 0.5e-8, "Pozar 2012, Sec. 3.3 [N]: λg");
         Check.Absolute(11.1857e-3, d.NearTermination.Distance.Meters, 0.5e-7, Ref51 + ": λg/4");
         Assert.Equal(TerminationKind.Short, d.NearTermination.Kind);
         Assert.Null(d.FarTermination);
@@ -33,7 +33,7 @@ public class StandingWaveDesignerTests
             Check.Absolute(0.1, s.Conductance, 1e-12, Ref51 + ": g_n = 1/N");
             Check.Absolute(2.0978e-3, Math.Abs(s.Coupling), 0.5e-7, Ref51 + ": |x_n| = 2.0978 mm");
             Check.Absolute(11.1857e-3 + i * 22.3714e-3, s.Position.Meters, 0.5e-7 * (i + 1), Ref51 + ": z_n = λg/4 + (n−1)λg/2");
-            Assert.Equal(i % 2 == 0 ? 1 : -1, Math.Sign(s.Coupling));   // alternation, physics-reference §5.1
+            Assert.Equal(i % 2 == 0 ? 1 : -1, Math.Sign(s.Coupling));   // alternation, Elliott 1981, Ch. 8
         }
         Assert.Equal(d.Slots[^1].Position, d.FeedPlane);
         Assert.Empty(d.Warnings);
@@ -42,11 +42,11 @@ public class StandingWaveDesignerTests
     [Fact]
     public void Taylor_25_dB_nbar_4_ten_slot_offsets_match_the_reference()
     {
-        // physics-reference §5.1 [N]: |x_n| = 1.09428, 1.45128, 2.02898, 2.56950, 2.86456 mm (symmetric); the given g_n
+        // Elliott 1981, Ch. 8 [N]: |x_n| = 1.09428, 1.45128, 2.02898, 2.56950, 2.86456 mm (symmetric); the given g_n
         // carry 4–5 digits, so the offsets agree to about 1e-4 relative.
         double[] x = [1.09428, 1.45128, 2.02898, 2.56950, 2.86456];
         var d = StandingWaveDesigner.Design(Request(10), Slot, Taylor25Amplitudes);
-        Check.Absolute(1.0, d.TotalConductance, 1e-12, "Σ g_n = 1 (physics-reference §5.1)");
+        Check.Absolute(1.0, d.TotalConductance, 1e-12, "Σ g_n = 1 (Elliott 1981, Ch. 8)");
         for (int i = 0; i < 10; i++)
         {
             double expected = x[i < 5 ? i : 9 - i] * 1e-3;
@@ -59,7 +59,7 @@ public class StandingWaveDesignerTests
     public void Three_quarter_wave_short_is_placed_33_5572_mm_beyond_the_last_slot()
     {
         var d = StandingWaveDesigner.Design(Request(10, shortDistance: 0.75), Slot, Uniform(10));
-        Check.Absolute(33.5572e-3, d.NearTermination.Distance.Meters, 0.5e-7, "physics-reference §5.1 [N]: 3λg/4");
+        Check.Absolute(33.5572e-3, d.NearTermination.Distance.Meters, 0.5e-7, "Elliott 1981, Ch. 8 [N]: 3λg/4");
         Check.Absolute(33.5572e-3, d.Slots[0].Position.Meters, 0.5e-7, "slot 1 at the short distance from the datum");
         Assert.Empty(d.Warnings);
     }
@@ -90,7 +90,7 @@ public class StandingWaveDesignerTests
     [Fact]
     public void A_slot_needing_more_than_the_maximum_conductance_is_named_with_the_numbers()
     {
-        // g_3 = 9/12 = 0.75; the double's maximum at x = 5 mm is 0.49776 (physics-reference §2.1 table [N]).
+        // g_3 = 9/12 = 0.75; the double's maximum at x = 5 mm is 0.49776 (Stevenson 1948 table [N]).
         var e = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(Request(4), Slot, [1, 1, 3, 1]));
         Assert.Contains("slot 3 needs g = 0.750", e.Message);
         Assert.Contains("above the 0.498", e.Message);
@@ -113,7 +113,7 @@ public class StandingWaveDesignerTests
     [Fact]
     public void Spacing_off_half_guide_wavelength_and_grating_lobes_are_warned()
     {
-        // 0.75 λg = 33.56 mm > λ = 31.98 mm: grating lobes (physics-reference §5.1 rule d < λ).
+        // 0.75 λg = 33.56 mm > λ = 31.98 mm: grating lobes (Elliott 1981, Ch. 8 rule d < λ).
         var d = StandingWaveDesigner.Design(Request(4, spacing: 0.75), Slot, Uniform(4));
         Assert.Contains(d.Warnings, w => w.Code == "grating-lobe");
         Assert.Contains(d.Warnings, w => w.Code == "spacing-not-half-guide-wavelength");

@@ -7,19 +7,19 @@ namespace SlotArray.Core.Tests.DesignTests;
 
 /// <summary>
 /// TEST DOUBLE, not a slot model of the product: a longitudinal broad-wall slot whose resonant conductance is
-/// Stevenson's closed form g_r(x, f) = (480/(π·73)) (a/b)(λg/λ) cos²(πλ/(2λg)) sin²(πx/a) (physics-reference §2.1 [M, D];
+/// Stevenson's closed form g_r(x, f) = (480/(π·73)) (a/b)(λg/λ) cos²(πλ/(2λg)) sin²(πx/a) (Stevenson 1948 [M, D];
 /// A. F. Stevenson, J. Appl. Phys. 19, 24–38, 1948; R_d = 73 Ω exactly so that WR-90 at 9.375 GHz gives the
 /// coefficient 1.237057), with a single-pole length dependence y = g_r / (1 + jQ(L/L_r − L_r/L)).
 /// The resonant length L_r = <see cref="ResonantFraction"/> · λ/2 does not depend on the offset; it scales with the
 /// free-space wavelength, so a slot of fixed length goes off resonance as the frequency moves, like a real slot.
 /// Q and the resonant fraction are test-double choices, not physics.
 /// The frequency-independent variant (<see cref="FrequencyIndependent"/>) freezes g_r at one frequency and has no
-/// susceptance: the idealised slot of physics-reference §5.1's bandwidth check.
+/// susceptance: the idealised slot of the frequency-independent bandwidth check (ArrayNetworkTests).
 /// </summary>
 internal sealed class StevensonTestSlot(RectangularWaveguide guide, Length width, double q = 5, double resonantFraction = 0.95,
     double maximumCoupling = 5e-3, Frequency? frozenAt = null) : IShuntSlotModel
 {
-    /// <summary>480 Ω/(π R_d) with R_d = 73 Ω (physics-reference §2.1).</summary>
+    /// <summary>480 Ω/(π R_d) with R_d = 73 Ω (Stevenson 1948).</summary>
     public const double StevensonConstant = 480 / (Math.PI * 73);
 
     public RectangularWaveguide Guide { get; } = guide;

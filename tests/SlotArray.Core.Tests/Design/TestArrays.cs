@@ -4,7 +4,7 @@ using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Tests.DesignTests;
 
-/// <summary>Requests and guides shared by the designer and network tests (WR-90 at 9.375 GHz, the physics-reference case).</summary>
+/// <summary>Requests and guides shared by the designer and network tests (WR-90 at 9.375 GHz, the reference case of the check values).</summary>
 internal static class TestArrays
 {
     public static readonly Frequency F0 = Frequency.FromGigahertz(9.375);
@@ -28,7 +28,7 @@ internal static class TestArrays
     public static double[] Uniform(int n) => Enumerable.Repeat(1.0, n).ToArray();
 
     /// <summary>
-    /// Taylor 25 dB, n̄ = 4, N = 10 conductances of physics-reference §5.1 [N] (scipy sampled weights, g ∝ a²);
+    /// Taylor 25 dB, n̄ = 4, N = 10 conductances g ∝ a² (Elliott 1981, Ch. 8) of the scipy sampled weights, numpy [N];
     /// the amplitudes are their square roots, used as given weights.
     /// </summary>
     public static readonly double[] Taylor25Conductances = [0.02777, 0.04856, 0.09372, 0.14795, 0.18201, 0.18201, 0.14795, 0.09372, 0.04856, 0.02777];

@@ -34,10 +34,10 @@ public class CoupledArrayNetworkTests
             {
                 Check.Absolute(0, (c.ModeVoltages[i] - u.ModeVoltages[i]).Magnitude, 1e-11, "ArrayNetwork");
                 Check.Absolute(u.RadiatedPowers[i], c.RadiatedPowers[i], 1e-12, "ArrayNetwork");
-                // Slot voltage without coupling: w = y V/f (physics-reference §4.2, (E1) with Y^a = Y).
+                // Slot voltage without coupling: w = y V/f (Elliott 1983, (E1) with Y^a = Y).
                 var s = d.Slots[i];
                 double fn = ElliottDesignEquations.CouplingFunction(d.Guide, f, Length.FromMeters(s.Coupling), 0.5 * s.Length);
-                Check.Absolute(0, (c.Excitations[i] - u.SlotAdmittances[i] * u.ModeVoltages[i] / (fn * Math.Sqrt(gamma0))).Magnitude, 1e-11, "(E1), physics-reference §4.2");
+                Check.Absolute(0, (c.Excitations[i] - u.SlotAdmittances[i] * u.ModeVoltages[i] / (fn * Math.Sqrt(gamma0))).Magnitude, 1e-11, "(E1), Elliott 1983");
             }
         }
     }

@@ -37,17 +37,17 @@ public class ElliottDesignerTests
     [InlineData(FeedPosition.Centre)]
     public void Without_coupling_it_returns_the_isolated_slot_design(FeedPosition feed)
     {
-        // physics-reference §4.2: with Z_mn = 0, (E2) gives Y^a = Y; for a slot with Stevenson's g_r = Γ0 f_r² and an
-        // offset-independent resonant length (the test double) the targets f_n|a_n|/Σ f|a| equal a_n²/Σ a² (§5.1).
+        // Elliott 1983: with Z_mn = 0, (E2) gives Y^a = Y; for a slot with Stevenson's g_r = Γ0 f_r² and an
+        // offset-independent resonant length (the test double) the targets f_n|a_n|/Σ f|a| equal a_n²/Σ a² (Elliott 1981, Ch. 8).
         var slot = new StevensonTestSlot(Wr90, Width);
         var request = Request(10, feed);
         var plain = StandingWaveDesigner.Design(request, slot, Taylor25Amplitudes);
         var r = ElliottDesigner.Design(request, slot, Taylor25Amplitudes, new ElliottOptions(Coupling: CoupledSlotImpedances.None));
         for (int i = 0; i < 10; i++)
         {
-            Check.Absolute(plain.Slots[i].Coupling, r.Design.Slots[i].Coupling, 1e-9, "isolated-slot design, physics-reference §5.1 (1e-6 mm)");
+            Check.Absolute(plain.Slots[i].Coupling, r.Design.Slots[i].Coupling, 1e-9, "isolated-slot design, Elliott 1981, Ch. 8 (1e-6 mm)");
             Check.Absolute(plain.Slots[i].Length.Meters, r.Design.Slots[i].Length.Meters, 1e-9, "isolated-slot design (1e-6 mm)");
-            Check.Relative(plain.Slots[i].Conductance, r.Design.Slots[i].Conductance, 1e-6, "g_n = a_n²/Σ a², physics-reference §5.1");
+            Check.Relative(plain.Slots[i].Conductance, r.Design.Slots[i].Conductance, 1e-6, "g_n = a_n²/Σ a², Elliott 1981, Ch. 8");
         }
         Assert.True(r.Iterations.Count <= 2, $"{r.Iterations.Count} iterations for an uncoupled design");
     }
@@ -61,7 +61,7 @@ public class ElliottDesignerTests
     public void Converges_and_the_coupled_analysis_confirms_match_and_taper(int n, double sll)
     {
         // Issue 8 acceptance: S11 < −30 dB at f0 and slot voltages within 0.1 dB and 1° of the taper under the coupled
-        // analysis (the same (E2) structure, physics-reference §4.4 step 6). Lossless line: equal mode voltages (§4.4).
+        // analysis (the same (E2) structure, Elliott 1983). Lossless line: equal mode voltages (Elliott 1983).
         var slot = new StevensonTestSlot(Wr90Lossless, Width, maximumCoupling: 6e-3);
         var a = Taylor(n, sll);
         var r = ElliottDesigner.Design(Request(n, guide: Wr90Lossless), slot, a);
@@ -103,7 +103,7 @@ public class ElliottDesignerTests
         {
             double l = s.ResonantLength(x) * u;
             var direct = mom.Admittance(x, Length.FromMeters(l), F0);
-            Check.Absolute(0, (s.Admittance(x, l) - direct).Magnitude / direct.Magnitude, 5e-3, "direct moment-method solve (physics-reference §3.3)");
+            Check.Absolute(0, (s.Admittance(x, l) - direct).Magnitude / direct.Magnitude, 5e-3, "direct moment-method solve (moment method after Stern & Elliott 1985)");
         }
     }
 

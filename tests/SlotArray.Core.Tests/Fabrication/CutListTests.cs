@@ -5,7 +5,7 @@ using SlotArray.Tests.Shared;
 
 namespace SlotArray.Core.Tests.Fabrication;
 
-/// <summary>The cut-list builder: plain per-slot inputs to rows (physics-reference §9.1 and §9.3 [C]).</summary>
+/// <summary>The cut-list builder: plain per-slot inputs to rows (equal-area rule and baseline dimensioning, common practice [C]).</summary>
 public class CutListTests
 {
     private static readonly CutListGuide Wr90 = new(Length.FromMillimeters(22.86), Length.FromMillimeters(10.16), Length.FromMillimeters(1.27));
@@ -22,9 +22,9 @@ public class CutListTests
         var r1 = list.Rows[0];
         Assert.Equal("+x", r1.Side);
         Assert.Equal("-x", list.Rows[1].Side);
-        Check.Absolute(14.6 + 0.3407, r1.OverallLength.Millimeters, 5e-5, "physics-reference §9.1 [N]: +0.3407 mm for w = 1.5875 mm");
-        Check.Relative(14.798, r1.TransversePosition!.Value.Millimeters, 1e-12, "physics-reference §9.3: 1.27 + 11.43 + 2.098");
-        Check.Relative(10.602, list.Rows[1].TransversePosition!.Value.Millimeters, 1e-12, "physics-reference §9.3: 1.27 + 11.43 − 2.098");
+        Check.Absolute(14.6 + 0.3407, r1.OverallLength.Millimeters, 5e-5, "equal-area rule [C]: +0.3407 mm for w = 1.5875 mm");
+        Check.Relative(14.798, r1.TransversePosition!.Value.Millimeters, 1e-12, "baseline dimensioning, ASME Y14.5: 1.27 + 11.43 + 2.098");
+        Check.Relative(10.602, list.Rows[1].TransversePosition!.Value.Millimeters, 1e-12, "baseline dimensioning, ASME Y14.5: 1.27 + 11.43 − 2.098");
         Assert.Equal("round Ø1.588", r1.End.Description);
         Assert.Null(r1.DepthOfCut);
         Assert.Contains(list.Notes, n => n.Code == "cutlist-datum");

@@ -4,7 +4,7 @@ using SlotArray.Tests.Shared;
 
 namespace SlotArray.Core.Tests.Fabrication;
 
-/// <summary>Datums and dimensioning rules of physics-reference §9.3 [C]; expected values by hand arithmetic (closed forms).</summary>
+/// <summary>Datums and baseline dimensioning (common practice after ASME Y14.5 [C]); expected values by hand arithmetic (closed forms).</summary>
 public class DatumsTests
 {
     private static readonly Length T = Length.FromMillimeters(1.27), A = Length.FromMillimeters(22.86);
@@ -13,9 +13,9 @@ public class DatumsTests
     public void Transverse_position_is_wall_plus_half_a_plus_or_minus_x()
     {
         var x = Length.FromMillimeters(2.098);
-        // 1.27 + 11.43 + 2.098 = 14.798 mm from the −x wall; 1.27 + 11.43 − 2.098 = 10.602 mm from the +x wall (§9.3).
-        Check.Relative(14.798, Datums.TransversePosition(T, A, x, TransverseDatumSide.MinusXWall).Millimeters, 1e-12, "physics-reference §9.3: t + a/2 + x");
-        Check.Relative(10.602, Datums.TransversePosition(T, A, x, TransverseDatumSide.PlusXWall).Millimeters, 1e-12, "physics-reference §9.3: t + a/2 − x");
+        // 1.27 + 11.43 + 2.098 = 14.798 mm from the −x wall; 1.27 + 11.43 − 2.098 = 10.602 mm from the +x wall.
+        Check.Relative(14.798, Datums.TransversePosition(T, A, x, TransverseDatumSide.MinusXWall).Millimeters, 1e-12, "baseline dimensioning, ASME Y14.5: t + a/2 + x");
+        Check.Relative(10.602, Datums.TransversePosition(T, A, x, TransverseDatumSide.PlusXWall).Millimeters, 1e-12, "baseline dimensioning, ASME Y14.5: t + a/2 − x");
         Check.Relative(10.602, Datums.TransversePosition(T, A, Length.FromMillimeters(-2.098), TransverseDatumSide.MinusXWall).Millimeters, 1e-12,
             "a −x slot measured from the −x wall");
         Assert.Throws<ArgumentOutOfRangeException>(() => Datums.TransversePosition(T, A, Length.FromMillimeters(11.43), TransverseDatumSide.MinusXWall));

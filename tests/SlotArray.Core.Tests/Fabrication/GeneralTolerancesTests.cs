@@ -4,10 +4,10 @@ using SlotArray.Tests.Shared;
 
 namespace SlotArray.Core.Tests.Fabrication;
 
-/// <summary>ISO 2768-1 classes f and m as physics-reference §9.2 lists them [M, Medium].</summary>
+/// <summary>ISO 2768-1:1989 Table 1, classes f and m [M, Medium: values from memory].</summary>
 public class GeneralTolerancesTests
 {
-    private const string Ref = "physics-reference §9.2 [M, Medium]: ISO 2768-1 classes f and m";
+    private const string Ref = "ISO 2768-1:1989 Table 1, classes f and m [M, Medium]";
 
     [Theory]
     [InlineData(3.0, 0.05, 0.1)]
@@ -29,6 +29,6 @@ public class GeneralTolerancesTests
         Assert.Null(GeneralTolerances.For(Iso2768Class.Fine, Length.FromMillimeters(0.3)));
         Assert.Null(GeneralTolerances.For(Iso2768Class.Medium, Length.FromMillimeters(2500)));
         Assert.Equal(12, GeneralTolerances.Rows.Count);
-        Check.Relative(0.025, GeneralTolerances.PrecisionMilling.Millimeters, 1e-12, "physics-reference §9.2 [C]");
+        Check.Relative(0.025, GeneralTolerances.PrecisionMilling.Millimeters, 1e-12, "common practice, no source [C]");
     }
 }

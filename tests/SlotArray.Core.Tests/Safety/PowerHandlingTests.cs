@@ -6,12 +6,12 @@ using SlotArray.Tests.Shared;
 namespace SlotArray.Core.Tests.Safety;
 
 /// <summary>
-/// Power-handling derating of physics-reference §1.1 [C] on the §1.2 check value P_max = 0.9914 MW (WR-90,
+/// Power-handling derating (common practice [C]) on the check value P_max = 0.9914 MW (WR-90,
 /// 9.375 GHz, E_bd = 3 MV/m peak [N]). Derated values are that figure divided by the stated factors (closed form).
 /// </summary>
 public class PowerHandlingTests
 {
-    private const string Pmax = "physics-reference §1.2 [N]: WR-90 9.375 GHz P_max = 0.9914 MW";
+    private const string Pmax = "Pozar 2012, Sec. 3.3 [N]: WR-90 9.375 GHz P_max = 0.9914 MW";
     private static readonly Frequency F = Frequency.FromGigahertz(9.375);
     private static RectangularWaveguide Wr90 => RectangularWaveguide.FromStandard(WaveguideCatalogue.Find("WR-90")!, Length.FromMillimeters(1.27), Metal.Aluminium);
 
@@ -20,7 +20,7 @@ public class PowerHandlingTests
     {
         var p = PowerHandling.Assess(Wr90, F, vswr: 1.5, standingWaveFieldFactor: 1, safetyFactor: 1);
         Check.Relative(0.2, p.ReflectionMagnitude, 1e-12, "|Γ| = (S−1)/(S+1) for S = 1.5");
-        Check.Relative(1.44, p.MismatchFactor, 1e-12, "(1 + 0.2)², physics-reference §1.1 [C]");
+        Check.Relative(1.44, p.MismatchFactor, 1e-12, "(1 + 0.2)², common practice [C]");
         Check.Relative(0.9914e6, p.TheoreticalMaximum, 1e-4, Pmax);
         Check.Relative(0.9914e6 / 1.44, p.AllowedPeakPower, 1e-4, Pmax + " ÷ 1.44");
     }
@@ -29,7 +29,7 @@ public class PowerHandlingTests
     public void Resonant_array_defaults_divide_by_4_for_the_standing_wave_and_2_for_safety()
     {
         var p = PowerHandling.Assess(Wr90, F, vswr: 1.5, peakPower: 25e3);
-        Assert.Equal(4, p.StandingWaveFactor);     // field ×2 near the short → power ×4 (physics-reference §1.1 [C])
+        Assert.Equal(4, p.StandingWaveFactor);     // field ×2 near the short → power ×4 (common practice [C])
         Assert.Equal(2, p.SafetyFactor);
         Check.Relative(0.9914e6 / (1.44 * 4 * 2), p.AllowedPeakPower, 1e-4, Pmax + " ÷ (1.44·4·2) = 86.06 kW");
         Check.Absolute(10 * Math.Log10(0.9914e6 / 11.52 / 25e3), p.MarginDecibels!.Value, 5e-4, "10 log10(86.06 kW / 25 kW) = 5.37 dB");

@@ -4,7 +4,7 @@ using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Tests.Safety;
 
-/// <summary>The cautions as data: the standard one always first; specific ones with the numbers of §8 and §1.1.</summary>
+/// <summary>The cautions as data: the standard one always first; specific ones with their numbers (ICNIRP 2020 levels; power-handling derating, common practice).</summary>
 public class SafetyCautionsTests
 {
     [Fact]
@@ -24,7 +24,7 @@ public class SafetyCautionsTests
         var p = PowerHandling.Assess(guide, Frequency.FromGigahertz(9.41), vswr: 1.5, peakPower: 25e3);
         var c = SafetyCautions.For(e, p);
         Assert.Equal(SafetyCautions.Standard, c[0]);
-        // Distances 9.97 m and 2.32 m: physics-reference §8.1 [N] and sqrt(12.5e3/(4π·184.93)) (python3).
+        // Distances 9.97 m and 2.32 m: Friis 1946 [N] and sqrt(12.5e3/(4π·184.93)) (python3).
         Assert.Contains(c, w => w.Code == "exposure-general-public-whole-body" && w.Message.Contains("within 9.97 m on the beam axis", StringComparison.Ordinal));
         Assert.Contains(c, w => w.Code == "exposure-occupational-local" && w.Message.Contains("within 2.32 m", StringComparison.Ordinal)
             && w.Message.Contains("stays below this level", StringComparison.Ordinal));

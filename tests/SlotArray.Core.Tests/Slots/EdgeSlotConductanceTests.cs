@@ -6,12 +6,12 @@ using SlotArray.Tests.Shared;
 namespace SlotArray.Core.Tests.Slots;
 
 /// <summary>
-/// Edge-slot closed form and cross-polar lobes against physics-reference §2.3 and §11 #11, #12 (numpy values of the
+/// Edge-slot closed form and cross-polar lobes against numpy values [N] of the edge-slot formula (Stevenson 1948; Silver 1949) in its
 /// dimensionally consistent λ³λg/(a³b) form, R_d = 73 Ω). Tolerances: half a unit in the last digit quoted.
 /// </summary>
 public class EdgeSlotConductanceTests
 {
-    private const string Ref = "physics-reference §2.3 [N]";
+    private const string Ref = "edge-slot formula (Stevenson 1948; Silver 1949), numpy [N]";
     private static readonly Frequency F = Frequency.FromGigahertz(9.375);
     private static readonly RectangularWaveguide Wr90 =
         RectangularWaveguide.FromStandard(WaveguideCatalogue.Find("WR-90")!, Length.Zero, new Metal("copper", 5.8e7, "test"));
@@ -33,7 +33,7 @@ public class EdgeSlotConductanceTests
         Check.Relative(12.0545, lam * lam * lam * lg / (a * a * a * b), 5e-6, Ref + ": λ³λg/(a³b) = 12.0545");
         // Small-angle limit: g → 0.13081 · 12.0545 · θ² (the bracket → sin θ).
         double th = 1e-4;
-        Check.Relative(30 / (Math.PI * 73) * 12.0545 * th * th, EdgeSlotConductance.Conductance(Wr90, Angle.FromRadians(th), F), 1e-5, "small-angle limit of the §2.3 formula");
+        Check.Relative(30 / (Math.PI * 73) * 12.0545 * th * th, EdgeSlotConductance.Conductance(Wr90, Angle.FromRadians(th), F), 1e-5, "small-angle limit of the edge-slot formula");
     }
 
     [Theory]
@@ -51,7 +51,7 @@ public class EdgeSlotConductanceTests
     public void A_conductance_beyond_the_tilt_limit_is_infeasible_and_states_the_maximum()
     {
         var e = Assert.Throws<InfeasibleDesignException>(() => EdgeSlotConductance.TiltForConductance(Wr90, 0.5, F, Angle.FromDegrees(30)));
-        Assert.Contains("0.37129", e.Message); // g(30°), physics-reference §2.3
+        Assert.Contains("0.37129", e.Message); // g(30°), edge-slot formula (Stevenson 1948; Silver 1949)
     }
 
     [Fact]
@@ -61,7 +61,7 @@ public class EdgeSlotConductanceTests
         var psi = EdgeSlotCrossPolarization.LobeDirection(d, F);
         Assert.NotNull(psi);
         Check.Absolute(45.6, psi!.Value.Degrees, 0.05, Ref + ": ψ = ±45.6° for d = λg/2");
-        Check.Relative(0.714703, Math.Sin(psi.Value.Radians), 1e-6, "sin ψ = λ/λg, physics-reference §0.2 reference case");
+        Check.Relative(0.714703, Math.Sin(psi.Value.Radians), 1e-6, "sin ψ = λ/λg, WR-90 reference case reference case");
         Check.Absolute(-11.4, EdgeSlotCrossPolarization.LobeLevelDecibels(Angle.FromDegrees(15)), 0.05, Ref + ": tan 15° → −11.4 dB");
         Check.Absolute(-11.4, EdgeSlotCrossPolarization.LobeLevelDecibels(Angle.FromDegrees(-15)), 0.05, "alternating sign: same level");
     }

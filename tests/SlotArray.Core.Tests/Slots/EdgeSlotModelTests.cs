@@ -15,8 +15,8 @@ public class EdgeSlotModelTests
         RectangularWaveguide.FromStandard(WaveguideCatalogue.Find("WR-90")!, Length.FromMillimeters(wallMm), Cu), Length.FromMillimeters(1.5875));
 
     /// <summary>
-    /// The five moment-method admittances of physics-reference §3.3 item 7 (WR-90, 9.375 GHz, x = 2 mm, thin wall),
-    /// with L_r = 0.45654 λ and g_r = 0.09183 from §3.2. Q_s must be their least-squares fit.
+    /// The five moment-method admittances of moment method after Stern & Elliott 1985 (WR-90, 9.375 GHz, x = 2 mm, thin wall),
+    /// with L_r = 0.45654 λ and g_r = 0.09183 (numpy [N]). Q_s must be their least-squares fit.
     /// </summary>
     private static readonly (double LengthOverLambda, Complex Y)[] MomValues =
     [
@@ -45,7 +45,7 @@ public class EdgeSlotModelTests
             if (FitResidual(m1) < FitResidual(m2)) hi = m2; else lo = m1;
         }
         double qFit = 0.5 * (lo + hi);
-        Check.Absolute(qFit, EdgeSlot.SeriesResonanceQ, 5e-4, "least-squares fit to physics-reference §3.3 item 7 [N]");
+        Check.Absolute(qFit, EdgeSlot.SeriesResonanceQ, 5e-4, "least-squares fit to moment method after Stern & Elliott 1985 [N]");
         double rms = Math.Sqrt(FitResidual(EdgeSlot.SeriesResonanceQ) / MomValues.Length);
         Assert.True(rms < 0.0039, $"rms complex residual {rms:G4} should be the 0.0038 stated in the doc comment");
         Assert.True(rms > 0.0037, $"rms complex residual {rms:G4} should be the 0.0038 stated in the doc comment");
@@ -54,7 +54,7 @@ public class EdgeSlotModelTests
     [Fact]
     public void Susceptance_is_positive_below_resonance_and_negative_above()
     {
-        // Sign convention of physics-reference §3.3 item 7: series-resonant branch in shunt.
+        // Sign convention of moment method after Stern & Elliott 1985: series-resonant branch in shunt.
         var m = Model(0.5);
         double th = Angle.FromDegrees(15).Radians;
         var lr = m.Resonance(th, F).ResonantLength;
@@ -64,7 +64,7 @@ public class EdgeSlotModelTests
             Assert.True(m.Admittance(th, ratio * lr, F).Imaginary < 0, $"Im y should be < 0 at L/L_r = {ratio}");
         var atResonance = m.Admittance(th, lr, F);
         Check.Absolute(0.0, atResonance.Imaginary, 1e-15, "h(1) = 1");
-        Check.Absolute(0.10395, atResonance.Real, 0.5e-5, "physics-reference §2.3: g(15°) = 0.10395");
+        Check.Absolute(0.10395, atResonance.Real, 0.5e-5, "edge-slot formula (Stevenson 1948; Silver 1949): g(15°) = 0.10395");
     }
 
     [Fact]
@@ -95,9 +95,9 @@ public class EdgeSlotModelTests
         var developed = m.DevelopedLength(tilt, depth);
         Check.Relative(m.ResonantLength(F).Meters, developed.Meters, 1e-14, "depth → developed length gives the resonant length");
         Check.Relative(depth.Meters, m.CutDepth(tilt, developed).Meters, 1e-12, "developed length → depth");
-        // Hand value, inner-aperture path: b/cos θ + 2(D − t) = 0.95 λ/2 with λ = 31.97786 mm (physics-reference §0.2).
+        // Hand value, inner-aperture path: b/cos θ + 2(D − t) = 0.95 λ/2 with λ = 31.97786 mm (WR-90 reference case).
         double expected = wallMm + (0.95 * 31.97786 / 2 - 10.16 / Math.Cos(tilt.Radians)) / 2;
-        Check.Absolute(expected, depth.Millimeters, 1e-5, "first-order geometry by hand, λ from physics-reference §0.2");
+        Check.Absolute(expected, depth.Millimeters, 1e-5, "first-order geometry by hand, λ from WR-90 reference case");
     }
 
     [Fact]
@@ -139,11 +139,11 @@ public class EdgeSlotModelTests
         IShuntSlotModel m = Model(0.5);
         Assert.Equal(SlotCouplingKind.Tilt, m.CouplingKind);
         Check.Relative(Math.PI / 6, m.MaximumCoupling, 1e-15, "30° tilt limit");
-        Check.Absolute(0.37129, m.MaximumConductance(F), 0.5e-5, "physics-reference §2.3: g(30°)");
+        Check.Absolute(0.37129, m.MaximumConductance(F), 0.5e-5, "edge-slot formula (Stevenson 1948; Silver 1949): g(30°)");
         var r = m.ForConductance(0.10, F);
-        Check.Absolute(14.701, r.Coupling * 180 / Math.PI, 0.5e-3, "physics-reference §2.3 inverse: g = 0.10 → 14.701°");
+        Check.Absolute(14.701, r.Coupling * 180 / Math.PI, 0.5e-3, "edge-slot formula (Stevenson 1948; Silver 1949) inverse: g = 0.10 → 14.701°");
         Check.Relative(0.10, m.Resonance(r.Coupling, F).Conductance, 1e-10, "ForConductance → Resonance round trip");
-        Check.Relative(0.95 * 31.97786e-3 / 2, r.ResonantLength.Meters, 1e-6, "κ λ/2 with λ of physics-reference §0.2");
+        Check.Relative(0.95 * 31.97786e-3 / 2, r.ResonantLength.Meters, 1e-6, "κ λ/2 with λ of WR-90 reference case");
         Assert.Throws<InfeasibleDesignException>(() => m.ForConductance(0.4, F));
         Assert.Throws<ArgumentOutOfRangeException>(() => m.Admittance(Angle.FromDegrees(31).Radians, r.ResonantLength, F));
     }

@@ -13,27 +13,27 @@ public class GroundPlaneSlotTests
     [Fact]
     public void Babinet_worked_value_two_and_one_sided()
     {
-        // physics-reference §7.2 and §11 #17 [N], Booker 1946, η = η0 = 376.730 Ω; quoted to 0.01 Ω.
+        // Booker 1946, numpy [N], η = η0 = 376.730 Ω; quoted to 0.01 Ω.
         var zd = new Complex(73, 42.5);
         var two = Babinet.SlotImpedance(zd, oneSided: false);
         var one = Babinet.SlotImpedance(zd, oneSided: true);
-        Check.Absolute(363.01, two.Real, 0.005, "physics-reference §7.2");
-        Check.Absolute(-211.34, two.Imaginary, 0.005, "physics-reference §7.2");
-        Check.Absolute(726.01, one.Real, 0.005, "physics-reference §7.2");
-        Check.Absolute(-422.68, one.Imaginary, 0.005, "physics-reference §7.2");
+        Check.Absolute(363.01, two.Real, 0.005, "Booker 1946");
+        Check.Absolute(-211.34, two.Imaginary, 0.005, "Booker 1946");
+        Check.Absolute(726.01, one.Real, 0.005, "Booker 1946");
+        Check.Absolute(-422.68, one.Imaginary, 0.005, "Booker 1946");
         var classical = Babinet.SlotImpedance(zd, oneSided: false, eta: 120 * Math.PI);
-        Check.Absolute(363.51, classical.Real, 0.005, "physics-reference §7.2, η = 120π");
-        Check.Absolute(-211.63, classical.Imaginary, 0.005, "physics-reference §7.2, η = 120π");
+        Check.Absolute(363.51, classical.Real, 0.005, "Booker 1946, η = 120π");
+        Check.Absolute(-211.63, classical.Imaginary, 0.005, "Booker 1946, η = 120π");
     }
 
     [Fact]
     public void Thin_half_wave_dipole_self_impedance()
     {
-        // physics-reference §4.3 and §11 #16 [N]: 73.08 + j42.51 Ω; Orfanidis imped.m documentation 73.079 + j42.515 [S].
+        // Carter 1932 induced EMF [N]: 73.08 + j42.51 Ω; Orfanidis imped.m documentation 73.079 + j42.515 [S].
         // At L = λ/2 the radius term drops out (sin kL = 0), so any thin radius gives it.
         var z = GroundPlaneSlot.DipoleImpedance(0.5 * F.FreeSpaceWavelength, Length.FromMillimeters(0.001), F);
-        Check.Absolute(73.079, z.Real, 0.0005, "Orfanidis toolbox note via physics-reference §4.3");
-        Check.Absolute(42.515, z.Imaginary, 0.0005, "Orfanidis toolbox note via physics-reference §4.3");
+        Check.Absolute(73.079, z.Real, 0.0005, "Orfanidis, Electromagnetic Waves and Antennas, imped.m documentation [S]");
+        Check.Absolute(42.515, z.Imaginary, 0.0005, "Orfanidis, Electromagnetic Waves and Antennas, imped.m documentation [S]");
     }
 
     [Theory]
@@ -42,7 +42,7 @@ public class GroundPlaneSlotTests
     public void Dipole_of_arbitrary_length_matches_an_independent_evaluation(double lengthMm, double widthMm, double r, double x, double rByIntegration)
     {
         // r, x: the Balanis (8-60a/b, 8-61a) closed form evaluated with mpmath 1.3.0 si/ci at 25 digits (implementation check).
-        // rByIntegration: induced-EMF integral of physics-reference §4.3 (E_z of a sinusoidal current at distance w/4),
+        // rByIntegration: induced-EMF integral of Carter 1932 (E_z of a sinusoidal current at distance w/4),
         // by mpmath quad: an independent model; the resistance hardly depends on radius, so 0.2 % agreement.
         var z = GroundPlaneSlot.DipoleImpedance(Length.FromMillimeters(lengthMm), Length.FromMillimeters(widthMm / 4), F);
         Check.Relative(r, z.Real, 1e-8, "mpmath closed form");

@@ -6,13 +6,13 @@ using SlotArray.Tests.Shared;
 namespace SlotArray.Core.Tests.Slots;
 
 /// <summary>
-/// Centred inclined series slot against physics-reference §2.2 and §11 #9, #10 (values computed there with numpy from
+/// Centred inclined series slot against values computed with numpy [N] from
 /// Stevenson 1948's form, R_d = 73 Ω). The table is quoted to 4–5 significant digits, so the tolerance is half a unit
 /// in the last digit given, relative.
 /// </summary>
 public class InclinedSeriesSlotTests
 {
-    private const string Ref = "physics-reference §2.2 [N] (Stevenson 1948 form)";
+    private const string Ref = "Stevenson 1948 form, numpy [N]";
     private static readonly Frequency F = Frequency.FromGigahertz(9.375);
     private static RectangularWaveguide Wr90(double wallMm = 0) =>
         RectangularWaveguide.FromStandard(WaveguideCatalogue.Find("WR-90")!, Length.FromMillimeters(wallMm), new Metal("copper", 5.8e7, "test"));
@@ -31,12 +31,12 @@ public class InclinedSeriesSlotTests
     [Fact]
     public void At_90_degrees_it_is_the_transverse_series_slot_closed_form()
     {
-        // Stevenson's transverse series slot, centred: r = (120/(π R_d)) (λg/λ)³ (λ²/(ab)) cos²(πλ/(4a)) (physics-reference §2.2 consistency check [D]).
+        // Stevenson's transverse series slot, centred: r = (120/(π R_d)) (λg/λ)³ (λ²/(ab)) cos²(πλ/(4a)) ( consistency check [D]).
         var g = Wr90();
         double a = g.BroadWall.Meters, b = g.NarrowWall.Meters, lam = F.FreeSpaceWavelength.Meters, lg = g.GuideWavelength(F).Meters;
         double transverse = 120 / (Math.PI * 73) * Math.Pow(lg / lam, 3) * lam * lam / (a * b) * Math.Pow(Math.Cos(Math.PI * lam / (4 * a)), 2);
-        Check.Relative(transverse, InclinedSeriesSlot.Resistance(g, Angle.FromDegrees(90), F), 1e-12, "Stevenson 1948 transverse series slot, physics-reference §2.2");
-        Check.Relative(1.30522, transverse, 5e-6, "physics-reference §11 #10");
+        Check.Relative(transverse, InclinedSeriesSlot.Resistance(g, Angle.FromDegrees(90), F), 1e-12, "Stevenson 1948 transverse series slot");
+        Check.Relative(1.30522, transverse, 5e-6, "Stevenson 1948");
     }
 
     [Theory]
@@ -88,7 +88,7 @@ public class InclinedSeriesSlotTests
     public void Near_cutoff_the_peak_is_below_90_degrees_and_the_inverse_takes_the_smallest_rotation()
     {
         // WR-90 at 7 GHz (below the 8.2 GHz recommended band): r(θ) peaks before 90° (checked with an independent
-        // python evaluation of the §2.2 formula). Properties: the maximum bounds every grid value, the inverse has zero
+        // python evaluation of the Stevenson 1948 formula). Properties: the maximum bounds every grid value, the inverse has zero
         // residual and no smaller rotation reaches r.
         var g = Wr90();
         var f = Frequency.FromGigahertz(7);

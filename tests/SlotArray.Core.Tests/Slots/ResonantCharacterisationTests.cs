@@ -60,13 +60,13 @@ public class ResonantCharacterisationTests
     public void Stevenson_model_uses_stevensons_conductance_and_the_moment_method_resonant_length()
     {
         var r = Stev.Resonance(3e-3, F);
-        Check.Relative(StevensonLongitudinalSlot.Conductance(Wr90(1.27), 3e-3, F), r.Conductance, 1e-12, "Stevenson 1948, physics-reference §2.1");
+        Check.Relative(StevensonLongitudinalSlot.Conductance(Wr90(1.27), 3e-3, F), r.Conductance, 1e-12, "Stevenson 1948");
         Check.Relative(Mom.Resonance(3e-3, F).ResonantLength.Meters, r.ResonantLength.Meters, 1e-12, "same moment-method table");
         var y = Stev.Admittance(3e-3, r.ResonantLength, F);
         Check.Relative(r.Conductance, y.Real, 1e-6, "h(1) = 1");
         Check.Absolute(0, y.Imaginary, 1e-5, "h(1) = 1");
         var x = Stev.ForConductance(0.1, F);
-        Check.Absolute(2.0978e-3, x.Coupling, 1e-7, "physics-reference §11 #8");
+        Check.Absolute(2.0978e-3, x.Coupling, 1e-7, "Stevenson 1948");
     }
 
     [Theory]
@@ -75,14 +75,14 @@ public class ResonantCharacterisationTests
     [InlineData(4.5, 0.97)]
     public void Normalised_admittance_nearly_collapses_across_offsets(double offsetMm, double ratio)
     {
-        // Elliott's observation (physics-reference §3.1 [M]): y/g_r ≈ h(L/L_r) for all offsets. h is taken at a/8 = 2.86 mm;
+        // Elliott's observation (Elliott 1981, Ch. 8 [M]): y/g_r ≈ h(L/L_r) for all offsets. h is taken at a/8 = 2.86 mm;
         // at other offsets it reproduces the moment method within 15 % of |y| for |L/L_r − 1| ≤ 8 % (measured here: 11.6 % at
         // 4.5 mm and 1.08 L_r, far less near resonance). Elliott says only "nearly"; this bounds how nearly.
         var m = Mom.Resonance(offsetMm * 1e-3, F);
         var len = Length.FromMeters(ratio * m.ResonantLength.Meters);
         var yMom = Mom.Admittance(offsetMm * 1e-3, len, F);
         var h = ((StevensonSlotModel)Stev).NormalisedAdmittance(ratio);
-        Check.Absolute(0, (m.Conductance * h - yMom).Magnitude, 0.15 * yMom.Magnitude, "Elliott 1981 (physics-reference §3.1)");
+        Check.Absolute(0, (m.Conductance * h - yMom).Magnitude, 0.15 * yMom.Magnitude, "Elliott 1981");
     }
 
     [Fact]

@@ -4,7 +4,7 @@ using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Tests.Slots;
 
-/// <summary>The reference case of physics-reference §0.2 and §3.2: WR-90, 9.375 GHz, 1/16 in slot; thin and 1.27 mm walls.</summary>
+/// <summary>The reference case of WR-90 reference case: WR-90, 9.375 GHz, 1/16 in slot; thin and 1.27 mm walls.</summary>
 internal static class SlotTestGuides
 {
     public static readonly Frequency F = Frequency.FromGigahertz(9.375);
@@ -14,7 +14,7 @@ internal static class SlotTestGuides
     public static RectangularWaveguide Wr90(double wallMillimeters) =>
         RectangularWaveguide.FromStandard(WaveguideCatalogue.Find("WR-90")!, Length.FromMillimeters(wallMillimeters), Metal.Copper);
 
-    /// <summary>Thin-wall solver at the truncation of physics-reference §3.2 (P = 5).</summary>
+    /// <summary>Thin-wall solver at the truncation of moment method after Stern & Elliott 1985, numpy (P = 5).</summary>
     public static readonly LongitudinalSlotMomentMethod ThinP5 = new(Wr90(0), Width, new MomentMethodOptions(BasisFunctions: 5, ExtrapolationBasisFunctions: 0));
 
     /// <summary>Thin-wall solver at the default (converged) truncation.</summary>

@@ -5,7 +5,7 @@ using SlotArray.Tests.Shared;
 
 namespace SlotArray.Core.Tests.Tapers;
 
-/// <summary>Dolph–Chebyshev weights against scipy.signal.windows.chebwin and physics-reference §6.1 / §11 #22.</summary>
+/// <summary>Dolph–Chebyshev weights against scipy.signal.windows.chebwin and numpy values of Dolph 1946 [N].</summary>
 public class DolphChebyshevTests
 {
     private const string Scipy = "scipy 1.10.1 scipy.signal.windows.chebwin(N, SLL)/max, computed for this test";
@@ -37,13 +37,13 @@ public class DolphChebyshevTests
     [InlineData(8, -30, 1.180659)]
     [InlineData(9, -30, 1.137377)]
     [InlineData(10, -25, 1.079736)]
-    public void X0_matches_the_reference(int n, double sll, double x0) => Check.Relative(x0, DolphChebyshev.X0(n, sll), 1e-6, "physics-reference §6.1 [N]");
+    public void X0_matches_the_reference(int n, double sll, double x0) => Check.Relative(x0, DolphChebyshev.X0(n, sll), 1e-6, "Dolph 1946, numpy [N]");
 
     [Theory]
     [InlineData(10, -25, 0.90480)]
     [InlineData(20, -30, 0.86748)]
     public void Taper_efficiency_matches_the_reference(int n, double sll, double eta)
-        => Check.Absolute(eta, PatternMetrics.TaperEfficiency(DolphChebyshev.Weights(n, sll)), 6e-6, "physics-reference §6.1 [N]");
+        => Check.Absolute(eta, PatternMetrics.TaperEfficiency(DolphChebyshev.Weights(n, sll)), 6e-6, "Dolph 1946, numpy [N]");
 
     [Theory]
     [InlineData(1001, -30)]
@@ -84,10 +84,10 @@ public class DolphChebyshevTests
             double db = LobeSearch.Db(LobeSearch.RefineMaximum(p.Theta, pw, i).Power / p.PeakPower);
             Check.Absolute(sll, db, 0.01, $"Dolph 1946: every sidelobe at 1/R (lobe at index {i})");
         }
-        // Exact half-power beamwidth (physics-reference §6.1 [D]): ψ_h = 2 acos(cosh(acosh(R/√2)/(N − 1))/x0).
+        // Exact half-power beamwidth (Dolph 1946 [D]): ψ_h = 2 acos(cosh(acosh(R/√2)/(N − 1))/x0).
         double r = Math.Pow(10, -sll / 20), x0 = DolphChebyshev.X0(n, sll);
         double psiH = 2 * Math.Acos(Math.Cosh(Math.Acosh(r / Math.Sqrt(2)) / (n - 1)) / x0);
-        Check.Relative(2 * Math.Asin(psiH / Math.PI), m.HalfPowerBeamwidth.Radians, 2e-4, "physics-reference §6.1 exact HPBW");
+        Check.Relative(2 * Math.Asin(psiH / Math.PI), m.HalfPowerBeamwidth.Radians, 2e-4, "Dolph 1946 exact HPBW");
     }
 
     [Fact]

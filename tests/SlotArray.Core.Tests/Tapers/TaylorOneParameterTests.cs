@@ -3,10 +3,10 @@ using SlotArray.Tests.Shared;
 
 namespace SlotArray.Core.Tests.Tapers;
 
-/// <summary>Taylor one-parameter against physics-reference §6.4 / §11 #24 (numpy).</summary>
+/// <summary>Taylor one-parameter against Taylor 1953 (numpy).</summary>
 public class TaylorOneParameterTests
 {
-    private const string Ref = "physics-reference §6.4 table [N]";
+    private const string Ref = "Taylor 1953 table [N]";
 
     [Theory]
     [InlineData(-20, 0.73860, 0.93295, -9.17)]
@@ -17,8 +17,8 @@ public class TaylorOneParameterTests
     public void B_efficiency_and_edge_illumination_match_the_table(double sll, double b, double eta, double edge)
     {
         double bb = TaylorOneParameter.B(sll);
-        Check.Absolute(b, bb, 6e-6, Ref + ", §11 #24");
-        Check.Absolute(eta, TaylorOneParameter.ContinuousTaperEfficiency(bb), 6e-6, Ref + ", §11 #24");
+        Check.Absolute(b, bb, 6e-6, Ref);
+        Check.Absolute(eta, TaylorOneParameter.ContinuousTaperEfficiency(bb), 6e-6, Ref);
         Check.Absolute(edge, TaylorOneParameter.EdgeIlluminationDb(bb), 0.006, Ref);
     }
 
@@ -29,6 +29,6 @@ public class TaylorOneParameterTests
         double lo = 4.4, hi = 4.6;
         for (int i = 0; i < 200; i++) { double m = 0.5 * (lo + hi); if (Math.Tan(m) - m < 0) lo = m; else hi = m; }
         Check.Relative(Math.Abs(Math.Sin(lo) / lo), TaylorOneParameter.UniformFirstSidelobe, 1e-14, "root of tan x = x");
-        Check.Absolute(-13.2615, 20 * Math.Log10(TaylorOneParameter.UniformFirstSidelobe), 5e-5, "physics-reference §6.4: 13.2615 dB");
+        Check.Absolute(-13.2615, 20 * Math.Log10(TaylorOneParameter.UniformFirstSidelobe), 5e-5, "Taylor 1953: 13.2615 dB");
     }
 }

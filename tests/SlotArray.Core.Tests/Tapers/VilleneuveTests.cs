@@ -4,10 +4,10 @@ using SlotArray.Tests.Shared;
 
 namespace SlotArray.Core.Tests.Tapers;
 
-/// <summary>Villeneuve n̄ against physics-reference §6.3 / §11 #23 (numpy).</summary>
+/// <summary>Villeneuve n̄ against numpy values of Villeneuve 1984 [N].</summary>
 public class VilleneuveTests
 {
-    private const string Ref = "physics-reference §6.3 [N]";
+    private const string Ref = "Villeneuve 1984 [N]";
 
     [Theory]
     [InlineData(16, 4, -30, 1.015673)]
@@ -16,7 +16,7 @@ public class VilleneuveTests
     [InlineData(32, 6, -30, 1.030764)]
     [InlineData(40, 7, -40, 1.019527)]
     public void Sigma_V_matches_the_reference(int n, int nbar, double sll, double sigma)
-        => Check.Relative(sigma, Villeneuve.Sigma(n, sll, nbar), 1e-6, Ref + ", §11 #23");
+        => Check.Relative(sigma, Villeneuve.Sigma(n, sll, nbar), 1e-6, Ref);
 
     [Fact]
     public void Weights_sidelobe_and_efficiency_N16_nbar4_30dB_match_the_reference()

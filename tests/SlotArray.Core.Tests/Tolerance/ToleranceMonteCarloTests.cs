@@ -142,7 +142,7 @@ public class ToleranceMonteCarloTests(Xunit.Abstractions.ITestOutputHelper outpu
     public void A_systematic_length_error_lowers_the_gain_and_spoils_the_match()
     {
         // Every slot 0.3 mm long moves all resonances together: the array is no longer matched (S11 rises) and the
-        // radiated power falls. Direction from the slot physics: physics-reference §9.2 (length moves the resonance).
+        // radiated power falls. Direction from the slot physics: derived here (length moves the resonance).
         var (design, slot) = Designed(Tapered(16));
         var model = ArrayTrialModel.Build(design, slot, Factory, Request(systematicLength: 0.3, trials: 8), Fast);
         var mc = ToleranceMonteCarlo.Run(model, 8, 1, -20, Fast);

@@ -16,7 +16,7 @@ public class ToleranceSensitivitiesTests(ITestOutputHelper output)
     {
         // A uniform array's first sidelobes sit at ψ1 with N ψ1/2 ≈ 4.4934 (the peak of sin x/x) and have the sign opposite
         // to the main beam: AF(ψ1) ≈ −0.2172 N (−13.26 dB). Widening slot n's offset raises its amplitude by
-        // δa/a = ½ d(ln g)/dx δx = (π/a) cot(πx/a) δx (Stevenson, physics-reference §9.2). With the slots at ±(m − ½)d from the
+        // δa/a = ½ d(ln g)/dx δx = (π/a) cot(πx/a) δx (Stevenson, derived here). With the slots at ±(m − ½)d from the
         // centre, the change of PSL (dB) is (20/ln 10)(δa/a)/N · [−cos(ψ1 m′)/0.2172 − 1], m′ = n − (N + 1)/2 in element units
         // (first term: the sidelobe, second: the peak). Centre slot: cos ≈ 0.96 → about −5.4 (δa/a)/N·8.69;
         // edge slot: cos(7.5 ψ1) = cos(4.21) ≈ −0.48 → +1.2 (δa/a)/N·8.69 (derived here, array factor of Balanis 2005, Ch. 6).

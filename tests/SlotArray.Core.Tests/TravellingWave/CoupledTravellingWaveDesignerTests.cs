@@ -29,7 +29,7 @@ public class CoupledTravellingWaveDesignerTests(ITestOutputHelper output)
     public void Without_coupling_it_returns_the_isolated_slot_design()
     {
         // With Z_mn = 0 the coupled network is the isolated-slot line (CoupledArrayNetwork remarks), and for the test
-        // double's g_r = Γ0 f_r² (Stevenson, physics-reference §4.2) |e_n|² is the power into slot n: the
+        // double's g_r = Γ0 f_r² (Stevenson, Elliott 1983) |e_n|² is the power into slot n: the
         // isolated-slot fixed point (TravellingWaveDesigner) is already converged. Phases off: the isolated-slot designer
         // does not correct them.
         var slot = new StevensonTestSlot(Wr90, Width);
@@ -65,7 +65,7 @@ public class CoupledTravellingWaveDesignerTests(ITestOutputHelper output)
         output.WriteLine($"coupled design:   taper error {coupledDb:0.0000} dB, load {s.LoadPower * 100:0.0000} %, sidelobe {slC:0.00} dB, S11 {20 * Math.Log10(s.S11.Magnitude):0.00} dB");
         output.WriteLine($"uncoupled design: taper error {uncoupledDb:0.0000} dB, load {u.LoadPower * 100:0.0000} %, sidelobe {slU:0.00} dB, S11 {20 * Math.Log10(u.S11.Magnitude):0.00} dB");
         Assert.True(coupledDb < 0.1, $"slot voltages {coupledDb:0.000} dB off the taper");
-        // Phases: the travelling-wave progression e^{jβz_n} with the offsets' alternation (physics-reference §5.2), mean removed.
+        // Phases: the travelling-wave progression e^{jβz_n} with the offsets' alternation (Elliott 1981, Ch. 8), mean removed.
         double beta = Wr90.PhaseConstant(F0);
         var dev = Enumerable.Range(0, n).Select(i => s.Excitations[i] * Math.Sign(r.Design.Slots[i].Coupling)
             * Complex.FromPolarCoordinates(1, -beta * r.Design.Slots[i].Position.Meters)).Select(e => e / e.Magnitude).ToArray();

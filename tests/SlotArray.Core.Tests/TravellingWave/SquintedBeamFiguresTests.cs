@@ -40,7 +40,7 @@ public class SquintedBeamFiguresTests
         // Independent quadrature: the Gauss-Legendre half-space integral with a uniform element.
         double half = Directivity.HalfSpace(z, co, F0.FreeSpaceWavenumber, ElementPatterns.Isotropic, fig.Metrics.BeamDirection.Radians);
         Check.Relative(half / (1 + fig.CrossPolar!.PowerRatio), fig.Directivity, 1e-6,
-            "physics-reference §7.3: half-space directivity of a uniform element (numerical) = 2 × the closed-form full-sphere one");
+            "IEEE Std 145-2013 directivity: half-space directivity of a uniform element (numerical) = 2 × the closed-form full-sphere one");
         Check.Relative(fig.Directivity * sol.RadiatedPower, fig.Gain, 1e-12, "G = D × P_rad/P_inc");
         Assert.True(fig.Metrics.BeamDirection.Degrees < -5, "0.44 λg: beam well toward the feed");
     }

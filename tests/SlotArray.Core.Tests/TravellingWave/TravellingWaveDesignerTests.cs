@@ -29,7 +29,7 @@ public class TravellingWaveDesignerTests
         var slot = new StevensonTestSlot(Wr90, Width);
         var tw = TravellingWaveDesigner.Design(Travelling(32, 0.05), slot, Taylor30(32));
         var sol = ArrayNetwork.Solve(tw.Design, slot, F0);
-        // The taper: P_n ∝ a_n² (physics-reference §5.2). Tolerance 0.01 dB in amplitude (the refinement stops at 1e-4 dB in power).
+        // The taper: P_n ∝ a_n² (Elliott 1981, Ch. 8). Tolerance 0.01 dB in amplitude (the refinement stops at 1e-4 dB in power).
         var a = Taylor30(32);
         double s = a.Sum(x => x * x), total = sol.RadiatedPower;
         for (int i = 0; i < 32; i++)
@@ -39,7 +39,7 @@ public class TravellingWaveDesignerTests
         Assert.True(tw.AchievedErrorDb < 0.01, $"re-analysed amplitude error {tw.AchievedErrorDb} dB");
         Assert.InRange(tw.Refinement.Iterations, 2, 30);
         Assert.True(tw.Refinement.ResidualDb < 1e-4);
-        // Offsets alternate in sign (physics-reference §5.1/§5.2 alternation).
+        // Offsets alternate in sign (Elliott 1981, Ch. 8 alternation).
         for (int i = 0; i + 1 < 32; i++) Assert.True(tw.Design.Slots[i].Coupling * tw.Design.Slots[i + 1].Coupling < 0);
         Assert.Equal(TerminationKind.MatchedLoad, tw.Design.NearTermination.Kind);
     }
@@ -61,7 +61,7 @@ public class TravellingWaveDesignerTests
     [Fact]
     public void Without_refinement_the_small_g_start_is_the_reference_closed_form()
     {
-        // Lossless guide, small-g form, no refinement: g_n = P_n/(P_L + Σ_{m≥n} P_m), physics-reference §5.2 [N]
+        // Lossless guide, small-g form, no refinement: g_n = P_n/(P_L + Σ_{m≥n} P_m), Elliott 1981, Ch. 8 [N]
         // (Taylor 30/4, N = 16, P_L = 0.10; the reference numbers slots from the feed, the taper is symmetric).
         double[] expected = [0.00742, 0.01219, 0.02339, 0.04219, 0.06813, 0.09980, 0.13551, 0.17307,
             0.20929, 0.23973, 0.25797, 0.25469, 0.22094, 0.16098, 0.10125, 0.06907];
@@ -69,14 +69,14 @@ public class TravellingWaveDesignerTests
         var tw = TravellingWaveDesigner.Design(Travelling(16, 0.10, guide: Wr90Lossless), slot, Taylor30(16),
             new TravellingWaveOptions(TravellingWaveConductanceForm.SmallConductance, Refine: false));
         for (int k = 0; k < 16; k++)
-            Check.Absolute(expected[k], tw.Design.Slots[15 - k].Conductance, 5.1e-6, "physics-reference §5.2 [N]");
+            Check.Absolute(expected[k], tw.Design.Slots[15 - k].Conductance, 5.1e-6, "Elliott 1981, Ch. 8 [N]");
         Assert.Equal(0, tw.Refinement.Iterations);
     }
 
     [Fact]
     public void A_slot_beyond_what_the_slot_model_can_absorb_is_infeasible_and_named()
     {
-        // Taylor 30/4, N = 16, 5 % to the load: the closed form fails there (physics-reference §5.2, slot 13 from the feed); the designer,
+        // Taylor 30/4, N = 16, 5 % to the load: the closed form fails there (Elliott 1981, Ch. 8, slot 13 from the feed); the designer,
         // which leaves exactly 5 % for the load, asks more of the strongest slots than the slot model can give.
         var slot = new StevensonTestSlot(Wr90Lossless, Width);
         var e = Assert.Throws<InfeasibleDesignException>(() =>
@@ -112,15 +112,15 @@ public class TravellingWaveDesignerTests
     [Fact]
     public void Designed_beam_points_where_the_phase_condition_says()
     {
-        // physics-reference §5.2: sin θ_b = λ/λg − λ/(2d), positive toward the load end; the network's pattern peak must agree.
+        // Elliott 1981, Ch. 8: sin θ_b = λ/λg − λ/(2d), positive toward the load end; the network's pattern peak must agree.
         // Tolerance 0.05°: the array factor's peak moves slightly with the taper's residual phase ripple.
         var slot = new StevensonTestSlot(Wr90, Width);
         var tw = TravellingWaveDesigner.Design(Travelling(40, 0.05, spacing: 0.47), slot, Taylor30(40));
         var fig = ArrayFigures.At(tw.Design, ArrayNetwork.Solve(tw.Design, slot, F0));
         double lam = F0.FreeSpaceWavelength.Meters, lg = Wr90.GuideWavelength(F0).Meters, d = 0.47 * lg;
         double expected = Math.Asin(lam / lg - lam / (2 * d)) * 180 / Math.PI;
-        Check.Absolute(expected, tw.Squint!.Value.Degrees, 1e-9, "physics-reference §5.2 closed form");
-        Check.Absolute(expected, fig.Metrics.BeamDirection.Degrees, 0.05, "physics-reference §5.2 closed form vs the network pattern");
+        Check.Absolute(expected, tw.Squint!.Value.Degrees, 1e-9, "Elliott 1981, Ch. 8 closed form");
+        Check.Absolute(expected, fig.Metrics.BeamDirection.Degrees, 0.05, "Elliott 1981, Ch. 8 closed form vs the network pattern");
         Assert.True(expected < 0, "d < λg/2 ... beam toward the feed");
     }
 
@@ -133,9 +133,9 @@ public class TravellingWaveDesignerTests
         Assert.Equal(SlotCouplingKind.Tilt, tw.Design.CouplingKind);
         foreach (var s in tw.Design.Slots)
         {
-            // Tilt from the edge-slot conductance (physics-reference §2.3) of the designed g.
+            // Tilt from the edge-slot conductance (edge-slot formula (Stevenson 1948; Silver 1949)) of the designed g.
             var tilt = EdgeSlotConductance.TiltForConductance(guide, s.Conductance, F0, EdgeSlot.MaximumTilt);
-            Check.Absolute(tilt.Radians, Math.Abs(s.Coupling), 1e-12, "EdgeSlotConductance inverse, physics-reference §2.3");
+            Check.Absolute(tilt.Radians, Math.Abs(s.Coupling), 1e-12, "EdgeSlotConductance inverse, edge-slot formula (Stevenson 1948; Silver 1949)");
             Check.Relative(slot.ResonantLength(F0).Meters, s.Length.Meters, 1e-12, "slots resonant at the design frequency");
         }
         for (int i = 0; i + 1 < 30; i++) Assert.True(tw.Design.Slots[i].Coupling * tw.Design.Slots[i + 1].Coupling < 0, "tilts alternate ±θ");
@@ -148,7 +148,7 @@ public class TravellingWaveDesignerTests
     [InlineData(9.55)]
     public void Slots_without_susceptance_scan_exactly_as_the_phase_condition(double ghz)
     {
-        // physics-reference §5.2: θ_b(f) from sin θ_b = λ/λg − λ/(2d). Frequency-independent real slots add no phase to the
+        // Elliott 1981, Ch. 8: θ_b(f) from sin θ_b = λ/λg − λ/(2d). Frequency-independent real slots add no phase to the
         // line, so the network pattern must follow the closed form off the design frequency too (real slots, whose
         // susceptance loads the line away from resonance, scan at a different rate: see the marine demo's summary).
         var slot = StevensonTestSlot.FrequencyIndependent(Wr90Lossless, Width, F0);
@@ -156,6 +156,6 @@ public class TravellingWaveDesignerTests
         var f = Frequency.FromGigahertz(ghz);
         var fig = ArrayFigures.At(tw.Design, ArrayNetwork.Solve(tw.Design, slot, f));
         Check.Absolute(TravellingWaveBeam.Direction(Wr90Lossless, tw.Design.Spacing, f)!.Value.Degrees, fig.Metrics.BeamDirection.Degrees, 0.03,
-            "physics-reference §5.2 closed form (tolerance: the residual phase ripple of the slot reflections)");
+            "Elliott 1981, Ch. 8 closed form (tolerance: the residual phase ripple of the slot reflections)");
     }
 }

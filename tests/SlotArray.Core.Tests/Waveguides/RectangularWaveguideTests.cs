@@ -5,13 +5,13 @@ using SlotArray.Tests.Shared;
 namespace SlotArray.Core.Tests.Waveguides;
 
 /// <summary>
-/// TE10 quantities against the check values of the project's physics reference §1.2 (computed there with
-/// numpy from Pozar, Microwave Engineering, 4th ed., 2012, Sec. 3.3 and eq. 3.96). Tolerance 1e-6 relative for
+/// TE10 quantities against check values computed with
+/// numpy [N] from Pozar, Microwave Engineering, 4th ed., 2012, Sec. 3.3 and eq. 3.96). Tolerance 1e-6 relative for
 /// closed forms whose reference is quoted to 6–7 significant digits.
 /// </summary>
 public class RectangularWaveguideTests
 {
-    private const string Ref = "physics-reference §1.2 [N], after Pozar 2012 Sec. 3.3";
+    private const string Ref = "Pozar 2012 Sec. 3.3, numpy [N]";
     private static RectangularWaveguide Wr90(Metal metal) =>
         RectangularWaveguide.FromStandard(WaveguideCatalogue.Find("WR-90")!, Length.FromMillimeters(1.27), metal);
 

@@ -3,7 +3,7 @@ using SlotArray.Tests.Shared;
 
 namespace SlotArray.Core.Tests.Waveguides;
 
-/// <summary>The catalogue against EIA RS-261-B inside dimensions (inches), as tabulated in physics-reference §1.3.</summary>
+/// <summary>The catalogue against EIA RS-261-B inside dimensions (inches), (via the RF Cafe waveguide chart).</summary>
 public class WaveguideCatalogueTests
 {
     [Theory]
@@ -39,9 +39,9 @@ public class WaveguideCatalogueTests
             var g = RectangularWaveguide.FromStandard(s, Core.Quantities.Length.Zero, Metal.Copper);
             Assert.True(s.BandLow > g.CutoffTe10, s.Designation);
             Assert.True(s.BandHigh <= g.SingleModeBand.High, s.Designation);
-            // Cutoff column of physics-reference §1.3 to its 3 decimals (GHz).
+            // Cutoff column of EIA RS-261-B to its 3 decimals (GHz).
         }
-        Check.Absolute(2.078, WaveguideCatalogue.Find("WR-284")!.CutoffTe10.Gigahertz, 0.0005, "physics-reference §1.3 cutoff column");
-        Check.Absolute(21.077, WaveguideCatalogue.Find("WR-28")!.CutoffTe10.Gigahertz, 0.0005, "physics-reference §1.3 cutoff column");
+        Check.Absolute(2.078, WaveguideCatalogue.Find("WR-284")!.CutoffTe10.Gigahertz, 0.0005, "c/(2a) of the EIA RS-261-B size, RF Cafe chart cutoff column");
+        Check.Absolute(21.077, WaveguideCatalogue.Find("WR-28")!.CutoffTe10.Gigahertz, 0.0005, "c/(2a) of the EIA RS-261-B size, RF Cafe chart cutoff column");
     }
 }
