@@ -24,6 +24,8 @@ public enum QuantityKind
     Conductivity,
     /// <summary>A distance in guide wavelengths: guide-wavelength (λg).</summary>
     GuideWavelengths,
+    /// <summary>A temperature in degrees Celsius: degC (°C); kept in °C (an offset scale, not converted to kelvin).</summary>
+    Temperature,
 }
 
 /// <summary>
@@ -53,6 +55,7 @@ public static partial class QuantityParser
         new("S/m", QuantityKind.Conductivity, 1),
         new("guide-wavelength", QuantityKind.GuideWavelengths, 1), new("guide-wavelengths", QuantityKind.GuideWavelengths, 1),
         new("λg", QuantityKind.GuideWavelengths, 1),
+        new("degC", QuantityKind.Temperature, 1), new("°C", QuantityKind.Temperature, 1),
     ];
 
     /// <summary>
@@ -96,6 +99,7 @@ public static partial class QuantityParser
         QuantityKind.Power => "a power such as '25 kW' (W, kW, MW)",
         QuantityKind.Conductivity => "a conductivity such as '3.5e7 S/m'",
         QuantityKind.GuideWavelengths => "a distance such as '0.5 guide-wavelength'",
+        QuantityKind.Temperature => "a temperature such as '-25 degC' (degC, °C)",
         _ => kind.ToString(),
     };
 
@@ -109,6 +113,7 @@ public static partial class QuantityParser
         QuantityKind.Power => "a power",
         QuantityKind.Conductivity => "a conductivity",
         QuantityKind.GuideWavelengths => "a distance in guide wavelengths",
+        QuantityKind.Temperature => "a temperature",
         _ => kind.ToString(),
     };
 

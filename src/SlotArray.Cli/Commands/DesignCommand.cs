@@ -220,6 +220,9 @@ public static class DesignCommand
         if (r.Flare is { } fl)
             o.WriteLine(string.Format(Inv, "  flare (vertical beam)  HPBW {0:0.00} deg, aperture {1:0.0} mm, depth {2:0.0} mm, phase error {3:0} deg; antenna gain {4:0.00} dBi",
                 fl.VerticalHpbwDeg, fl.ApertureM * 1e3, fl.LengthM * 1e3, fl.PhaseErrorDeg, fl.TotalGainDbi));
+        if (r.Pointing is { } pt)
+            o.WriteLine(string.Format(Inv, "  pointing budget        worst bearing error {0:0.000} deg over {1:0} to {2:0} degC and ±{3:0.#} MHz",
+                pt.WorstErrorDeg, pt.LowC, pt.HighC, pt.FrequencyToleranceHz * 1e-6));
         if (r.Filter is { } flt)
             o.WriteLine(string.Format(Inv, "  polarisation filter    plates {0:0.0} mm pitch, {1:0.0} mm deep, {2:0.0} mm thick: cross-polar {3:0.00} dB bare, {4:0.00} dB behind it (worst over the band)",
                 flt.SpacingM * 1e3, flt.DepthM * 1e3, flt.ThicknessM * 1e3, flt.BareWorstDb, flt.FilteredWorstDb));

@@ -102,6 +102,9 @@ public sealed record ArrayResult(
 
     /// <summary>The flare (<c>flare</c>): vertical beam, throat loss and the antenna's total gain; null without a flare.</summary>
     public Marine.FlareOutcome? Flare { get; init; }
+
+    /// <summary>The beam over the operating range (temperature, transmitter frequency tolerance); null when no range is given.</summary>
+    public Marine.PointingBudget? Pointing { get; init; }
 }
 
 /// <summary>
@@ -252,7 +255,7 @@ public static class ArrayPipeline
         Marine.FilterOutcome? filter = null;
         if (request.Filter is { } asked)
             (atDesign, points, filter) = Marine.CrossPolarFilterDesign.Apply(asked, request.Requirements.CrossPolarDb, atDesign, points,
-                atDesign.Metrics.BeamDirection);
+                atDesign.Metrics.BeamDirection, design.Spacing);
         var flare = request.Flare is { } fl ? Marine.FlareDesign.Analyse(fl, request.Guide, atDesign, request.Requirements.VerticalBeamwidth) : null;
         var f0 = request.DesignFrequency;
         MatchBand? b15 = null, b2 = null;
@@ -270,7 +273,8 @@ public static class ArrayPipeline
         var (mLo, mHi) = MatchSpan.Resolve(request, options, b15, b2);
         if (options.MatchPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.MatchPoints, "the match sweep needs at least 2 points");
         var match = ArrayNetwork.Sweep(design, analysis, mLo, mHi, options.MatchPoints);
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling, MatchSweep = match, Filter = filter, Flare = flare };
+        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling, MatchSweep = match, Filter = filter, Flare = flare,
+            Pointing = request.Operating is { } range ? Marine.PointingBudget.Of(range, design, atDesign, points) : null };
     }
 
     /// <summary>
@@ -332,6 +336,7 @@ public static class ArrayPipeline
             },
             CoupledTravellingWave = comparison,
             MatchSweep = CoupledMatchSweep(request, options, design, analysis, sweep),
+            Pointing = request.Operating is { } range ? Marine.PointingBudget.Of(range, design, atDesign, points) : null,
         };
     }
 

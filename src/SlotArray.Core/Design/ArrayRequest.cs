@@ -45,6 +45,12 @@ public sealed record ArrayRequest(
 
     /// <summary><c>flare</c>: the plates diverging from the slotted face that set the vertical beam (<see cref="Marine.SectoralFlare"/>), or null for none.</summary>
     public Marine.FlareRequest? Flare { get; init; }
+
+    /// <summary>
+    /// <c>environment.temperature</c> and <c>transmitter.frequency_tolerance</c>: the operating range of the pointing
+    /// budget (<see cref="Marine.PointingBudget"/>), or null when neither is given.
+    /// </summary>
+    public Marine.OperatingRange? Operating { get; init; }
 }
 
 /// <summary>Kind of radiating slot.</summary>

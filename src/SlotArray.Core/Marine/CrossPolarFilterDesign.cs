@@ -64,16 +64,23 @@ public static class CrossPolarFilterDesign
     /// </summary>
     public const double GapInWavelengths = 0.35;
 
-    /// <summary>Automatic depth and pitch are rounded up (depth) or down (pitch) to this step, 0.5 mm (a machinable figure).</summary>
+    /// <summary>The automatic depth is rounded up to this step, 0.5 mm (a machinable figure).</summary>
     public const double StepMillimeters = 0.5;
 
-    /// <summary>The automatic pitch: a clear gap of <see cref="GapInWavelengths"/> λ at the band's top plus the plate thickness, rounded down to 0.5 mm.</summary>
+    /// <summary>
+    /// The automatic pitch: the slot spacing divided by the smallest whole number k that brings the pitch to at most a
+    /// clear gap of <see cref="GapInWavelengths"/> λ at the band's top plus the plate thickness. A whole number of plates
+    /// per slot spacing lets every plate stand between two slots (<see cref="MarineParts"/> puts them at z_slot + s/2 +
+    /// j s), never over a slot's opening.
+    /// </summary>
     /// <param name="top">Highest analysis frequency.</param>
     /// <param name="thickness">Plate thickness.</param>
-    public static Length AutoSpacing(Frequency top, Length thickness)
+    /// <param name="slotSpacing">The array's slot spacing d.</param>
+    public static Length AutoSpacing(Frequency top, Length thickness, Length slotSpacing)
     {
-        double mm = GapInWavelengths * top.FreeSpaceWavelength.Millimeters + thickness.Millimeters;
-        return Length.FromMillimeters(Math.Floor(mm / StepMillimeters) * StepMillimeters);
+        double most = GapInWavelengths * top.FreeSpaceWavelength.Meters + thickness.Meters;
+        int k = Math.Max(1, (int)Math.Ceiling(slotSpacing.Meters / most - 1e-12));
+        return Length.FromMeters(slotSpacing.Meters / k);
     }
 
     /// <summary>
@@ -112,9 +119,10 @@ public static class CrossPolarFilterDesign
     /// <param name="atDesign">Figures at the design frequency.</param>
     /// <param name="band">Figures across the band.</param>
     /// <param name="beam">Main-beam direction (for the grating check).</param>
+    /// <param name="slotSpacing">The array's slot spacing (the automatic pitch divides it).</param>
     /// <exception cref="InfeasibleDesignException">Automatic depth without a requirement, or a pitch that does not cut the cross-polarised field off.</exception>
     public static (FrequencyFigures AtDesign, IReadOnlyList<FrequencyFigures> Band, FilterOutcome? Outcome) Apply(FilterRequest asked, double? requirementDb,
-        FrequencyFigures atDesign, IReadOnlyList<FrequencyFigures> band, Angle beam)
+        FrequencyFigures atDesign, IReadOnlyList<FrequencyFigures> band, Angle beam, Length slotSpacing)
     {
         ArgumentNullException.ThrowIfNull(asked);
         ArgumentNullException.ThrowIfNull(atDesign);
@@ -123,7 +131,7 @@ public static class CrossPolarFilterDesign
         var all = band.Append(atDesign).Where(p => p.CrossPolar is not null).ToList();
         var top = all.MaxBy(p => p.Frequency.Hertz)!.Frequency;
         var thickness = asked.Thickness ?? DefaultThickness;
-        var spacing = asked.Spacing ?? AutoSpacing(top, thickness);
+        var spacing = asked.Spacing ?? AutoSpacing(top, thickness, slotSpacing);
         double margin = 0;
         Length depth;
         if (asked.Depth is { } d) depth = d;

@@ -87,6 +87,12 @@ public sealed record DesignReport
     /// <summary>The flare (<c>flare</c>); null without one.</summary>
     public FlareReport? Flare { get; init; }
 
+    /// <summary>The beam over the operating range (<c>environment</c>, <c>transmitter.frequency_tolerance</c>); null without one.</summary>
+    public PointingReport? Pointing { get; init; }
+
+    /// <summary>The flare's and the filter's plates (<c>parts.csv</c>); empty without either.</summary>
+    public IReadOnlyList<PartRow> Parts { get; init; } = [];
+
     /// <summary><c>coupling: mutual</c>: the coupled and isolated-slot designs side by side; null otherwise.</summary>
     public CouplingReport? Coupling { get; init; }
 

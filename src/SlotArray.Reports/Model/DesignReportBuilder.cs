@@ -157,6 +157,9 @@ public static class DesignReportBuilder
             Requirements = Requirements(verdicts, result),
             Load = result.TravellingWave is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
             TravellingWave = result.TravellingWave is { } t ? TravellingWaveOf(result, t) : null,
+            Pointing = result.Pointing is { } pb ? PointingReport.Of(pb) : null,
+            Parts = plan is not null && (result.Flare is not null || result.Filter is not null)
+                ? PartRow.Of(Core.Marine.MarineParts.Of(design, plan.DesignOrigin, result.Flare?.Flare, result.Filter?.Filter)) : [],
             Flare = result.Flare is { } fo ? FlareReport.Of(fo, request.Requirements.VerticalBeamwidth) : null,
             Filter = result.Filter is { } flt && atDesign.CrossPolar is { } xc
                 ? FilterReport.Of(flt, request.DesignFrequency, CrossLevels(xc, atDesign.Pattern.PeakPower), request.Requirements.CrossPolarDb) : null,

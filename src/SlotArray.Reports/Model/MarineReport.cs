@@ -167,3 +167,133 @@ public sealed record FlareReport
         };
     }
 }
+
+/// <summary>One row of the pointing table.</summary>
+public sealed record PointingRow
+{
+    /// <summary>Guide temperature, °C.</summary>
+    public required double TemperatureC { get; init; }
+
+    /// <summary>Transmitter frequency, Hz.</summary>
+    public required double FrequencyHz { get; init; }
+
+    /// <summary>Equivalent frequency of the antenna as built, Hz.</summary>
+    public required double EquivalentFrequencyHz { get; init; }
+
+    /// <summary>Beam direction, degrees (+ toward the load end).</summary>
+    public required double BeamDeg { get; init; }
+
+    /// <summary>Beam minus the nominal beam, degrees.</summary>
+    public required double ErrorDeg { get; init; }
+
+    /// <summary>True when read off the analysed sweep; false from the phase condition.</summary>
+    public required bool FromSweep { get; init; }
+}
+
+/// <summary>The beam over the operating range and the worst bearing error.</summary>
+public sealed record PointingReport
+{
+    /// <summary>Lowest and highest operating temperature, °C.</summary>
+    public required double LowC { get; init; }
+
+    /// <summary>Highest operating temperature, °C.</summary>
+    public required double HighC { get; init; }
+
+    /// <summary>± transmitter frequency tolerance, Hz.</summary>
+    public required double FrequencyToleranceHz { get; init; }
+
+    /// <summary>Linear expansion coefficient of the wall metal, 1/K (NaN when unknown).</summary>
+    public required double ExpansionPerKelvin { get; init; }
+
+    /// <summary>Where that coefficient comes from ("" when unknown).</summary>
+    public required string ExpansionSource { get; init; }
+
+    /// <summary>The nominal beam (design frequency, 20 °C), degrees.</summary>
+    public required double NominalBeamDeg { get; init; }
+
+    /// <summary>Beam drift per kelvin, degrees.</summary>
+    public required double DegPerKelvin { get; init; }
+
+    /// <summary>Beam drift per MHz, degrees.</summary>
+    public required double DegPerMhz { get; init; }
+
+    /// <summary>Largest |beam − nominal| over the operating range, degrees.</summary>
+    public required double WorstErrorDeg { get; init; }
+
+    /// <summary>The table: temperatures × frequencies.</summary>
+    public required IReadOnlyList<PointingRow> Rows { get; init; }
+
+    /// <summary>The report of a pointing budget.</summary>
+    /// <param name="b">The budget.</param>
+    public static PointingReport Of(PointingBudget b)
+    {
+        ArgumentNullException.ThrowIfNull(b);
+        return new PointingReport
+        {
+            LowC = b.Range.LowCelsius,
+            HighC = b.Range.HighCelsius,
+            FrequencyToleranceHz = b.Range.FrequencyTolerance.Hertz,
+            ExpansionPerKelvin = b.Expansion?.Coefficient ?? double.NaN,
+            ExpansionSource = b.Expansion?.Source ?? "",
+            NominalBeamDeg = b.Nominal.Degrees,
+            DegPerKelvin = b.DegreesPerKelvin,
+            DegPerMhz = b.DegreesPerMegahertz,
+            WorstErrorDeg = b.WorstErrorDegrees,
+            Rows = [.. b.Cases.Select(c => new PointingRow
+            {
+                TemperatureC = c.TemperatureCelsius,
+                FrequencyHz = c.Transmit.Hertz,
+                EquivalentFrequencyHz = c.Equivalent.Hertz,
+                BeamDeg = c.Beam.Degrees,
+                ErrorDeg = c.ErrorDegrees,
+                FromSweep = c.FromSweep,
+            })],
+        };
+    }
+}
+
+/// <summary>A flare or filter part for the shop, in mm and degrees (<see cref="MarinePart"/>).</summary>
+public sealed record PartRow
+{
+    /// <summary>What it is.</summary>
+    public required string Name { get; init; }
+
+    /// <summary>How many.</summary>
+    public required int Quantity { get; init; }
+
+    /// <summary>Length along the guide (flare plates) or thickness (filter plates), mm.</summary>
+    public required double AlongGuideMm { get; init; }
+
+    /// <summary>Slant width (flare plates) or depth from the slotted face (filter plates), mm.</summary>
+    public required double WidthMm { get; init; }
+
+    /// <summary>Height across the aperture (filter plates), mm; 0 for flare plates.</summary>
+    public required double HeightMm { get; init; }
+
+    /// <summary>First part's start (flare) or centre (filter) from datum A, mm.</summary>
+    public required double FirstFromAMm { get; init; }
+
+    /// <summary>Pitch (filter plates), mm; 0 for flare plates.</summary>
+    public required double PitchMm { get; init; }
+
+    /// <summary>Half-flare angle from the face normal (flare plates), degrees; 0 for filter plates.</summary>
+    public required double AngleDeg { get; init; }
+
+    /// <summary>The rows of the Core parts.</summary>
+    /// <param name="parts">The parts.</param>
+    public static IReadOnlyList<PartRow> Of(IReadOnlyList<MarinePart> parts)
+    {
+        ArgumentNullException.ThrowIfNull(parts);
+        return [.. parts.Select(p => new PartRow
+        {
+            Name = p.Name,
+            Quantity = p.Quantity,
+            AlongGuideMm = p.AlongGuide.Millimeters,
+            WidthMm = p.Width.Millimeters,
+            HeightMm = p.Height.Millimeters,
+            FirstFromAMm = p.FirstFromA.Millimeters,
+            PitchMm = p.Pitch.Millimeters,
+            AngleDeg = p.AngleDegrees,
+        })];
+    }
+}

@@ -111,6 +111,33 @@ public static class DesignJson
             w.WriteEndObject();
         }
 
+        if (r.Pointing is { } pt)
+        {
+            w.WriteStartObject("pointing");
+            Num(w, "low_temperature_c", pt.LowC);
+            Num(w, "high_temperature_c", pt.HighC);
+            Num(w, "frequency_tolerance_hz", pt.FrequencyToleranceHz);
+            Num(w, "expansion_per_k", pt.ExpansionPerKelvin);
+            w.WriteString("expansion_source", pt.ExpansionSource);
+            Num(w, "nominal_beam_deg", pt.NominalBeamDeg);
+            Num(w, "deg_per_k", pt.DegPerKelvin);
+            Num(w, "deg_per_mhz", pt.DegPerMhz);
+            Num(w, "worst_error_deg", pt.WorstErrorDeg);
+            w.WriteStartArray("cases");
+            foreach (var row in pt.Rows)
+            {
+                w.WriteStartObject();
+                Num(w, "temperature_c", row.TemperatureC);
+                Num(w, "frequency_hz", row.FrequencyHz);
+                Num(w, "equivalent_frequency_hz", row.EquivalentFrequencyHz);
+                Num(w, "beam_deg", row.BeamDeg);
+                Num(w, "error_deg", row.ErrorDeg);
+                w.WriteBoolean("from_sweep", row.FromSweep);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
         if (r.Flare is { } fl)
         {
             w.WriteStartObject("flare");
@@ -443,6 +470,9 @@ public static class DesignJson
             Warnings = StringList(root, "warnings"),
             Cautions = StringList(root, "cautions"),
             Tolerance = StringList(root, "tolerance"),
+            Pointing = root.TryGetProperty("pointing", out var pt) ? ReadPointing(pt) : null,
+            Flare = root.TryGetProperty("flare", out var fl) ? ReadFlare(fl) : null,
+            Filter = root.TryGetProperty("filter", out var flt) ? ReadFilter(flt) : null,
             Load = root.TryGetProperty("load", out var ld)
                 ? new LoadReport { Fraction = D(ld, "fraction"), PowerWPerWIn = D(ld, "power_w_per_w_in") } : null,
             TravellingWave = root.TryGetProperty("travelling_wave", out var tw)
@@ -474,6 +504,67 @@ public static class DesignJson
     private static double Value(JsonElement v) => v.ValueKind == JsonValueKind.Null ? double.NaN : v.GetDouble();
 
     private static double? OptD(JsonElement e, string key) => e.TryGetProperty(key, out var v) ? Value(v) : null;
+
+    private static PointingReport ReadPointing(JsonElement e) => new()
+    {
+        LowC = D(e, "low_temperature_c"),
+        HighC = D(e, "high_temperature_c"),
+        FrequencyToleranceHz = D(e, "frequency_tolerance_hz"),
+        ExpansionPerKelvin = D(e, "expansion_per_k"),
+        ExpansionSource = Str(e, "expansion_source"),
+        NominalBeamDeg = D(e, "nominal_beam_deg"),
+        DegPerKelvin = D(e, "deg_per_k"),
+        DegPerMhz = D(e, "deg_per_mhz"),
+        WorstErrorDeg = D(e, "worst_error_deg"),
+        Rows = [.. e.GetProperty("cases").EnumerateArray().Select(c => new PointingRow
+        {
+            TemperatureC = D(c, "temperature_c"),
+            FrequencyHz = D(c, "frequency_hz"),
+            EquivalentFrequencyHz = D(c, "equivalent_frequency_hz"),
+            BeamDeg = D(c, "beam_deg"),
+            ErrorDeg = D(c, "error_deg"),
+            FromSweep = c.GetProperty("from_sweep").GetBoolean(),
+        })],
+    };
+
+    private static FlareReport ReadFlare(JsonElement e) => new()
+    {
+        ThroatM = D(e, "throat_m"),
+        ApertureM = D(e, "aperture_m"),
+        LengthM = D(e, "length_m"),
+        Chosen = StringList(e, "chosen"),
+        VerticalHpbwDeg = D(e, "vertical_hpbw_deg"),
+        RequiredVerticalHpbwDeg = OptD(e, "required_vertical_hpbw_deg"),
+        FirstSidelobeDb = D(e, "first_sidelobe_db"),
+        PhaseErrorDeg = D(e, "phase_error_deg"),
+        PhaseErrorLossDb = D(e, "phase_error_loss_db"),
+        ThroatLossDb = D(e, "throat_loss_db"),
+        CutoffPlaneM = D(e, "cutoff_plane_m"),
+        TotalDirectivityDbi = D(e, "total_directivity_dbi"),
+        TotalGainDbi = D(e, "total_gain_dbi"),
+        CutElevationDeg = Doubles(e.GetProperty("cut_elevation_deg")),
+        CutLevelDb = Doubles(e.GetProperty("cut_level_db")),
+    };
+
+    private static FilterReport ReadFilter(JsonElement e) => new()
+    {
+        SpacingM = D(e, "spacing_m"),
+        DepthM = D(e, "depth_m"),
+        ThicknessM = D(e, "thickness_m"),
+        Chosen = StringList(e, "chosen"),
+        CutoffTe1Hz = D(e, "cutoff_te1_hz"),
+        AttenuationDbPerMmAtDesign = D(e, "attenuation_db_per_mm_at_design"),
+        AttenuationAtDesignDb = D(e, "attenuation_at_design_db"),
+        SmallestAttenuationDb = D(e, "smallest_attenuation_db"),
+        WantedLossDb = D(e, "wanted_loss_db"),
+        MarginDb = D(e, "margin_db"),
+        BareWorstDb = D(e, "bare_worst_db"),
+        BareWorstFrequencyHz = D(e, "bare_worst_frequency_hz"),
+        FilteredWorstDb = D(e, "filtered_worst_db"),
+        FilteredWorstFrequencyHz = D(e, "filtered_worst_frequency_hz"),
+        RequirementDb = OptD(e, "requirement_db"),
+        BareCrossCutLevelDb = Doubles(e.GetProperty("bare_cross_level_db")),
+    };
 
     private static double[] Doubles(JsonElement array) => [.. array.EnumerateArray().Select(Value)];
 

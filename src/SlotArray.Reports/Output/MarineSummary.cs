@@ -53,4 +53,41 @@ internal static class MarineSummary
         line("Limits: infinite, perfectly conducting plates without edge diffraction (far vertical sidelobes and the back lobe are not modelled); the slots' detuning by the narrow throat is not modelled (check one slot in the throat full-wave); the total gain assumes a separable aperture and narrow beams in both planes.");
         line("");
     }
+
+    /// <summary>The pointing table over temperature and transmitter frequency, and the worst bearing error.</summary>
+    /// <param name="p">The pointing report.</param>
+    /// <param name="line">Writes one line.</param>
+    public static void WritePointing(PointingReport p, Action<string> line)
+    {
+        line("## Pointing over temperature and frequency");
+        line("");
+        string alpha = double.IsNaN(p.ExpansionPerKelvin) ? "unknown for this metal: temperature not included"
+            : $"{Invariant.Fixed(p.ExpansionPerKelvin * 1e6, 1)}e-6 per K ({p.ExpansionSource})";
+        line($"Every dimension grows by 1 + αΔT from 20 °C (α {alpha}); by electromagnetic similitude (G. Sinclair, Proc. IRE 36, 1948) the antenna at temperature T and frequency f points where the antenna as built points at f (1 + αΔT), read off the analysed sweep.");
+        line("");
+        line("| temperature (°C) | transmitter (GHz) | equivalent (GHz) | beam (deg) | error (deg) |");
+        line("| ---: | ---: | ---: | ---: | ---: |");
+        foreach (var r in p.Rows)
+            line($"| {Invariant.Fixed(r.TemperatureC, 1)} | {Invariant.Fixed(r.FrequencyHz * 1e-9, 4)} | {Invariant.Fixed(r.EquivalentFrequencyHz * 1e-9, 5)} | {Invariant.Fixed(r.BeamDeg, 3)} | {Invariant.Fixed(r.ErrorDeg, 3)}{(r.FromSweep ? "" : " (phase condition)")} |");
+        line("");
+        line($"Worst-case bearing error over {Invariant.Fixed(p.LowC, 0)} to {Invariant.Fixed(p.HighC, 0)} °C and ±{Invariant.Fixed(p.FrequencyToleranceHz * 1e-6, 1)} MHz: **{Invariant.Fixed(p.WorstErrorDeg, 3)} deg** (drift {Invariant.Fixed(p.DegPerKelvin * 1e3, 3)} mdeg per K, {Invariant.Fixed(p.DegPerMhz * 1e3, 2)} mdeg per MHz).");
+        line("");
+    }
+
+    /// <summary>The flare's and the filter's plates (the same rows as <c>parts.csv</c>).</summary>
+    /// <param name="parts">The parts.</param>
+    /// <param name="line">Writes one line.</param>
+    public static void WriteParts(IReadOnlyList<PartRow> parts, Action<string> line)
+    {
+        if (parts.Count == 0) return;
+        line("## Flare and filter parts");
+        line("");
+        line("Positions along the guide from datum A, as in the cut list (`parts.csv` has the same rows).");
+        line("");
+        line("| part | qty | along guide (mm) | width / depth (mm) | height (mm) | first from A (mm) | pitch (mm) | angle (deg) |");
+        line("| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: |");
+        foreach (var p in parts)
+            line($"| {p.Name} | {Invariant.Int(p.Quantity)} | {Invariant.Fixed(p.AlongGuideMm, 2)} | {Invariant.Fixed(p.WidthMm, 2)} | {Invariant.Fixed(p.HeightMm, 2)} | {Invariant.Fixed(p.FirstFromAMm, 2)} | {Invariant.Fixed(p.PitchMm, 2)} | {Invariant.Fixed(p.AngleDeg, 2)} |");
+        line("");
+    }
 }

@@ -56,6 +56,11 @@ public static class OutputFolder
             Many = r => r.Flare is null ? [] : [("vertical.png", PlotBytes(DesignPlots.Vertical(r)))],
             Owns = n => n == "vertical.png",
         },
+        new("parts.csv", (r, s) => s.Write(Utf8(PartsCsv.ToText(r))))
+        {
+            Many = r => r.Parts.Count == 0 ? [] : [("parts.csv", Utf8(PartsCsv.ToText(r)))],
+            Owns = n => n == "parts.csv",
+        },
         new("input.s1p", Text(TouchstoneWriter.Write)),
         new("summary.md", Text(SummaryMarkdown.Write)),
         new("spec.yaml", (r, s) => s.Write(new UTF8Encoding(false).GetBytes(r.SpecText ?? "# the spec's text was not given to this writer\n"))),

@@ -113,6 +113,8 @@ public static class SummaryMarkdown
         }
         L();
         if (report.Flare is { } flare) MarineSummary.WriteFlare(flare, report, s => L(s));
+        if (report.Pointing is { } pointing) MarineSummary.WritePointing(pointing, s => L(s));
+        MarineSummary.WriteParts(report.Parts, s => L(s));
         if (report.Filter is { } flt) MarineSummary.WriteFilter(flt, report.FrequencyHz, s => L(s));
         WriteScan(report, L);
         L();

@@ -159,6 +159,8 @@ internal static class SpecKeys
     [
         new("peak_power", Q(QuantityKind.Power, "above 0, up to 1000 MW"), "peak transmitter power") { DefaultText = "no estimate", Example = "25 kW" },
         new("average_power", Q(QuantityKind.Power, "above 0, up to the peak power"), "average transmitter power") { DefaultText = "no estimate", Example = "20 W" },
+        new("frequency_tolerance", Q(QuantityKind.Frequency, "0 Hz or more, below the design frequency"), "± tolerance of the transmitter frequency, for the pointing budget")
+            { DefaultText = "0 Hz", Example = "30 MHz" },
     ]);
 
     private static readonly ChoiceValue AutoWord = new(["auto"], [], WordFolding.Words);
@@ -167,7 +169,7 @@ internal static class SpecKeys
     public static readonly SpecSection Filter = new("filter", "polarisation filter: thin metal plates across the aperture, normal to the guide axis (edge slots)",
     [
         new("spacing", new AnyOfValue([Q(QuantityKind.Length, "above the thickness, below half a wavelength plus the thickness"), AutoWord]),
-            "plate pitch along the guide axis, centre to centre; auto: a clear gap of 0.35 wavelength at the top of the band")
+            "plate pitch along the guide axis, centre to centre; auto: the slot spacing over the smallest whole number that leaves a clear gap of at most 0.35 wavelength at the top of the band")
             { DefaultText = "auto", Example = "12 mm" },
         new("depth", new AnyOfValue([Q(QuantityKind.Length, "above 0, up to 1 m"), AutoWord]),
             "plate depth out from the slotted face; auto: the depth that meets requirements.cross_polar with a 3 dB margin")
@@ -186,6 +188,13 @@ internal static class SpecKeys
             { DefaultText = "auto", Example = "100 mm" },
         new("phase_error", Q(QuantityKind.Angle, "above 0 deg, up to 360 deg"), "largest phase error at the aperture edge an automatic flare may have")
             { Default = "90 deg" },
+    ]);
+
+    /// <summary><c>environment</c>: the operating conditions of the pointing budget.</summary>
+    public static readonly SpecSection Environment = new("environment", "operating conditions: the guide's temperature range for the pointing budget",
+    [
+        new("temperature", new ListValue(Q(QuantityKind.Temperature, "-100 degC to 200 degC, low ≤ high"), 2, 2), "operating temperature range of the guide [low, high]")
+            { DefaultText = "20 degC only", Example = "[-25 degC, 55 degC]" },
     ]);
 
     /// <summary><c>fabrication</c>: how the plate is to be cut.</summary>
@@ -215,9 +224,10 @@ internal static class SpecKeys
         new("transmitter", new BlockValue(Transmitter), Transmitter.Description) { DefaultText = "no exposure estimate" },
         new("fabrication", new BlockValue(Fabrication), Fabrication.Description) { DefaultText = "the designed lengths" },
         new("filter", new AnyOfValue([new BlockValue(Filter), AutoWord]), Filter.Description + "; auto: every dimension chosen") { DefaultText = "none" },
+        new("environment", new BlockValue(Environment), Environment.Description) { DefaultText = "20 degC only" },
         new("flare", new AnyOfValue([new BlockValue(Flare), AutoWord]), Flare.Description + "; auto: length and aperture chosen") { DefaultText = "none" },
     ]);
 
     /// <summary>Every block, the top level first.</summary>
-    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, Requirements, Transmitter, Fabrication, Filter, Flare];
+    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, Requirements, Transmitter, Fabrication, Filter, Flare, Environment];
 }

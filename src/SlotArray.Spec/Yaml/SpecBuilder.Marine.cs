@@ -93,4 +93,48 @@ internal sealed partial class SpecBuilder
         ok = good;
         return ok ? new FlareRequest(length, aperture, phase) : null;
     }
+
+    private static IReadOnlyList<string> EnvironmentKeys => SpecKeys.Environment.Names;
+
+    /// <summary><c>transmitter.frequency_tolerance</c> as read by the transmitter block; null when not given.</summary>
+    private Frequency? _frequencyTolerance;
+
+    /// <summary>
+    /// The pointing budget's operating range: <c>environment.temperature: [low, high]</c> (°C, −100 to 200, low ≤ high) and
+    /// <c>transmitter.frequency_tolerance</c> (read with the transmitter); null when neither is given.
+    /// </summary>
+    private OperatingRange? Operating(Section root, out bool ok)
+    {
+        ok = true;
+        double low = Core.Fabrication.ThermalExpansion.ReferenceTemperatureCelsius, high = low;
+        bool hasRange = false;
+        if (root.Has("environment"))
+        {
+            var s = Sub(root, "environment", EnvironmentKeys, false);
+            if (s is null) { ok = false; return null; }
+            var node = s["temperature"];
+            if (node is not null)
+            {
+                Current = node;
+                if (node is not SequenceNode { Items.Count: 2 } seq || seq.Items.Any(i => i is not ScalarNode))
+                {
+                    D.Error(node, "'temperature' needs two temperatures, low and high, such as '[-25 degC, 55 degC]'");
+                    ok = false;
+                    return null;
+                }
+                double? lo = QuantityOf((ScalarNode)seq.Items[0], "temperature", QuantityKind.Temperature);
+                double? hi = QuantityOf((ScalarNode)seq.Items[1], "temperature", QuantityKind.Temperature);
+                if (lo is null || hi is null) { ok = false; return null; }
+                if (!(lo >= -100 && hi <= 200 && lo <= hi))
+                {
+                    D.Error(node, $"'temperature' must be [low, high] with -100 degC ≤ low ≤ high ≤ 200 degC, got [{Num(lo.Value)} degC, {Num(hi.Value)} degC]");
+                    ok = false;
+                    return null;
+                }
+                (low, high, hasRange) = (lo.Value, hi.Value, true);
+            }
+        }
+        if (!hasRange && _frequencyTolerance is null) return null;
+        return new OperatingRange(low, high, _frequencyTolerance ?? Frequency.FromHertz(0));
+    }
 }

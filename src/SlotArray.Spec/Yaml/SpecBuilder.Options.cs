@@ -146,6 +146,13 @@ internal sealed partial class SpecBuilder
         }
         if (ok && peak is not null && average is not null)
             ok &= Require(s, "average_power", average <= peak, $"'average_power' {Num(average.Value)} W cannot exceed 'peak_power' {Num(peak.Value)} W");
+        if (s.Has("frequency_tolerance"))
+        {
+            var tol = Quantity(s, "frequency_tolerance", QuantityKind.Frequency, false, "30 MHz");
+            if (tol is not null && Require(s, "frequency_tolerance", tol >= 0 && tol < 1e12, $"'frequency_tolerance' must be 0 Hz or more, got {Num(tol.Value)} Hz"))
+                _frequencyTolerance = Frequency.FromHertz(tol.Value);
+            else ok = false;
+        }
         return ok ? new TransmitterRequest(peak, average) : null;
     }
 

@@ -49,9 +49,9 @@ public class CrossPolarFilterTests
     {
         var top = Frequency.FromGigahertz(9.5);
         var t = CrossPolarFilterDesign.DefaultThickness;
-        var spacing = CrossPolarFilterDesign.AutoSpacing(top, t);
-        // 0.35 λ clear gap at 9.5 GHz (11.04 mm) plus 0.5 mm, rounded down to 0.5 mm: 11.5 mm.
-        Check.Absolute(11.5, spacing.Millimeters, 1e-12, "0.35 λ + t at 9.5 GHz, rounded down to 0.5 mm (computed here)");
+        var spacing = CrossPolarFilterDesign.AutoSpacing(top, t, Length.FromMillimeters(20));
+        // 0.35 λ clear gap at 9.5 GHz (11.04 mm) plus 0.5 mm = 11.54 mm: 20 mm slots need two plates per spacing, 10 mm.
+        Check.Absolute(10, spacing.Millimeters, 1e-12, "d / ceil(d / (0.35 λ + t)) at 9.5 GHz (computed here)");
         (Frequency, double)[] bare = [(Frequency.FromGigahertz(9.3), -18.29), (Frequency.FromGigahertz(9.41), -18.33), (top, -18.5)];
         var depth = CrossPolarFilterDesign.AutoDepth(spacing, t, bare, -25, CrossPolarFilterDesign.MarginDb);
         foreach (var (f, db) in bare)
