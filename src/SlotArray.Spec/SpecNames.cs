@@ -1,4 +1,7 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
 
 namespace SlotArray.Spec;
 

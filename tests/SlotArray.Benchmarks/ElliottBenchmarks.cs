@@ -3,6 +3,7 @@ using SlotArray.Core.Design;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 using SlotArray.Core.Tapers;
 using SlotArray.Core.Waveguides;
 

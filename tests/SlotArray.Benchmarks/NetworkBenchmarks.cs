@@ -1,5 +1,7 @@
 using System.Numerics;
 using BenchmarkDotNet.Attributes;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
 using SlotArray.Core;
 using SlotArray.Core.Design;
 using SlotArray.Core.Network;

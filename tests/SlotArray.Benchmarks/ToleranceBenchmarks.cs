@@ -1,7 +1,9 @@
 using BenchmarkDotNet.Attributes;
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 using SlotArray.Core.Tapers;
 using SlotArray.Core.Tolerance;
 using SlotArray.Core.Waveguides;
@@ -37,8 +39,8 @@ public class ToleranceBenchmarks
     {
         var guide = RectangularWaveguide.FromStandard(WaveguideCatalogue.Find("WR-90")!, Length.FromMillimeters(1.27), Metal.Aluminium);
         var width = Length.FromMillimeters(1.6);
-        Tolerance U(double mm) => new(Length.FromMillimeters(mm), ErrorDistribution.Uniform);
-        var tol = new ToleranceRequest(U(0.02), U(0.03), U(0.03), U(0.02), U(0.05), new Tolerance(Length.FromMillimeters(0.05), ErrorDistribution.Normal),
+        MachiningTolerance U(double mm) => new(Length.FromMillimeters(mm), ErrorDistribution.Uniform);
+        var tol = new ToleranceRequest(U(0.02), U(0.03), U(0.03), U(0.02), U(0.05), new MachiningTolerance(Length.FromMillimeters(0.05), ErrorDistribution.Normal),
             Length.Zero, Length.Zero, 10_000, 7);
         var request = new ArrayRequest("bench", F0, Frequency.FromGigahertz(9.2), Frequency.FromGigahertz(9.55), guide,
             new SlotRequest(SlotType.Longitudinal, Slots, width, null, SlotModelKind.MomentMethod),

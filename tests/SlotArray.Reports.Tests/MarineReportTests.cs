@@ -2,6 +2,9 @@ using System.Text.Json;
 using SlotArray.Core.Design;
 using SlotArray.Core.Marine;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
 using SlotArray.Core.Waveguides;
 using SlotArray.Reports.Model;
 

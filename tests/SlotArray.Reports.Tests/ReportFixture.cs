@@ -5,6 +5,8 @@ using FabricationPlan = SlotArray.Core.Fabrication.FabricationPlan;
 using FeatureTolerances = SlotArray.Core.Fabrication.FeatureTolerances;
 using SlotCutInput = SlotArray.Core.Fabrication.SlotCutInput;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 using SlotArray.Reports.Model;
 
 namespace SlotArray.Reports.Tests;

@@ -1,5 +1,6 @@
 using System.Text.Json;
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Tolerance;
 using SlotArray.Reports.Plots;
@@ -12,11 +13,11 @@ namespace SlotArray.Reports.Tests;
 /// </summary>
 public class ToleranceReportTests
 {
-    private static Tolerance U(double mm) => new(Length.FromMillimeters(mm), ErrorDistribution.Uniform);
+    private static MachiningTolerance U(double mm) => new(Length.FromMillimeters(mm), ErrorDistribution.Uniform);
 
     private static ToleranceResult Invented()
     {
-        var tol = new ToleranceRequest(U(0.02), U(0.02), U(0), U(0), U(0), new Tolerance(Length.FromMillimeters(0.05), ErrorDistribution.Normal),
+        var tol = new ToleranceRequest(U(0.02), U(0.02), U(0), U(0), U(0), new MachiningTolerance(Length.FromMillimeters(0.05), ErrorDistribution.Normal),
             Length.Zero, Length.Zero, 4, 7);
         var s = new SampleSummary(-25.5, -25.6, -25.0, -24.8, -24.5, -26.2, -24.1);
         var env = new PatternEnvelope([-90, 0, 90], [-40, 0, -40], [-45, 0, -45], [-41, 0, -41], [-38, 0, -38], [-35, 0, -35]);

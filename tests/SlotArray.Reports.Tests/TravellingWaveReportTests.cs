@@ -1,6 +1,9 @@
 using System.Text.Json;
 using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
 using SlotArray.Core.Waveguides;
 using SlotArray.Reports.Model;
 using SlotArray.Reports.Plots;

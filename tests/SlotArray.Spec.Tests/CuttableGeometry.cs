@@ -1,6 +1,7 @@
 using System.Globalization;
 using SlotArray.Core.Design;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Spec.Tests;
 

@@ -1,4 +1,8 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
+using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
 using SlotArray.Spec;
 using SlotArray.Tests.Shared;
 

@@ -1,6 +1,7 @@
 using System.CommandLine;
 using System.Globalization;
 using SlotArray.Core.Design;
+using SlotArray.Core.Slots;
 using SlotArray.FullWave.Engine;
 using SlotArray.FullWave.Model;
 using SlotArray.FullWave.Runs;

@@ -2,6 +2,8 @@ using System.CommandLine;
 using System.Globalization;
 using System.Text.Json;
 using SlotArray.Core.Design;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
 using SlotArray.Spec;
 
 namespace SlotArray.Cli.Commands;

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using SlotArray.Core.Stick;
 using SlotArray.Core;
 using SlotArray.Core.Design;
 using SlotArray.Core.Prototype;

@@ -3,6 +3,7 @@ using System.Globalization;
 using SlotArray.Core.Design;
 using SlotArray.Core.Prototype;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 using SlotArray.Reports;
 using SlotArray.Reports.Compare;
 using SlotArray.Spec;

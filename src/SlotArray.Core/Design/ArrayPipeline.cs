@@ -2,6 +2,7 @@ using SlotArray.Core.Fabrication;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 using SlotArray.Core.Tapers;
 
 namespace SlotArray.Core.Design;
@@ -248,7 +249,7 @@ public static class ArrayPipeline
         var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
         SlotClearance.Require(design, request.Slots.Cutter);
         options.Cancellation.ThrowIfCancellationRequested();
-        design = Prototype.PrototypeMargin.Apply(design, request.PrototypeMargin);
+        design = PrototypeMargin.Apply(design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
@@ -289,7 +290,7 @@ public static class ArrayPipeline
         options.Cancellation.ThrowIfCancellationRequested();
         var design = elliott.Design;
         SlotClearance.Require(design, request.Slots.Cutter);
-        design = Prototype.PrototypeMargin.Apply(design, request.PrototypeMargin);
+        design = PrototypeMargin.Apply(design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
@@ -317,7 +318,7 @@ public static class ArrayPipeline
         options.Cancellation.ThrowIfCancellationRequested();
         var design = result.Design;
         SlotClearance.Require(design, request.Slots.Cutter);
-        design = Prototype.PrototypeMargin.Apply(design, request.PrototypeMargin);
+        design = PrototypeMargin.Apply(design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);

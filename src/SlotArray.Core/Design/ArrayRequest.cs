@@ -1,4 +1,8 @@
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
 using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Design;
@@ -53,26 +57,6 @@ public sealed record ArrayRequest(
     public Marine.OperatingRange? Operating { get; init; }
 }
 
-/// <summary>Kind of radiating slot.</summary>
-public enum SlotType
-{
-    /// <summary>Longitudinal shunt slot in the broad wall, displaced from the centreline by an offset.</summary>
-    Longitudinal,
-    /// <summary>Inclined shunt slot in the narrow wall, cut into both broad walls ("edge slot").</summary>
-    Edge,
-    /// <summary>Centred inclined series slot in the broad wall.</summary>
-    InclinedSeries,
-}
-
-/// <summary>Which slot-admittance model the designer uses.</summary>
-public enum SlotModelKind
-{
-    /// <summary>Galerkin moment method with finite wall thickness (default).</summary>
-    MomentMethod,
-    /// <summary>Stevenson's closed-form resonant conductance (thin wall, resonant half-wave slot).</summary>
-    Stevenson,
-}
-
 /// <summary>Slots of the array.</summary>
 /// <param name="Type">Slot type.</param>
 /// <param name="Count">Number of slots, ≥ 2.</param>
@@ -88,90 +72,6 @@ public sealed record SlotRequest(SlotType Type, int Count, Length Width, Length?
     public bool Extrapolate { get; init; }
 }
 
-/// <summary>Feed arrangement.</summary>
-public enum FeedType
-{
-    /// <summary>Resonant array: λg/2 spacing, short-circuit termination.</summary>
-    StandingWave,
-    /// <summary>Non-resonant array: spacing ≠ λg/2, matched load.</summary>
-    TravellingWave,
-}
-
-/// <summary>Where a standing-wave array is fed.</summary>
-public enum FeedPosition
-{
-    /// <summary>At one end; the other end is shorted.</summary>
-    End,
-    /// <summary>At the centre; both ends are shorted (two halves).</summary>
-    Centre,
-}
-
-/// <summary>
-/// A distance along the guide given either as a fraction of the guide wavelength at the design frequency
-/// or as a fixed length. Exactly one of the two is set.
-/// </summary>
-/// <param name="GuideWavelengths">Fraction of λg at the design frequency, or null.</param>
-/// <param name="Fixed">Fixed length, or null.</param>
-public sealed record GuideDistance(double? GuideWavelengths, Length? Fixed)
-{
-    /// <summary>A distance in guide wavelengths.</summary>
-    public static GuideDistance InGuideWavelengths(double n) => new(n, null);
-    /// <summary>A fixed distance.</summary>
-    public static GuideDistance OfLength(Length l) => new(null, l);
-    /// <summary>Resolves the distance for a guide wavelength λg.</summary>
-    public Length Resolve(Length guideWavelength) => Fixed ?? GuideWavelengths!.Value * guideWavelength;
-}
-
-/// <summary>Feed of the array.</summary>
-/// <param name="Type">Standing-wave or travelling-wave.</param>
-/// <param name="Spacing">Slot spacing (default 0.5 guide-wavelength for standing-wave).</param>
-/// <param name="Position">End- or centre-fed (standing-wave only).</param>
-/// <param name="LoadFraction">Travelling-wave: fraction of input power left for the load, 0 &lt; P_L &lt; 1.</param>
-/// <param name="ShortDistance">Standing-wave: last slot centre to the short's inner face (default 0.25 guide-wavelength).</param>
-public sealed record FeedRequest(FeedType Type, GuideDistance Spacing, FeedPosition Position, double LoadFraction, GuideDistance ShortDistance)
-{
-    /// <summary>Travelling-wave, <c>feed.load: auto</c>: the smallest load fraction the slots can deliver is chosen (<see cref="TravellingWaveLoad"/>); <see cref="LoadFraction"/> is then only the starting value.</summary>
-    public bool AutoLoad { get; init; }
-
-    /// <summary>Travelling-wave, <c>feed.beam</c>: the direction asked for, from which <see cref="Spacing"/> was solved (<see cref="TravellingWaveBeam.SpacingFor"/>); null when the spacing was given.</summary>
-    public Quantities.Angle? Beam { get; init; }
-}
-
-/// <summary>Aperture taper families.</summary>
-public enum TaperType
-{
-    /// <summary>Equal amplitudes.</summary>
-    Uniform,
-    /// <summary>Dolph-Chebyshev equal-ripple sidelobes.</summary>
-    Chebyshev,
-    /// <summary>Taylor n̄ line source, sampled.</summary>
-    Taylor,
-    /// <summary>Villeneuve n̄ for discrete arrays.</summary>
-    Villeneuve,
-    /// <summary>Taylor one-parameter (B).</summary>
-    TaylorOneParameter,
-    /// <summary>cos^q on a pedestal.</summary>
-    CosinePedestal,
-    /// <summary>Bayliss difference pattern.</summary>
-    Bayliss,
-    /// <summary>User-given weights.</summary>
-    Given,
-}
-
-/// <summary>The aperture taper.</summary>
-/// <param name="Type">Taper family.</param>
-/// <param name="SidelobeLevelDb">Design sidelobe level, dB, negative (e.g. −26); ignored by uniform and given.</param>
-/// <param name="Nbar">n̄ for Taylor, Villeneuve and Bayliss (≥ 2).</param>
-/// <param name="EdgeLevelDb">cosine-pedestal: edge level, dB, negative (e.g. −20).</param>
-/// <param name="Exponent">cosine-pedestal: exponent q ≥ 1 (default 2).</param>
-/// <param name="Weights">given: the weights, any signs; null otherwise.</param>
-public sealed record TaperRequest(TaperType Type, double SidelobeLevelDb, int Nbar, double EdgeLevelDb, double Exponent,
-    IReadOnlyList<double>? Weights)
-{
-    /// <summary>A uniform taper.</summary>
-    public static TaperRequest Uniform { get; } = new(TaperType.Uniform, -13.26, 4, -20, 2, null);
-}
-
 /// <summary>Whether external mutual coupling between slots is designed for.</summary>
 public enum CouplingMode
 {
@@ -180,38 +80,6 @@ public enum CouplingMode
     /// <summary>Elliott's design procedure with mutual coupling.</summary>
     Mutual,
 }
-
-/// <summary>Statistical law of one machining error.</summary>
-public enum ErrorDistribution
-{
-    /// <summary>Uniform in ±value.</summary>
-    Uniform,
-    /// <summary>Normal with standard deviation value.</summary>
-    Normal,
-}
-
-/// <summary>One machining tolerance.</summary>
-/// <param name="Value">Half-width (uniform ±) or standard deviation (normal).</param>
-/// <param name="Distribution">Uniform or normal.</param>
-public sealed record Tolerance(Length Value, ErrorDistribution Distribution)
-{
-    /// <summary>No error.</summary>
-    public static Tolerance None { get; } = new(Length.Zero, ErrorDistribution.Uniform);
-}
-
-/// <summary>Machining tolerances for the Monte Carlo analysis.</summary>
-/// <param name="Offset">Slot offset from the centreline (or, for edge slots, taken as a tilt-equivalent error at the slot end).</param>
-/// <param name="Length">Slot length.</param>
-/// <param name="Position">Slot centre along the guide.</param>
-/// <param name="Width">Slot width.</param>
-/// <param name="GuideWidth">Inside broad dimension a of the tube.</param>
-/// <param name="Wall">Wall thickness.</param>
-/// <param name="SystematicLength">The same length error on every slot (added to the random one).</param>
-/// <param name="SystematicOffset">The same offset error on every slot.</param>
-/// <param name="Trials">Number of Monte Carlo trials, ≥ 1.</param>
-/// <param name="Seed">Random seed; the same seed gives identical results.</param>
-public sealed record ToleranceRequest(Tolerance Offset, Tolerance Length, Tolerance Position, Tolerance Width,
-    Tolerance GuideWidth, Tolerance Wall, Length SystematicLength, Length SystematicOffset, int Trials, int Seed);
 
 /// <summary>What the antenna must meet; each null entry is not checked.</summary>
 /// <param name="SidelobesDb">Peak sidelobe level, dB, negative; null: the taper's design level.</param>

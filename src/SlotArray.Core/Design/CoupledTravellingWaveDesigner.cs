@@ -1,6 +1,7 @@
 using System.Globalization;
 using SlotArray.Core.Network;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Design;
 

@@ -1,5 +1,6 @@
 using SlotArray.Core.Network;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Design;
 

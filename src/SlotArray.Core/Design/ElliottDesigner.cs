@@ -5,6 +5,7 @@ using SlotArray.Core.Coupling;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Design;
 

@@ -1,5 +1,6 @@
 using SlotArray.Core.Slots;
 using SlotArray.Core.Slots.Tables;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Design;
 

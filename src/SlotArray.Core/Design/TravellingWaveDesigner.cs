@@ -3,6 +3,7 @@ using System.Numerics;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Design;
 

@@ -1,5 +1,7 @@
 using System.Globalization;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
 
 namespace SlotArray.Core.Design;
 

@@ -1,5 +1,5 @@
-using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Fabrication;
 
@@ -68,15 +68,16 @@ public sealed record FabricationPlan(CutListGuide Guide, string Datum, Length De
     public Length? ChangePerKelvin => Thermal?.ChangePerKelvin(TubeLength);
 
     /// <summary>Builds the plan of a designed array.</summary>
-    /// <param name="request">The request (feed type, cutter, tolerance block).</param>
     /// <param name="design">The designed array.</param>
+    /// <param name="feed">Standing-wave (datum: the end short) or travelling-wave (datum: the load-end flange).</param>
+    /// <param name="cutter">End-mill diameter for round-ended slots, or null for square ends.</param>
+    /// <param name="tolerance">The spec's tolerance block, or null for the defaults.</param>
     /// <exception cref="InfeasibleDesignException">A slot does not fit the broad wall, or its cutter is wider than the slot.</exception>
-    public static FabricationPlan Build(ArrayRequest request, ArrayDesign design)
+    public static FabricationPlan Build(ArrayDesign design, FeedType feed, Length? cutter, ToleranceRequest? tolerance)
     {
-        ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(design);
-        var tol = FeatureTolerances.From(request.Tolerance);
-        var cut = CutListOf(request, design, Length.FromMeters(tol.Position.Value));
+        var tol = FeatureTolerances.From(tolerance);
+        var cut = CutListOf(design, feed, cutter, Length.FromMeters(tol.Position.Value));
         var far = design.FarTermination is { } f ? design.Slots[^1].Position + f.Distance : (Length?)null;
         return Layout(cut, tol, design.NearTermination.Kind != TerminationKind.Short, design.FeedPlane, far, design.GuideWavelength, design.Guide.MetalName);
     }
@@ -192,14 +193,14 @@ public sealed record FabricationPlan(CutListGuide Guide, string Datum, Length De
             ? new StatedTolerance(t.Meters, "ISO 2768-1:1989 class f, Table 1, for this nominal size (from memory)")
             : new StatedTolerance(1e-3, "beyond ISO 2768-1 class f's table: ±1 mm, agree it with the shop (common practice, no source)");
 
-    private static CutList CutListOf(ArrayRequest request, ArrayDesign design, Length tolerance)
+    private static CutList CutListOf(ArrayDesign design, FeedType feed, Length? cutter, Length tolerance)
     {
         var g = design.Guide;
         bool tilt = design.CouplingKind == Core.Slots.SlotCouplingKind.Tilt;
         var inputs = design.Slots.Select(s => new SlotCutInput(s.Index, s.Position,
             tilt ? null : Length.FromMeters(s.Coupling), tilt ? Angle.FromRadians(s.Coupling) : null,
-            s.Length, s.Width, request.Slots.Cutter, tolerance)).ToList();
-        var datums = request.Feed.Type == FeedType.TravellingWave
+            s.Length, s.Width, cutter, tolerance)).ToList();
+        var datums = feed == FeedType.TravellingWave
             ? Datums.Default with { Longitudinal = LongitudinalDatumKind.LoadFlangeInnerFace }
             : Datums.Default;
         return CutList.Build(new CutListGuide(g.BroadWall, g.NarrowWall, g.WallThickness), inputs, datums);

@@ -1,4 +1,3 @@
-using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 
 namespace SlotArray.Core.Fabrication;
@@ -49,7 +48,7 @@ public sealed record FeatureTolerances(StatedTolerance Position, StatedTolerance
             "the offset tolerance (" + Offset.Source + ") at the slot's end: δθ = δx/(L/2)");
     }
 
-    private static StatedTolerance Of(Design.Tolerance? t, string key)
+    private static StatedTolerance Of(MachiningTolerance? t, string key)
     {
         if (t is null || !(t.Value.Meters > 0)) return Default;
         return t.Distribution == ErrorDistribution.Normal

@@ -3,6 +3,7 @@ using System.Globalization;
 using SlotArray.Core.Network;
 using SlotArray.Core.Patterns;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Marine;
 

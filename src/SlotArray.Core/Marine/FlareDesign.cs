@@ -2,6 +2,7 @@ using System.Globalization;
 using MathNet.Numerics.RootFinding;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Marine;

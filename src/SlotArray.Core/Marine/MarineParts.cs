@@ -1,5 +1,6 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Marine;
 

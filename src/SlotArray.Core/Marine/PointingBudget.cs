@@ -2,6 +2,7 @@ using MathNet.Numerics.Interpolation;
 using SlotArray.Core.Fabrication;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Marine;
 
@@ -45,7 +46,7 @@ public sealed record PointingBudget(OperatingRange Range, ThermalExpansion? Expa
     /// <param name="design">The analysed design (guide, spacing, design frequency).</param>
     /// <param name="atDesign">Figures at the design frequency.</param>
     /// <param name="sweep">Figures across the band.</param>
-    public static PointingBudget Of(OperatingRange range, Design.ArrayDesign design, FrequencyFigures atDesign, IReadOnlyList<FrequencyFigures> sweep)
+    public static PointingBudget Of(OperatingRange range, ArrayDesign design, FrequencyFigures atDesign, IReadOnlyList<FrequencyFigures> sweep)
     {
         ArgumentNullException.ThrowIfNull(range);
         ArgumentNullException.ThrowIfNull(design);

@@ -1,6 +1,6 @@
-using SlotArray.Core.Design;
 using SlotArray.Core.Patterns;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Network;
 

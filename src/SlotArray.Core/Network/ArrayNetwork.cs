@@ -1,7 +1,7 @@
 using System.Numerics;
-using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Network;
 

@@ -1,9 +1,9 @@
 using System.Numerics;
 using MathNet.Numerics.LinearAlgebra;
 using SlotArray.Core.Coupling;
-using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Network;
 
@@ -31,7 +31,7 @@ namespace SlotArray.Core.Network;
 /// T = [cosh γd, sinh γd; sinh γd, cosh γd] (the cascade of <see cref="ArrayNetwork"/>; D. M. Pozar, <i>Microwave
 /// Engineering</i>, 4th ed., Wiley 2012, Secs. 2.1, 4.4, from memory); a termination adds V e − J c = 0 with
 /// (c, e) = T(d)(0, 1) for a short and T(d)(1, y_L) for a load; the feed is a matched source of unit incident wave,
-/// V_feed + I_feed = 2. Centre feed: the series junction of <see cref="StandingWaveDesigner"/>: equal currents out of
+/// V_feed + I_feed = 2. Centre feed: the series junction of <c>StandingWaveDesigner</c> (Core/Design): equal currents out of
 /// both halves and (V_left + V_right)/n + n I = 2 (ideal transformer n² to the feed); the far half is written in its
 /// own polarity (the junction reverses E_y), so its slots enter with a minus sign.</para>
 /// <para>The solution is reported as a <see cref="NetworkSolution"/>: each slot's admittance is its active admittance

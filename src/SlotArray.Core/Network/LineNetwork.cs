@@ -1,6 +1,6 @@
 using System.Numerics;
-using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Network;
@@ -19,7 +19,7 @@ namespace SlotArray.Core.Network;
 /// and a section of length ℓ dissipates ½|A|²(e^{2αℓ} − 1) + ½|B|²(1 − e^{−2αℓ}) (A, B at its termination side;
 /// integral derived here).</para>
 /// <para>Shunt element y at a plane: V continuous, the current toward the feed gains yV; it absorbs ½ Re(y)|V|².</para>
-/// <para>Centre feed: an ideal series junction (see <see cref="StandingWaveDesigner"/>): both halves carry the
+/// <para>Centre feed: an ideal series junction (see <c>StandingWaveDesigner</c> (Core/Design)): both halves carry the
 /// junction current, z_s = z_left + z_right, and an ideal transformer gives z_feed = z_s/n² (n² the design's junction ratio); the mode voltage of the far half is reported with its sign reversed so
 /// that all voltages share one E_y polarity (the series junction reverses E_y across it).</para>
 /// </remarks>

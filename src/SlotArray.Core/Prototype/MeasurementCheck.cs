@@ -1,4 +1,5 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Prototype;
 

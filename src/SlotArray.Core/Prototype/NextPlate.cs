@@ -1,4 +1,5 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
 

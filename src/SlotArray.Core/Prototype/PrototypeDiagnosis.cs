@@ -1,5 +1,6 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Prototype;
 

@@ -6,6 +6,7 @@ using SlotArray.Core.Network;
 using SlotArray.Core.Patterns;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Prototype;
 

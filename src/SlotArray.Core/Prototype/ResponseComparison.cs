@@ -4,6 +4,7 @@ using MathNet.Numerics.Interpolation;
 using SlotArray.Core.Design;
 using SlotArray.Core.Patterns;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Prototype;
 

@@ -2,6 +2,7 @@ using System.Globalization;
 using SlotArray.Core.Design;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Slots;
 using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Safety;

@@ -1,6 +1,5 @@
 using System.Collections.Immutable;
 using System.Globalization;
-using SlotArray.Core.Design;
 using SlotArray.Core.Patterns;
 
 namespace SlotArray.Core.Tapers;

@@ -1,8 +1,10 @@
 using System.Numerics;
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Tolerance;
@@ -75,7 +77,7 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
         ArgumentNullException.ThrowIfNull(tolerance);
         options ??= ToleranceOptions.Default;
         options.Validate();
-        double Range(Design.Tolerance t) => t.Distribution == ErrorDistribution.Normal ? options.NormalRange * t.Value.Meters : t.Value.Meters;
+        double Range(MachiningTolerance t) => t.Distribution == ErrorDistribution.Normal ? options.NormalRange * t.Value.Meters : t.Value.Meters;
         double offsetRange = Range(tolerance.Offset) + Math.Abs(tolerance.SystematicOffset.Meters);
         double lengthRange = Range(tolerance.Length) + Math.Abs(tolerance.SystematicLength.Meters);
         var keys = design.Slots.Select(s => (Coupling: Math.Abs(s.Coupling), Length: s.Length.Meters, PerOffset: CouplingPerOffset(design, s))).ToArray();

@@ -1,4 +1,6 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
+using SlotArray.Core.Stick;
 
 namespace SlotArray.Core.Tolerance;
 

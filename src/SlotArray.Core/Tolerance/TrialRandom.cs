@@ -1,4 +1,5 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 
 namespace SlotArray.Core.Tolerance;
 
@@ -62,7 +63,7 @@ public struct TrialRandom
     /// One machining error, m: uniform in ±value or normal with σ = value. Always consumes two uniforms, so the stream
     /// stays aligned whatever the laws and whether a tolerance is zero (a zero tolerance gives exactly 0).
     /// </summary>
-    public double Draw(Design.Tolerance tolerance)
+    public double Draw(MachiningTolerance tolerance)
     {
         ArgumentNullException.ThrowIfNull(tolerance);
         double v = tolerance.Value.Meters;

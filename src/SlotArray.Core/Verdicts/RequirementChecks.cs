@@ -1,6 +1,7 @@
 using System.Globalization;
 using SlotArray.Core.Design;
 using SlotArray.Core.Safety;
+using SlotArray.Core.Slots;
 
 namespace SlotArray.Core.Verdicts;
 

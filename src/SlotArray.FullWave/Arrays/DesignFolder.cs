@@ -1,5 +1,7 @@
 using System.Globalization;
 using System.Text.Json;
+using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 using SlotArray.FullWave.Slots;
 
 namespace SlotArray.FullWave.Arrays;

@@ -1,3 +1,6 @@
+using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
+
 namespace SlotArray.Reports.Model;
 
 /// <summary>

@@ -1,5 +1,7 @@
 using System.Globalization;
 using System.Numerics;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
 using SlotArray.Core;
 using SlotArray.Core.Design;
 using SlotArray.Core.Fabrication;
@@ -55,7 +57,7 @@ public static class DesignReportBuilder
         var guide = design.Guide;
         var f0 = design.DesignFrequency;
         double tolerance = CutTolerance(request.Tolerance);
-        var plan = FabricationPlan.Build(request, design);
+        var plan = FabricationPlan.Build(design, request.Feed.Type, request.Slots.Cutter, request.Tolerance);
         var atDesign = result.AtDesign;
         var slots = Slots(result, plan);
         var outside = SlotTableRangeCheck.Outside(design, result.SlotModel).Select(o => o.Index).ToHashSet();

@@ -1,6 +1,8 @@
 using System.Numerics;
 using System.Text.Encodings.Web;
 using System.Text.Json;
+using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 using SlotArray.Reports.Model;
 
 namespace SlotArray.Reports;

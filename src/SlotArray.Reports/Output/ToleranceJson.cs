@@ -1,6 +1,7 @@
 using System.Text.Encodings.Web;
 using System.Text.Json;
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Tolerance;
 
 namespace SlotArray.Reports;
@@ -83,7 +84,7 @@ public static class ToleranceJson
     }
 
     /// <summary>The spec's key of each random tolerance, in the spec's order.</summary>
-    internal static IEnumerable<(string Key, Core.Design.Tolerance Value)> Tolerances(ToleranceRequest t) =>
+    internal static IEnumerable<(string Key, MachiningTolerance Value)> Tolerances(ToleranceRequest t) =>
     [
         ("offset", t.Offset), ("length", t.Length), ("position", t.Position), ("width", t.Width), ("guide_width", t.GuideWidth), ("wall", t.Wall),
     ];

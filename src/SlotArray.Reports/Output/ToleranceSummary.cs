@@ -1,5 +1,6 @@
 using System.Globalization;
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Tolerance;
 
 namespace SlotArray.Reports;

@@ -1,3 +1,4 @@
+using SlotArray.Core.Stick;
 using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Spec.Schema;
@@ -28,7 +29,7 @@ internal static class SpecKeys
         var words = table.Select(p => p.Key).ToList();
         return new(words, [.. SpecNames.WordAliases.Where(a => words.Contains(a.Value)).Select(a => a.Key)], WordFolding.Words);
     }
-    private static string[] TaperWords(params Core.Design.TaperType[] types) => [.. types.Select(SpecNames.Of)];
+    private static string[] TaperWords(params Core.Tapers.TaperType[] types) => [.. types.Select(SpecNames.Of)];
 
     private static readonly QuantityValue ToleranceLength = Q(QuantityKind.Length, "0 to 10 mm");
 
@@ -77,8 +78,8 @@ internal static class SpecKeys
         Exclusive = [("model", "data")],
     };
 
-    private static readonly string[] StandingWave = [SpecNames.Of(Core.Design.FeedType.StandingWave)];
-    private static readonly string[] TravellingWave = [SpecNames.Of(Core.Design.FeedType.TravellingWave)];
+    private static readonly string[] StandingWave = [SpecNames.Of(Core.Stick.FeedType.StandingWave)];
+    private static readonly string[] TravellingWave = [SpecNames.Of(Core.Stick.FeedType.TravellingWave)];
 
     /// <summary><c>feed</c>: how the guide is fed and ended.</summary>
     public static readonly SpecSection Feed = new("feed", "how the guide is fed and how it ends",
@@ -100,11 +101,11 @@ internal static class SpecKeys
         Exclusive = [("spacing", "beam")],
     };
 
-    private static readonly string[] SidelobeTapers = TaperWords(Core.Design.TaperType.Chebyshev, Core.Design.TaperType.Taylor,
-        Core.Design.TaperType.Villeneuve, Core.Design.TaperType.TaylorOneParameter, Core.Design.TaperType.Bayliss);
-    private static readonly string[] NbarTapers = TaperWords(Core.Design.TaperType.Taylor, Core.Design.TaperType.Villeneuve, Core.Design.TaperType.Bayliss);
-    private static readonly string[] PedestalTaper = TaperWords(Core.Design.TaperType.CosinePedestal);
-    private static readonly string[] GivenTaper = TaperWords(Core.Design.TaperType.Given);
+    private static readonly string[] SidelobeTapers = TaperWords(Core.Tapers.TaperType.Chebyshev, Core.Tapers.TaperType.Taylor,
+        Core.Tapers.TaperType.Villeneuve, Core.Tapers.TaperType.TaylorOneParameter, Core.Tapers.TaperType.Bayliss);
+    private static readonly string[] NbarTapers = TaperWords(Core.Tapers.TaperType.Taylor, Core.Tapers.TaperType.Villeneuve, Core.Tapers.TaperType.Bayliss);
+    private static readonly string[] PedestalTaper = TaperWords(Core.Tapers.TaperType.CosinePedestal);
+    private static readonly string[] GivenTaper = TaperWords(Core.Tapers.TaperType.Given);
 
     /// <summary><c>taper</c>: the aperture amplitude distribution.</summary>
     public static readonly SpecSection Taper = new("taper", "the aperture amplitude distribution (sum or difference pattern)",

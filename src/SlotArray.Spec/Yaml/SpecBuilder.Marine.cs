@@ -1,6 +1,7 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Marine;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Slots;
 using SlotArray.Spec.Schema;
 
 namespace SlotArray.Spec.Yaml;

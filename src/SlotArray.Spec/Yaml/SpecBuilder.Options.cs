@@ -1,4 +1,5 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
 using SlotArray.Spec.Schema;
 
@@ -56,10 +57,10 @@ internal sealed partial class SpecBuilder
             Length.FromMeters(sysLength.Value), Length.FromMeters(sysOffset.Value), trials.Value, seed.Value);
     }
 
-    private Tolerance? OneTolerance(Section s, string key)
+    private MachiningTolerance? OneTolerance(Section s, string key)
     {
         var node = s[key];
-        if (node is null) return Core.Design.Tolerance.None;
+        if (node is null) return MachiningTolerance.None;
         Current = node;
         double? v;
         ErrorDistribution law;
@@ -82,7 +83,7 @@ internal sealed partial class SpecBuilder
             D.Error((SpecNode?)sigma?["sigma"] ?? node, $"'{key}' tolerance must be between 0 and 10 mm, got {Mm(v.Value)}");
             return null;
         }
-        return new Tolerance(Length.FromMeters(v.Value), law);
+        return new MachiningTolerance(Length.FromMeters(v.Value), law);
     }
 
     /// <summary>Requirements (optional): sidelobes and cross_polar in dB (negative), vswr &gt; 1 (a number, or '1.5:1').</summary>
@@ -165,7 +166,7 @@ internal sealed partial class SpecBuilder
         if (s is null) { ok = false; return 0; }
         if (!s.Has("prototype_margin")) return 0;
         double? m = Quantity(s, "prototype_margin", QuantityKind.Percent, false, "-0.5 %");
-        ok &= m is not null && Require(s, "prototype_margin", Math.Abs(m.Value) <= Core.Prototype.PrototypeMargin.Limit,
+        ok &= m is not null && Require(s, "prototype_margin", Math.Abs(m.Value) <= Core.Fabrication.PrototypeMargin.Limit,
             $"'prototype_margin' must lie within ±5 % (a first plate is usually cut about 0.5 % short: -0.5 %), got {Num(m.Value * 100)} %");
         return ok ? m!.Value : 0;
     }

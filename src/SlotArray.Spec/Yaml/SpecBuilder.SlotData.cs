@@ -1,5 +1,6 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Slots.Tables;
+using SlotArray.Core.Slots;
 using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Spec.Yaml;

@@ -1,5 +1,6 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 using SlotArray.Tests.Shared;
 using static SlotArray.Core.Tests.DesignTests.TestArrays;
 

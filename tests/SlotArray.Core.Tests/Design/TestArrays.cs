@@ -1,5 +1,8 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
 using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Tests.DesignTests;

@@ -86,8 +86,8 @@ public class FabricationPlanTests
     [Fact]
     public void Tolerances_come_from_the_spec_with_their_source_else_the_stated_default()
     {
-        var spec = new ToleranceRequest(new Design.Tolerance(Mm(0.02), ErrorDistribution.Uniform), new Design.Tolerance(Mm(0.015), ErrorDistribution.Normal),
-            Design.Tolerance.None, new Design.Tolerance(Mm(0.01), ErrorDistribution.Uniform), Design.Tolerance.None, Design.Tolerance.None, Length.Zero, Length.Zero, 10, 1);
+        var spec = new ToleranceRequest(new MachiningTolerance(Mm(0.02), ErrorDistribution.Uniform), new MachiningTolerance(Mm(0.015), ErrorDistribution.Normal),
+            MachiningTolerance.None, new MachiningTolerance(Mm(0.01), ErrorDistribution.Uniform), MachiningTolerance.None, MachiningTolerance.None, Length.Zero, Length.Zero, 10, 1);
         var t = FeatureTolerances.From(spec);
         Check.Absolute(0.02, t.Offset.Value * 1e3, 1e-12, "tolerance.offset, uniform ±");
         Assert.Equal("spec tolerance.offset (uniform ±)", t.Offset.Source);

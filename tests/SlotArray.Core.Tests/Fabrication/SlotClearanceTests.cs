@@ -2,6 +2,7 @@ using SlotArray.Core.Design;
 using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Stick;
 using SlotArray.Core.Tests.DesignTests;
 using static SlotArray.Core.Tests.DesignTests.TestArrays;
 

@@ -2,6 +2,7 @@ using System.Numerics;
 using SlotArray.Core.Design;
 using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 using SlotArray.Tests.Shared;
 using static SlotArray.Core.Tests.DesignTests.TestArrays;
 

@@ -1,6 +1,7 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Prototype;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 using SlotArray.Core.Tests.DesignTests;
 using Xunit;
 using Xunit.Abstractions;

@@ -1,6 +1,7 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Safety;
+using SlotArray.Core.Slots;
 using SlotArray.Core.Waveguides;
 using SlotArray.Tests.Shared;
 

@@ -66,7 +66,7 @@ public class BaylissTests
     public void Level_outside_the_fits_is_refused_or_warned()
     {
         Assert.ThrowsAny<ArgumentException>(() => Bayliss.Weights(32, -10, 4));
-        var r = TaperSynthesis.Synthesize(new(Design.TaperType.Bayliss, -50, 8, -20, 2, null), 64);
+        var r = TaperSynthesis.Synthesize(new(TaperType.Bayliss, -50, 8, -20, 2, null), 64);
         Assert.Contains(r.Warnings, w => w.Code == "bayliss-fit-range");
     }
 }

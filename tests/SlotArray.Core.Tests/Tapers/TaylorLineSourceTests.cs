@@ -75,7 +75,7 @@ public class TaylorLineSourceTests
     {
         var d = TaylorLineSource.Parameters(sll, nbar);
         Check.Absolute(reached, TaylorLineSource.ContinuousPeakSidelobeDb(d), 0.06, Ref + " (n̄ too small)");
-        var r = TaperSynthesis.Synthesize(new(Design.TaperType.Taylor, sll, nbar, -20, 2, null), 32);
+        var r = TaperSynthesis.Synthesize(new(TaperType.Taylor, sll, nbar, -20, 2, null), 32);
         Assert.Contains(r.Warnings, w => w.Code == "nbar-too-small");
     }
 
@@ -91,9 +91,9 @@ public class TaylorLineSourceTests
         // Taylor 1955: largest n̄ with a monotonic distribution 3, 5, 7, 9, 11, 14 (close to 4A²).
         Assert.True(TaylorLineSource.IsMonotonic(TaylorLineSource.Parameters(sll, largest)));
         Assert.False(TaylorLineSource.IsMonotonic(TaylorLineSource.Parameters(sll, largest + 1)));
-        var r = TaperSynthesis.Synthesize(new(Design.TaperType.Taylor, sll, largest + 1, -20, 2, null), 64);
+        var r = TaperSynthesis.Synthesize(new(TaperType.Taylor, sll, largest + 1, -20, 2, null), 64);
         Assert.Contains(r.Warnings, w => w.Code == "nbar-edge-rise");
-        Assert.DoesNotContain(TaperSynthesis.Synthesize(new(Design.TaperType.Taylor, sll, largest, -20, 2, null), 64).Warnings, w => w.Code == "nbar-edge-rise");
+        Assert.DoesNotContain(TaperSynthesis.Synthesize(new(TaperType.Taylor, sll, largest, -20, 2, null), 64).Warnings, w => w.Code == "nbar-edge-rise");
     }
 
     [Theory]

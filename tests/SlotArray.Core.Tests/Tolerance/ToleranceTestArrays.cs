@@ -1,6 +1,8 @@
 using System.Numerics;
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 using SlotArray.Core.Tolerance;
 using SlotArray.Core.Tests.DesignTests;
 using static SlotArray.Core.Tests.DesignTests.TestArrays;
@@ -10,8 +12,8 @@ namespace SlotArray.Core.Tests.ToleranceTests;
 /// <summary>Designs and tolerance requests shared by the tolerance tests (the Stevenson test double: fast and closed-form).</summary>
 internal static class ToleranceTestArrays
 {
-    public static Design.Tolerance Uniform(double mm) => new(Length.FromMillimeters(mm), ErrorDistribution.Uniform);
-    public static Design.Tolerance Normal(double mm) => new(Length.FromMillimeters(mm), ErrorDistribution.Normal);
+    public static MachiningTolerance Uniform(double mm) => new(Length.FromMillimeters(mm), ErrorDistribution.Uniform);
+    public static MachiningTolerance Normal(double mm) => new(Length.FromMillimeters(mm), ErrorDistribution.Normal);
 
     public static ToleranceRequest Request(double offset = 0, double length = 0, double position = 0, double width = 0, double guideWidth = 0,
         double wall = 0, int trials = 64, int seed = 7, double systematicLength = 0)

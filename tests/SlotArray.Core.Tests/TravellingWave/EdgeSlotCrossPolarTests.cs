@@ -3,6 +3,7 @@ using SlotArray.Core.Network;
 using SlotArray.Core.Patterns;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
+using SlotArray.Core.Tapers;
 using SlotArray.Tests.Shared;
 using static SlotArray.Core.Tests.DesignTests.TestArrays;
 

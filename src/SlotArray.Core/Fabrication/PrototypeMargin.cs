@@ -1,7 +1,7 @@
-using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
 
-namespace SlotArray.Core.Prototype;
+namespace SlotArray.Core.Fabrication;
 
 /// <summary>
 /// The first plate's slots cut short on purpose (<c>fabrication.prototype_margin</c>), so that after measurement they can

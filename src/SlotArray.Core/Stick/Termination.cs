@@ -1,7 +1,7 @@
 using System.Numerics;
 using SlotArray.Core.Quantities;
 
-namespace SlotArray.Core.Design;
+namespace SlotArray.Core.Stick;
 
 /// <summary>How a line of slots is terminated beyond its outermost slot.</summary>
 public enum TerminationKind

@@ -2,7 +2,7 @@ using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
 using SlotArray.Core.Waveguides;
 
-namespace SlotArray.Core.Design;
+namespace SlotArray.Core.Stick;
 
 /// <summary>
 /// One designed slot. Axis convention (architecture.md, "Axes"): z runs along the guide from the datum, the
