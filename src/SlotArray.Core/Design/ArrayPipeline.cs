@@ -275,7 +275,7 @@ public static class ArrayPipeline
         if (options.MatchPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.MatchPoints, "the match sweep needs at least 2 points");
         var match = ArrayNetwork.Sweep(design, analysis, mLo, mHi, options.MatchPoints);
         return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling, MatchSweep = match, Filter = filter, Flare = flare,
-            Pointing = request.Operating is { } range ? Marine.PointingBudget.Of(range, design, atDesign, points) : null };
+            Pointing = request.Operating is { } range ? Marine.PointingBudget.Of(range, design, atDesign, points, PhaseCondition(design)) : null };
     }
 
     /// <summary>
@@ -337,9 +337,12 @@ public static class ArrayPipeline
             },
             CoupledTravellingWave = comparison,
             MatchSweep = CoupledMatchSweep(request, options, design, analysis, sweep),
-            Pointing = request.Operating is { } range ? Marine.PointingBudget.Of(range, design, atDesign, points) : null,
+            Pointing = request.Operating is { } range ? Marine.PointingBudget.Of(range, design, atDesign, points, PhaseCondition(design)) : null,
         };
     }
+
+    /// <summary>The beam the phase condition gives a design's guide and spacing at a frequency (<see cref="TravellingWaveBeam"/>; broadside for a standing wave).</summary>
+    private static Func<Frequency, Angle?> PhaseCondition(ArrayDesign design) => f => TravellingWaveBeam.Direction(design.Guide, design.Spacing, f);
 
     /// <summary>The match sweep of a coupled design, through the coupled network, over <see cref="MatchSpan.Resolve"/>.</summary>
     private static FrequencySweep CoupledMatchSweep(ArrayRequest request, AnalysisOptions options, ArrayDesign design, IShuntSlotModel analysis, FrequencySweep sweep)

@@ -1,4 +1,3 @@
-using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Stick;
 

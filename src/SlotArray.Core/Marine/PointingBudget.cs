@@ -46,8 +46,11 @@ public sealed record PointingBudget(OperatingRange Range, ThermalExpansion? Expa
     /// <param name="design">The analysed design (guide, spacing, design frequency).</param>
     /// <param name="atDesign">Figures at the design frequency.</param>
     /// <param name="sweep">Figures across the band.</param>
-    public static PointingBudget Of(OperatingRange range, ArrayDesign design, FrequencyFigures atDesign, IReadOnlyList<FrequencyFigures> sweep)
+    /// <param name="phaseCondition">The phase condition's beam at a frequency (outside the band), or null where it has none.</param>
+    public static PointingBudget Of(OperatingRange range, ArrayDesign design, FrequencyFigures atDesign, IReadOnlyList<FrequencyFigures> sweep,
+        Func<Frequency, Angle?> phaseCondition)
     {
+        ArgumentNullException.ThrowIfNull(phaseCondition);
         ArgumentNullException.ThrowIfNull(range);
         ArgumentNullException.ThrowIfNull(design);
         ArgumentNullException.ThrowIfNull(atDesign);
@@ -61,11 +64,11 @@ public sealed record PointingBudget(OperatingRange Range, ThermalExpansion? Expa
             ? LinearSpline.InterpolateSorted([.. points.Select(p => p.Frequency.Hertz)], [.. points.Select(p => p.Metrics.BeamDirection.Degrees)])
             : null;
         double lo = points.Length > 0 ? points[0].Frequency.Hertz : f0.Hertz, hi = points.Length > 0 ? points[^1].Frequency.Hertz : f0.Hertz;
-        double formulaOffset = nominal.Degrees - (Design.TravellingWaveBeam.Direction(design.Guide, design.Spacing, f0)?.Degrees ?? nominal.Degrees);
+        double formulaOffset = nominal.Degrees - (phaseCondition(f0)?.Degrees ?? nominal.Degrees);
         (Angle Beam, bool FromSweep) BeamAt(double hz)
         {
             if (spline is not null && hz >= lo && hz <= hi) return (Angle.FromDegrees(spline.Interpolate(hz)), true);
-            var formula = Design.TravellingWaveBeam.Direction(design.Guide, design.Spacing, Frequency.FromHertz(hz));
+            var formula = phaseCondition(Frequency.FromHertz(hz));
             return (Angle.FromDegrees((formula?.Degrees ?? double.NaN) + formulaOffset), false);
         }
         double reference = ThermalExpansion.ReferenceTemperatureCelsius;
