@@ -71,7 +71,13 @@ public static class MatchSpan
         ArgumentNullException.ThrowIfNull(options);
         var (lo, hi) = Default(request, vswr15, vswr2, options.BandSearchFraction);
         if (options.MatchLow is null && options.MatchHigh is null)
-            (lo, hi) = ThroughDesignFrequency(lo, hi, request.DesignFrequency, options.MatchPoints);
+        {
+            // Slid through f0, unless the slide (up to half a step) would carry the span out of the single-mode band:
+            // then the default span as it is (a coarse sweep near the band's edge).
+            var slid = ThroughDesignFrequency(lo, hi, request.DesignFrequency, options.MatchPoints);
+            var (low, high) = request.Guide.SingleModeBand;
+            if (slid.Low > low && slid.High < high) (lo, hi) = slid;
+        }
         lo = options.MatchLow ?? lo;
         hi = options.MatchHigh ?? hi;
         if (!(hi > lo))
