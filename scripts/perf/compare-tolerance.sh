@@ -16,8 +16,8 @@ cold="${2:-}"
 work="$(mktemp -d)"
 trap 'rm -rf "$work"' EXIT
 export XDG_CACHE_HOME="$work/xdg"
-tool="$repo/src/SlotArray.Cli/bin/Release/net10.0/slotarray"
-if [[ ! -x "$tool" ]]; then
+tool="${TOOL:-$repo/src/SlotArray.Cli/bin/Release/net10.0/slotarray}"   # TOOL=...: another build, e.g. a ReadyToRun publish
+if [[ -z "${TOOL:-}" && ! -x "$tool" ]]; then
   dotnet build "$repo/src/SlotArray.Cli" -c Release -v q -nologo >/dev/null
 fi
 spec="$here/wr90-64-taylor30.yaml"

@@ -8,7 +8,7 @@ using SlotArray.Spec;
 namespace SlotArray.Cli;
 
 /// <summary>The command tree. Each command lives in its own file under Commands/ and only delegates.</summary>
-public static class CommandLine
+internal static class CommandLine
 {
     /// <summary>Shows the stack trace of an internal error.</summary>
     public static readonly Option<bool> Verbose = new("--verbose") { Description = "Show the stack trace of an internal error", Recursive = true };
@@ -128,12 +128,12 @@ public static class CommandLine
 }
 
 /// <summary>Bad input found by a command (not by the parser): printed as one line, exit code 2.</summary>
-public class UserInputException(string message) : Exception(message);
+internal class UserInputException(string message) : Exception(message);
 
 /// <summary>A spec with positioned errors: each error is printed as <c>file:line:column: message</c>, then the message; exit code 2.</summary>
 /// <param name="message">The closing line, e.g. "spec.yaml: 2 error(s); nothing designed".</param>
 /// <param name="errors">The positioned errors.</param>
-public sealed class SpecErrorsException(string message, IReadOnlyList<SpecError> errors) : UserInputException(message)
+internal sealed class SpecErrorsException(string message, IReadOnlyList<SpecError> errors) : UserInputException(message)
 {
     /// <summary>The positioned errors, ordered by line and column.</summary>
     public IReadOnlyList<SpecError> Errors { get; } = errors;

@@ -1,7 +1,7 @@
 namespace SlotArray.Cli;
 
 /// <summary>Process exit codes, fixed by the architecture.</summary>
-public static class ExitCodes
+internal static class ExitCodes
 {
     /// <summary>Success.</summary>
     public const int Ok = 0;

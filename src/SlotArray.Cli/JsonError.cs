@@ -9,7 +9,7 @@ namespace SlotArray.Cli;
 /// <c>{"error": {"exit_code": 2, "kind": "bad-input", "message": "...", "errors": [{"file", "line", "column", "message"}]}}</c>;
 /// <c>errors</c> lists a spec's positioned errors and is empty otherwise.
 /// </summary>
-public static class JsonError
+internal static class JsonError
 {
     /// <summary>Kind of exit code 1.</summary>
     public const string Infeasible = "infeasible";

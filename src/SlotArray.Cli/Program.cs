@@ -1,7 +1,7 @@
 namespace SlotArray.Cli;
 
 /// <summary>Process entry point: builds the command tree and runs it.</summary>
-public static class Program
+internal static class Program
 {
     /// <summary>Runs the command line; the return value is the process exit code (see <see cref="ExitCodes"/>).</summary>
     /// <remarks>

@@ -16,7 +16,7 @@ namespace SlotArray.Cli;
 /// the same numbers as a cold one: results are identical.
 /// </summary>
 /// <param name="Directory">Folder of the cache files.</param>
-public sealed record SlotCache(string Directory)
+internal sealed record SlotCache(string Directory)
 {
     /// <summary>Version of the file layout (the table carries its own format version in its key).</summary>
     public const int FileVersion = 1;

@@ -5,7 +5,7 @@ namespace SlotArray.Core;
 /// library wraps each failure in an <see cref="AggregateException"/>, which would hide the user-actionable
 /// <see cref="InfeasibleDesignException"/> or <see cref="ConvergenceException"/> inside it.
 /// </summary>
-public static class ParallelFailures
+internal static class ParallelFailures
 {
     /// <summary>
     /// The cause of <paramref name="failure"/>: among its (flattened) inner exceptions the first infeasible design, else the

@@ -7,7 +7,7 @@ using SlotArray.Core.Stick;
 namespace SlotArray.Spec;
 
 /// <summary>The kinds of quantity a spec value or a command-line option can hold.</summary>
-public enum QuantityKind
+internal enum QuantityKind
 {
     /// <summary>A length: m, cm, mm, um (µm), in, mil.</summary>
     Length,
@@ -35,7 +35,7 @@ public enum QuantityKind
 /// the unit is required; a unit of another kind, a non-finite number (<c>1e400</c>) or an unknown unit is an error
 /// whose message says what to write instead. Shared by the YAML spec and the command-line options.
 /// </summary>
-public static partial class QuantityParser
+internal static partial class QuantityParser
 {
     private sealed record Unit(string Symbol, QuantityKind Kind, double Factor);
 

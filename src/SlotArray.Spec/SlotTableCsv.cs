@@ -12,7 +12,7 @@ namespace SlotArray.Spec;
 /// writes rows in the same format. Units come from the column names (<c>offset_mm</c>, <c>frequency_ghz</c>), parsed by
 /// <see cref="QuantityParser"/>. Errors are <see cref="SlotTableException"/>s with the line and column.
 /// </summary>
-public static class SlotTableCsv
+internal static class SlotTableCsv
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

@@ -16,7 +16,7 @@ namespace SlotArray.Spec;
 /// feed.load 5 % (travelling-wave); taper nbar 4, cosine-pedestal exponent 2; coupling none; tolerance entries
 /// absent = no error, systematic 0, trials 1000, seed 1. No default for the wall thickness: it changes the design.
 /// </remarks>
-public static class SpecLoader
+internal static class SpecLoader
 {
     /// <summary>Reads and validates a spec file; an unreadable file is an error at 1:1.</summary>
     public static SpecResult LoadFile(string path)

@@ -6,7 +6,7 @@ using SlotArray.Core.Tapers;
 namespace SlotArray.Spec;
 
 /// <summary>The words a spec uses for each choice (e.g. <c>standing-wave</c>), both ways; reports print the same words.</summary>
-public static class SpecNames
+internal static class SpecNames
 {
     /// <summary>Slot types: longitudinal | edge | inclined-series.</summary>
     public static IReadOnlyList<KeyValuePair<string, SlotType>> SlotTypes { get; } =

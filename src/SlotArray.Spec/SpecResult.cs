@@ -28,7 +28,7 @@ public sealed record SpecWarning(string File, long Line, long Column, string Mes
 /// <param name="Request">The validated request, or null when <paramref name="Errors"/> is not empty.</param>
 /// <param name="Errors">All errors, ordered by line and column.</param>
 /// <param name="Warnings">All warnings, ordered by line and column.</param>
-public sealed record SpecResult(ArrayRequest? Request, IReadOnlyList<SpecError> Errors, IReadOnlyList<SpecWarning> Warnings)
+internal sealed record SpecResult(ArrayRequest? Request, IReadOnlyList<SpecError> Errors, IReadOnlyList<SpecWarning> Warnings)
 {
     /// <summary>Whether the spec is valid (a request was built).</summary>
     public bool IsValid => Request is not null && Errors.Count == 0;

@@ -45,12 +45,12 @@ public class ElliottBenchmarks
             new FeedRequest(FeedType.StandingWave, GuideDistance.InGuideWavelengths(0.5), FeedPosition.End, 0, GuideDistance.InGuideWavelengths(0.25)),
             new TaperRequest(TaperType.Taylor, -30, 4, -20, 2, null), CouplingMode.Mutual, null, Requirements.None, null);
         _weights = TaperSynthesis.Synthesize(_request.Taper, N).Weights.ToArray();
-        _design = ElliottDesigner.Design(_request, _slot, _weights).Design;
+        _design = ElliottDesigner.Design(StickRequest.Of(_request, _slot, _weights)).Design;
     }
 
     /// <summary>The coupled design (isolated-slot start, iteration to 1e-4 mm, final check with direct solves).</summary>
     [Benchmark]
-    public int CoupledDesign() => ElliottDesigner.Design(_request, _slot, _weights).Iterations.Count;
+    public int CoupledDesign() => ElliottDesigner.Design(StickRequest.Of(_request, _slot, _weights)).Iterations.Count;
 
     /// <summary>The coupled analysis at the design frequency (mutual-impedance fill, one linear system, N direct slot solves).</summary>
     [Benchmark]

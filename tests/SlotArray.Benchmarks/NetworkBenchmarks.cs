@@ -40,7 +40,7 @@ public class NetworkBenchmarks
             new SlotRequest(SlotType.Longitudinal, Slots, slot.Width, null, SlotModelKind.Stevenson),
             new FeedRequest(FeedType.StandingWave, GuideDistance.InGuideWavelengths(0.5), FeedPosition.End, 0, GuideDistance.InGuideWavelengths(0.25)),
             TaperRequest.Uniform, CouplingMode.None, null, Requirements.None, null);
-        design = StandingWaveDesigner.Design(request, slot, Enumerable.Repeat(1.0, Slots).ToArray());
+        design = StandingWaveDesigner.Design(StickRequest.Of(request, slot, Enumerable.Repeat(1.0, Slots).ToArray())).Design;
     }
 
     /// <summary>The sweep plus both VSWR bands.</summary>

@@ -32,13 +32,13 @@ public class PatternBenchmarks
 
     /// <summary>Uniform spacing: vectorised Horner recurrence.</summary>
     [Benchmark]
-    public Pattern UniformSpacing_1000x8192() => ArrayFactor.Compute(uniform, excitations, K, grid, ElementPatterns.HalfWaveSlotHPlane);
+    public object UniformSpacing_1000x8192() => ArrayFactor.Compute(uniform, excitations, K, grid, ElementPatterns.HalfWaveSlotHPlane);
 
     /// <summary>Arbitrary positions on an asymmetric grid (−68.8° … 85.9°): no ±u sharing.</summary>
     [Benchmark]
-    public Pattern ArbitraryPositions_AsymmetricGrid_1000x8192() => ArrayFactor.Compute(jittered, excitations, K, asymmetric, ElementPatterns.HalfWaveSlotHPlane);
+    public object ArbitraryPositions_AsymmetricGrid_1000x8192() => ArrayFactor.Compute(jittered, excitations, K, asymmetric, ElementPatterns.HalfWaveSlotHPlane);
 
     /// <summary>Arbitrary positions: vectorised direct sum (the −90° … 90° grid is symmetric, so ±u share the sines).</summary>
     [Benchmark]
-    public Pattern ArbitraryPositions_1000x8192() => ArrayFactor.Compute(jittered, excitations, K, grid, ElementPatterns.HalfWaveSlotHPlane);
+    public object ArbitraryPositions_1000x8192() => ArrayFactor.Compute(jittered, excitations, K, grid, ElementPatterns.HalfWaveSlotHPlane);
 }

@@ -42,7 +42,7 @@ public class PrototypeFitBenchmarks
             new FeedRequest(FeedType.StandingWave, GuideDistance.InGuideWavelengths(0.5), FeedPosition.End, 0, GuideDistance.InGuideWavelengths(0.25)),
             new TaperRequest(TaperType.Taylor, -30, 4, -20, 2, null), CouplingMode.None, null, Requirements.None, null);
         var weights = TaperSynthesis.Synthesize(request.Taper, N).Weights.ToArray();
-        var design = StandingWaveDesigner.Design(request, slot, weights);
+        var design = StandingWaveDesigner.Design(StickRequest.Of(request, slot, weights)).Design;
         var analysis = ArrayPipeline.AnalysisModel(request, design, slot, AnalysisOptions.Default);
         var dl = new double[N];
         dl[N / 4] = 0.1e-3;

@@ -47,7 +47,7 @@ public class ToleranceBenchmarks
             new FeedRequest(FeedType.StandingWave, GuideDistance.InGuideWavelengths(0.5), FeedPosition.End, 0, GuideDistance.InGuideWavelengths(0.25)),
             new TaperRequest(TaperType.Taylor, -30, 5, -20, 2, null), CouplingMode.None, tol, Requirements.None, null);
         var slot = new MomentMethodSlotModel(guide, width);
-        var design = StandingWaveDesigner.Design(request, slot, TaperSynthesis.Synthesize(request.Taper, Slots).Weights);
+        var design = StandingWaveDesigner.Design(StickRequest.Of(request, slot, TaperSynthesis.Synthesize(request.Taper, Slots).Weights)).Design;
         model = ArrayTrialModel.Build(design, slot, ToleranceAnalysis.FactoryFor(request), tol, Options);
     }
 

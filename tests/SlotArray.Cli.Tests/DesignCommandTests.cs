@@ -33,6 +33,13 @@ public sealed class DemoRuns
 /// </summary>
 public class DesignCommandTests(DemoRuns demo) : IClassFixture<DemoRuns>
 {
+    /// <summary>
+    /// The key paths of the demo's design.json and the kinds of their values (not the values) are frozen in
+    /// Approved/design-json-shape.approved.txt: a renamed, added or removed key shows up as a visible diff.
+    /// </summary>
+    [Fact]
+    public void Demo_design_json_has_the_approved_shape() => Approval.Verify("design-json-shape.approved.txt", JsonShape.Of(demo.Json));
+
     [Fact]
     public void Demo_designs_with_exit_0_and_writes_every_file()
     {

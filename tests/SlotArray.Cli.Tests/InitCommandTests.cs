@@ -31,7 +31,7 @@ public class InitCommandTests
         Assert.Equal(ExitCodes.Ok, code);
         Assert.StartsWith("# yaml-language-server: $schema=" + SpecJsonSchema.FileName + "\n", output);
         string[] lines = output.Split('\n');
-        foreach (var section in SpecKeys.All.Where(s => s != SpecKeys.Sigma))   // sigma is written inline: {sigma: 0.05 mm}
+        foreach (var section in SpecKeys.All.Where(s => s != SpecKeys.Sigma && s != SpecKeys.SigmaAngle))   // sigma is written inline: {sigma: 0.05 mm}
             foreach (var key in section.Keys)
                 Assert.Contains(lines, l => l.TrimStart(' ', '#').StartsWith(key.Name + ":", StringComparison.Ordinal));
     }

@@ -36,7 +36,7 @@ public class DesignJsonTests
         Assert.Equal(["name", "frequency_hz", "normalisation", "band", "guide", "slots", "termination", "fabrication", "pattern", "match", "sweep", "inputs", "requirements", "warnings", "cautions", "tolerance"], Keys(root));
         Assert.Equal(["designation", "a_m", "b_m", "wall_m", "metal", "guide_wavelength_m", "wave_impedance_ohm"], Keys(root.GetProperty("guide")));
         Assert.Equal(["index", "position_m", "offset_m", "length_m", "overall_length_m", "width_m", "end", "conductance", "target_amplitude", "achieved_amplitude", "achieved_phase_deg"], Keys(root.GetProperty("slots")[0]));
-        Assert.Equal(["beam_deg", "hpbw_deg", "peak_sidelobe_db", "first_sidelobe_db", "directivity_dbi", "gain_dbi", "design_sidelobe_db", "cut"], Keys(root.GetProperty("pattern")));
+        Assert.Equal(["beam_deg", "hpbw_deg", "peak_sidelobe_db", "first_sidelobe_db", "directivity_dbi", "gain_dbi", "design_sidelobe_db", "cut", "transverse_face_width_m", "transverse_hpbw_lower_bound_deg"], Keys(root.GetProperty("pattern")));
         Assert.Contains("G0", root.GetProperty("normalisation").GetString());
     }
 

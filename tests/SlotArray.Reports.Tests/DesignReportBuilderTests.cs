@@ -38,7 +38,9 @@ public class DesignReportBuilderTests
         var slot = ArrayPipeline.SlotModelFor(request);
         var design = ArrayPipeline.Synthesise(request, slot, taper);
         var (sweep, atDesign, points) = ArrayPipeline.Analyse(request, design, slot, options);
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2), design.Warnings);
+        // The band sweep doubles as the match sweep here (the pipeline's own spans the VSWR bands).
+        return new ArrayResult(request, taper, slot, design, new StandingWaveProcedure(), sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2),
+            sweep, AntennaAddOns.None, design.Warnings);
     }
 
     [Fact]

@@ -58,7 +58,7 @@ public class MarineReportTests
         using var ms = new MemoryStream(System.Text.Encoding.UTF8.GetBytes(DesignJson.ToText(report)));
         var back = DesignJson.Read(ms);
         Assert.Equal(DesignJson.ToText(report with { Fabrication = null }), DesignJson.ToText(back));
-        Assert.NotNull(result.Pointing);
+        Assert.NotNull(result.AddOns.Pointing);
     }
 
     [Fact]

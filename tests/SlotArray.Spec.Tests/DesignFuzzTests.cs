@@ -29,6 +29,26 @@ public class DesignFuzzTests
         ? new(SweepPoints: 2, BandSearchFraction: 0) { MatchPoints = 2 }
         : new(SweepPoints: 2, BandSearchFraction: 0, AdmittanceStep: 0) { MatchPoints = 2 };
 
+    /// <summary>
+    /// Found by this fuzz: a coarse match sweep of two points slid to pass through f0 left the guide's single-mode band
+    /// (9.41 to 15.95 GHz in WR-90, above the TE20 cutoff 13.11 GHz) and ended in an internal error. The slide now keeps the
+    /// span inside the band or, when it cannot, leaves it unslid.
+    /// </summary>
+    [Fact]
+    public void A_two_point_match_sweep_over_a_wide_band_stays_inside_the_single_mode_band()
+    {
+        const string yaml = "spec: 1\nname: fuzz-broad\nfrequency: 9.41 GHz\nband: [7.528 GHz, 11.292 GHz]\n"
+            + "guide:\n  size: WR-90\n  wall: 1.27 mm\n  metal: aluminium\n"
+            + "slots:\n  type: longitudinal\n  count: 8\n  width: 1.6 mm\n  cutter: 1.6 mm\n  model: moment-method\n"
+            + "feed:\n  type: standing-wave\n  spacing: 0.7 guide-wavelength\n  position: end\n  short: 0.25 guide-wavelength\n"
+            + "taper:\n  type: taylor\n  sidelobes: -26 dB\n  nbar: 3\ncoupling: none\n";
+        var check = SpecLoader.Parse(yaml, "fuzz.yaml");
+        Assert.True(check.IsValid, string.Join("\n", check.Errors));
+        var result = ArrayPipeline.Run(check.Request!, Coarse(check.Request!));
+        var (low, high) = check.Request!.Guide.SingleModeBand;
+        Assert.All(result.MatchSweep!.Points, p => Assert.InRange(p.Frequency.Hertz, low.Hertz, high.Hertz));
+    }
+
     [Fact]
     public void Every_spec_the_check_accepts_designs_or_says_why()
     {

@@ -55,6 +55,8 @@ internal sealed class FuzzSpec
         ["taper.weights"] = ["{weights}", "{weights}", "{weights+1}", "[0, 0]"],
         ["tolerance.offset"] = ["0.02 mm", "{sigma: 0.02 mm}", "20 mm"],
         ["tolerance.length"] = ["0.03 mm", "0 mm"],
+        ["tolerance.tilt"] = ["0.1 deg", "{sigma: 0.05 deg}", "9 deg", "0.1 mm"],
+        ["tolerance.depth"] = ["0.02 mm", "{sigma: 0.01 mm}", "20 mm"],
         ["tolerance.position"] = ["0.03 mm", "{sigma: 0.01 mm}"],
         ["tolerance.width"] = ["0.02 mm"],
         ["tolerance.guide_width"] = ["0.05 mm"],

@@ -17,7 +17,7 @@ namespace SlotArray.Cli.Commands;
 /// (finished runs are kept in DIR/runs: a rerun resumes), de-embeds to the slot plane and writes DIR/slots.csv in the
 /// slot-table format of <c>slots.data</c>.
 /// </summary>
-public static class CharacteriseCommand
+internal static class CharacteriseCommand
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

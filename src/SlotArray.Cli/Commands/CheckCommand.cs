@@ -13,7 +13,7 @@ namespace SlotArray.Cli.Commands;
 /// single-mode band, λg at the design frequency, slots, feed, taper). Exit 0, or 2 with the positioned errors on stderr;
 /// warnings always go to stderr.
 /// </summary>
-public static class CheckCommand
+internal static class CheckCommand
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

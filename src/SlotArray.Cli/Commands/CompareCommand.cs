@@ -20,7 +20,7 @@ namespace SlotArray.Cli.Commands;
 /// the overlays, the trim list and the next plate's outputs. Malformed files: <c>file:line: message</c>, exit 2; a
 /// measurement of another design: the reason, exit 2.
 /// </summary>
-public static class CompareCommand
+internal static class CompareCommand
 {
     /// <summary>Builds the command.</summary>
     public static Command Build(TextWriter output, TextWriter error)
@@ -37,6 +37,28 @@ public static class CompareCommand
         cmd.SetAction(pr => Run(pr.GetValue(dir)!, pr.GetValue(files)!, pr.GetValue(outDir), pr.GetValue(freq), pr.GetValue(plane), pr.GetValue(pol),
             DesignCommand.CacheOf(pr, cacheDir, noCache), output, error));
         return cmd;
+    }
+
+    /// <summary>
+    /// The cut plate's drawing number, revision and sheet from its design.json (fabrication section); revision A and the
+    /// array's name when the folder has none (an older design folder).
+    /// </summary>
+    private static DocumentInfo CutDocument(string dir)
+    {
+        string path = Path.Combine(dir, "design.json");
+        if (!File.Exists(path)) return DocumentInfo.Unnamed;
+        try
+        {
+            using var doc = System.Text.Json.JsonDocument.Parse(File.ReadAllText(path));
+            if (!doc.RootElement.TryGetProperty("fabrication", out var fab)) return DocumentInfo.Unnamed;
+            string? Str(string key) => fab.TryGetProperty(key, out var v) && v.ValueKind == System.Text.Json.JsonValueKind.String ? v.GetString() : null;
+            string revision = Str("revision") is { Length: 1 or 2 } r && r.All(char.IsAsciiLetterUpper) && r != "ZZ" ? r : "A";
+            return DocumentInfo.Unnamed with { DrawingNumber = Str("drawing_number"), Revision = revision };
+        }
+        catch (System.Text.Json.JsonException)
+        {
+            throw new UserInputException($"{path}: not readable JSON: give the output folder of 'slotarray design' unchanged (or design again)");
+        }
     }
 
     private static int Run(string dir, string[] files, string? outDir, string? cutFrequency, string? cutPlane, string? cutPolarisation,
@@ -125,18 +147,28 @@ public static class CompareCommand
             var overlay = report.Cuts[i];
             AtomicFile.Write(Path.Combine(folder, string.Format(CultureInfo.InvariantCulture, "cut-{0}.png", i + 1)), s => PlotExport.Write(ComparePlots.Cut(overlay), s, "png"));
         }
-        if (next is not null)
-        {
-            string original = File.ReadAllText(spec);
-            var nextReport = DesignReportBuilder.Build(next) with
-            {
-                SpecText = "# Next plate designed by 'slotarray compare' on the slot model corrected by the prototype's fit.\n"
-                    + "# This spec is the prototype's: designing it again does not reproduce this plate (see comparison.md).\n" + original,
-            };
-            OutputFolder.WriteAll(nextReport, Path.Combine(folder, "next-plate"));
-        }
+        if (next is not null) WriteNextPlate(spec, dir, folder, next, result, request, error);
         output.Write(text);
         error.WriteLine($"wrote {folder}/: comparison.md, trim.csv{(data.Network is null ? "" : ", return-loss.png, vswr.png")}{string.Concat(report.Cuts.Select((_, i) => $", cut-{i + 1}.png"))}{(next is null ? "" : ", next-plate/")}");
         return ExitCodes.Ok;
+    }
+
+    /// <summary>The next plate: the next revision of the cut plate's drawing, its letter advanced, the changed rows flagged.</summary>
+    private static void WriteNextPlate(string spec, string dir, string folder, ArrayResult next, ArrayResult result, ArrayRequest request, TextWriter error)
+    {
+        string original = File.ReadAllText(spec);
+        string nextSpec = "# Next plate designed by 'slotarray compare' on the slot model corrected by the prototype's fit.\n"
+            + "# This spec is the prototype's: designing it again does not reproduce this plate (see comparison.md).\n" + original;
+        // The next plate is the next revision of the cut plate's drawing: its letter advanced, the rows that changed flagged.
+        var cutDocument = CutDocument(dir);
+        var document = cutDocument with
+        {
+            Revision = NextPlate.NextRevision(cutDocument.Revision),
+            Date = null,
+            SpecSha256 = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(System.Text.Encoding.UTF8.GetBytes(nextSpec))),
+        };
+        var nextReport = DesignReportBuilder.Build(next, document, NextPlate.Plan(next, result)) with { SpecText = nextSpec };
+        error.WriteLine($"next plate: revision {document.Revision} of drawing {document.DrawingNumber ?? request.Name} ({nextReport.Fabrication?.Changed.Count ?? 0} features changed)");
+        OutputFolder.WriteAll(nextReport, Path.Combine(folder, "next-plate"));
     }
 }

@@ -17,7 +17,7 @@ namespace SlotArray.Cli.Commands;
 /// written and exits 4. Progress, warnings and errors go to stderr; with
 /// <c>--json</c> stdout carries the content of design.json and nothing else.
 /// </summary>
-public static class DesignCommand
+internal static class DesignCommand
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
@@ -93,15 +93,18 @@ public static class DesignCommand
         var request = Load(path, error);
         string folder = OutputFolderCheck.Prepare(outDir ?? DefaultFolder(request.Name), replacesWhole: true);
         var clock = Stopwatch.StartNew();
-        var result = Analyse(request, cache, error, progress);
+        var result = Analyse(request, cache, error, progress, out var source);
         var report = DesignReportBuilder.Build(result, document) with { SpecText = File.ReadAllText(path) };
         if (request.Tolerance is { } tol)
         {
-            // The short tolerance summary of issue 7 (the full output is the tolerance command's).
+            // The short tolerance summary of issue 7 (the full output is the tolerance command's), with the run's slot
+            // source: the surrogates' perturbed-guide solves come from (and go to) the same cache as the design's.
             error.WriteLine(string.Format(Inv, "tolerance: {0} Monte Carlo trials, seed {1} ...", tol.Trials, tol.Seed));
             var options = Core.Tolerance.ToleranceOptions.Default with { Cancellation = CommandLine.Cancellation };
-            var mc = ProgressDisplay.Run(progress, sink => Core.Tolerance.ToleranceAnalysis.Run(result, options: options,
-                progress: sink is null ? null : done => sink.Report(new Core.WorkProgress("Monte Carlo trials", done, tol.Trials))));
+            var mc = ProgressDisplay.Run(progress, sink => Core.Tolerance.ToleranceAnalysis.Run(result.Request, result.Design, result.SlotModel,
+                options: options, progress: sink is null ? null : done => sink.Report(new Core.WorkProgress("Monte Carlo trials", done, tol.Trials)),
+                source: source));
+            cache?.Save(request, source.Cache, error);
             report = report with { Tolerance = Reports.ToleranceSummary.Lines(mc) };
         }
         CommandLine.Cancellation.ThrowIfCancellationRequested();
@@ -164,12 +167,26 @@ public static class DesignCommand
     }
 
     /// <summary>
+    /// Composition-root seam for the command-line tests: Elliott's iteration limits for the runs started in the current
+    /// asynchronous flow (null: the defaults). Lets a test drive a real spec into a non-converging iteration and check the
+    /// command's exit code and message, without touching other runs in the same process.
+    /// </summary>
+    internal static readonly AsyncLocal<ElliottOptions?> ElliottLimits = new();
+
+    /// <summary>
     /// Runs the pipeline with the slot cache (when given), printing what it does to <paramref name="error"/>, with a
     /// progress bar when <paramref name="progress"/>; Ctrl-C stops it (<see cref="CommandLine.Cancellation"/>).
     /// </summary>
     internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error, bool progress, AnalysisOptions? options = null)
+        => Analyse(request, cache, error, progress, out _, options);
+
+    /// <summary>As <see cref="Analyse(ArrayRequest, SlotCache?, TextWriter, bool, AnalysisOptions?)"/>, also returning the run's slot source (its cache holds the run's solves).</summary>
+    internal static ArrayResult Analyse(ArrayRequest request, SlotCache? cache, TextWriter error, bool progress, out SlotSource slotSource,
+        AnalysisOptions? options = null)
     {
+        if (ElliottLimits.Value is { } limits) options = (options ?? AnalysisOptions.Default) with { Elliott = limits };
         var source = SourceFor(request, cache, error, out int loaded);
+        slotSource = source;
         error.WriteLine(string.Format(Inv, "designing '{0}': {1} slots at {2:0.####} GHz, analysing {3:0.####} to {4:0.####} GHz{5} ...",
             request.Name, request.Slots.Count, request.DesignFrequency.Gigahertz, request.BandLow.Gigahertz, request.BandHigh.Gigahertz,
             cache is null ? "" : string.Format(Inv, " ({0} slot table(s) from the cache)", loaded)));

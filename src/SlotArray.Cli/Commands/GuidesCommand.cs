@@ -6,7 +6,7 @@ using SlotArray.Core.Waveguides;
 namespace SlotArray.Cli.Commands;
 
 /// <summary><c>slotarray guides [--json]</c>: the catalogue of standard waveguides with their TE10 band.</summary>
-public static class GuidesCommand
+internal static class GuidesCommand
 {
     /// <summary>Builds the command.</summary>
     public static Command Build(TextWriter output, TextWriter error)

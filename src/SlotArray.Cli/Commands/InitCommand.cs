@@ -10,7 +10,7 @@ namespace SlotArray.Cli.Commands;
 /// stdout without FILE. An existing FILE is left untouched (exit 2) unless <c>--force</c>. Beside FILE it also writes
 /// the editor schema its modeline names (<c>slotarray-spec.schema.json</c>) when that file is absent or is ours.
 /// </summary>
-public static class InitCommand
+internal static class InitCommand
 {
     /// <summary>Builds the command.</summary>
     public static Command Build(TextWriter output, TextWriter error)

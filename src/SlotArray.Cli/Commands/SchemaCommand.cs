@@ -9,7 +9,7 @@ namespace SlotArray.Cli.Commands;
 /// <c>design</c> is <c>design.json</c>. Point an editor at
 /// it with the modeline <c># yaml-language-server: $schema=slotarray-spec.schema.json</c> for completion and validation.
 /// </summary>
-public static class SchemaCommand
+internal static class SchemaCommand
 {
     /// <summary>Builds the command.</summary>
     public static Command Build(TextWriter output, TextWriter error)

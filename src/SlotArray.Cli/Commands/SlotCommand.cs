@@ -19,7 +19,7 @@ namespace SlotArray.Cli.Commands;
 /// <c>--tilt</c> (edge slot, <see cref="SlotEdgeReport"/>) or <c>--plane</c> (slot in a ground plane, <see cref="SlotPlaneReport"/>).
 /// Quantities take units, with or without a space: <c>9.375GHz</c>, <c>9.375 GHz</c>, <c>2mm</c>, <c>0.05 in</c>.
 /// </remarks>
-public static class SlotCommand
+internal static class SlotCommand
 {
     private static readonly CultureInfo Ci = CultureInfo.InvariantCulture;
 

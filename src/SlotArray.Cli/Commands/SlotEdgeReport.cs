@@ -12,7 +12,7 @@ namespace SlotArray.Cli.Commands;
 /// from the closed form, resonant developed length and cut depth of the first-order model, y against length.
 /// Takes already-parsed SI values; the command wiring lives with the <c>slot</c> command.
 /// </summary>
-public static class SlotEdgeReport
+internal static class SlotEdgeReport
 {
     /// <summary>Slot width used when none is given: 1.5875 mm (1/16 in, the classic X-band slot width; common practice).</summary>
     public static Length DefaultWidth => Length.FromInches(1.0 / 16);

@@ -13,7 +13,7 @@ namespace SlotArray.Cli.Commands;
 /// ground plane — complementary dipole, slot impedance two- and one-sided (Babinet/Booker), feed offset for the
 /// target resistance and the VSWR ≤ 2 bandwidth. Takes already-parsed SI values.
 /// </summary>
-public static class SlotPlaneReport
+internal static class SlotPlaneReport
 {
     /// <summary>Target input resistance when none is given, 50 Ω.</summary>
     public const double DefaultTargetResistance = 50.0;

@@ -18,7 +18,7 @@ namespace SlotArray.Cli.Commands;
 /// sweep as a table on stdout (frequency, |S11|, return loss, VSWR), or with <c>--json</c> as one JSON document.
 /// Exit codes as for <c>design</c>; progress on stderr.
 /// </summary>
-public static class SweepCommand
+internal static class SweepCommand
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

@@ -16,7 +16,7 @@ namespace SlotArray.Cli.Commands;
 /// design's own coupled network (<see cref="SyntheticMeasurements"/>) and marked SYNTHETIC in their headers: to try
 /// <c>compare</c> and to test it, never a stand-in for a bench.
 /// </summary>
-public static class SynthesiseCommand
+internal static class SynthesiseCommand
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

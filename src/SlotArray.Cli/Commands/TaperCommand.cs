@@ -15,7 +15,7 @@ namespace SlotArray.Cli.Commands;
 /// [--weights list] [--json] [--plot FILE]</c>: weights of an aperture taper and the metrics of its pattern
 /// (isotropic elements, broadside, spacing in free-space wavelengths).
 /// </summary>
-public static class TaperCommand
+internal static class TaperCommand
 {
     /// <summary>Type names accepted by <c>--type</c>, as in the spec's <c>taper: type:</c>.</summary>
     public static readonly IReadOnlyDictionary<string, TaperType> Types = new Dictionary<string, TaperType>

@@ -15,7 +15,7 @@ namespace SlotArray.Cli.Commands;
 /// (each atomically) into DIR. Prints the percentiles, the probability of meeting the target and the most sensitive
 /// dimensions; with <c>--json</c> the JSON document instead. A progress bar shows on stderr when it is a terminal (not with --json or --quiet); Ctrl-C ends with exit 130 and writes nothing.
 /// </summary>
-public static class ToleranceCommand
+internal static class ToleranceCommand
 {
     /// <summary>The files the command writes.</summary>
     public static IReadOnlyList<string> Files => OutputFolderCheck.ToleranceFiles;

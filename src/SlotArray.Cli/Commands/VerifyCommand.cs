@@ -12,7 +12,7 @@ namespace SlotArray.Cli.Commands;
 /// across the band and the principal-plane pattern beside the tool's own prediction into DESIGN_DIR/verify/. The run
 /// is cached in DESIGN_DIR/verify/runs: killed, a rerun starts it again; finished, a rerun only re-reports.
 /// </summary>
-public static class VerifyCommand
+internal static class VerifyCommand
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

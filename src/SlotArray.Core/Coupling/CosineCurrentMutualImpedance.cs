@@ -20,7 +20,7 @@ namespace SlotArray.Core.Coupling;
 /// (√(d² + gap²), gap = |s| − h1 − h2 for collinear ones) should exceed about a tenth of the shorter half-length;
 /// closer pairs are rejected. Slots of one guide at λg/2 spacing are far inside this limit.</para>
 /// </remarks>
-public static class CosineCurrentMutualImpedance
+internal static class CosineCurrentMutualImpedance
 {
     private const int Order = 16;
     private static readonly GaussLegendreRule Rule = new(0, 1, Order);

@@ -6,7 +6,7 @@ namespace SlotArray.Core.Coupling;
 /// An immutable square complex matrix indexed by slot (0-based): mutual impedances (Ω) or mutual admittances (S)
 /// between slots, as the producing method states. Symmetric when it comes from a reciprocal coupling model.
 /// </summary>
-public sealed class CouplingMatrix
+internal sealed class CouplingMatrix
 {
     private readonly Complex[] _values;
 

@@ -30,7 +30,7 @@ namespace SlotArray.Core.Coupling;
 /// The impedance is reciprocal, Z21 = Z12, also for h1 ≠ h2. Referred to the centre (terminal) currents instead,
 /// Z21 becomes Z21/(sin kh1 sin kh2).</para>
 /// </remarks>
-public static class DipoleMutualImpedance
+internal static class DipoleMutualImpedance
 {
     /// <summary>Smallest lateral distance used, in radians of kd (a numerical floor for collinear dipoles).</summary>
     private const double MinimumElectricalDistance = 1e-12;

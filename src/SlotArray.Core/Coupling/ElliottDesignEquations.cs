@@ -19,7 +19,7 @@ namespace SlotArray.Core.Coupling;
 /// <para>Stevenson's constants η_S = 120π Ω and R_d = 73 Ω are used in Γ0 (as in the 2.09 of Stevenson's formula),
 /// while mutual impedances come from <see cref="DipoleMutualImpedance"/> with η0.</para>
 /// </remarks>
-public static class ElliottDesignEquations
+internal static class ElliottDesignEquations
 {
     /// <summary>
     /// Elliott's coupling function for the assumed aperture distribution cos(πz/(2l)) (zero at the slot ends):

@@ -26,7 +26,7 @@ namespace SlotArray.Core.Coupling;
 /// and tabulated values): about 1e-15 absolute for Si and Ci; near the zeros of Ci its relative accuracy is
 /// correspondingly lower. Cost: 10–70 ns per call after the one-off table set-up (about 1 ms); no quadrature.</para>
 /// </remarks>
-public static class SineCosineIntegrals
+internal static class SineCosineIntegrals
 {
     /// <summary>Euler–Mascheroni constant γ (A&amp;S 6.1.3).</summary>
     public const double EulerGamma = 0.57721566490153286060651209;

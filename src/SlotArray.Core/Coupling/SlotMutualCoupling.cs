@@ -10,7 +10,7 @@ namespace SlotArray.Core.Coupling;
 /// <param name="Position">Centre position z along the guide axis.</param>
 /// <param name="Offset">Signed offset x from the broad-wall centre line (positive toward the +x side wall).</param>
 /// <param name="HalfLength">Half length l of the slot; the full length is 2l.</param>
-public readonly record struct LongitudinalSlotPlacement(Length Position, Length Offset, Length HalfLength);
+internal readonly record struct LongitudinalSlotPlacement(Length Position, Length Offset, Length HalfLength);
 
 /// <summary>
 /// External (half-space) mutual coupling between longitudinal slots through their Babinet-dual equivalent dipoles:
@@ -32,7 +32,7 @@ public readonly record struct LongitudinalSlotPlacement(Length Position, Length 
 /// a/2 along the guide, for closely spaced slots of adjacent branch guides sharing a wall, and for the
 /// non-shunt behaviour of large offsets); the dominant-mode (TE10) interaction is carried by the guide network.</para>
 /// </remarks>
-public static class SlotMutualCoupling
+internal static class SlotMutualCoupling
 {
     /// <summary>One-sided slot admittance from the dual dipole impedance: Y = 2 Z_d/η0² (S) (Booker 1946).</summary>
     public static Complex OneSidedSlotAdmittance(Complex dipoleImpedance)

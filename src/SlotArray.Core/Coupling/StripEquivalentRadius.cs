@@ -12,7 +12,7 @@ namespace SlotArray.Core.Coupling;
 /// w·e^(−3/2) ≈ 0.223 w instead [D]; the difference is small. One home for the rule: the strip dipole of a slot in a
 /// ground plane, the slots' mutual coupling and the exterior kernel of the slot moment method all take it from here.
 /// </remarks>
-public static class StripEquivalentRadius
+internal static class StripEquivalentRadius
 {
     /// <summary>r_e/w = 1/4 (Butler 1982).</summary>
     public const double WidthFraction = 0.25;

@@ -19,7 +19,7 @@ namespace SlotArray.Core.Design;
 /// analysis evaluates each slot's y(f); default <see cref="FrequencyInterpolatedSlotModel.DefaultStep"/>; 0: solve the
 /// slot model directly at every frequency.
 /// </param>
-public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFraction = 0.15,
+internal sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFraction = 0.15,
     double AdmittanceStep = FrequencyInterpolatedSlotModel.DefaultStep)
 {
     /// <summary>The defaults.</summary>
@@ -45,75 +45,50 @@ public sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchFra
 
     /// <summary>Stops the run between steps, iterations and sweep points with an <see cref="OperationCanceledException"/>.</summary>
     public CancellationToken Cancellation { get; init; }
+
+    /// <summary><c>coupling: mutual</c> standing-wave designs: the limits of Elliott's iteration (<see cref="ElliottDesigner"/>); progress and cancellation are this run's.</summary>
+    public ElliottOptions Elliott { get; init; } = ElliottOptions.Default;
 }
 
 /// <summary>Everything one run computes: the taper, the slot model, the design and its analysis across the band.</summary>
 /// <param name="Request">What was asked.</param>
 /// <param name="Taper">The synthesised aperture taper (target amplitudes).</param>
 /// <param name="SlotModel">The slot model the design used and the analysis re-used.</param>
-/// <param name="Design">Per-slot geometry and the terminations.</param>
+/// <param name="Design">Per-slot geometry and the terminations, as cut (with the prototype margin).</param>
+/// <param name="Procedure">How the design was made (isolated-slot or coupled, standing or travelling wave) and what that
+/// procedure alone reports; for a coupled procedure <paramref name="Design"/> is the coupled design and the sweep, the
+/// figures and the bands come from the coupled analysis.</param>
 /// <param name="Sweep">Network solutions across the analysis band, and at the design frequency.</param>
 /// <param name="AtDesign">Pattern, directivity and gain at the design frequency.</param>
 /// <param name="SweepFigures">Pattern, directivity and gain at each sweep frequency.</param>
 /// <param name="BandVswr15">The continuous band with VSWR ≤ 1.5 containing the design frequency, or null.</param>
 /// <param name="BandVswr2">The continuous band with VSWR ≤ 2 containing the design frequency, or null.</param>
+/// <param name="MatchSweep">The input match alone (network, no pattern) over the match span (<see cref="MatchSpan"/>; by
+/// default wide enough to show the VSWR band edges), with the analysis that made <paramref name="Sweep"/>.</param>
+/// <param name="AddOns">What the antenna adds to the stick (filter, flare, pointing budget), each null when not asked for;
+/// with a filter, <paramref name="AtDesign"/> and <paramref name="SweepFigures"/> are the figures behind it.</param>
 /// <param name="Warnings">Every validity limit met on the way (taper, slot model, designer), in order, without repeats.</param>
-public sealed record ArrayResult(
+internal sealed record ArrayResult(
     ArrayRequest Request,
     TaperResult Taper,
     IShuntSlotModel SlotModel,
     ArrayDesign Design,
+    DesignProcedure Procedure,
     FrequencySweep Sweep,
     FrequencyFigures AtDesign,
     IReadOnlyList<FrequencyFigures> SweepFigures,
     MatchBand? BandVswr15,
     MatchBand? BandVswr2,
-    IReadOnlyList<DesignWarning> Warnings)
-{
-    /// <summary>Travelling-wave feed: the designer's figures (targets, refinement, squint, scan rate); null for a standing-wave feed.</summary>
-    public TravellingWaveDesign? TravellingWave { get; init; }
-
-    /// <summary>
-    /// <c>coupling: mutual</c> only: Elliott's design with its iteration history, and the coupled and isolated-slot
-    /// designs side by side under the coupled analysis; null for <c>coupling: none</c>. When set, <see cref="Design"/> is
-    /// the coupled design and <see cref="Sweep"/>, the figures and the bands come from the coupled analysis.
-    /// </summary>
-    public ElliottComparison? Coupling { get; init; }
-
-    /// <summary>
-    /// <c>coupling: mutual</c> with a travelling-wave feed: the coupled travelling-wave design
-    /// (<see cref="CoupledTravellingWaveDesigner"/>) and the isolated-slot design side by side under the coupled analysis;
-    /// null otherwise. When set, <see cref="Design"/> is the coupled design and the sweep, figures and bands come from the
-    /// coupled analysis.
-    /// </summary>
-    public CoupledTravellingWaveComparison? CoupledTravellingWave { get; init; }
-
-    /// <summary>
-    /// The input match alone (network, no pattern) over the match span (<see cref="MatchSpan"/>; by default wide
-    /// enough to show the VSWR band edges), with the analysis that made <see cref="Sweep"/>; null when not computed.
-    /// </summary>
-    public FrequencySweep? MatchSweep { get; init; }
-
-    /// <summary>
-    /// The polarisation filter (<c>filter</c>) and the cross-polar levels before and after it; null without a filter or
-    /// without a cross-polarised cut. When set, <see cref="AtDesign"/> and <see cref="SweepFigures"/> are the figures
-    /// behind the filter.
-    /// </summary>
-    public Marine.FilterOutcome? Filter { get; init; }
-
-    /// <summary>The flare (<c>flare</c>): vertical beam, throat loss and the antenna's total gain; null without a flare.</summary>
-    public Marine.FlareOutcome? Flare { get; init; }
-
-    /// <summary>The beam over the operating range (temperature, transmitter frequency tolerance); null when no range is given.</summary>
-    public Marine.PointingBudget? Pointing { get; init; }
-}
+    FrequencySweep MatchSweep,
+    AntennaAddOns AddOns,
+    IReadOnlyList<DesignWarning> Warnings);
 
 /// <summary>
 /// The pipeline of architecture.md as one pure function: request → taper → slot model → designer → network
 /// analysis across the band → pattern, directivity and gain. Each stage is a pure function of the previous
 /// stage's immutable result, so the tolerance analysis can re-run <see cref="Analyse"/> on perturbed designs.
 /// </summary>
-public static class ArrayPipeline
+internal static class ArrayPipeline
 {
     /// <summary>
     /// The slot model for the request from <paramref name="source"/> (chosen at the composition root; when null, the
@@ -127,9 +102,11 @@ public static class ArrayPipeline
     }
 
     /// <summary>
-    /// The design <see cref="Run"/> delivers, without its band analysis: with <c>coupling: mutual</c> the coupled design
-    /// (Elliott's for a standing-wave feed, <see cref="CoupledTravellingWaveDesigner"/> for a travelling-wave feed), else
-    /// <see cref="Synthesise"/>'s. The tolerance analysis perturbs this design, so that its nominal figures are the key figures.
+    /// The design <see cref="Run"/> delivers, without its band analysis or prototype margin: with <c>coupling: mutual</c>
+    /// the coupled design (Elliott's for a standing-wave feed, <see cref="CoupledTravellingWaveDesigner"/> for a
+    /// travelling-wave feed), else <see cref="Synthesise"/>'s (with <c>feed.load: auto</c> resolved,
+    /// <see cref="TravellingWaveLoad.Resolve"/>). The tolerance analysis perturbs this design, so that its nominal figures
+    /// are the key figures.
     /// </summary>
     /// <exception cref="InfeasibleDesignException">The request cannot be realised.</exception>
     public static ArrayDesign DeliveredDesign(ArrayRequest request, IShuntSlotModel slot, TaperResult taper)
@@ -137,36 +114,38 @@ public static class ArrayPipeline
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(taper);
         request = TravellingWaveLoad.Resolve(request, slot, taper.Weights);
-        if (request.Coupling != CouplingMode.Mutual) return Synthesise(request, slot, taper);
-        return request.Feed.Type == FeedType.TravellingWave
-            ? CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights).Design
-            : ElliottDesigner.Design(request, slot, taper.Weights).Design;
+        return DesignStick(StickRequest.Of(request, slot, taper.Weights), request.Coupling).Design;
     }
 
-    /// <summary>The designer the feed type calls for.</summary>
+    /// <summary>The isolated-slot design the feed type calls for (<see cref="DesignStick"/> without coupling).</summary>
     public static ArrayDesign Synthesise(ArrayRequest request, IShuntSlotModel slot, TaperResult taper)
-        => SynthesiseWithFigures(request, slot, taper).Design;
-
-    /// <summary>
-    /// The designer the feed type calls for (standing-wave: <see cref="StandingWaveDesigner"/>; travelling-wave:
-    /// <see cref="TravellingWaveDesigner"/> with its phases corrected by <see cref="TravellingWavePointing"/>), with the
-    /// travelling-wave designer's own figures (null for a standing wave).
-    /// </summary>
-    public static (ArrayDesign Design, TravellingWaveDesign? TravellingWave) SynthesiseWithFigures(ArrayRequest request, IShuntSlotModel slot,
-        TaperResult taper)
     {
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(taper);
-        switch (request.Feed.Type)
+        return DesignStick(StickRequest.Of(request, slot, taper.Weights), CouplingMode.None).Design;
+    }
+
+    /// <summary>
+    /// Designs one stick with the designer its feed and coupling call for: standing-wave <see cref="StandingWaveDesigner"/>,
+    /// travelling-wave <see cref="TravellingWaveDesigner"/> with its beam put where asked (<see cref="TravellingWavePointing"/>); with <paramref name="coupling"/> mutual <see cref="ElliottDesigner"/>
+    /// or <see cref="CoupledTravellingWaveDesigner"/> (reporting progress and stopping on <paramref name="options"/>' token).
+    /// </summary>
+    /// <exception cref="InfeasibleDesignException">The stick cannot be realised; the message says what to change.</exception>
+    public static StickDesign DesignStick(StickRequest stick, CouplingMode coupling, AnalysisOptions? options = null)
+    {
+        ArgumentNullException.ThrowIfNull(stick);
+        options ??= AnalysisOptions.Default;
+        bool travelling = stick.Feed.Type == FeedType.TravellingWave;
+        if (coupling == CouplingMode.Mutual)
+            return travelling
+                ? CoupledTravellingWaveDesigner.Design(stick, CoupledTravellingWaveOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation })
+                : ElliottDesigner.Design(stick, options.Elliott with { Progress = options.Progress, Cancellation = options.Cancellation });
+        return stick.Feed.Type switch
         {
-            case FeedType.StandingWave:
-                return (StandingWaveDesigner.Design(request, slot, taper.Weights), null);
-            case FeedType.TravellingWave:
-                var tw = TravellingWavePointing.Design(request, slot, taper.Weights);
-                return (tw.Design, tw);
-            default:
-                throw new InfeasibleDesignException($"the '{request.Feed.Type}' feed has no designer: use a standing-wave or travelling-wave feed");
-        }
+            FeedType.StandingWave => StandingWaveDesigner.Design(stick),
+            FeedType.TravellingWave => TravellingWavePointing.Design(stick),
+            _ => throw new InfeasibleDesignException($"the '{stick.Feed.Type}' feed has no designer: use a standing-wave or travelling-wave feed"),
+        };
     }
 
     /// <summary>
@@ -230,7 +209,9 @@ public static class ArrayPipeline
 
     /// <summary>
     /// Runs the whole pipeline with a given slot model in place of the one the request names (e.g. a model corrected by
-    /// what a prototype showed, <see cref="Prototype.CalibratedSlotModel"/>).
+    /// what a prototype showed, <see cref="Prototype.CalibratedSlotModel"/>). A travelling-wave request with
+    /// <c>feed.load: auto</c> is designed with its smallest feasible load (<see cref="TravellingWaveLoad.Resolve"/>); an
+    /// infeasible one is refused with the nearest feasible load and count (<see cref="TravellingWaveLoad.Explained"/>).
     /// </summary>
     /// <exception cref="InfeasibleDesignException">The request cannot be realised; the message says what to change.</exception>
     public static ArrayResult RunWithSlotModel(ArrayRequest request, IShuntSlotModel slot, AnalysisOptions? options = null)
@@ -239,25 +220,33 @@ public static class ArrayPipeline
         ArgumentNullException.ThrowIfNull(slot);
         options ??= AnalysisOptions.Default;
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
-        return TravellingWaveLoad.Explained(request, r => TravellingWavePointing.Design(r, slot, TaperSynthesis.Synthesize(r.Taper, r.Slots.Count).Weights),
+        return TravellingWaveLoad.Explained(request,
+            r => TravellingWavePointing.Design(StickRequest.Of(r, slot, TaperSynthesis.Synthesize(r.Taper, r.Slots.Count).Weights)),
             () => RunResolved(TravellingWaveLoad.Resolve(request, slot, taper.Weights), slot, options, taper));
     }
 
     private static ArrayResult RunResolved(ArrayRequest request, IShuntSlotModel slot, AnalysisOptions options, TaperResult taper)
     {
-        if (request.Coupling == CouplingMode.Mutual) return RunCoupled(request, options, taper, slot);
-        var (design, travelling) = SynthesiseWithFigures(request, slot, taper);
-        SlotClearance.Require(design, request.Slots.Cutter);
+        var stick = DesignStick(StickRequest.Of(request, slot, taper.Weights), request.Coupling, options);
         options.Cancellation.ThrowIfCancellationRequested();
-        design = PrototypeMargin.Apply(design, request.PrototypeMargin);
+        SlotClearance.Require(stick.Design, request.Slots.Cutter);
+        var design = PrototypeMargin.Apply(stick.Design, request.PrototypeMargin);
+        return stick is ElliottResult or CoupledTravellingWaveDesign
+            ? AnalyseCoupled(request, taper, slot, stick, design, options)
+            : AnalyseIsolated(request, taper, slot, stick, design, options);
+    }
+
+    /// <summary>
+    /// An isolated-slot design (<c>coupling: none</c>) as cut: the band through the isolated-slot network
+    /// (<see cref="ArrayNetwork"/>) with pattern figures at every point, the VSWR bands found by search, the match sweep.
+    /// </summary>
+    private static ArrayResult AnalyseIsolated(ArrayRequest request, TaperResult taper, IShuntSlotModel slot, StickDesign stick,
+        ArrayDesign design, AnalysisOptions options)
+    {
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
-        Marine.FilterOutcome? filter = null;
-        if (request.Filter is { } asked)
-            (atDesign, points, filter) = Marine.CrossPolarFilterDesign.Apply(asked, request.Requirements.CrossPolarDb, atDesign, points,
-                atDesign.Metrics.BeamDirection, design.Spacing);
-        var flare = request.Flare is { } fl ? Marine.FlareDesign.Analyse(fl, request.Guide, atDesign, request.Requirements.VerticalBeamwidth) : null;
+        (atDesign, points, var addOns) = AntennaAddOns.Of(request, design, atDesign, points);
         var f0 = request.DesignFrequency;
         MatchBand? b15 = null, b2 = null;
         if (options.BandSearchFraction > 0)
@@ -270,85 +259,53 @@ public static class ArrayPipeline
             b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
         }
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
-            .Concat(outside).Concat(filter?.Warnings ?? []).Concat(flare?.Warnings ?? []).DistinctBy(w => w.Message).ToList();
+            .Concat(outside).Concat(addOns.Warnings).DistinctBy(w => w.Message).ToList();
         var (mLo, mHi) = MatchSpan.Resolve(request, options, b15, b2);
-        if (options.MatchPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.MatchPoints, "the match sweep needs at least 2 points");
+        RequireMatchPoints(options);
         var match = ArrayNetwork.Sweep(design, analysis, mLo, mHi, options.MatchPoints);
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, b15, b2, warnings) { TravellingWave = travelling, MatchSweep = match, Filter = filter, Flare = flare,
-            Pointing = request.Operating is { } range ? Marine.PointingBudget.Of(range, design, atDesign, points, PhaseCondition(design)) : null };
+        DesignProcedure procedure = stick is TravellingWaveDesign tw ? new TravellingWaveProcedure(tw) : new StandingWaveProcedure();
+        return new ArrayResult(request, taper, slot, design, procedure, sweep, atDesign, points, b15, b2, match, addOns, warnings);
     }
 
     /// <summary>
-    /// <c>coupling: mutual</c>: Elliott's design (<see cref="ElliottDesigner"/>), the band analysed with the coupled
-    /// network (<see cref="CoupledArrayNetwork"/>), VSWR bands from that sweep, and the comparison with the isolated-slot design.
+    /// A coupled design (<c>coupling: mutual</c>: <see cref="ElliottDesigner"/> or <see cref="CoupledTravellingWaveDesigner"/>)
+    /// as cut: the band analysed with the coupled network (<see cref="CoupledArrayNetwork"/>), VSWR bands from that sweep,
+    /// and the comparison with the isolated-slot design it started from. For a travelling wave the procedure carries the
+    /// isolated-slot designer's layout figures (targets, squint, scan rate) with its design replaced by the coupled one.
     /// </summary>
-    private static ArrayResult RunCoupled(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
+    private static ArrayResult AnalyseCoupled(ArrayRequest request, TaperResult taper, IShuntSlotModel slot, StickDesign stick,
+        ArrayDesign design, AnalysisOptions options)
     {
-        if (request.Feed.Type == FeedType.TravellingWave) return RunCoupledTravelling(request, options, taper, slot);
-        var elliott = ElliottDesigner.Design(request, slot, taper.Weights,
-            ElliottOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
-        options.Cancellation.ThrowIfCancellationRequested();
-        var design = elliott.Design;
-        SlotClearance.Require(design, request.Slots.Cutter);
-        design = PrototypeMargin.Apply(design, request.PrototypeMargin);
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
-        var comparison = ElliottComparison.Of(elliott, analysis, AnalysisModel(request, elliott.Uncoupled, slot, options),
-            request.BandLow, request.BandHigh);
-        var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).DistinctBy(w => w.Message).ToList();
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
+        (atDesign, points, var addOns) = AntennaAddOns.Of(request, design, atDesign, points);
+        DesignProcedure procedure = stick switch
         {
-            Coupling = comparison,
-            MatchSweep = CoupledMatchSweep(request, options, design, analysis, sweep),
+            ElliottResult elliott => new ElliottProcedure(ElliottComparison.Of(elliott, analysis,
+                AnalysisModel(request, elliott.Uncoupled, slot, options), request.BandLow, request.BandHigh)),
+            CoupledTravellingWaveDesign coupled => new CoupledTravellingWaveProcedure(coupled.Uncoupled with
+                {
+                    Design = design,
+                    Correction = CoupledTravellingWaveOptions.Default.CorrectPhase ? PointingCorrection.LengthDetuning : PointingCorrection.None,
+                    AskedBeam = coupled.Uncoupled.Squint,
+                    PhaseErrorDegrees = coupled.PhaseErrorDegrees,
+                    PhaseIterations = coupled.Iterations,
+                },
+                CoupledTravellingWaveComparison.Of(coupled, analysis, AnalysisModel(request, coupled.Uncoupled.Design, slot, options),
+                    request.BandLow, request.BandHigh)),
+            _ => throw new ArgumentException($"{stick.GetType().Name} is not a coupled design", nameof(stick)),
         };
-    }
-
-    /// <summary>
-    /// <c>coupling: mutual</c> with a travelling-wave feed: <see cref="CoupledTravellingWaveDesigner"/>, the band analysed
-    /// with the coupled network (matched load), VSWR bands from that sweep, and the comparison with the isolated-slot
-    /// design. <see cref="ArrayResult.TravellingWave"/> carries the isolated-slot designer's layout figures (targets,
-    /// squint, scan rate) with its design replaced by the coupled one.
-    /// </summary>
-    private static ArrayResult RunCoupledTravelling(ArrayRequest request, AnalysisOptions options, TaperResult taper, IShuntSlotModel slot)
-    {
-        var result = CoupledTravellingWaveDesigner.Design(request, slot, taper.Weights,
-            CoupledTravellingWaveOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation });
-        options.Cancellation.ThrowIfCancellationRequested();
-        var design = result.Design;
-        SlotClearance.Require(design, request.Slots.Cutter);
-        design = PrototypeMargin.Apply(design, request.PrototypeMargin);
-        var outside = SlotTableRangeCheck.Check(design, slot);
-        var analysis = AnalysisModel(request, design, slot, options);
-        var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
-        var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
-        var comparison = CoupledTravellingWaveComparison.Of(result, analysis, AnalysisModel(request, result.Uncoupled.Design, slot, options),
-            request.BandLow, request.BandHigh);
-        var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).DistinctBy(w => w.Message).ToList();
-        return new ArrayResult(request, taper, slot, design, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), warnings)
-        {
-            TravellingWave = result.Uncoupled with { Design = design } with
-            {
-                Correction = CoupledTravellingWaveOptions.Default.CorrectPhase ? PointingCorrection.LengthDetuning : PointingCorrection.None,
-                AskedBeam = result.Uncoupled.Squint,
-                PhaseErrorDegrees = result.PhaseErrorDegrees,
-                PhaseIterations = result.Iterations,
-            },
-            CoupledTravellingWave = comparison,
-            MatchSweep = CoupledMatchSweep(request, options, design, analysis, sweep),
-            Pointing = request.Operating is { } range ? Marine.PointingBudget.Of(range, design, atDesign, points, PhaseCondition(design)) : null,
-        };
-    }
-
-    /// <summary>The beam the phase condition gives a design's guide and spacing at a frequency (<see cref="TravellingWaveBeam"/>; broadside for a standing wave).</summary>
-    private static Func<Frequency, Angle?> PhaseCondition(ArrayDesign design) => f => TravellingWaveBeam.Direction(design.Guide, design.Spacing, f);
-
-    /// <summary>The match sweep of a coupled design, through the coupled network, over <see cref="MatchSpan.Resolve"/>.</summary>
-    private static FrequencySweep CoupledMatchSweep(ArrayRequest request, AnalysisOptions options, ArrayDesign design, IShuntSlotModel analysis, FrequencySweep sweep)
-    {
+        var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).Concat(addOns.Warnings).DistinctBy(w => w.Message).ToList();
         var (lo, hi) = MatchSpan.Resolve(request, options, sweep.Band(1.5), sweep.Band(2.0));
+        RequireMatchPoints(options);
+        var match = CoupledArrayNetwork.Sweep(design, analysis, lo, hi, options.MatchPoints);
+        return new ArrayResult(request, taper, slot, design, procedure, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), match, addOns, warnings);
+    }
+
+    private static void RequireMatchPoints(AnalysisOptions options)
+    {
         if (options.MatchPoints < 2) throw new ArgumentOutOfRangeException(nameof(options), options.MatchPoints, "the match sweep needs at least 2 points");
-        return CoupledArrayNetwork.Sweep(design, analysis, lo, hi, options.MatchPoints);
     }
 }

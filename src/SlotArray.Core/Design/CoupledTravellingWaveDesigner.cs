@@ -13,7 +13,7 @@ namespace SlotArray.Core.Design;
 /// travelling-wave progression e^{jβz_n} (default true).</param>
 /// <param name="ToleranceDegrees">With <paramref name="CorrectPhase"/>: stop only when every slot-voltage phase is within this many
 /// degrees of the progression (mean removed); default 0.01, &gt; 0.</param>
-public sealed record CoupledTravellingWaveOptions(MutualImpedanceModel? Coupling = null, double ToleranceDb = 1e-4, int MaximumIterations = 100,
+internal sealed record CoupledTravellingWaveOptions(MutualImpedanceModel? Coupling = null, double ToleranceDb = 1e-4, int MaximumIterations = 100,
     bool CorrectPhase = true, double ToleranceDegrees = 0.01)
 {
     /// <summary>The defaults.</summary>
@@ -35,14 +35,14 @@ public sealed record CoupledTravellingWaveOptions(MutualImpedanceModel? Coupling
 /// <param name="AtDesign">The coupled network solution of <see cref="Design"/> at the design frequency (the last iterate).</param>
 /// <param name="PhaseErrorDegrees">Largest departure of the slot-voltage phases of <see cref="AtDesign"/> from the progression e^{jβz_n}
 /// (alternation sign and mean removed), degrees.</param>
-public sealed record CoupledTravellingWaveDesign(
+internal sealed record CoupledTravellingWaveDesign(
     ArrayDesign Design,
     TravellingWaveDesign Uncoupled,
     int Iterations,
     double ResidualDb,
     IReadOnlyList<double> History,
     NetworkSolution AtDesign,
-    double PhaseErrorDegrees);
+    double PhaseErrorDegrees) : StickDesign(Design);
 
 /// <summary>
 /// Travelling-wave array of longitudinal broad-wall slots designed with the external mutual coupling included: the
@@ -82,7 +82,7 @@ public sealed record CoupledTravellingWaveDesign(
 /// <para>Without coupling, with phases off, and with a slot whose resonant conductance is Stevenson's Γ0 f_r², P̃_n equals
 /// the power into slot n, so the first iteration confirms the isolated-slot design and it is returned unchanged.</para>
 /// </remarks>
-public static class CoupledTravellingWaveDesigner
+internal static class CoupledTravellingWaveDesigner
 {
     /// <summary>Largest length change of one phase-correction step, as a fraction of the slot's resonant length (0.05).</summary>
     public const double MaximumStepFraction = 0.05;
@@ -90,34 +90,24 @@ public static class CoupledTravellingWaveDesigner
     /// <summary>Largest total detuning of a slot, as a fraction of its resonant length (0.25), before the design is refused.</summary>
     public const double MaximumDetuningFraction = 0.25;
 
-    /// <summary>Designs the array with the default options.</summary>
-    /// <param name="request">The validated request (travelling-wave feed, longitudinal slots).</param>
-    /// <param name="slot">The isolated-slot model (offset coupling).</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n, slot 1 (nearest the load) first.</param>
-    public static CoupledTravellingWaveDesign Design(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes)
-        => Design(request, slot, amplitudes, CoupledTravellingWaveOptions.Default);
-
     /// <summary>
     /// Designs the array (see remarks). Throws <see cref="InfeasibleDesignException"/> naming the slot when one must
     /// absorb more than a shunt slot can (p &gt; 0.5) or more than the slot model's largest conductance, and
     /// <see cref="ConvergenceException"/> when the fixed point does not reach the tolerance.
     /// </summary>
-    /// <param name="request">The validated request (travelling-wave feed, longitudinal slots).</param>
-    /// <param name="slot">The isolated-slot model (offset coupling).</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n, slot 1 (nearest the load) first; non-zero.</param>
-    /// <param name="options">Coupling model and tolerances.</param>
-    public static CoupledTravellingWaveDesign Design(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes,
-        CoupledTravellingWaveOptions options)
+    /// <param name="stick">The stick (travelling-wave feed; the isolated-slot model of longitudinal, offset-coupled slots;
+    /// amplitudes a_n non-zero, slot 1 nearest the load first).</param>
+    /// <param name="options">Coupling model and tolerances; null for <see cref="CoupledTravellingWaveOptions.Default"/>.</param>
+    public static CoupledTravellingWaveDesign Design(StickRequest stick, CoupledTravellingWaveOptions? options = null)
     {
-        ArgumentNullException.ThrowIfNull(request);
-        ArgumentNullException.ThrowIfNull(slot);
-        ArgumentNullException.ThrowIfNull(amplitudes);
-        ArgumentNullException.ThrowIfNull(options);
+        ArgumentNullException.ThrowIfNull(stick);
+        options ??= CoupledTravellingWaveOptions.Default;
+        var slot = stick.Slot;
         if (slot.CouplingKind != SlotCouplingKind.Offset)
-            throw new ArgumentException("the coupled travelling-wave designer is for longitudinal (offset) slots", nameof(slot));
-        var start = TravellingWaveDesigner.Design(request, slot, amplitudes);
-        var f0 = request.DesignFrequency;
-        return Iterate(request, slot, amplitudes, options, start, d => CoupledArrayNetwork.Solve(d, slot, f0, options.Coupling), " under mutual coupling");
+            throw new ArgumentException("the coupled travelling-wave designer is for longitudinal (offset) slots", nameof(stick));
+        var start = TravellingWaveDesigner.Design(stick);
+        var f0 = stick.DesignFrequency;
+        return Iterate(stick, options, start, d => CoupledArrayNetwork.Solve(d, slot, f0, options.Coupling), " under mutual coupling");
     }
 
     /// <summary>
@@ -125,21 +115,23 @@ public static class CoupledTravellingWaveDesigner
     /// geometry at the design frequency (the coupled network here; the isolated-slot line for
     /// <see cref="TravellingWavePointing"/>, which corrects the phases of an uncoupled design the same way).
     /// </summary>
-    /// <param name="request">The validated request.</param>
-    /// <param name="slot">The isolated-slot model.</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n, slot 1 first.</param>
+    /// <param name="stick">The stick (travelling-wave feed; amplitudes a_n, slot 1 first; the isolated-slot model).</param>
     /// <param name="options">Tolerances and the phase switch (<see cref="CoupledTravellingWaveOptions.Coupling"/> is not read).</param>
     /// <param name="start">The isolated-slot design to start from.</param>
     /// <param name="solve">Network solution of a geometry at the design frequency.</param>
     /// <param name="context">Words added to the error messages after "the power arriving at it", e.g. " under mutual coupling".</param>
     /// <param name="phaseSlope">κ of the phase progression e^{jκz_n} the slot voltages are brought to, rad/m; null: β of the guide.</param>
-    internal static CoupledTravellingWaveDesign Iterate(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes,
-        CoupledTravellingWaveOptions options, TravellingWaveDesign start, Func<ArrayDesign, NetworkSolution> solve, string context,
-        double? phaseSlope = null)
+    internal static CoupledTravellingWaveDesign Iterate(StickRequest stick, CoupledTravellingWaveOptions options, TravellingWaveDesign start,
+        Func<ArrayDesign, NetworkSolution> solve, string context, double? phaseSlope = null)
     {
+        ArgumentNullException.ThrowIfNull(stick);
+        ArgumentNullException.ThrowIfNull(options);
+        ArgumentNullException.ThrowIfNull(start);
         if (!(options.ToleranceDb > 0)) throw new ArgumentOutOfRangeException(nameof(options), options.ToleranceDb, "the tolerance must be positive (dB)");
         if (options.MaximumIterations < 1) throw new ArgumentOutOfRangeException(nameof(options), options.MaximumIterations, "at least one iteration is needed");
-        var f0 = request.DesignFrequency;
+        var slot = stick.Slot;
+        var amplitudes = stick.Amplitudes;
+        var f0 = stick.DesignFrequency;
         double loadFraction = start.LoadFraction;
         int n = start.Design.Count;
         double sumSquares = amplitudes.Sum(a => a * a);

@@ -8,7 +8,7 @@ namespace SlotArray.Core.Design;
 /// <param name="AtDesign">The coupled network solution at the design frequency.</param>
 /// <param name="BestMatch">The coupled solution at the frequency of smallest |S11| in the analysis band.</param>
 /// <param name="PeakSidelobeDb">Peak sidelobe of the coupled pattern at the design frequency (dB below the beam peak, negative), or null.</param>
-public sealed record CoupledFigures(NetworkSolution AtDesign, NetworkSolution BestMatch, double? PeakSidelobeDb)
+internal sealed record CoupledFigures(NetworkSolution AtDesign, NetworkSolution BestMatch, double? PeakSidelobeDb)
 {
     /// <summary>|S11| at the design frequency in dB (20 log10).</summary>
     public double S11Db => 20 * Math.Log10(AtDesign.S11.Magnitude);
@@ -24,7 +24,7 @@ public sealed record CoupledFigures(NetworkSolution AtDesign, NetworkSolution Be
 /// <param name="Elliott">The iterated design, its history and the isolated-slot design it started from.</param>
 /// <param name="Coupled">The coupled design under the coupled analysis.</param>
 /// <param name="Uncoupled">The isolated-slot design under the coupled analysis.</param>
-public sealed record ElliottComparison(ElliottResult Elliott, CoupledFigures Coupled, CoupledFigures Uncoupled)
+internal sealed record ElliottComparison(ElliottResult Elliott, CoupledFigures Coupled, CoupledFigures Uncoupled)
 {
     /// <summary>Sample count of the best-match search across the analysis band (then refined by golden section).</summary>
     public const int BestMatchSamples = 41;
@@ -59,7 +59,7 @@ public sealed record ElliottComparison(ElliottResult Elliott, CoupledFigures Cou
 /// <param name="Result">The coupled design, its iteration history and the isolated-slot design it started from.</param>
 /// <param name="Coupled">The coupled design under the coupled analysis.</param>
 /// <param name="Uncoupled">The isolated-slot design under the coupled analysis.</param>
-public sealed record CoupledTravellingWaveComparison(CoupledTravellingWaveDesign Result, CoupledFigures Coupled, CoupledFigures Uncoupled)
+internal sealed record CoupledTravellingWaveComparison(CoupledTravellingWaveDesign Result, CoupledFigures Coupled, CoupledFigures Uncoupled)
 {
     /// <summary>Analyses both designs of <paramref name="result"/> over [low, high] with the coupled network.</summary>
     /// <param name="result">The coupled design and the isolated-slot design it started from.</param>

@@ -13,7 +13,7 @@ namespace SlotArray.Core.Design;
 /// <param name="Tolerance">Stop when no offset and no length changed by more than this between iterations; default 1e-4 mm.</param>
 /// <param name="MaximumIterations">Outer iterations allowed before <see cref="ConvergenceException"/>; default 60.</param>
 /// <param name="Coupling">Mutual-impedance model; null for <see cref="CoupledSlotImpedances.HalfCosineCentreReferred"/>.</param>
-public sealed record ElliottOptions(double Tolerance = 1e-7, int MaximumIterations = 60, MutualImpedanceModel? Coupling = null)
+internal sealed record ElliottOptions(double Tolerance = 1e-7, int MaximumIterations = 60, MutualImpedanceModel? Coupling = null)
 {
     /// <summary>The defaults.</summary>
     public static ElliottOptions Default { get; } = new();
@@ -23,6 +23,9 @@ public sealed record ElliottOptions(double Tolerance = 1e-7, int MaximumIteratio
 
     /// <summary>Stops the iteration with an <see cref="OperationCanceledException"/>.</summary>
     public CancellationToken Cancellation { get; init; }
+
+    /// <summary>Newton steps allowed per slot and outer iteration before <see cref="ConvergenceException"/>; default 60, ≥ 1.</summary>
+    public int NewtonIterations { get; init; } = 60;
 }
 
 /// <summary>One outer iteration of Elliott's procedure.</summary>
@@ -40,8 +43,8 @@ public sealed record ElliottIteration(int Index, double MaximumOffsetChange, dou
 /// <param name="ActiveAdmittances">y^a_n from (E2) at the final geometry with the slot model's own (direct) admittances.</param>
 /// <param name="SurrogateError">Largest |y_surrogate − y_direct|/|y_direct| over the final slots: the surrogate's interpolation error where it mattered.</param>
 /// <param name="Tolerance">The tolerance the iteration met (m).</param>
-public sealed record ElliottResult(ArrayDesign Design, ArrayDesign Uncoupled, IReadOnlyList<ElliottIteration> Iterations,
-    IReadOnlyList<Complex> ActiveAdmittances, double SurrogateError, double Tolerance);
+internal sealed record ElliottResult(ArrayDesign Design, ArrayDesign Uncoupled, IReadOnlyList<ElliottIteration> Iterations,
+    IReadOnlyList<Complex> ActiveAdmittances, double SurrogateError, double Tolerance) : StickDesign(Design);
 
 /// <summary>
 /// Elliott's design procedure for a standing-wave array of longitudinal broad-wall shunt slots with external mutual
@@ -73,10 +76,8 @@ public sealed record ElliottResult(ArrayDesign Design, ArrayDesign Uncoupled, IR
 /// slot it differs from <see cref="StandingWaveDesigner"/> by the few-per-cent departure of g_r from Γ0 f_r² (the
 /// isolated design weights by power, Elliott's by slot voltage).</para>
 /// </remarks>
-public static class ElliottDesigner
+internal static class ElliottDesigner
 {
-    private const int NewtonIterations = 60;
-
     private static readonly ConditionalWeakTable<IShuntSlotModel, ConcurrentDictionary<double, ElliottSlotSurrogate>> Surrogates = new();
 
     /// <summary>
@@ -95,27 +96,27 @@ public static class ElliottDesigner
     /// outside the slot model's range, and <see cref="ConvergenceException"/> when the iteration does not meet the
     /// tolerance (naming the slot and the residual); never returns a partly converged design.
     /// </summary>
-    /// <param name="request">A standing-wave request of longitudinal slots.</param>
-    /// <param name="slot">An offset-coupled slot model.</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n (signed; none zero).</param>
+    /// <param name="stick">A standing-wave stick of longitudinal slots: an offset-coupled slot model, amplitudes a_n (signed; none zero).</param>
     /// <param name="options">Tolerance, iteration limit, coupling model.</param>
-    public static ElliottResult Design(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes, ElliottOptions? options = null)
+    public static ElliottResult Design(StickRequest stick, ElliottOptions? options = null)
     {
-        ArgumentNullException.ThrowIfNull(request);
-        ArgumentNullException.ThrowIfNull(slot);
-        ArgumentNullException.ThrowIfNull(amplitudes);
+        ArgumentNullException.ThrowIfNull(stick);
+        var slot = stick.Slot;
+        var amplitudes = stick.Amplitudes;
         options ??= ElliottOptions.Default;
         if (!(options.Tolerance > 0)) throw new ArgumentOutOfRangeException(nameof(options), options.Tolerance, "the tolerance must be positive");
+        if (options.MaximumIterations < 1 || options.NewtonIterations < 1)
+            throw new ArgumentOutOfRangeException(nameof(options), "Elliott's iteration needs at least one outer and one Newton iteration");
         if (slot.CouplingKind != SlotCouplingKind.Offset)
             throw new InfeasibleDesignException("Elliott's design with mutual coupling is implemented for longitudinal (offset) slots only: use coupling: none for edge slots");
-        var uncoupled = StandingWaveDesigner.Design(request, slot, amplitudes);
+        var uncoupled = StandingWaveDesigner.Design(stick).Design;
         var coupling = options.Coupling ?? CoupledSlotImpedances.HalfCosineCentreReferred;
-        var f0 = request.DesignFrequency;
-        var guide = request.Guide;
+        var f0 = stick.DesignFrequency;
+        var guide = stick.Guide;
         int n = uncoupled.Count;
         var surrogate = SurrogateFor(slot, f0);
         double scale = 1 / (ElliottDesignEquations.Gamma0(guide, f0) * PhysicalConstants.HalfWaveDipoleResistance);
-        double halves = request.Feed.Position == FeedPosition.Centre ? StandingWaveDesigner.CentreJunctionRatio : 1;
+        double halves = stick.Feed.Position == FeedPosition.Centre ? StandingWaveDesigner.CentreJunctionRatio : 1;
 
         var side = uncoupled.Slots.Select(s => (double)Math.Sign(s.Coupling)).ToArray();
         var x = uncoupled.Slots.Select(s => Math.Abs(s.Coupling)).ToArray();
@@ -150,7 +151,7 @@ public static class ElliottDesigner
             int worst = 0;
             for (int i = 0; i < n; i++)
             {
-                var (xi, li) = SolveSlot(surrogate, guide, f0, i, x[i], len[i], c[i], target[i]);
+                var (xi, li) = SolveSlot(surrogate, guide, f0, i, x[i], len[i], c[i], target[i], options.NewtonIterations);
                 double dx = Math.Abs(xi - x[i]), dl = Math.Abs(li - len[i]);
                 if (Math.Max(dx, dl) > Math.Max(dxMax, dlMax)) worst = i;
                 dxMax = Math.Max(dxMax, dx);
@@ -160,7 +161,7 @@ public static class ElliottDesigner
             }
             history.Add(new ElliottIteration(it, dxMax, dlMax, worst + 1, (total - halves).Magnitude));
             if (Math.Max(dxMax, dlMax) < options.Tolerance)
-                return Finish(request, slot, uncoupled, surrogate, coupling, side, x, len, a, target, history, options.Tolerance);
+                return Finish(slot, uncoupled, surrogate, coupling, side, x, len, a, target, history, options.Tolerance);
         }
         var lastIt = history[^1];
         throw new ConvergenceException((
@@ -170,12 +171,12 @@ public static class ElliottDesigner
             options.MaximumIterations, Math.Max(lastIt.MaximumOffsetChange, lastIt.MaximumLengthChange));
     }
 
-    private static ElliottResult Finish(ArrayRequest request, IShuntSlotModel slot, ArrayDesign uncoupled, ElliottSlotSurrogate surrogate,
+    private static ElliottResult Finish(IShuntSlotModel slot, ArrayDesign uncoupled, ElliottSlotSurrogate surrogate,
         MutualImpedanceModel coupling, double[] side, double[] x, double[] len, double[] a, double[] target, List<ElliottIteration> history, double tolerance)
     {
         int n = x.Length;
-        var f0 = request.DesignFrequency;
-        var guide = request.Guide;
+        var f0 = uncoupled.DesignFrequency;
+        var guide = uncoupled.Guide;
         var z = coupling(Placements(uncoupled, side, x, len), uncoupled.Slots[0].Width, f0);
         var direct = new Complex[n];
         var fn = new double[n];
@@ -218,7 +219,7 @@ public static class ElliottDesigner
     /// Damped 2-D Newton for slot i: 1/y(x, L) + C/f(x, L)² − 1/T = 0 (real and imaginary parts), scaled by T.
     /// </summary>
     private static (double X, double L) SolveSlot(ElliottSlotSurrogate s, Waveguides.RectangularWaveguide guide, Frequency f0, int i,
-        double x, double l, Complex c, double t)
+        double x, double l, Complex c, double t, int newtonIterations)
     {
         double xMin = 0.25 * s.MinimumOffset, xMax = s.MaximumOffset;
         Complex R(double xx, double ll)
@@ -227,7 +228,7 @@ public static class ElliottDesigner
             return t * (1 / s.Admittance(xx, ll) + c / (ff * ff)) - 1;
         }
         var r = R(x, l);
-        for (int k = 0; k < NewtonIterations; k++)
+        for (int k = 0; k < newtonIterations; k++)
         {
             double res = r.Magnitude;
             if (res < 1e-13) return (x, l);
@@ -266,7 +267,8 @@ public static class ElliottDesigner
                 FormattableString.Invariant($"and lengths {ElliottSlotSurrogate.MinimumRatio:0.00}–{ElliottSlotSurrogate.MaximumRatio:0.00} of resonance (stopped at x = {x * 1e3:0.###} mm, ") +
                 FormattableString.Invariant($"L = {l * 1e3:0.###} mm, residual {r.Magnitude:G3}): use more slots or a gentler taper")));
         throw new ConvergenceException((
-            FormattableString.Invariant($"slot {i + 1}: Newton on Elliott's equations stopped with residual {r.Magnitude:G3} at x = {x * 1e3:0.####} mm, L = {l * 1e3:0.####} mm")),
-            NewtonIterations, r.Magnitude);
+            FormattableString.Invariant($"slot {i + 1}: Newton on Elliott's equations stopped with residual {r.Magnitude:G3} at x = {x * 1e3:0.####} mm, L = {l * 1e3:0.####} mm ") +
+            FormattableString.Invariant($"(active conductance {t:0.0000} asked of it): the coupling is too strong for this slot; use a gentler taper, more slots or coupling: none")),
+            newtonIterations, r.Magnitude);
     }
 }

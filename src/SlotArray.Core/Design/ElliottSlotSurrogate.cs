@@ -21,7 +21,7 @@ namespace SlotArray.Core.Design;
 /// <para>Cost: <see cref="OffsetNodes"/> × <see cref="RatioNodes"/> direct solves once (about 0.2 s with the moment
 /// method), then a few microseconds per evaluation.</para>
 /// </remarks>
-public sealed class ElliottSlotSurrogate
+internal sealed class ElliottSlotSurrogate
 {
     /// <summary>Offset nodes of the grid (uniform in x from 1 % of the largest offset to the largest).</summary>
     public const int OffsetNodes = 14;

@@ -9,7 +9,7 @@ namespace SlotArray.Core.Design;
 /// the analysis band joined with the VSWR ≤ 2 band (else the VSWR ≤ 1.5 band) widened by a quarter of its width on
 /// each side, inside the VSWR search range and the guide's single-mode band.
 /// </summary>
-public static class MatchSpan
+internal static class MatchSpan
 {
     /// <summary>Default number of frequencies of the match sweep, 401.</summary>
     public const int DefaultPoints = 401;
@@ -47,17 +47,25 @@ public static class MatchSpan
     }
 
     /// <summary>
-    /// The default span slid by less than half a step so that one of its <paramref name="points"/> equally spaced
+    /// The default span slid by less than a step so that one of its <paramref name="points"/> equally spaced
     /// frequencies is the design frequency itself: a reader of <c>input.s1p</c> then finds |S11| at f0 without
-    /// interpolating across a deep null. A span that does not contain f0, or fewer than 2 points, is returned as it is.
+    /// interpolating across a deep null. The slide goes to the nearer sample, else the other way, whichever keeps the
+    /// span inside the guide's single-mode band (as <see cref="Default"/> keeps it); a span that does not contain f0,
+    /// fewer than 2 points, or a span that cannot slide inside that band (a coarse sweep of very few points) is returned as it is.
     /// </summary>
-    private static (Frequency Low, Frequency High) ThroughDesignFrequency(Frequency low, Frequency high, Frequency f0, int points)
+    private static (Frequency Low, Frequency High) ThroughDesignFrequency(ArrayRequest request, Frequency low, Frequency high, Frequency f0, int points)
     {
         double lo = low.Hertz, hi = high.Hertz, f = f0.Hertz;
         if (points < 2 || !(f > lo && f < hi)) return (low, high);
         double step = (hi - lo) / (points - 1);
-        double shifted = f - Math.Round((f - lo) / step) * step;
-        return (Frequency.FromHertz(shifted), Frequency.FromHertz(shifted + (points - 1) * step));
+        var (modeLow, modeHigh) = request.Guide.SingleModeBand;
+        double x = (f - lo) / step;
+        foreach (double k in new[] { Math.Round(x), Math.Round(x) == Math.Floor(x) ? Math.Ceiling(x) : Math.Floor(x) })
+        {
+            double shifted = f - k * step, top = shifted + (points - 1) * step;
+            if (shifted > modeLow.Hertz && top < modeHigh.Hertz) return (Frequency.FromHertz(shifted), Frequency.FromHertz(top));
+        }
+        return (low, high);
     }
 
     /// <summary>The span the options ask for, each missing edge taken from <see cref="Default"/>.</summary>
@@ -71,13 +79,7 @@ public static class MatchSpan
         ArgumentNullException.ThrowIfNull(options);
         var (lo, hi) = Default(request, vswr15, vswr2, options.BandSearchFraction);
         if (options.MatchLow is null && options.MatchHigh is null)
-        {
-            // Slid through f0, unless the slide (up to half a step) would carry the span out of the single-mode band:
-            // then the default span as it is (a coarse sweep near the band's edge).
-            var slid = ThroughDesignFrequency(lo, hi, request.DesignFrequency, options.MatchPoints);
-            var (low, high) = request.Guide.SingleModeBand;
-            if (slid.Low > low && slid.High < high) (lo, hi) = slid;
-        }
+            (lo, hi) = ThroughDesignFrequency(request, lo, hi, request.DesignFrequency, options.MatchPoints);
         lo = options.MatchLow ?? lo;
         hi = options.MatchHigh ?? hi;
         if (!(hi > lo))

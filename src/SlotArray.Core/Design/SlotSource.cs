@@ -10,7 +10,7 @@ namespace SlotArray.Core.Design;
 /// or a user's fitted table. Chosen once at the composition root (the CLI, or a test) and handed to the pipeline; it also
 /// carries the resonant-characterisation cache the built-in moment method keeps its tables in.
 /// </summary>
-public sealed class SlotSource
+internal sealed class SlotSource
 {
     private readonly Length _tableWidth;
 

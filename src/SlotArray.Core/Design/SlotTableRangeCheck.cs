@@ -9,7 +9,7 @@ namespace SlotArray.Core.Design;
 /// does not hold. Without <c>slots.extrapolate</c> such a design is refused (exit 1, naming the slot and the range);
 /// with it, the slots are flagged (warnings here, a column in the cut list).
 /// </summary>
-public static class SlotTableRangeCheck
+internal static class SlotTableRangeCheck
 {
     /// <summary>Code of the per-slot warning for a slot outside the table.</summary>
     public const string ExtrapolatedCode = "slot-table-extrapolated";

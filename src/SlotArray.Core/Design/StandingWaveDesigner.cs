@@ -34,40 +34,38 @@ namespace SlotArray.Core.Design;
 /// <para>Isolated slots only: external mutual coupling and wall loss are not compensated (the network analysis
 /// shows their effect).</para>
 /// </remarks>
-public static class StandingWaveDesigner
+internal static class StandingWaveDesigner
 {
     /// <summary>Impedance ratio n² of the centre-feed series junction, z_feed = (z_left + z_right)/n² (see remarks).</summary>
     public const double CentreJunctionRatio = 2;
 
     /// <summary>
-    /// Designs the array. <paramref name="amplitudes"/>[i] is the aperture amplitude of slot i + 1 (slot 1 nearest the
-    /// datum short); any signs, not all zero. Throws <see cref="InfeasibleDesignException"/> when the slot model
-    /// cannot give a needed conductance or the taper does not fit the slot count, and
-    /// <see cref="ArgumentException"/> for a request that is not a standing-wave array or a slot model for another guide.
+    /// Designs the stick. Its amplitudes a_n are those of slot n (slot 1 nearest the datum short); any signs, not all
+    /// zero. Throws <see cref="InfeasibleDesignException"/> when the slot model cannot give a needed conductance or the
+    /// taper does not fit the slot count, and <see cref="ArgumentException"/> for a stick that is not a standing-wave
+    /// array or a slot model for another guide.
     /// </summary>
-    /// <param name="request">The validated request (design frequency, guide, slots, feed).</param>
-    /// <param name="slot">The slot model; its guide and width are used as they are.</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n, one per slot.</param>
-    public static ArrayDesign Design(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes)
+    /// <param name="stick">The stick: guide, design frequency, slot count, feed, amplitudes and slot model (its guide and width are used as they are).</param>
+    public static StandingWaveDesign Design(StickRequest stick)
     {
-        ArgumentNullException.ThrowIfNull(request);
-        ArgumentNullException.ThrowIfNull(slot);
-        ArgumentNullException.ThrowIfNull(amplitudes);
-        if (request.Feed.Type != FeedType.StandingWave)
-            throw new ArgumentException($"the standing-wave designer was given a {request.Feed.Type} feed", nameof(request));
+        ArgumentNullException.ThrowIfNull(stick);
+        var slot = stick.Slot;
+        var amplitudes = stick.Amplitudes;
+        if (stick.Feed.Type != FeedType.StandingWave)
+            throw new ArgumentException($"the standing-wave designer was given a {stick.Feed.Type} feed", nameof(stick));
 
-        if (slot.Guide != request.Guide)
+        if (slot.Guide != stick.Guide)
             throw new ArgumentException(
-                $"the slot model is for the guide {slot.Guide.Designation} ({slot.Guide.BroadWall} × {slot.Guide.NarrowWall}, wall {slot.Guide.WallThickness}), not the request's {request.Guide.Designation} ({request.Guide.BroadWall} × {request.Guide.NarrowWall}, wall {request.Guide.WallThickness})",
-                nameof(slot));
-        int n = request.Slots.Count;
-        bool centre = request.Feed.Position == FeedPosition.Centre;
-        CheckTaper(request, amplitudes, n, centre);
+                $"the slot model is for the guide {slot.Guide.Designation} ({slot.Guide.BroadWall} × {slot.Guide.NarrowWall}, wall {slot.Guide.WallThickness}), not the request's {stick.Guide.Designation} ({stick.Guide.BroadWall} × {stick.Guide.NarrowWall}, wall {stick.Guide.WallThickness})",
+                nameof(stick));
+        int n = stick.Count;
+        bool centre = stick.Feed.Position == FeedPosition.Centre;
+        CheckTaper(stick, n, centre);
 
-        var f0 = request.DesignFrequency;
-        var lambdaG = request.Guide.GuideWavelength(f0);
-        var spacing = request.Feed.Spacing.Resolve(lambdaG);
-        var shortDistance = request.Feed.ShortDistance.Resolve(lambdaG);
+        var f0 = stick.DesignFrequency;
+        var lambdaG = stick.Guide.GuideWavelength(f0);
+        var spacing = stick.Feed.Spacing.Resolve(lambdaG);
+        var shortDistance = stick.Feed.ShortDistance.Resolve(lambdaG);
         if (!(spacing.Meters > 0) || !double.IsFinite(spacing.Meters))
             throw new InfeasibleDesignException($"the slot spacing {spacing} is not a positive length: give feed.spacing > 0");
         if (!(shortDistance.Meters > 0) || !double.IsFinite(shortDistance.Meters))
@@ -92,22 +90,22 @@ public static class StandingWaveDesigner
                 if (!warnings.Contains(w)) warnings.Add(w);
         }
 
-        AddRuleWarnings(warnings, request, lambdaG, spacing, shortDistance, centre);
+        AddRuleWarnings(warnings, f0, lambdaG, spacing, shortDistance, centre);
 
         var near = Termination.ShortAt(shortDistance);
         var far = centre ? Termination.ShortAt(shortDistance) : null;
         var feedPlane = centre
             ? slots[n / 2 - 1].Position + 0.5 * spacing
             : slots[n - 1].Position;
-        var design = new ArrayDesign(request.Name, f0, request.Guide, lambdaG, spacing, request.Feed.Position,
+        var design = new ArrayDesign(stick.Name, f0, stick.Guide, lambdaG, spacing, stick.Feed.Position,
             slot.CouplingKind, slot.Name, Array.AsReadOnly(slots), near, far, feedPlane, centre ? CentreJunctionRatio : 1, warnings.AsReadOnly());
-        Fabrication.SlotClearance.Require(design, request.Slots.Cutter);
-        return design;
+        Fabrication.SlotClearance.Require(design, stick.Cutter);
+        return new StandingWaveDesign(design);
     }
 
-    private static void CheckTaper(ArrayRequest request, IReadOnlyList<double> amplitudes, int n, bool centre)
+    private static void CheckTaper(StickRequest stick, int n, bool centre)
     {
-        TaperChecks.Require(request, amplitudes, n, "standing-wave");
+        TaperChecks.Require(stick, "standing-wave");
         if (centre && n % 2 != 0)
             throw new InfeasibleDesignException(
                 $"a centre-fed array is two equal halves, but the request has an odd slot count {n}: use {n - 1} or {n + 1} slots, or feed at the end");
@@ -126,10 +124,9 @@ public static class StandingWaveDesigner
             $"slot {worst + 1} needs g = {g[worst]:0.000}, above the {gMax:0.000} this guide can give at {f0} ({over} of {g.Length} slots exceed it): use more slots (about {needed} or more) or a gentler taper"));
     }
 
-    private static void AddRuleWarnings(List<DesignWarning> warnings, ArrayRequest request, Length lambdaG, Length spacing,
+    private static void AddRuleWarnings(List<DesignWarning> warnings, Frequency f0, Length lambdaG, Length spacing,
         Length shortDistance, bool centre)
     {
-        var f0 = request.DesignFrequency;
         var lambda = f0.FreeSpaceWavelength;
         if (spacing >= lambda)
             warnings.Add(new DesignWarning("grating-lobe", string.Create(CultureInfo.InvariantCulture,

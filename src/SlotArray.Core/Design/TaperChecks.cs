@@ -6,12 +6,12 @@ internal static class TaperChecks
     /// <summary>
     /// At least 2 slots, one finite, non-zero amplitude per slot. Throws <see cref="InfeasibleDesignException"/>.
     /// </summary>
-    /// <param name="request">The request (its taper type is named in the message).</param>
-    /// <param name="amplitudes">The taper's amplitudes.</param>
-    /// <param name="n">The slot count.</param>
+    /// <param name="stick">The stick: its slot count, amplitudes and taper family (named in the message).</param>
     /// <param name="arrayKind">"standing-wave" or "travelling-wave", for the message.</param>
-    public static void Require(ArrayRequest request, IReadOnlyList<double> amplitudes, int n, string arrayKind)
+    public static void Require(StickRequest stick, string arrayKind)
     {
+        var amplitudes = stick.Amplitudes;
+        int n = stick.Count;
         if (n < 2)
             throw new InfeasibleDesignException($"a {arrayKind} array needs at least 2 slots, the request has {n}: set slots.count ≥ 2");
         if (amplitudes.Count != n)
@@ -24,7 +24,7 @@ internal static class TaperChecks
                 throw new InfeasibleDesignException($"slot {i + 1} has amplitude {a}: the taper weights must be finite numbers");
             if (a == 0)
                 throw new InfeasibleDesignException(
-                    $"slot {i + 1} has amplitude 0, which needs a slot that does not radiate: remove that slot or give it a non-zero weight ({request.Taper.Type} taper)");
+                    $"slot {i + 1} has amplitude 0, which needs a slot that does not radiate: remove that slot or give it a non-zero weight ({stick.Taper} taper)");
         }
     }
 }

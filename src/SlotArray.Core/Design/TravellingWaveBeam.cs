@@ -17,7 +17,7 @@ namespace SlotArray.Core.Design;
 /// direction of travel), θ_b &lt; 0 toward the feed. λ is the free-space wavelength (the slots radiate into air);
 /// λg the guide wavelength, which includes any dielectric filling of the guide.</para>
 /// </remarks>
-public static class TravellingWaveBeam
+internal static class TravellingWaveBeam
 {
     /// <summary>
     /// sin θ_b of the main beam, or null when no solution of the phase condition lies in real space.

@@ -3,7 +3,7 @@ using System.Globalization;
 namespace SlotArray.Core.Design;
 
 /// <summary>Which closed form turns the power a slot must radiate into its conductance.</summary>
-public enum TravellingWaveConductanceForm
+internal enum TravellingWaveConductanceForm
 {
     /// <summary>
     /// Exact single shunt on a matched line (default): g = 2[(1 − p) − √(1 − 2p)]/p, p the fraction of the arriving
@@ -32,7 +32,7 @@ public enum TravellingWaveConductanceForm
 /// <para>Line loss: each section of length d between slots multiplies the power travelling on by e^{−2αd}
 /// (α the TE10 attenuation in Np/m, D. M. Pozar, <i>Microwave Engineering</i>, 4th ed., 2012, eq. 3.96).</para>
 /// </remarks>
-public static class TravellingWaveConductances
+internal static class TravellingWaveConductances
 {
     /// <summary>
     /// Fraction of the arriving power a shunt conductance g on a matched line absorbs: p = 4g/(2 + g)² ([D], see remarks).
@@ -131,7 +131,7 @@ public static class TravellingWaveConductances
 /// <param name="PowerPastLastSlot">Power travelling on past the last slot (toward the load).</param>
 /// <param name="ReflectedPower">Sum of the slots' reflections booked as lost (single-shunt form; 0 for small g).</param>
 /// <param name="WallLoss">Power lost in the walls of the sections between slots.</param>
-public sealed record TravellingWaveBudget(
+internal sealed record TravellingWaveBudget(
     IReadOnlyList<double> Conductances,
     IReadOnlyList<double> ArrivingPowers,
     double PowerPastLastSlot,

@@ -4,6 +4,7 @@ using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
 using SlotArray.Core.Stick;
+using SlotArray.Core.Waveguides;
 
 namespace SlotArray.Core.Design;
 
@@ -13,7 +14,7 @@ namespace SlotArray.Core.Design;
 /// <param name="ToleranceDb">Refinement stops when every slot's radiated power is within this many dB of its target
 /// (power dB; amplitude error is half); default 1e-4 dB, &gt; 0.</param>
 /// <param name="MaximumIterations">Refinement iterations before <see cref="ConvergenceException"/>; default 100, ≥ 1.</param>
-public sealed record TravellingWaveOptions(
+internal sealed record TravellingWaveOptions(
     TravellingWaveConductanceForm Form = TravellingWaveConductanceForm.SingleShunt,
     bool Refine = true,
     double ToleranceDb = 1e-4,
@@ -24,7 +25,7 @@ public sealed record TravellingWaveOptions(
 }
 
 /// <summary>How a travelling-wave design's beam was put where it was asked (<see cref="TravellingWavePointing"/>).</summary>
-public enum PointingCorrection
+internal enum PointingCorrection
 {
     /// <summary>Resonant slots, the spacing as given: the beam lies where the loaded line puts it.</summary>
     None,
@@ -38,7 +39,7 @@ public enum PointingCorrection
 /// <param name="Iterations">Network solutions performed (0 when refinement was off).</param>
 /// <param name="ResidualDb">Final largest |10 log10(P_n/T_n)| over the slots, power dB (P_n radiated in the network, T_n the target).</param>
 /// <param name="History">That residual after each iteration, dB, first to last (the closed-form start first).</param>
-public sealed record TravellingWaveRefinement(int Iterations, double ResidualDb, IReadOnlyList<double> History);
+internal sealed record TravellingWaveRefinement(int Iterations, double ResidualDb, IReadOnlyList<double> History);
 
 /// <summary>A designed travelling-wave array and the figures of its design.</summary>
 /// <param name="Design">The array: slots from the load-end datum, matched load at z = 0, feed plane beyond the last slot.</param>
@@ -49,7 +50,7 @@ public sealed record TravellingWaveRefinement(int Iterations, double ResidualDb,
 /// <param name="AchievedErrorDb">Largest amplitude error |10 log10(P_n/T_n)|/2, dB, of the design re-analysed with the real slot model at the design frequency.</param>
 /// <param name="Squint">Main-beam direction at the design frequency from the phase condition (positive toward the load end), or null if not in real space.</param>
 /// <param name="ScanRate">dθ_b/df at the design frequency, rad/Hz, or null.</param>
-public sealed record TravellingWaveDesign(
+internal sealed record TravellingWaveDesign(
     ArrayDesign Design,
     double LoadFraction,
     IReadOnlyList<double> TargetPowers,
@@ -57,7 +58,7 @@ public sealed record TravellingWaveDesign(
     TravellingWaveRefinement Refinement,
     double AchievedErrorDb,
     Angle? Squint,
-    double? ScanRate)
+    double? ScanRate) : StickDesign(Design)
 {
     /// <summary>Largest departure of the slot excitations' phases from the travelling-wave progression at the design frequency, degrees (mean removed).</summary>
     public double PhaseErrorDegrees { get; init; }
@@ -108,52 +109,43 @@ public sealed record TravellingWaveDesign(
 /// (<see cref="TravellingWaveDesign.AchievedErrorDb"/>).</para>
 /// <para>Isolated slots: external mutual coupling is not included.</para>
 /// </remarks>
-public static class TravellingWaveDesigner
+internal static class TravellingWaveDesigner
 {
     /// <summary>Distance from the end slots to the load flange and to the feed flange, in slot spacings (1: one spacing d).</summary>
     public const double EndDistanceInSpacings = 1.0;
 
-    /// <summary>Designs the array with the default options; see <see cref="Design(ArrayRequest, IShuntSlotModel, IReadOnlyList{double}, TravellingWaveOptions)"/>.</summary>
-    /// <param name="request">The validated request (feed type travelling-wave).</param>
-    /// <param name="slot">The slot model; its guide must be the request's.</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n, one per slot, slot 1 (nearest the load) first.</param>
-    public static TravellingWaveDesign Design(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes)
-        => Design(request, slot, amplitudes, TravellingWaveOptions.Default);
-
     /// <summary>
-    /// Designs the array (see remarks). Throws <see cref="InfeasibleDesignException"/> when a slot must absorb more than
+    /// Designs the stick (see remarks). Throws <see cref="InfeasibleDesignException"/> when a slot must absorb more than
     /// a shunt slot can (p &gt; 0.5) or more than the slot model's largest conductance, or the line loss alone takes
     /// more than 1 − P_L; <see cref="ConvergenceException"/> when the refinement does not converge.
     /// </summary>
-    /// <param name="request">The validated request (feed type travelling-wave).</param>
-    /// <param name="slot">The slot model; its guide must be the request's.</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n, one per slot, slot 1 (nearest the load) first; non-zero.</param>
-    /// <param name="options">Form, refinement switch and tolerances.</param>
-    public static TravellingWaveDesign Design(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes,
-        TravellingWaveOptions options)
+    /// <param name="stick">The stick (feed type travelling-wave; amplitudes a_n non-zero, slot 1 nearest the load first;
+    /// the slot model's guide must be the stick's).</param>
+    /// <param name="options">Form, refinement switch and tolerances; null for <see cref="TravellingWaveOptions.Default"/>.</param>
+    public static TravellingWaveDesign Design(StickRequest stick, TravellingWaveOptions? options = null)
     {
-        ArgumentNullException.ThrowIfNull(request);
-        ArgumentNullException.ThrowIfNull(slot);
-        ArgumentNullException.ThrowIfNull(amplitudes);
-        ArgumentNullException.ThrowIfNull(options);
-        if (request.Feed.Type != FeedType.TravellingWave)
-            throw new ArgumentException($"the travelling-wave designer was given a {request.Feed.Type} feed", nameof(request));
-        if (slot.Guide != request.Guide)
-            throw new ArgumentException($"the slot model is for the guide {slot.Guide.Designation}, not the request's {request.Guide.Designation}", nameof(slot));
+        ArgumentNullException.ThrowIfNull(stick);
+        options ??= TravellingWaveOptions.Default;
+        var slot = stick.Slot;
+        var amplitudes = stick.Amplitudes;
+        if (stick.Feed.Type != FeedType.TravellingWave)
+            throw new ArgumentException($"the travelling-wave designer was given a {stick.Feed.Type} feed", nameof(stick));
+        if (slot.Guide != stick.Guide)
+            throw new ArgumentException($"the slot model is for the guide {slot.Guide.Designation}, not the request's {stick.Guide.Designation}", nameof(stick));
         if (!(options.ToleranceDb > 0)) throw new ArgumentOutOfRangeException(nameof(options), options.ToleranceDb, "the refinement tolerance must be positive (dB)");
         if (options.MaximumIterations < 1) throw new ArgumentOutOfRangeException(nameof(options), options.MaximumIterations, "at least one refinement iteration is needed");
 
-        int n = request.Slots.Count;
-        CheckTaper(request, amplitudes, n);
-        double loadFraction = request.Feed.LoadFraction;
+        int n = stick.Count;
+        TaperChecks.Require(stick, "travelling-wave");
+        double loadFraction = stick.Feed.LoadFraction;
         if (!(loadFraction > 0 && loadFraction < 1))
             throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
                 $"the load fraction {loadFraction * 100:0.###} % must lie between 0 % and 100 %: set feed.load, e.g. 5 %"));
 
-        var f0 = request.DesignFrequency;
-        var guide = request.Guide;
+        var f0 = stick.DesignFrequency;
+        var guide = stick.Guide;
         var lambdaG = guide.GuideWavelength(f0);
-        var spacing = request.Feed.Spacing.Resolve(lambdaG);
+        var spacing = stick.Feed.Spacing.Resolve(lambdaG);
         if (!(spacing.Meters > 0) || !double.IsFinite(spacing.Meters))
             throw new InfeasibleDesignException($"the slot spacing {spacing} is not a positive length: give feed.spacing > 0");
         var end = EndDistanceInSpacings * spacing;
@@ -170,42 +162,9 @@ public static class TravellingWaveDesigner
         var g = startG.ToArray();
         var targets = startTargets;
         var history = new List<double>();
-        int iterations = 0;
         if (options.Refine)
-        {
-            var line = new LineNetwork(guide, positions, Termination.MatchedLoadAt(end), null, feedPlane);
-            var y = new Complex[n];
-            double residual = double.PositiveInfinity;
-            while (true)
-            {
-                for (int i = 0; i < n; i++) y[i] = g[i];
-                var sol = line.Solve(f0, y, signs);
-                iterations++;
-                double budget = 1 - loadFraction - sol.WallLoss - sol.ReflectedPower;
-                if (!(budget > 0))
-                    throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                        $"wall loss {sol.WallLoss:0.###} and reflection {sol.ReflectedPower:0.###} leave nothing to radiate after the {loadFraction * 100:0.###} % for the load: shorten the array, use a better-conducting metal or leave less for the load"));
-                targets = shape.Select(s => s * budget).ToArray();
-                residual = 0;
-                for (int i = 0; i < n; i++)
-                    residual = Math.Max(residual, Math.Abs(10 * Math.Log10(sol.RadiatedPowers[i] / targets[i])));
-                history.Add(residual);
-                if (residual < options.ToleranceDb) break;
-                if (iterations >= options.MaximumIterations)
-                    throw new ConvergenceException(string.Create(CultureInfo.InvariantCulture,
-                        $"the travelling-wave refinement did not bring every slot's radiated power within {options.ToleranceDb} dB of the taper (residual in power dB): a spacing close to 0.5 or 1 guide wavelength makes the slot reflections add up; move the spacing away from it"),
-                        iterations, residual);
-                for (int i = 0; i < n; i++)
-                {
-                    double arriving = sol.RadiatedPowers[i] / TravellingWaveConductances.AbsorbedFraction(g[i]);
-                    double p = targets[i] / arriving;
-                    if (p > 0.5)
-                        throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                            $"slot {i + 1} must absorb p = {p:0.###} of the power arriving at it (network model), beyond the 0.5 a shunt slot on a matched line can take: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
-                    g[i] = TravellingWaveConductances.SingleShuntConductance(p);
-                }
-            }
-        }
+            targets = Refine(new LineNetwork(guide, positions, Termination.MatchedLoadAt(end), null, feedPlane), f0, signs, shape,
+                loadFraction, g, history, options);
 
         CheckConductances(g, slot, f0, loadFraction);
         var warnings = new List<DesignWarning>();
@@ -219,11 +178,11 @@ public static class TravellingWaveDesigner
                 if (!warnings.Contains(w)) warnings.Add(w);
         }
         var squint = TravellingWaveBeam.Direction(guide, spacing, f0);
-        AddRuleWarnings(warnings, request, lambdaG, spacing, squint);
+        AddRuleWarnings(warnings, guide, f0, lambdaG, spacing, squint);
 
-        var design = new ArrayDesign(request.Name, f0, guide, lambdaG, spacing, FeedPosition.End, slot.CouplingKind, slot.Name,
+        var design = new ArrayDesign(stick.Name, f0, guide, lambdaG, spacing, FeedPosition.End, slot.CouplingKind, slot.Name,
             Array.AsReadOnly(slots), Termination.MatchedLoadAt(end), null, Length.FromMeters(feedPlane), 1, warnings.AsReadOnly());
-        Fabrication.SlotClearance.Require(design, request.Slots.Cutter);
+        Fabrication.SlotClearance.Require(design, stick.Cutter);
 
         var check = ArrayNetwork.Solve(design, slot, f0);
         double error = 0;
@@ -238,9 +197,49 @@ public static class TravellingWaveDesigner
             warnings.Add(new DesignWarning("travelling-wave-phase-ripple", string.Create(CultureInfo.InvariantCulture,
                 $"the slot reflections add partially in phase at {spacing / lambdaG:0.###} guide wavelengths: the slot excitations depart from the travelling-wave phase progression by up to {phaseError:0.#} deg at {f0}, which raises the sidelobes (resonant slots set amplitudes, not phases); a spacing farther from 0.5 guide-wavelength reduces it")));
 
-        var refinement = new TravellingWaveRefinement(iterations, history.Count > 0 ? history[^1] : double.NaN, history.AsReadOnly());
+        var refinement = new TravellingWaveRefinement(history.Count, history.Count > 0 ? history[^1] : double.NaN, history.AsReadOnly());
         return new TravellingWaveDesign(design with { Warnings = warnings.AsReadOnly() }, loadFraction, Array.AsReadOnly(targets),
             Array.AsReadOnly(startG), refinement, error, squint, TravellingWaveBeam.ScanRate(guide, spacing, f0)) { PhaseErrorDegrees = phaseError };
+    }
+
+    /// <summary>
+    /// Step (2) of the remarks: the network refinement of the conductances <paramref name="g"/> (updated in place) on the
+    /// isolated-slot line, one residual per network solution appended to <paramref name="history"/>; returns the last targets T_n.
+    /// </summary>
+    private static double[] Refine(LineNetwork line, Frequency f0, double[] signs, double[] shape, double loadFraction, double[] g,
+        List<double> history, TravellingWaveOptions options)
+    {
+        int n = g.Length;
+        var y = new Complex[n];
+        while (true)
+        {
+            for (int i = 0; i < n; i++) y[i] = g[i];
+            var sol = line.Solve(f0, y, signs);
+            int iterations = history.Count + 1;
+            double budget = 1 - loadFraction - sol.WallLoss - sol.ReflectedPower;
+            if (!(budget > 0))
+                throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
+                    $"wall loss {sol.WallLoss:0.###} and reflection {sol.ReflectedPower:0.###} leave nothing to radiate after the {loadFraction * 100:0.###} % for the load: shorten the array, use a better-conducting metal or leave less for the load"));
+            var targets = shape.Select(s => s * budget).ToArray();
+            double residual = 0;
+            for (int i = 0; i < n; i++)
+                residual = Math.Max(residual, Math.Abs(10 * Math.Log10(sol.RadiatedPowers[i] / targets[i])));
+            history.Add(residual);
+            if (residual < options.ToleranceDb) return targets;
+            if (iterations >= options.MaximumIterations)
+                throw new ConvergenceException(string.Create(CultureInfo.InvariantCulture,
+                    $"the travelling-wave refinement did not bring every slot's radiated power within {options.ToleranceDb} dB of the taper (residual in power dB): a spacing close to 0.5 or 1 guide wavelength makes the slot reflections add up; move the spacing away from it"),
+                    iterations, residual);
+            for (int i = 0; i < n; i++)
+            {
+                double arriving = sol.RadiatedPowers[i] / TravellingWaveConductances.AbsorbedFraction(g[i]);
+                double p = targets[i] / arriving;
+                if (p > 0.5)
+                    throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
+                        $"slot {i + 1} must absorb p = {p:0.###} of the power arriving at it (network model), beyond the 0.5 a shunt slot on a matched line can take: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
+                g[i] = TravellingWaveConductances.SingleShuntConductance(p);
+            }
+        }
     }
 
     /// <summary>
@@ -314,9 +313,6 @@ public static class TravellingWaveDesigner
         return (g, t);
     }
 
-    private static void CheckTaper(ArrayRequest request, IReadOnlyList<double> amplitudes, int n)
-        => TaperChecks.Require(request, amplitudes, n, "travelling-wave");
-
     private static void CheckConductances(double[] g, IShuntSlotModel slot, Frequency f0, double loadFraction)
     {
         double gMax = slot.MaximumConductance(f0);
@@ -328,9 +324,8 @@ public static class TravellingWaveDesigner
             $"slot {worst + 1} needs g = {g[worst]:0.000}, above the {gMax:0.000} the {slot.Name} can give in {slot.Guide.Designation} at {f0} ({over} of {g.Length} slots exceed it): leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
     }
 
-    private static void AddRuleWarnings(List<DesignWarning> warnings, ArrayRequest request, Length lambdaG, Length spacing, Angle? squint)
+    private static void AddRuleWarnings(List<DesignWarning> warnings, RectangularWaveguide guide, Frequency f0, Length lambdaG, Length spacing, Angle? squint)
     {
-        var f0 = request.DesignFrequency;
         double sp = spacing / lambdaG;
         double nearest = Math.Round(2 * sp) / 2;
         if (nearest > 0 && Math.Abs(sp - nearest) < 0.02)
@@ -339,7 +334,7 @@ public static class TravellingWaveDesigner
         if (squint is null)
             warnings.Add(new DesignWarning("travelling-wave-no-beam", string.Create(CultureInfo.InvariantCulture,
                 $"at spacing {spacing} the travelling-wave phase condition has no beam in real space at {f0} (sin θ = λ/λg − λ/(2d) lies outside −1…1): change the spacing")));
-        else if (TravellingWaveBeam.HasGratingLobe(request.Guide, spacing, f0))
+        else if (TravellingWaveBeam.HasGratingLobe(guide, spacing, f0))
             warnings.Add(new DesignWarning("grating-lobe", string.Create(CultureInfo.InvariantCulture,
                 $"spacing {spacing} with the beam at {squint.Value.Degrees:0.##} deg: d(1 + |sin θ|) ≥ λ at {f0}, so a grating lobe enters real space")));
     }

@@ -20,7 +20,7 @@ namespace SlotArray.Core.Design;
 /// <para>The design tried at each load is the whole travelling-wave design including its pointing correction
 /// (<see cref="TravellingWavePointing"/>), so the load returned designs as delivered.</para>
 /// </remarks>
-public static class TravellingWaveLoad
+internal static class TravellingWaveLoad
 {
     /// <summary>Resolution of the load search, as a fraction of the input power (0.05 %).</summary>
     public const double Resolution = 0.0005;
@@ -59,7 +59,7 @@ public static class TravellingWaveLoad
     /// <param name="slot">The slot model.</param>
     /// <param name="amplitudes">Aperture amplitudes, slot 1 first.</param>
     public static double? Smallest(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes)
-        => Smallest(request, r => TravellingWavePointing.Design(r, slot, amplitudes));
+        => Smallest(request, r => TravellingWavePointing.Design(StickRequest.Of(r, slot, amplitudes)));
 
     /// <summary>The request with another load fraction.</summary>
     /// <param name="request">The request.</param>

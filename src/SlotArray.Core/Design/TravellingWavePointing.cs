@@ -33,7 +33,7 @@ namespace SlotArray.Core.Design;
 /// above <see cref="ElementPullToleranceDegrees"/> one more pass aims the progression past it. When the detuned slots
 /// would need more conductance than the slot gives, the spacing is moved instead (resonant slots).</para>
 /// </remarks>
-public static class TravellingWavePointing
+internal static class TravellingWavePointing
 {
     /// <summary>Phase tolerance of the correction, degrees (every slot voltage within it of the progression, mean removed).</summary>
     public const double ToleranceDegrees = 0.01;
@@ -42,31 +42,29 @@ public static class TravellingWavePointing
     /// The isolated-slot design of <see cref="TravellingWaveDesigner"/> with its slot lengths detuned so that the slot
     /// voltages follow e^{jβz_n} (see remarks); the returned figures are those of the corrected design.
     /// </summary>
-    /// <param name="request">The validated request (travelling-wave feed).</param>
-    /// <param name="slot">The slot model.</param>
-    /// <param name="amplitudes">Aperture amplitudes a_n, slot 1 (nearest the load) first.</param>
+    /// <param name="stick">The stick (travelling-wave feed; amplitudes a_n, slot 1 nearest the load first).</param>
     /// <exception cref="InfeasibleDesignException">A slot must absorb more than it can (named, with the numbers).</exception>
     /// <exception cref="ConvergenceException">The correction did not reach its tolerances.</exception>
-    public static TravellingWaveDesign Design(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes)
+    public static TravellingWaveDesign Design(StickRequest stick)
     {
-        ArgumentNullException.ThrowIfNull(request);
-        ArgumentNullException.ThrowIfNull(slot);
-        var start = TravellingWaveDesigner.Design(request, slot, amplitudes);
+        ArgumentNullException.ThrowIfNull(stick);
+        var slot = stick.Slot;
+        var start = TravellingWaveDesigner.Design(stick);
         var asked = start.Squint;
         if (asked is null) return start;
-        var f0 = request.DesignFrequency;
+        var f0 = stick.DesignFrequency;
         var options = CoupledTravellingWaveOptions.Default with { ToleranceDegrees = ToleranceDegrees };
         try
         {
-            var corrected = CoupledTravellingWaveDesigner.Iterate(request, slot, amplitudes, options, start,
+            var corrected = CoupledTravellingWaveDesigner.Iterate(stick, options, start,
                 d => ArrayNetwork.Solve(d, slot, f0), " (isolated slots, lengths detuned for phase)");
             // The element pattern pulls the beam slightly toward broadside: one more pass on a progression steeper by
             // dκ = k cos θ · residual (from k sin θ = κ − π/d) removes it.
             double residual = AchievedBeam(corrected.Design, slot).Radians - asked.Value.Radians;
             if (Math.Abs(residual) * 180 / Math.PI > ElementPullToleranceDegrees)
             {
-                double kappa = request.Guide.PhaseConstant(f0) - f0.FreeSpaceWavenumber * Math.Cos(asked.Value.Radians) * residual;
-                corrected = CoupledTravellingWaveDesigner.Iterate(request, slot, amplitudes, options, start,
+                double kappa = stick.Guide.PhaseConstant(f0) - f0.FreeSpaceWavenumber * Math.Cos(asked.Value.Radians) * residual;
+                corrected = CoupledTravellingWaveDesigner.Iterate(stick, options, start,
                     d => ArrayNetwork.Solve(d, slot, f0), " (isolated slots, lengths detuned for phase)", kappa);
             }
             return start with { Design = corrected.Design, AchievedErrorDb = corrected.ResidualDb / 2 }
@@ -75,7 +73,7 @@ public static class TravellingWavePointing
         }
         catch (Exception e) when (e is InfeasibleDesignException or ConvergenceException)
         {
-            return BySpacing(request, slot, amplitudes, start, asked.Value, e.Message);
+            return BySpacing(stick, start, asked.Value, e.Message);
         }
     }
 
@@ -100,13 +98,13 @@ public static class TravellingWavePointing
     /// bisection and accepted if its residual is within <see cref="AcceptedResidualDegrees"/>. Used when the detuned
     /// slots would need more conductance than the slot can give.
     /// </summary>
-    private static TravellingWaveDesign BySpacing(ArrayRequest request, IShuntSlotModel slot, IReadOnlyList<double> amplitudes,
-        TravellingWaveDesign start, Quantities.Angle asked, string why)
+    private static TravellingWaveDesign BySpacing(StickRequest stick, TravellingWaveDesign start, Quantities.Angle asked, string why)
     {
-        var f0 = request.DesignFrequency;
+        var slot = stick.Slot;
+        var f0 = stick.DesignFrequency;
         double lambda = f0.FreeSpaceWavelength.Meters;
         TravellingWaveDesign At(double spacing) => TravellingWaveDesigner.Design(
-            request with { Feed = request.Feed with { Spacing = GuideDistance.OfLength(Quantities.Length.FromMeters(spacing)) } }, slot, amplitudes);
+            stick with { Feed = stick.Feed with { Spacing = GuideDistance.OfLength(Quantities.Length.FromMeters(spacing)) } });
         double d = start.Design.Spacing.Meters;
         var design = start;
         double residual = AchievedBeam(design.Design, slot).Degrees - asked.Degrees;

@@ -16,7 +16,7 @@ namespace SlotArray.Core.Fabrication;
 /// <param name="Width">Slot width, &gt; 0.</param>
 /// <param name="CutterDiameter">End-mill diameter (round ends), ≤ width; null for square ends.</param>
 /// <param name="Tolerance">± tolerance to put on the slot's dimensions, ≥ 0.</param>
-public sealed record SlotCutInput(int Index, Length Position, Length? Offset, Angle? Tilt, Length EquivalentLength,
+internal sealed record SlotCutInput(int Index, Length Position, Length? Offset, Angle? Tilt, Length EquivalentLength,
     Length Width, Length? CutterDiameter, Length Tolerance);
 
 /// <summary>The guide the slots are cut in, as far as the cut list needs it.</summary>
@@ -50,7 +50,7 @@ public sealed record CutListRow(int Slot, Length Position, Length? Offset, Angle
 /// <param name="Guide">The guide.</param>
 /// <param name="Rows">One row per slot, ordered by slot number.</param>
 /// <param name="Notes">Notes for the header and the drawing (datum, length rule, square ends).</param>
-public sealed record CutList(Datums Datums, CutListGuide Guide, IReadOnlyList<CutListRow> Rows, IReadOnlyList<DesignWarning> Notes)
+internal sealed record CutList(Datums Datums, CutListGuide Guide, IReadOnlyList<CutListRow> Rows, IReadOnlyList<DesignWarning> Notes)
 {
     /// <summary>
     /// Builds the rows from generic per-slot inputs: overall length by the equal-area rule (<see cref="RoundEndedSlot"/>,
@@ -61,7 +61,7 @@ public sealed record CutList(Datums Datums, CutListGuide Guide, IReadOnlyList<Cu
     /// <param name="slots">The slots (any order; numbers unique).</param>
     /// <param name="datums">The datums; default <see cref="Fabrication.Datums.Default"/>.</param>
     /// <exception cref="InfeasibleDesignException">A slot does not fit the broad wall, or its cutter is wider than the slot.</exception>
-    public static CutList Build(CutListGuide guide, IReadOnlyList<SlotCutInput> slots, Datums? datums = null)
+    internal static CutList Build(CutListGuide guide, IReadOnlyList<SlotCutInput> slots, Datums? datums = null)
     {
         ArgumentNullException.ThrowIfNull(guide);
         ArgumentNullException.ThrowIfNull(slots);

@@ -3,7 +3,7 @@ using SlotArray.Core.Quantities;
 namespace SlotArray.Core.Fabrication;
 
 /// <summary>The face every longitudinal slot position is dimensioned from (baseline dimensioning).</summary>
-public enum LongitudinalDatumKind
+internal enum LongitudinalDatumKind
 {
     /// <summary>The inner face of the end short-circuit plate (default; the λg/4 short distance is referenced to it).</summary>
     EndShortInnerFace,
@@ -15,7 +15,7 @@ public enum LongitudinalDatumKind
 
 /// <summary>Which narrow (side) wall the transverse positions of broad-wall slots are measured from.</summary>
 /// <remarks>Axes as in architecture.md: x runs across the broad wall from its centreline, positive toward the +x side wall.</remarks>
-public enum TransverseDatumSide
+internal enum TransverseDatumSide
 {
     /// <summary>The −x side wall (default): distance = t + a/2 + x, so +x slots read larger.</summary>
     MinusXWall,
@@ -34,7 +34,7 @@ public enum TransverseDatumSide
 /// </remarks>
 /// <param name="Longitudinal">The longitudinal datum face.</param>
 /// <param name="Transverse">The datum side wall for transverse positions.</param>
-public sealed record Datums(LongitudinalDatumKind Longitudinal, TransverseDatumSide Transverse)
+internal sealed record Datums(LongitudinalDatumKind Longitudinal, TransverseDatumSide Transverse)
 {
     /// <summary>The default: inner face of the end short, and the −x side wall.</summary>
     public static Datums Default { get; } = new(LongitudinalDatumKind.EndShortInnerFace, TransverseDatumSide.MinusXWall);

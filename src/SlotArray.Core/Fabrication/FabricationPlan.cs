@@ -73,7 +73,7 @@ public sealed record FabricationPlan(CutListGuide Guide, string Datum, Length De
     /// <param name="cutter">End-mill diameter for round-ended slots, or null for square ends.</param>
     /// <param name="tolerance">The spec's tolerance block, or null for the defaults.</param>
     /// <exception cref="InfeasibleDesignException">A slot does not fit the broad wall, or its cutter is wider than the slot.</exception>
-    public static FabricationPlan Build(ArrayDesign design, FeedType feed, Length? cutter, ToleranceRequest? tolerance)
+    internal static FabricationPlan Build(ArrayDesign design, FeedType feed, Length? cutter, ToleranceRequest? tolerance)
     {
         ArgumentNullException.ThrowIfNull(design);
         var tol = FeatureTolerances.From(tolerance);
@@ -90,7 +90,7 @@ public sealed record FabricationPlan(CutListGuide Guide, string Datum, Length De
     /// <param name="farShort">Centre feed: z of the second end short's inner face; null for an end feed.</param>
     /// <param name="guideWavelength">λg at the design frequency.</param>
     /// <param name="metalName">The wall metal's name, for the expansion coefficient.</param>
-    public static FabricationPlan Layout(CutList cut, FeatureTolerances tol, bool flangedLoadEnd, Length feedPlane, Length? farShort,
+    internal static FabricationPlan Layout(CutList cut, FeatureTolerances tol, bool flangedLoadEnd, Length feedPlane, Length? farShort,
         Length guideWavelength, string metalName)
     {
         ArgumentNullException.ThrowIfNull(cut);

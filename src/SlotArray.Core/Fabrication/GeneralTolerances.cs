@@ -3,7 +3,7 @@ using SlotArray.Core.Quantities;
 namespace SlotArray.Core.Fabrication;
 
 /// <summary>ISO 2768-1 tolerance class for general linear dimensions.</summary>
-public enum Iso2768Class
+internal enum Iso2768Class
 {
     /// <summary>Class f (fine).</summary>
     Fine,
@@ -16,7 +16,7 @@ public enum Iso2768Class
 /// <param name="Above">Nominal sizes above this length …</param>
 /// <param name="UpTo">… up to and including this length.</param>
 /// <param name="Tolerance">The permitted deviation ±.</param>
-public sealed record GeneralToleranceRow(Iso2768Class Class, Length Above, Length UpTo, Length Tolerance);
+internal sealed record GeneralToleranceRow(Iso2768Class Class, Length Above, Length UpTo, Length Tolerance);
 
 /// <summary>
 /// Typical tolerances for slotted-waveguide work, as data with their provenance.
@@ -29,7 +29,7 @@ public sealed record GeneralToleranceRow(Iso2768Class Class, Length Above, Lengt
 /// Slot-specific figures [C: common practice, no source]: ±0.025 mm (±0.001 in) on slot length, width and
 /// position is routine precision CNC milling for X-band arrays; ±0.05 mm is commodity work.
 /// </remarks>
-public static class GeneralTolerances
+internal static class GeneralTolerances
 {
     /// <summary>Provenance of the ISO 2768-1 rows.</summary>
     public const string Iso2768Provenance = "ISO 2768-1:1989, Table 1 (from memory)";

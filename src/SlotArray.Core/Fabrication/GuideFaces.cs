@@ -7,7 +7,7 @@ namespace SlotArray.Core.Fabrication;
 /// <param name="Y1">Start Y.</param>
 /// <param name="X2">End X.</param>
 /// <param name="Y2">End Y.</param>
-public sealed record FaceLine(double X1, double Y1, double X2, double Y2);
+internal sealed record FaceLine(double X1, double Y1, double X2, double Y2);
 
 /// <summary>A circular arc of an outline, counter-clockwise from <paramref name="StartDeg"/> to <paramref name="EndDeg"/> (as DXF draws arcs).</summary>
 /// <param name="CentreX">Centre X, m.</param>
@@ -15,7 +15,7 @@ public sealed record FaceLine(double X1, double Y1, double X2, double Y2);
 /// <param name="Radius">Radius, m (the cutter radius).</param>
 /// <param name="StartDeg">Start angle, degrees from +X, 0 ≤ angle &lt; 360.</param>
 /// <param name="EndDeg">End angle, degrees from +X, 0 ≤ angle &lt; 360.</param>
-public sealed record FaceArc(double CentreX, double CentreY, double Radius, double StartDeg, double EndDeg);
+internal sealed record FaceArc(double CentreX, double CentreY, double Radius, double StartDeg, double EndDeg);
 
 /// <summary>One slot's cut on one face: its closed outline (lines and arcs) and its centre mark.</summary>
 /// <param name="Slot">Slot number.</param>
@@ -23,7 +23,7 @@ public sealed record FaceArc(double CentreX, double CentreY, double Radius, doub
 /// <param name="CentreY">Centre-mark Y, m.</param>
 /// <param name="Lines">Straight parts of the outline.</param>
 /// <param name="Arcs">Round parts of the outline (empty for square ends).</param>
-public sealed record FaceCut(int Slot, double CentreX, double CentreY, IReadOnlyList<FaceLine> Lines, IReadOnlyList<FaceArc> Arcs);
+internal sealed record FaceCut(int Slot, double CentreX, double CentreY, IReadOnlyList<FaceLine> Lines, IReadOnlyList<FaceArc> Arcs);
 
 /// <summary>One outer face of the tube, developed flat, with the cuts on it.</summary>
 /// <param name="Key">File-name key: "broad", "narrow", "upper-broad" or "lower-broad".</param>
@@ -33,7 +33,7 @@ public sealed record FaceCut(int Slot, double CentreX, double CentreY, IReadOnly
 /// <param name="YMax">Highest Y of the face, m.</param>
 /// <param name="DatumB">Y of datum B on this face (broad face: the outside of the −x side wall), or null.</param>
 /// <param name="Cuts">The cuts on this face, by slot number.</param>
-public sealed record GuideFace(string Key, string Name, double Length, double YMin, double YMax, double? DatumB, IReadOnlyList<FaceCut> Cuts);
+internal sealed record GuideFace(string Key, string Name, double Length, double YMin, double YMax, double? DatumB, IReadOnlyList<FaceCut> Cuts);
 
 /// <summary>
 /// The outer faces of the slotted tube with every slot outline in face coordinates (for CAM files and drawings): X along
@@ -48,7 +48,7 @@ public sealed record GuideFace(string Key, string Name, double Length, double YM
 /// r = w/2 two half circles), a square-ended one a rectangle; the overall length is tip to tip along X. An edge slot's
 /// sign follows <c>SlotEnd</c>/<c>CutList</c>: + when its end in the upper broad wall lies farther from datum A.
 /// </remarks>
-public static class GuideFaces
+internal static class GuideFaces
 {
     /// <summary>The faces of a plan: one for broad-wall slots, three (narrow, upper broad, lower broad) for edge slots.</summary>
     /// <param name="plan">The fabrication plan.</param>

@@ -6,7 +6,7 @@ namespace SlotArray.Core.Fabrication;
 /// <summary>
 /// How machining errors move the electrical quantities, to size tolerances (derived here from the cited formulas [D]; WR-90 values by numpy [N]).
 /// </summary>
-public static class MachiningSensitivity
+internal static class MachiningSensitivity
 {
     /// <summary>
     /// Relative change of a longitudinal slot's Stevenson conductance per unit offset error, d(ln g)/dx = (2π/a) cot(πx/a)

@@ -21,7 +21,7 @@ public sealed record MachiningTolerance(Length Value, ErrorDistribution Distribu
 }
 
 /// <summary>Machining tolerances for the Monte Carlo analysis.</summary>
-/// <param name="Offset">Slot offset from the centreline (or, for edge slots, taken as a tilt-equivalent error at the slot end).</param>
+/// <param name="Offset">Slot offset from the centreline (broad-wall slots; edge slots have none: their errors are <see cref="Tilt"/> and <see cref="Depth"/>).</param>
 /// <param name="Length">Slot length.</param>
 /// <param name="Position">Slot centre along the guide.</param>
 /// <param name="Width">Slot width.</param>
@@ -32,4 +32,11 @@ public sealed record MachiningTolerance(Length Value, ErrorDistribution Distribu
 /// <param name="Trials">Number of Monte Carlo trials, ≥ 1.</param>
 /// <param name="Seed">Random seed; the same seed gives identical results.</param>
 public sealed record ToleranceRequest(MachiningTolerance Offset, MachiningTolerance Length, MachiningTolerance Position, MachiningTolerance Width,
-    MachiningTolerance GuideWidth, MachiningTolerance Wall, Length SystematicLength, Length SystematicOffset, int Trials, int Seed);
+    MachiningTolerance GuideWidth, MachiningTolerance Wall, Length SystematicLength, Length SystematicOffset, int Trials, int Seed)
+{
+    /// <summary>Edge slots: tilt of each slot (none for broad-wall slots).</summary>
+    public AngleTolerance Tilt { get; init; } = AngleTolerance.None;
+
+    /// <summary>Edge slots: depth of cut into each broad wall (none for broad-wall slots); a slot that wraps lengthens by twice it.</summary>
+    public MachiningTolerance Depth { get; init; } = MachiningTolerance.None;
+}

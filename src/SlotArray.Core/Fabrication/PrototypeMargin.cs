@@ -7,7 +7,7 @@ namespace SlotArray.Core.Fabrication;
 /// The first plate's slots cut short on purpose (<c>fabrication.prototype_margin</c>), so that after measurement they can
 /// be trimmed up: a slot can only be made longer. Common practice, no source.
 /// </summary>
-public static class PrototypeMargin
+internal static class PrototypeMargin
 {
     /// <summary>Largest margin accepted either way: ±5 %.</summary>
     public const double Limit = 0.05;

@@ -15,7 +15,7 @@ namespace SlotArray.Core.Fabrication;
 /// fillets], which reduces to the first form at r = w/2. Oliner (1957, Part II) measured a difference between round and
 /// rectangular ends but no numeric correction was confirmed, so treat this as a default to calibrate.
 /// </remarks>
-public static class RoundEndedSlot
+internal static class RoundEndedSlot
 {
     /// <summary>Overall tip-to-tip length from the equivalent rectangular length: L_o = L_eq + (4 − π) r²/w, r = D_t/2
     /// (= L_eq + (1 − π/4) w when D_t = w).</summary>

@@ -23,7 +23,7 @@ namespace SlotArray.Core.Fabrication;
 /// </list>
 /// A gap of zero (slots touching) counts as a collision: no web of metal would be left between them.
 /// </remarks>
-public static class SlotClearance
+internal static class SlotClearance
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

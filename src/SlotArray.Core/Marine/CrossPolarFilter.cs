@@ -33,7 +33,7 @@ namespace SlotArray.Core.Marine;
 /// <param name="Spacing">Plate pitch s along the guide axis, centre to centre; &gt; <paramref name="Thickness"/>.</param>
 /// <param name="Depth">Plate depth D out from the slotted face; &gt; 0.</param>
 /// <param name="Thickness">Plate thickness t; ≥ 0.</param>
-public sealed record CrossPolarFilter(Length Spacing, Length Depth, Length Thickness)
+internal sealed record CrossPolarFilter(Length Spacing, Length Depth, Length Thickness)
 {
     /// <summary>20 log10(e): dB per neper of field.</summary>
     public const double DbPerNeper = 8.685889638065036;

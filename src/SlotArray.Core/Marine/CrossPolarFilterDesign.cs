@@ -32,7 +32,7 @@ public sealed record FilterRequest(Length? Spacing, Length? Depth, Length? Thick
 /// <param name="SmallestAttenuationDb">Smallest cross-polar attenuation over the band (at its top frequency), dB.</param>
 /// <param name="WantedLossDb">Largest loss of the wanted polarisation over the band, dB (applied to the gain).</param>
 /// <param name="Warnings">Validity limits met (cutoff inside the band, grating order in real space, the model's limits).</param>
-public sealed record FilterOutcome(
+internal sealed record FilterOutcome(
     CrossPolarFilter Filter,
     FilterRequest Asked,
     double MarginDb,
@@ -50,7 +50,7 @@ public sealed record FilterOutcome(
 /// cross-polarised cut of every frequency scaled down by the plates' TE1 attenuation, the gain by the wanted
 /// polarisation's loss (<see cref="CrossPolarFilter"/>).
 /// </summary>
-public static class CrossPolarFilterDesign
+internal static class CrossPolarFilterDesign
 {
     /// <summary>Margin below <c>requirements.cross_polar</c> the automatic depth is chosen for, 3 dB (common practice, no source).</summary>
     public const double MarginDb = 3;

@@ -36,7 +36,7 @@ public sealed record FlareRequest(Length? Length, Length? Aperture, Angle PhaseE
 /// <param name="CutElevationDeg">Elevations of the vertical cut, degrees.</param>
 /// <param name="CutLevelDb">The vertical cut, dB relative to boresight.</param>
 /// <param name="Warnings">Validity limits.</param>
-public sealed record FlareOutcome(
+internal sealed record FlareOutcome(
     SectoralFlare Flare,
     FlareRequest Asked,
     Angle VerticalBeamwidth,
@@ -74,7 +74,7 @@ public sealed record FlareOutcome(
 /// design's slot conductances are those of slots radiating into a half-space, so a flare with a cut-off throat needs its
 /// slots characterised in the throat before the tilts are right.</para>
 /// </remarks>
-public static class FlareDesign
+internal static class FlareDesign
 {
     /// <summary>Largest phase error of an automatic flare when none is given: 90° (t = 1/4; common practice, no source: below the 135° of Balanis's optimum-gain H-plane horn, for a cleaner vertical pattern).</summary>
     public static Angle DefaultPhaseError { get; } = Angle.FromDegrees(90);

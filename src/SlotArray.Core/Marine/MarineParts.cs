@@ -12,7 +12,7 @@ namespace SlotArray.Core.Marine;
 /// <param name="FirstFromA">Position of the first (or only) part's start (flare) or centre (filter plate) from datum A, along the guide.</param>
 /// <param name="Pitch">Filter plates: centre-to-centre pitch; flare plates: 0.</param>
 /// <param name="AngleDegrees">Flare plates: the half-flare angle from the slotted face's normal, degrees; filter plates: 0 (normal to the guide axis).</param>
-public sealed record MarinePart(string Name, int Quantity, Length AlongGuide, Length Width, Length Height, Length FirstFromA, Length Pitch, double AngleDegrees);
+internal sealed record MarinePart(string Name, int Quantity, Length AlongGuide, Length Width, Length Height, Length FirstFromA, Length Pitch, double AngleDegrees);
 
 /// <summary>
 /// The flare's two plates and the filter's plates as parts, positioned from datum A (the cut list's datum): the plates
@@ -20,7 +20,7 @@ public sealed record MarinePart(string Name, int Quantity, Length AlongGuide, Le
 /// layout's flange-to-flange span); filter plates stand between the slots at z_slot1 + s/2 + j s (the automatic pitch
 /// divides the slot spacing, so none stands over a slot's opening).
 /// </summary>
-public static class MarineParts
+internal static class MarineParts
 {
     /// <summary>The parts of a design's flare and filter; empty when it has neither.</summary>
     /// <param name="design">The designed array.</param>

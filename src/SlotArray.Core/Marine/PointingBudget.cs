@@ -19,7 +19,7 @@ public sealed record OperatingRange(double LowCelsius, double HighCelsius, Frequ
 /// <param name="Beam">Main-beam direction.</param>
 /// <param name="ErrorDegrees">Beam minus the nominal beam (design frequency, 20 °C), degrees.</param>
 /// <param name="FromSweep">True when the beam comes from the analysed band sweep; false: from the phase condition (outside the band).</param>
-public sealed record PointingCase(double TemperatureCelsius, Frequency Transmit, Frequency Equivalent, Angle Beam, double ErrorDegrees, bool FromSweep);
+internal sealed record PointingCase(double TemperatureCelsius, Frequency Transmit, Frequency Equivalent, Angle Beam, double ErrorDegrees, bool FromSweep);
 
 /// <summary>The beam's direction over the operating range and the worst bearing error.</summary>
 /// <param name="Range">The operating range.</param>
@@ -29,7 +29,7 @@ public sealed record PointingCase(double TemperatureCelsius, Frequency Transmit,
 /// <param name="WorstErrorDegrees">Largest |error| over the cases, degrees.</param>
 /// <param name="DegreesPerKelvin">Beam drift per kelvin at the design frequency, degrees.</param>
 /// <param name="DegreesPerMegahertz">Beam drift per MHz at 20 °C, degrees.</param>
-public sealed record PointingBudget(OperatingRange Range, ThermalExpansion? Expansion, Angle Nominal, IReadOnlyList<PointingCase> Cases,
+internal sealed record PointingBudget(OperatingRange Range, ThermalExpansion? Expansion, Angle Nominal, IReadOnlyList<PointingCase> Cases,
     double WorstErrorDegrees, double DegreesPerKelvin, double DegreesPerMegahertz)
 {
     /// <summary>

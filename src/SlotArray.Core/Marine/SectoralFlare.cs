@@ -37,7 +37,7 @@ namespace SlotArray.Core.Marine;
 /// <param name="Throat">Height of the slotted face where the plates start (b + 2 × wall); &gt; 0.</param>
 /// <param name="Aperture">Height of the aperture between the plates' outer edges; ≥ <paramref name="Throat"/>.</param>
 /// <param name="Length">Axial depth from the slotted face to the aperture; &gt; 0.</param>
-public sealed record SectoralFlare(Length Throat, Length Aperture, Length Length)
+internal sealed record SectoralFlare(Length Throat, Length Aperture, Length Length)
 {
     /// <summary>Gauss–Legendre order of the aperture integral (256: the integrand has at most a few tens of phase turns).</summary>
     public const int QuadratureOrder = 256;

@@ -13,7 +13,7 @@ namespace SlotArray.Core.Network;
 /// <param name="Metrics">Beam direction, HPBW, sidelobes of that cut.</param>
 /// <param name="Directivity">Directivity in the beam direction (half-space, half-wave slot element), dimensionless.</param>
 /// <param name="Gain">Gain including mismatch and loss: D × radiation efficiency × (1 − |S11|²) = D × P_rad/P_inc.</param>
-public sealed record FrequencyFigures(NetworkSolution Network, Pattern Pattern, PatternMetrics Metrics, double Directivity, double Gain)
+internal sealed record FrequencyFigures(NetworkSolution Network, Pattern Pattern, PatternMetrics Metrics, double Directivity, double Gain)
 {
     /// <summary>Edge (tilted) slots: the cross-polarised cut and its peak relative to the co-polar beam; null for untilted slots.</summary>
     public CrossPolarFigures? CrossPolar { get; init; }
@@ -41,7 +41,7 @@ public sealed record FrequencyFigures(NetworkSolution Network, Pattern Pattern, 
 /// toward the datum end, i.e. toward the end short (or load) at z = 0, away from the end feed; for a centre feed,
 /// also toward the datum end. The Patterns library measures θ &gt; 0 toward +z, so the positions are passed as −z_n.
 /// </remarks>
-public static class ArrayFigures
+internal static class ArrayFigures
 {
     /// <summary>
     /// The default grid: uniform in θ over the half-space, at least 1801 points and about 32 per lobe width

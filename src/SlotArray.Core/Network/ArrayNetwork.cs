@@ -22,7 +22,7 @@ namespace SlotArray.Core.Network;
 /// <para>Powers are fractions of the incident power; the balance radiated + wall loss + load + reflected = 1 holds
 /// to rounding (<see cref="NetworkSolution.PowerBalanceError"/>).</para>
 /// </remarks>
-public static class ArrayNetwork
+internal static class ArrayNetwork
 {
     /// <summary>Solves the array at one frequency.</summary>
     /// <param name="design">The designed array.</param>

@@ -41,7 +41,7 @@ namespace SlotArray.Core.Network;
 /// are the slot voltages, e_n = w_n/√Γ0, which equal <see cref="ArrayNetwork"/>'s power-based excitations when the
 /// slot has Stevenson's resonant conductance Γ0 f_r² (Stevenson 1948).</para>
 /// </remarks>
-public static class CoupledArrayNetwork
+internal static class CoupledArrayNetwork
 {
     /// <summary>Solves the coupled array at one frequency.</summary>
     /// <param name="design">A designed array of offset (longitudinal) slots.</param>
@@ -76,10 +76,13 @@ public static class CoupledArrayNetwork
         if (points < 2) throw new ArgumentOutOfRangeException(nameof(points), points, "a sweep needs at least 2 points");
         if (!(high > low)) throw new ArgumentOutOfRangeException(nameof(high), high.ToString(), $"the band's upper edge must exceed its lower edge {low}");
         var sys = new CoupledSystem(design, slot, coupling);
-        var list = new NetworkSolution[points];
-        for (int i = 0; i < points; i++)
-            list[i] = sys.Solve(Frequency.FromHertz(low.Hertz + (high.Hertz - low.Hertz) * i / (points - 1)));
-        return new FrequencySweep(design.DesignFrequency, sys.Solve(design.DesignFrequency), Array.AsReadOnly(list));
+        var list = new NetworkSolution[points + 1];
+        // The frequencies are independent systems (the slot model's memo is thread-safe): solved in parallel, each into
+        // its own slot, so the order of evaluation cannot change them; the design frequency is the last item.
+        ParallelFailures.Unwrapped(() => Parallel.For(0, points + 1, i => list[i] = sys.Solve(i == points
+            ? design.DesignFrequency
+            : Frequency.FromHertz(low.Hertz + (high.Hertz - low.Hertz) * i / (points - 1)))));
+        return new FrequencySweep(design.DesignFrequency, list[points], Array.AsReadOnly(list[..points]));
     }
 
     /// <summary>

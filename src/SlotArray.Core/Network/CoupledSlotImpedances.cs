@@ -11,7 +11,7 @@ namespace SlotArray.Core.Network;
 /// <param name="slots">Where the slots are (centre, signed offset, half length).</param>
 /// <param name="width">Slot width.</param>
 /// <param name="f">Frequency.</param>
-public delegate CouplingMatrix MutualImpedanceModel(IReadOnlyList<LongitudinalSlotPlacement> slots, Length width, Frequency f);
+internal delegate CouplingMatrix MutualImpedanceModel(IReadOnlyList<LongitudinalSlotPlacement> slots, Length width, Frequency f);
 
 /// <summary>
 /// The mutual-impedance models the coupled design and analysis use. The default pairs the coupling function of
@@ -30,7 +30,7 @@ public delegate CouplingMatrix MutualImpedanceModel(IReadOnlyList<LongitudinalSl
 /// <para>Neglected: internal coupling through the guide's higher-order modes and the finite ground plane (see
 /// <see cref="SlotMutualCoupling"/>).</para>
 /// </remarks>
-public static class CoupledSlotImpedances
+internal static class CoupledSlotImpedances
 {
     /// <summary>
     /// Half-cosine currents, centre-referred (<see cref="CosineCurrentMutualImpedance"/>), each pair once (symmetric),

@@ -8,7 +8,7 @@ namespace SlotArray.Core.Network;
 /// <param name="DesignFrequency">The design frequency.</param>
 /// <param name="AtDesign">The solution at the design frequency.</param>
 /// <param name="Points">Solutions on the grid, in ascending frequency.</param>
-public sealed record FrequencySweep(Frequency DesignFrequency, NetworkSolution AtDesign, IReadOnlyList<NetworkSolution> Points)
+internal sealed record FrequencySweep(Frequency DesignFrequency, NetworkSolution AtDesign, IReadOnlyList<NetworkSolution> Points)
 {
     /// <summary>
     /// The band around the design frequency with VSWR ≤ <paramref name="vswrLimit"/>, from the grid: each edge lies

@@ -13,7 +13,7 @@ namespace SlotArray.Core.Network;
 /// <param name="LowLimited">The lower edge is the search or sweep edge.</param>
 /// <param name="HighLimited">The upper edge is the search or sweep edge.</param>
 /// <param name="Centre">The design frequency the band contains.</param>
-public sealed record MatchBand(double VswrLimit, Frequency Low, Frequency High, bool LowLimited, bool HighLimited, Frequency Centre)
+internal sealed record MatchBand(double VswrLimit, Frequency Low, Frequency High, bool LowLimited, bool HighLimited, Frequency Centre)
 {
     /// <summary>Bandwidth High − Low.</summary>
     public Frequency Width => Frequency.FromHertz(High.Hertz - Low.Hertz);

@@ -27,7 +27,7 @@ namespace SlotArray.Core.Network;
 /// (common practice [C], see <c>PowerHandling</c>). Centre feed: each half carries part of the power, so the factor is about 1/√2 at resonance.
 /// </param>
 /// <param name="PeakPosition">z (from the datum) where that peak occurs.</param>
-public sealed record NetworkSolution(
+internal sealed record NetworkSolution(
     Frequency Frequency,
     Complex S11,
     IReadOnlyList<Complex> SlotAdmittances,

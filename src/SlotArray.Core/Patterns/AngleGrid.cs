@@ -6,7 +6,7 @@ namespace SlotArray.Core.Patterns;
 /// The observation angles of a pattern cut: θ measured from broadside in the plane that contains the array axis,
 /// θ &gt; 0 toward +z (architecture.md, "Conventions"), in radians, strictly increasing, within [−π/2, π/2].
 /// </summary>
-public sealed class AngleGrid
+internal sealed class AngleGrid
 {
     private AngleGrid(ImmutableArray<double> theta, ImmutableArray<double> sines, bool uniformInSine)
     {

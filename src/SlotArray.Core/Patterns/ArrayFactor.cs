@@ -11,7 +11,7 @@ namespace SlotArray.Core.Patterns;
 /// ψ = k d sin θ). With this sign a progressive phase a_n ∝ exp(−j k z_n sin θ0) steers the
 /// beam to θ0. The total field is E(θ)·AF(θ) for an element pattern E (pattern multiplication, Balanis §6.2).
 /// </summary>
-public static class ArrayFactor
+internal static class ArrayFactor
 {
     /// <summary>
     /// The pattern on a grid. Equally spaced positions take the fast path (a Horner recurrence in

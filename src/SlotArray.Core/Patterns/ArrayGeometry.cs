@@ -1,7 +1,7 @@
 namespace SlotArray.Core.Patterns;
 
 /// <summary>Element positions along the array axis (metres).</summary>
-public static class ArrayGeometry
+internal static class ArrayGeometry
 {
     /// <summary>
     /// N equally spaced positions centred on z = 0: z_n = (n − (N − 1)/2)·d, n = 0 … N − 1

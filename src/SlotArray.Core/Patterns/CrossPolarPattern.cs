@@ -8,7 +8,7 @@ namespace SlotArray.Core.Patterns;
 /// <param name="PeakLevelDb">Peak cross-polarised power relative to the co-polarised peak, dB.</param>
 /// <param name="PeakDirection">Where the cross-polarised peak lies (θ from broadside, positive toward the datum end as in the co-polar cut).</param>
 /// <param name="PowerRatio">∫|E_x|² du / ∫|E_co|² du over the cut (u = sin θ): the cross-polarised share of the radiated power, relative to the co-polarised.</param>
-public sealed record CrossPolarFigures(Pattern Pattern, double PeakLevelDb, Angle PeakDirection, double PowerRatio);
+internal sealed record CrossPolarFigures(Pattern Pattern, double PeakLevelDb, Angle PeakDirection, double PowerRatio);
 
 /// <summary>
 /// Co- and cross-polarised far field of narrow-wall (edge) slots tilted ±θ_n, in the plane containing the guide axis
@@ -34,7 +34,7 @@ public sealed record CrossPolarFigures(Pattern Pattern, double PeakLevelDb, Angl
 /// sin ψ = sin θ_b ± λ/(2d), with a peak tan θ below the co-polar beam for equal tilts before element weighting
 /// ([D], <c>EdgeSlotCrossPolarization</c>).</para>
 /// </remarks>
-public static class CrossPolarPattern
+internal static class CrossPolarPattern
 {
     /// <summary>Co-polarised element pattern of an edge slot in the plane of the guide axis: 1 (uniform over the half-space; see remarks).</summary>
     public static Func<double, double> EdgeSlotCoPolarElement { get; } = _ => 1.0;

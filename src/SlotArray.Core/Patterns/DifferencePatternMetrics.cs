@@ -13,7 +13,7 @@ namespace SlotArray.Core.Patterns;
 /// <param name="DifferencePeakDirections">Directions of the left and right difference lobes.</param>
 /// <param name="PeakSidelobeDb">Highest point of the sidelobe region, dB; null if the grid holds none.</param>
 /// <param name="LobeSeparationNulls">Angle between the outer minima of the two difference lobes (the difference pattern's "null-to-null" extent); NaN if one reaches a grid end.</param>
-public sealed record DifferencePatternMetrics(
+internal sealed record DifferencePatternMetrics(
     Angle Boresight,
     double NullDepthDb,
     double NormalizedSlope,

@@ -11,7 +11,7 @@ namespace SlotArray.Core.Patterns;
 /// the polar angle from the axis) dΩ = du dφ and ∫∫ U dΩ = Φ ∫_{−1}^{1} U(u) du, Φ being the φ-range (2π full
 /// sphere, π a half-space in front of an infinite ground plane).
 /// </summary>
-public static class Directivity
+internal static class Directivity
 {
     /// <summary>
     /// Isotropic elements radiating into the full sphere, closed form:

@@ -1,7 +1,7 @@
 namespace SlotArray.Core.Patterns;
 
 /// <summary>Ready-made element field patterns, functions of θ from broadside (rad) in the array-axis plane.</summary>
-public static class ElementPatterns
+internal static class ElementPatterns
 {
     /// <summary>An isotropic element: 1 at every angle.</summary>
     public static Func<double, double> Isotropic { get; } = _ => 1.0;

@@ -2,12 +2,14 @@ namespace SlotArray.Core.Patterns;
 
 /// <summary>
 /// Walks a sampled power pattern: local extrema, three-point parabolic refinement and level crossings. Shared by
-/// the sum- and difference-pattern metrics.
+/// the sum- and difference-pattern metrics. The hot walks are generic in the list type, so an ImmutableArray is read
+/// without boxing (the tolerance trials call them for every local maximum of every cut).
 /// </summary>
 internal static class LobeSearch
 {
     /// <summary>From index <paramref name="i"/> step in direction <paramref name="dir"/> (±1) while the power falls; returns the local minimum (or the grid end).</summary>
-    public static int DescendTo(IReadOnlyList<double> p, int i, int dir)
+    /// <typeparam name="TPower">The power list's type.</typeparam>
+    public static int DescendTo<TPower>(TPower p, int i, int dir) where TPower : IReadOnlyList<double>
     {
         while (i + dir >= 0 && i + dir < p.Count && p[i + dir] < p[i]) i += dir;
         return i;
@@ -21,7 +23,8 @@ internal static class LobeSearch
     }
 
     /// <summary>True when <paramref name="i"/> is an end of the grid.</summary>
-    public static bool AtEnd(IReadOnlyList<double> p, int i) => i == 0 || i == p.Count - 1;
+    /// <typeparam name="TPower">The power list's type.</typeparam>
+    public static bool AtEnd<TPower>(TPower p, int i) where TPower : IReadOnlyList<double> => i == 0 || i == p.Count - 1;
 
     /// <summary>
     /// Vertex of the parabola through (x0,y0), (x1,y1), (x2,y2) (x not necessarily equally spaced); falls back to
@@ -42,7 +45,10 @@ internal static class LobeSearch
     /// A local maximum of the power at index i refined in dB by a parabola (exact for a Gaussian-like lobe top);
     /// at a grid end the sample itself. Returns the angle and the power.
     /// </summary>
-    public static (double Theta, double Power) RefineMaximum(IReadOnlyList<double> theta, IReadOnlyList<double> p, int i)
+    /// <typeparam name="TTheta">The angle list's type.</typeparam>
+    /// <typeparam name="TPower">The power list's type.</typeparam>
+    public static (double Theta, double Power) RefineMaximum<TTheta, TPower>(TTheta theta, TPower p, int i)
+        where TTheta : IReadOnlyList<double> where TPower : IReadOnlyList<double>
     {
         if (AtEnd(p, i) || p[i - 1] <= 0 || p[i + 1] <= 0 || p[i] <= 0) return (theta[i], p[i]);
         var (x, y) = Parabola(theta[i - 1], Db(p[i - 1]), theta[i], Db(p[i]), theta[i + 1], Db(p[i + 1]));

@@ -7,7 +7,7 @@ namespace SlotArray.Core.Patterns;
 /// A sampled far-field pattern cut: the complex field (array factor times element pattern, unnormalised) at each
 /// angle of a grid. Immutable.
 /// </summary>
-public sealed class Pattern
+internal sealed class Pattern
 {
     /// <summary>Wraps a sampled field; <paramref name="field"/> has one value per grid angle.</summary>
     /// <param name="grid">The angles.</param>

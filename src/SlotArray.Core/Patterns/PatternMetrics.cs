@@ -15,7 +15,7 @@ namespace SlotArray.Core.Patterns;
 /// <param name="PeakSidelobeDb">The highest point of the sidelobe region (local maxima refined; partial lobes at the grid ends count by their end sample), dB; null if there is no sidelobe region.</param>
 /// <param name="PeakSidelobeDirection">Where the peak sidelobe is; null with it.</param>
 /// <param name="IntegratedSidelobeRatioDb">10 log10(∫_sidelobes |F|² du / ∫_main |F|² du), u = sin θ, trapezoidal on the grid; null if there is no sidelobe region.</param>
-public sealed record PatternMetrics(
+internal sealed record PatternMetrics(
     Angle BeamDirection,
     Angle HalfPowerBeamwidth,
     Angle NullToNullWidth,

@@ -13,7 +13,7 @@ namespace SlotArray.Core.Prototype;
 /// (A. F. Stevenson, "Theory of slots in rectangular wave-guides", J. Appl. Phys. 19, 1948, the
 /// resonant conductance g ∝ sin²(πx/a)), so a coupling error moves G and B together.
 /// </summary>
-public sealed class CalibratedSlotModel : IShuntSlotModel
+internal sealed class CalibratedSlotModel : IShuntSlotModel
 {
     /// <summary>Wraps <paramref name="inner"/>.</summary>
     /// <param name="inner">The design's slot model.</param>

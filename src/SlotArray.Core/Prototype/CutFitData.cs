@@ -8,7 +8,7 @@ namespace SlotArray.Core.Prototype;
 /// without phase: the level in dB at the angles within 40 dB of the peak, 1σ = 0.1 dB. Either way the fit rescales the
 /// assumed noise by what its residual shows (<see cref="WeightedFit"/>), so only the shape of σ matters.
 /// </summary>
-public sealed class CutFitData
+internal sealed class CutFitData
 {
     /// <summary>Dynamic range used of an amplitude-only cut: 40 dB.</summary>
     public const double AmplitudeRangeDb = 40;

@@ -9,7 +9,7 @@ namespace SlotArray.Core.Prototype;
 /// <param name="PhaseDeg">Phase error arg(1 + δ) with its interval (deg).</param>
 /// <param name="AmplitudeResolution">Diagonal of the resolution matrix for Re δ: 1 fully seen by the data, 0 set by the regularisation alone.</param>
 /// <param name="PhaseResolution">The same for Im δ.</param>
-public sealed record SlotExcitationError(int Slot, FittedValue AmplitudeDb, FittedValue PhaseDeg, double AmplitudeResolution, double PhaseResolution)
+internal sealed record SlotExcitationError(int Slot, FittedValue AmplitudeDb, FittedValue PhaseDeg, double AmplitudeResolution, double PhaseResolution)
 {
     /// <summary>Resolution below which a slot counts as not seen: 0.5 (the regularisation decides more than the data).</summary>
     public const double SeenThreshold = 0.5;
@@ -26,7 +26,7 @@ public sealed record SlotExcitationError(int Slot, FittedValue AmplitudeDb, Fitt
 /// <param name="Slots">Per-slot errors, in slot order.</param>
 /// <param name="Stage">The fit's statistics (residual, condition number, notes on unseen slots).</param>
 /// <param name="PredictedField">The fitted plate's field at the cut's angles before the per-slot errors (nuisance applied), for the overlay.</param>
-public sealed record CutReconstruction(MeasuredCut Cut, IReadOnlyList<SlotExcitationError> Slots, FitStage Stage, IReadOnlyList<Complex> PredictedField);
+internal sealed record CutReconstruction(MeasuredCut Cut, IReadOnlyList<SlotExcitationError> Slots, FitStage Stage, IReadOnlyList<Complex> PredictedField);
 
 /// <summary>
 /// Stage d: per-slot excitation errors from a pattern cut, e_n = e_n^model (1 + δ_n), by Tikhonov-regularised least
@@ -36,7 +36,7 @@ public sealed record CutReconstruction(MeasuredCut Cut, IReadOnlyList<SlotExcita
 /// with phase; the dB level is not). Reports the condition number of the data Jacobian in δ and, per slot, the diagonal of
 /// the model resolution matrix R = (JᵀJ + Λ)⁻¹JᵀJ (Menke, Sec. 4.7): slots with R &lt; 0.5 are those the data cannot see.
 /// </summary>
-public static class ExcitationReconstruction
+internal static class ExcitationReconstruction
 {
     /// <summary>Prior 1σ of Re δ and Im δ: 0.3 (30 % in amplitude, about 17° in phase).</summary>
     public const double PriorSigma = 0.3;

@@ -8,5 +8,5 @@ namespace SlotArray.Core.Prototype;
 /// <param name="ConditionNumber">Condition number of the stage's Jacobian.</param>
 /// <param name="Adopted">Whether the stage's values were kept (false when the data could not separate its parameters).</param>
 /// <param name="Notes">What the stage found out about itself (inseparable parameters, unseen slots).</param>
-public sealed record FitStage(string Name, IReadOnlyList<FittedValue> Values, double ResidualRms, double NoiseScale,
+internal sealed record FitStage(string Name, IReadOnlyList<FittedValue> Values, double ResidualRms, double NoiseScale,
     double ConditionNumber, bool Adopted, IReadOnlyList<string> Notes);

@@ -5,13 +5,13 @@ namespace SlotArray.Core.Prototype;
 
 /// <summary>A measurement that does not belong to the design it was compared with; the message says why.</summary>
 /// <param name="message">The reason, with the numbers.</param>
-public sealed class MeasurementMismatchException(string message) : Exception(message);
+internal sealed class MeasurementMismatchException(string message) : Exception(message);
 
 /// <summary>
 /// Refuses measurements that cannot be of this design: a network file whose frequencies miss the design frequency
 /// or leave the guide's single-mode band, a port count the feed cannot have, a cut at a frequency far from the design.
 /// </summary>
-public static class MeasurementCheck
+internal static class MeasurementCheck
 {
     /// <summary>Largest distance of a pattern cut's frequency from the design frequency: 10 %.</summary>
     public const double CutFrequencyWindow = 0.10;

@@ -14,7 +14,7 @@ namespace SlotArray.Core.Prototype;
 /// <param name="S11">Input reflection at each frequency.</param>
 /// <param name="S21">Transmission to port 2 at each frequency (two-port files), or null.</param>
 /// <param name="PortCount">1 or 2.</param>
-public sealed record MeasuredNetwork(string Source, IReadOnlyList<double> Frequencies, IReadOnlyList<Complex> S11,
+internal sealed record MeasuredNetwork(string Source, IReadOnlyList<double> Frequencies, IReadOnlyList<Complex> S11,
     IReadOnlyList<Complex>? S21, int PortCount)
 {
     /// <summary>Lowest measured frequency.</summary>
@@ -35,7 +35,7 @@ public sealed record MeasuredNetwork(string Source, IReadOnlyList<double> Freque
 /// <param name="Angles">Angles θ, rad, strictly increasing, within ±90°.</param>
 /// <param name="LevelsDb">Measured level at each angle, dB.</param>
 /// <param name="PhasesRad">Measured phase at each angle, rad, or null for an amplitude-only cut.</param>
-public sealed record MeasuredCut(string Source, Frequency Frequency, IReadOnlyList<double> Angles, IReadOnlyList<double> LevelsDb,
+internal sealed record MeasuredCut(string Source, Frequency Frequency, IReadOnlyList<double> Angles, IReadOnlyList<double> LevelsDb,
     IReadOnlyList<double>? PhasesRad)
 {
     /// <summary>Whether the cut carries phase.</summary>
@@ -45,4 +45,4 @@ public sealed record MeasuredCut(string Source, Frequency Frequency, IReadOnlyLi
 /// <summary>Everything measured on one prototype: at most one network file and any number of pattern cuts.</summary>
 /// <param name="Network">The S-parameter file, or null when only cuts were measured.</param>
 /// <param name="Cuts">Pattern cuts (may be empty).</param>
-public sealed record PrototypeMeasurements(MeasuredNetwork? Network, IReadOnlyList<MeasuredCut> Cuts);
+internal sealed record PrototypeMeasurements(MeasuredNetwork? Network, IReadOnlyList<MeasuredCut> Cuts);

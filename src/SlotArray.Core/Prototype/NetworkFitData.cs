@@ -10,7 +10,7 @@ namespace SlotArray.Core.Prototype;
 /// 6σ² per component in a second difference; the curve's own curvature over one step adds to it, so the estimate errs
 /// high), floored at 10⁻⁵.
 /// </summary>
-public sealed class NetworkFitData
+internal sealed class NetworkFitData
 {
     /// <summary>Noise floor of the estimate.</summary>
     public const double NoiseFloor = 1e-5;

@@ -12,7 +12,7 @@ namespace SlotArray.Core.Prototype;
 /// coupled network; a design without coupling misses by exactly that, architecture.md), and without a prototype margin.
 /// The per-slot errors are this plate's machining, not the next one's, so they do not enter.
 /// </summary>
-public static class NextPlate
+internal static class NextPlate
 {
     /// <summary>The request and the slot model of the next plate.</summary>
     /// <param name="request">The prototype's request.</param>
@@ -46,6 +46,37 @@ public static class NextPlate
     {
         var (next, corrected) = For(request, slot, diagnosis);
         return ArrayPipeline.RunWithSlotModel(next, corrected, options);
+    }
+
+    /// <summary>
+    /// The next plate's fabrication plan, its changes flagged against the plate that was cut
+    /// (<see cref="FabricationPlan.WithChangesFrom"/>: every feature, slot or the tube length that moved), so that its cut
+    /// list marks what the shop must do differently.
+    /// </summary>
+    /// <param name="next">The next plate (<see cref="Design"/>).</param>
+    /// <param name="cut">The plate that was cut: its design run, as rebuilt from its spec.</param>
+    public static FabricationPlan Plan(ArrayResult next, ArrayResult cut)
+    {
+        ArgumentNullException.ThrowIfNull(next);
+        ArgumentNullException.ThrowIfNull(cut);
+        static FabricationPlan Of(ArrayResult r) => FabricationPlan.Build(r.Design, r.Request.Feed.Type, r.Request.Slots.Cutter, r.Request.Tolerance);
+        return Of(next).WithChangesFrom(Of(cut));
+    }
+
+    /// <summary>
+    /// The revision after <paramref name="previous"/> in the drawing-revision sequence A, B, … Z, AA, AB, … ZZ (letters I
+    /// and O included; common practice, no source).
+    /// </summary>
+    /// <param name="previous">One or two capital letters.</param>
+    /// <exception cref="ArgumentException">Not one or two capital letters, or ZZ (no next revision).</exception>
+    public static string NextRevision(string previous)
+    {
+        ArgumentNullException.ThrowIfNull(previous);
+        if (previous.Length is < 1 or > 2 || previous.Any(c => c is < 'A' or > 'Z'))
+            throw new ArgumentException($"a revision is one or two capital letters, got '{previous}'", nameof(previous));
+        if (previous == "ZZ") throw new ArgumentException("revision ZZ is the last: start a new drawing number", nameof(previous));
+        if (previous[^1] != 'Z') return previous[..^1] + (char)(previous[^1] + 1);
+        return previous.Length == 1 ? "AA" : (char)(previous[0] + 1) + "A";
     }
 
     /// <summary>Whether a dimension changed between plates by more than <paramref name="resolution"/> (default 5 µm).</summary>

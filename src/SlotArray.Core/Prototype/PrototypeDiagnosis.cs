@@ -13,7 +13,7 @@ namespace SlotArray.Core.Prototype;
 /// <param name="LengthScale">The uniform length error with its interval, or null without network data.</param>
 /// <param name="ConductanceScale">The conductance scale with its interval, or null when not resolved.</param>
 /// <param name="GuideWavelengthScale">The guide-wavelength error with its interval, or null when not resolved.</param>
-public sealed record PrototypeDiagnosis(PrototypeModel Model, PrototypeErrors Errors, IReadOnlyList<FitStage> Stages,
+internal sealed record PrototypeDiagnosis(PrototypeModel Model, PrototypeErrors Errors, IReadOnlyList<FitStage> Stages,
     IReadOnlyList<CutReconstruction> Cuts, IReadOnlyList<SlotGeometryError> Slots, FittedValue? LengthScale, FittedValue? ConductanceScale,
     FittedValue? GuideWavelengthScale)
 {
@@ -31,7 +31,7 @@ public sealed record PrototypeDiagnosis(PrototypeModel Model, PrototypeErrors Er
 /// fits zero-mean length changes, the totals are split by their median (<see cref="SplitCommonLength"/>), the uniform
 /// errors are refitted with the per-slot errors held, and stage e is repeated once, so that neither absorbs the other.
 /// </summary>
-public static class PrototypeFit
+internal static class PrototypeFit
 {
     /// <summary>Runs the diagnosis.</summary>
     /// <param name="asCut">The design as cut.</param>

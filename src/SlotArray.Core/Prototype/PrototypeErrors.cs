@@ -13,7 +13,7 @@ namespace SlotArray.Core.Prototype;
 /// <param name="SlotLengthErrors">Per-slot length error, m (positive: the slot is longer than cut), in slot order.</param>
 /// <param name="SlotCouplingErrors">Per-slot coupling error in the coupling's own unit (offset, m, positive away from the
 /// centreline; or tilt, rad, positive away from zero), in slot order.</param>
-public sealed record PrototypeErrors(double LengthScale, double ConductanceScale, double GuideWavelengthScale,
+internal sealed record PrototypeErrors(double LengthScale, double ConductanceScale, double GuideWavelengthScale,
     IReadOnlyList<double> SlotLengthErrors, IReadOnlyList<double> SlotCouplingErrors)
 {
     /// <summary>No error on <paramref name="count"/> slots.</summary>

@@ -26,7 +26,7 @@ namespace SlotArray.Core.Prototype;
 /// while a fit iterates, and the fit re-freezes them at its converged point; their change over a fit's small length
 /// changes is of second order in the coupling (itself a correction).</para>
 /// </remarks>
-public sealed class PrototypeModel
+internal sealed class PrototypeModel
 {
     private readonly ConcurrentDictionary<double, CouplingMatrix> frozen = new();
     private readonly LongitudinalSlotPlacement[]? placements;

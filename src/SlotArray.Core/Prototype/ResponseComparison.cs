@@ -12,7 +12,7 @@ namespace SlotArray.Core.Prototype;
 /// <param name="Quantity">What it is, with its unit.</param>
 /// <param name="Measured">Measured value (NaN when the data do not give it).</param>
 /// <param name="Predicted">Predicted value.</param>
-public sealed record ComparisonRow(string Quantity, double Measured, double Predicted)
+internal sealed record ComparisonRow(string Quantity, double Measured, double Predicted)
 {
     /// <summary>Measured − predicted.</summary>
     public double Difference => Measured - Predicted;
@@ -22,7 +22,7 @@ public sealed record ComparisonRow(string Quantity, double Measured, double Pred
 /// <param name="Beam">Beam direction, deg.</param>
 /// <param name="Hpbw">Half-power beamwidth, deg.</param>
 /// <param name="PeakSidelobe">Peak sidelobe within the cut, dB (NaN when the cut shows none).</param>
-public sealed record CutFigures(double Beam, double Hpbw, double PeakSidelobe);
+internal sealed record CutFigures(double Beam, double Hpbw, double PeakSidelobe);
 
 /// <summary>
 /// The comparison table's figures: best-match frequency (the smallest |S11| sample, refined by the parabola through it
@@ -30,7 +30,7 @@ public sealed record CutFigures(double Beam, double Hpbw, double PeakSidelobe);
 /// it), and per cut the beam direction, HPBW and peak sidelobe by the tool's own <see cref="PatternMetrics"/> on the
 /// cut resampled to 0.02° (linear in field amplitude).
 /// </summary>
-public static class ResponseComparison
+internal static class ResponseComparison
 {
     /// <summary>Best-match frequency of sampled S11, Hz.</summary>
     public static double BestMatch(IReadOnlyList<double> f, IReadOnlyList<Complex> s11)

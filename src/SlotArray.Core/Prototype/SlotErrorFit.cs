@@ -9,7 +9,7 @@ namespace SlotArray.Core.Prototype;
 /// <param name="Coupling">Offset error, mm (positive: farther from the centreline), or tilt error, deg.</param>
 /// <param name="Resolution">Mean diagonal of the resolution matrix for this slot's two errors (1 seen, 0 not).</param>
 /// <param name="Correlation">Correlation of the slot's length and coupling errors.</param>
-public sealed record SlotGeometryError(int Slot, FittedValue Length, FittedValue Coupling, double Resolution, double Correlation);
+internal sealed record SlotGeometryError(int Slot, FittedValue Length, FittedValue Coupling, double Resolution, double Correlation);
 
 /// <summary>
 /// Stage e: the per-slot length and offset (or tilt) errors that explain the pattern cuts, fitted to all cuts at once
@@ -19,7 +19,7 @@ public sealed record SlotGeometryError(int Slot, FittedValue Length, FittedValue
 /// <see cref="PriorSigmaMm"/> (Tikhonov, Gaussian-prior form; see <see cref="ExcitationReconstruction"/>), on MathNet's
 /// Levenberg–Marquardt minimiser. Parameters are in mm (and deg for tilts) inside the fit.
 /// </summary>
-public static class SlotErrorFit
+internal static class SlotErrorFit
 {
     /// <summary>Prior 1σ of each length and offset error: 0.3 mm (tilts: 3°).</summary>
     public const double PriorSigmaMm = 0.3;
@@ -46,26 +46,7 @@ public static class SlotErrorFit
         double hL = 0.02, hC = tilt ? 0.2 : 0.02;         // forward-difference steps in fit units
         var slot = model.SlotModel(errors);
 
-        // Linearisation at each distinct cut frequency.
-        var lin = cuts.Select(c =>
-        {
-            var f = c.Cut.Frequency;
-            var e0 = model.Solve(model.Apply(errors), slot, f).Excitations.ToArray();
-            var s = new Complex[2 * n][];
-            Parallel.For(0, 2 * n, new ParallelOptions { MaxDegreeOfParallelism = 2 }, j =>
-            {
-                var dl = errors.SlotLengthErrors.ToArray();
-                var dc = errors.SlotCouplingErrors.ToArray();
-                if (j < n) dl[j] += hL * unitL; else dc[j - n] += hC * unitC;
-                var ej = model.Solve(model.Apply(errors with { SlotLengthErrors = dl, SlotCouplingErrors = dc }), slot, f).Excitations;
-                var col = new Complex[n];
-                double h = j < n ? hL : hC;
-                for (int i = 0; i < n; i++) col[i] = (ej[i] - e0[i]) / h;
-                s[j] = col;
-            });
-            var basis = PrototypeModel.FieldBasis(model.Apply(errors), f, c.Angles);
-            return (E0: e0, S: s, Basis: basis);
-        }).ToArray();
+        var lin = Linearise(model, errors, slot, cuts, (hL, hC), (unitL, unitC));
 
         int offset = 2 * n;
         var nuisanceAt = new int[cuts.Count];
@@ -117,6 +98,45 @@ public static class SlotErrorFit
             .Concat(new double[p - 2 * n]).ToArray();
         var fit = WeightedFit.Fit(names, Model, observed, sigma, start, steps, reg);
 
+        return Results(fit, reg, errors, n, tilt, unitL, unitC);
+    }
+
+    /// <summary>
+    /// The linearisation at each cut's frequency: the excitations e0 at <paramref name="errors"/>, their forward-difference
+    /// derivatives S (per fit unit) with respect to each slot's length error and then each slot's coupling error, and the
+    /// cut's field basis.
+    /// </summary>
+    private static (Complex[] E0, Complex[][] S, Complex[,] Basis)[] Linearise(PrototypeModel model, PrototypeErrors errors, IShuntSlotModel slot,
+        IReadOnlyList<CutFitData> cuts, (double Length, double Coupling) steps, (double Length, double Coupling) units)
+    {
+        int n = model.AsCut.Count;
+        double hL = steps.Length, hC = steps.Coupling, unitL = units.Length, unitC = units.Coupling;
+        return cuts.Select(c =>
+        {
+            var f = c.Cut.Frequency;
+            var e0 = model.Solve(model.Apply(errors), slot, f).Excitations.ToArray();
+            var s = new Complex[2 * n][];
+            Parallel.For(0, 2 * n, new ParallelOptions { MaxDegreeOfParallelism = 2 }, j =>
+            {
+                var dl = errors.SlotLengthErrors.ToArray();
+                var dc = errors.SlotCouplingErrors.ToArray();
+                if (j < n) dl[j] += hL * unitL; else dc[j - n] += hC * unitC;
+                var ej = model.Solve(model.Apply(errors with { SlotLengthErrors = dl, SlotCouplingErrors = dc }), slot, f).Excitations;
+                var col = new Complex[n];
+                double h = j < n ? hL : hC;
+                for (int i = 0; i < n; i++) col[i] = (ej[i] - e0[i]) / h;
+                s[j] = col;
+            });
+            var basis = PrototypeModel.FieldBasis(model.Apply(errors), f, c.Angles);
+            return (E0: e0, S: s, Basis: basis);
+        }).ToArray();
+    }
+
+    /// <summary>The fitted per-slot errors (totals over the linearisation point), their resolution and correlation, the notes and the stage.</summary>
+    private static (PrototypeErrors Errors, IReadOnlyList<SlotGeometryError> Slots, FitStage Stage) Results(WeightedFitResult fit, double[] reg,
+        PrototypeErrors errors, int n, bool tilt, double unitL, double unitC)
+    {
+        int p = reg.Length;
         var jtj = fit.Jacobian.TransposeThisAndMultiply(fit.Jacobian);
         var h = jtj.Clone();
         for (int j = 0; j < p; j++) h[j, j] += reg[j] * reg[j];

@@ -16,7 +16,7 @@ namespace SlotArray.Core.Prototype;
 /// back to the real model. Wrap it in a <see cref="FrequencyInterpolatedSlotModel"/> so that it is only asked at node
 /// frequencies.
 /// </summary>
-public sealed class SlotSurfaceModel : IShuntSlotModel
+internal sealed class SlotSurfaceModel : IShuntSlotModel
 {
     private readonly IShuntSlotModel inner;
     private readonly (double C, double L)[] bases;

@@ -9,7 +9,7 @@ namespace SlotArray.Core.Prototype;
 /// ±<c>noiseDb</c> on every level and ±<c>noiseDeg</c> on every phase from a seeded generator. For tests and the README's
 /// worked example; never a stand-in for a real bench.
 /// </summary>
-public static class SyntheticMeasurements
+internal static class SyntheticMeasurements
 {
     /// <summary>Generates the measurements.</summary>
     /// <param name="model">The plate's model (its slot model should be the real one).</param>

@@ -9,7 +9,7 @@ namespace SlotArray.Core.Prototype;
 /// <param name="Slot">Slot number.</param>
 /// <param name="CutLength">Equivalent length as cut, m.</param>
 /// <param name="Trim">Length to add, m (negative: the slot would have to get shorter, which a trim cannot do).</param>
-public sealed record SlotTrim(int Slot, double CutLength, double Trim)
+internal sealed record SlotTrim(int Slot, double CutLength, double Trim)
 {
     /// <summary>Whether the slot is too long for a trim to fix (more than 5 µm).</summary>
     public bool TooLong => Trim < -TrimPlan.Resolution;
@@ -23,7 +23,7 @@ public sealed record SlotTrim(int Slot, double CutLength, double Trim)
 /// <param name="After">The fitted plate with the trims as made (negative ones left out).</param>
 /// <param name="S11AtDesignBefore">|S11| at the design frequency of the fitted plate before trimming, dB.</param>
 /// <param name="S11AtDesignAfter">|S11| at the design frequency after trimming, dB.</param>
-public sealed record TrimPlan(double UniformExtension, IReadOnlyList<SlotTrim> Slots, bool Works, string Verdict, PrototypeErrors After,
+internal sealed record TrimPlan(double UniformExtension, IReadOnlyList<SlotTrim> Slots, bool Works, string Verdict, PrototypeErrors After,
     double S11AtDesignBefore, double S11AtDesignAfter)
 {
     /// <summary>Smallest trim that counts: 5 µm (below any shop's resolution; common practice, no source).</summary>
@@ -36,7 +36,7 @@ public sealed record TrimPlan(double UniformExtension, IReadOnlyList<SlotTrim> S
 /// (golden-section search, MathNet <c>FindMinimum.OfScalarFunctionConstrained</c>, over ±3 %). A slot can only get longer:
 /// when u &lt; 0 the slots are too long and no trim helps; a slot whose t_n &lt; 0 is left as it is and named.
 /// </summary>
-public static class TrimProposal
+internal static class TrimProposal
 {
     /// <summary>Proposes the trims of the diagnosed plate.</summary>
     public static TrimPlan Propose(PrototypeDiagnosis diagnosis)

@@ -7,7 +7,7 @@ namespace SlotArray.Core.Prototype;
 /// (<see cref="PrototypeModel"/>) started from the previous stage; a stage whose new parameter the data cannot
 /// separate from an earlier one (|correlation| &gt; <see cref="InseparableCorrelation"/>) is reported and not adopted.
 /// </summary>
-public static class UniformErrorFit
+internal static class UniformErrorFit
 {
     /// <summary>|Correlation| above which two parameters are reported as inseparable: 0.95.</summary>
     public const double InseparableCorrelation = 0.95;

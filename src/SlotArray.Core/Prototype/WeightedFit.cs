@@ -7,7 +7,7 @@ namespace SlotArray.Core.Prototype;
 /// <param name="Name">What it is, in words.</param>
 /// <param name="Value">Fitted value.</param>
 /// <param name="StandardError">1σ from the Jacobian and the noise estimated from the residual.</param>
-public sealed record FittedValue(string Name, double Value, double StandardError)
+internal sealed record FittedValue(string Name, double Value, double StandardError)
 {
     /// <summary>Half-width of the 95 % confidence interval (1.96σ, normal approximation).</summary>
     public double Interval95 => 1.96 * StandardError;
@@ -25,7 +25,7 @@ public sealed record FittedValue(string Name, double Value, double StandardError
 /// <param name="ConditionNumber">Ratio of the largest to the smallest singular value of the data Jacobian.</param>
 /// <param name="Iterations">Levenberg–Marquardt iterations.</param>
 /// <param name="Converged">Whether the minimiser stopped on a tolerance (not on its iteration limit).</param>
-public sealed record WeightedFitResult(IReadOnlyList<FittedValue> Values, Matrix<double> Jacobian, Matrix<double> Correlation,
+internal sealed record WeightedFitResult(IReadOnlyList<FittedValue> Values, Matrix<double> Jacobian, Matrix<double> Correlation,
     double ResidualRms, double NoiseScale, double ConditionNumber, int Iterations, bool Converged);
 
 /// <summary>
@@ -37,7 +37,7 @@ public sealed record WeightedFitResult(IReadOnlyList<FittedValue> Values, Matrix
 /// Discrete Inverse Theory</i>, 3rd ed., Academic Press 2012, Sec. 3.7 and 4.4, from memory). The Jacobian is by
 /// central differences of the model with the caller's steps.
 /// </summary>
-public static class WeightedFit
+internal static class WeightedFit
 {
     /// <summary>Fits <paramref name="model"/> to <paramref name="observed"/>.</summary>
     /// <param name="names">Parameter names.</param>

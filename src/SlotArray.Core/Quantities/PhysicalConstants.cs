@@ -6,7 +6,7 @@ namespace SlotArray.Core.Quantities;
 /// μ0 is taken as 4π×10⁻⁷ H/m, the pre-2019 defined value; the 2019 SI makes it a measured
 /// quantity differing by about 1e-10 relative (CODATA 2018), far below any tolerance used here.
 /// </remarks>
-public static class PhysicalConstants
+internal static class PhysicalConstants
 {
     /// <summary>Speed of light in vacuum c, m/s (exact).</summary>
     public const double SpeedOfLight = 299_792_458.0;

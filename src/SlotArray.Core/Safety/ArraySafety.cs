@@ -16,8 +16,20 @@ namespace SlotArray.Core.Safety;
 /// <param name="Power">The power-handling check; null without <c>transmitter.peak_power</c>.</param>
 /// <param name="StandingWavePeakFactor">The array's own peak-field factor k (<see cref="StandingWavePeak"/>); null without a peak power.</param>
 /// <param name="Cautions">The standard caution, then the exposure and power cautions and their notes.</param>
-public sealed record ArraySafety(ExposureAssessment? Exposure, PowerHandling? Power, double? StandingWavePeakFactor, IReadOnlyList<DesignWarning> Cautions)
+internal sealed record ArraySafety(ExposureAssessment? Exposure, PowerHandling? Power, double? StandingWavePeakFactor, IReadOnlyList<DesignWarning> Cautions)
 {
+    /// <summary>EIRP at the peak power and the design frequency's gain, W (<see cref="EffectiveRadiatedPower"/>); null without a peak power.</summary>
+    public double? PeakEirpWatts { get; init; }
+
+    /// <summary>EIRP at the average power and the design frequency's gain, W; null without an average power.</summary>
+    public double? AverageEirpWatts { get; init; }
+
+    /// <summary>The cautions that report a limit exceeded (exposure or power handling), in order.</summary>
+    public IEnumerable<DesignWarning> Exceedances => Cautions.Where(c => c.Code.EndsWith("-exceeded", StringComparison.Ordinal));
+
+    /// <summary>The power-handling over-stress caution, if any (also a FAIL verdict; shown as a warning as it happens).</summary>
+    public IEnumerable<DesignWarning> OverStress => Cautions.Where(c => c.Code == "power-handling-exceeded");
+
     /// <summary>
     /// The power-handling margin at the peak power, dB: <see cref="PowerHandling.MarginDecibels"/>, less
     /// 20 log10(k/2) when the array's own peak-field factor k exceeds 2, the largest the derating takes (breakdown power
@@ -91,6 +103,10 @@ public sealed record ArraySafety(ExposureAssessment? Exposure, PowerHandling? Po
         var cautions = SafetyCautions.For(exposure, power).Concat(notes).ToList();
         if (tx.AveragePower is null)
             cautions.Add(new DesignWarning("exposure-not-screened", "No average power was given (transmitter.average_power), so no RF exposure screen was made."));
-        return new ArraySafety(exposure, power, factor, cautions);
+        return new ArraySafety(exposure, power, factor, cautions)
+        {
+            PeakEirpWatts = tx.PeakPower is { } pk ? EffectiveRadiatedPower.Watts(pk, result.AtDesign.GainDbi) : null,
+            AverageEirpWatts = tx.AveragePower is { } av ? EffectiveRadiatedPower.Watts(av, result.AtDesign.GainDbi) : null,
+        };
     }
 }

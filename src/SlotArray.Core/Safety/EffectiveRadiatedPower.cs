@@ -6,7 +6,7 @@ namespace SlotArray.Core.Safety;
 /// Definitions of Terms for Antennas", from memory). P is the power accepted by the antenna; G the gain (which
 /// already includes the mismatch and wall losses of this tool's gain figure, so P is the transmitter's forward power).
 /// </summary>
-public static class EffectiveRadiatedPower
+internal static class EffectiveRadiatedPower
 {
     /// <summary>EIRP in watts: P × 10^(G/10).</summary>
     /// <param name="power">Transmitter power, W; ≥ 0 and finite.</param>

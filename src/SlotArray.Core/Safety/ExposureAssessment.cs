@@ -3,7 +3,7 @@ using SlotArray.Core.Quantities;
 namespace SlotArray.Core.Safety;
 
 /// <summary>Region of an aperture's field at a distance, by the OET-65 boundaries (FCC OET Bulletin 65, Ed. 97-01, 1997 [M, Medium]).</summary>
-public enum FieldRegion
+internal enum FieldRegion
 {
     /// <summary>Closer than D²/(4λ): radiating near field; the on-axis density is bounded by 4P/A.</summary>
     NearField,
@@ -19,7 +19,7 @@ public enum FieldRegion
 /// <param name="TimeAveraged">FarField × the rotation factor (equal to FarField for a stationary beam), W/m².</param>
 /// <param name="Region">Field region at this distance (OET-65 boundaries).</param>
 /// <param name="InsideFarFieldDistance">True when the distance is below 2D²/λ: the far-field value is then a conservative screen only.</param>
-public sealed record OnAxisDensity(Length Distance, double FarField, double TimeAveraged, FieldRegion Region, bool InsideFarFieldDistance);
+internal sealed record OnAxisDensity(Length Distance, double FarField, double TimeAveraged, FieldRegion Region, bool InsideFarFieldDistance);
 
 /// <summary>The on-axis distance within which one reference level is exceeded (by the far-field formula).</summary>
 /// <param name="Level">The reference level.</param>
@@ -28,7 +28,7 @@ public sealed record OnAxisDensity(Length Distance, double FarField, double Time
 /// <param name="InsideFarFieldDistance">True when the stationary distance lies inside 2D²/λ: near-field caveat applies.</param>
 /// <param name="NearFieldBoundBelowLevel">True when even the OET-65 near-field bound 4P/A is below the level,
 /// so the level is not reached anywhere in front of the aperture by that bound.</param>
-public sealed record ReferenceDistance(ReferenceLevel Level, Length Stationary, Length TimeAveraged,
+internal sealed record ReferenceDistance(ReferenceLevel Level, Length Stationary, Length TimeAveraged,
     bool InsideFarFieldDistance, bool NearFieldBoundBelowLevel);
 
 /// <summary>
@@ -49,7 +49,7 @@ public sealed record ReferenceDistance(ReferenceLevel Level, Length Stationary, 
 /// <param name="OnAxis">Densities at the requested distances, nearest first.</param>
 /// <param name="Distances">Distances to each reference level (empty when the frequency is outside the tables).</param>
 /// <param name="Warnings">Validity limits met in this assessment.</param>
-public sealed record ExposureAssessment(
+internal sealed record ExposureAssessment(
     double AveragePower,
     double GainDbi,
     Frequency Frequency,

@@ -21,7 +21,7 @@ namespace SlotArray.Core.Safety;
 /// <see cref="WholeBody"/> and <see cref="Local"/> throw. Above 30 GHz the guideline adds a 1 cm² peak rule
 /// [M, Medium] and short exposures are governed by the energy densities of Table 7; neither is modelled here.
 /// </remarks>
-public static class Icnirp2020
+internal static class Icnirp2020
 {
     /// <summary>Lowest frequency covered here (exclusive in the guideline's tables: "&gt;2 GHz"), 2 GHz.</summary>
     public static Frequency LowestFrequency { get; } = Frequency.FromGigahertz(2);

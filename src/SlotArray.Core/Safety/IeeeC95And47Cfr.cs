@@ -13,7 +13,7 @@ namespace SlotArray.Core.Safety;
 /// <see cref="ExposureTier.Occupational"/>. Whole body 2–300 GHz: 10 / 50 W/m² (30 min); local above 6 GHz:
 /// 55 f_G^−0.177 / 275 f_G^−0.177 W/m² over 4 cm², harmonised with ICNIRP 2020.
 /// </remarks>
-public static class IeeeC95_1_2019
+internal static class IeeeC95_1_2019
 {
     private const string Name = "IEEE C95.1-2019";
     private const string Tag = "[M, Medium: tables not retrieved; verify before release]";
@@ -53,7 +53,7 @@ public static class IeeeC95_1_2019
 /// US regulatory limits for comparison: FCC 47 CFR §1.1310 Table 1, 1.5–100 GHz: 1 mW/cm² = 10 W/m² general
 /// population/uncontrolled (30 min), 5 mW/cm² = 50 W/m² occupational/controlled (6 min) [M, High].
 /// </summary>
-public static class Fcc47Cfr1310
+internal static class Fcc47Cfr1310
 {
     /// <summary>Maximum permissible exposure (power density), 1.5–100 GHz.</summary>
     /// <param name="f">Frequency; 1.5 GHz ≤ f ≤ 100 GHz.</param>

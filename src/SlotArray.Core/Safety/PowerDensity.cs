@@ -12,7 +12,7 @@ namespace SlotArray.Core.Safety;
 /// It holds beyond the far-field distance 2D²/λ; closer in it over-estimates the on-axis density of a focused
 /// (in-phase) aperture and is used only as a conservative screen (FCC OET Bulletin 65, Ed. 97-01, 1997).
 /// </remarks>
-public static class PowerDensity
+internal static class PowerDensity
 {
     /// <summary>
     /// Far-field power density on the beam axis, S = P G/(4π R²) (W/m²) (Friis 1946).

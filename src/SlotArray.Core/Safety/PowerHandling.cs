@@ -43,7 +43,7 @@ namespace SlotArray.Core.Safety;
 /// <param name="PeakPower">The transmitter's peak power, W, or null when none was given.</param>
 /// <param name="MarginDecibels">10 log10(AllowedPeakPower / PeakPower), dB; negative when the peak power exceeds the
 /// derated handling; null without a peak power.</param>
-public sealed record PowerHandling(
+internal sealed record PowerHandling(
     Frequency Frequency,
     double BreakdownField,
     double TheoreticalMaximum,

@@ -3,7 +3,7 @@ using SlotArray.Core.Quantities;
 namespace SlotArray.Core.Safety;
 
 /// <summary>Who is exposed: the two tiers every exposure guideline distinguishes.</summary>
-public enum ExposureTier
+internal enum ExposureTier
 {
     /// <summary>Members of the public (ICNIRP "general public"; IEEE "unrestricted"; FCC "general population/uncontrolled").</summary>
     GeneralPublic,
@@ -12,7 +12,7 @@ public enum ExposureTier
 }
 
 /// <summary>Whether a reference level applies to the whole body or to a local (partial-body) exposure.</summary>
-public enum ExposureExtent
+internal enum ExposureExtent
 {
     /// <summary>Averaged over the whole body (ICNIRP 2020 Table 5).</summary>
     WholeBody,
@@ -34,7 +34,7 @@ public enum ExposureExtent
 /// <param name="Averaging">Spatial averaging in words ("whole body", "4 cm²").</param>
 /// <param name="Provenance">Provenance tag (DEVELOPERS.md, "Provenance tags"), e.g. "[M, High]" or "[S: …]".</param>
 /// <param name="Source">Full citation: document, year, table.</param>
-public sealed record ReferenceLevel(
+internal sealed record ReferenceLevel(
     string Guideline,
     string Table,
     ExposureTier Tier,

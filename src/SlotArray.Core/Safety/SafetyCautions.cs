@@ -4,7 +4,7 @@ namespace SlotArray.Core.Safety;
 /// The cautions every summary carries, as data: one standard caution always, and specific ones derived from an
 /// exposure assessment and a power-handling check when a transmitter is given. Wording is the project's own.
 /// </summary>
-public static class SafetyCautions
+internal static class SafetyCautions
 {
     /// <summary>The standard caution present in every summary.</summary>
     public static DesignWarning Standard { get; } = new("safety-general",

@@ -11,7 +11,7 @@ namespace SlotArray.Core.Safety;
 /// Source: ISO 2533:1975 "Standard Atmosphere" and U.S. Standard Atmosphere 1976 (NOAA/NASA/USAF), eqs. (18) and (33a)
 /// (from memory). Without the geopotential conversion the pressure at 5 km geometric is 0.05 % low against the 1976 table.
 /// </remarks>
-public static class StandardAtmosphere
+internal static class StandardAtmosphere
 {
     /// <summary>Sea-level standard pressure p0 = 101 325 Pa.</summary>
     public const double SeaLevelPressure = 101_325.0;

@@ -16,7 +16,7 @@ namespace SlotArray.Core.Slots;
 /// w/4 (C. M. Butler, "A formulation of the finite-length narrow slot or strip equation", IEEE Trans. AP-30,
 /// 1254–1257, 1982).
 /// </remarks>
-public static class Babinet
+internal static class Babinet
 {
     /// <summary>Z_slot = η²/(4 Z_d) two-sided, η²/(2 Z_d) one-sided (Ω).</summary>
     /// <param name="dipoleImpedance">Impedance Z_d of the complementary strip dipole, Ω; non-zero.</param>

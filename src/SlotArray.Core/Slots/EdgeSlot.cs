@@ -44,7 +44,7 @@ namespace SlotArray.Core.Slots;
 /// The slot width is carried for the cut list but does not enter this first-order model.
 /// </para>
 /// </remarks>
-public sealed record EdgeSlot : IShuntSlotModel
+internal sealed record EdgeSlot : IShuntSlotModel
 {
     /// <summary>Resonant developed length as a fraction κ of λ/2 (approximate, common practice; see remarks).</summary>
     public const double ResonanceFraction = 0.95;

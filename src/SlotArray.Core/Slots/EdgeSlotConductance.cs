@@ -31,7 +31,7 @@ namespace SlotArray.Core.Slots;
 /// High for the form, Medium for absolute accuracy. Production designs should use measured or full-wave data.
 /// </para>
 /// </remarks>
-public static class EdgeSlotConductance
+internal static class EdgeSlotConductance
 {
     /// <summary>
     /// Normalised resonant conductance g = G/G0 at tilt θ (formula in the remarks). Even in θ, g(0) = 0.

@@ -13,7 +13,7 @@ namespace SlotArray.Core.Slots;
 /// alternating-sign sources (Balanis 2005, Sec. 6.3); the co-polar field of a tilted slot goes as cos θ and the
 /// cross-polar as sin θ.
 /// </remarks>
-public static class EdgeSlotCrossPolarization
+internal static class EdgeSlotCrossPolarization
 {
     /// <summary>
     /// Direction ψ (from broadside, positive root; the lobe pair sits at ±ψ) of the cross-polarised lobes:

@@ -21,7 +21,7 @@ namespace SlotArray.Core.Slots;
 /// <para>Deterministic: a node's value depends only on the slot geometry and the node frequency, never on the order in
 /// which nodes were first asked for; thread-safe.</para>
 /// </remarks>
-public sealed class FrequencyInterpolatedSlotModel : IShuntSlotModel
+internal sealed class FrequencyInterpolatedSlotModel : IShuntSlotModel
 {
     /// <summary>Default node spacing h as a fraction of the reference frequency, 0.004.</summary>
     public const double DefaultStep = 0.004;

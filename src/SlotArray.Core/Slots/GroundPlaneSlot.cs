@@ -26,7 +26,7 @@ namespace SlotArray.Core.Slots;
 /// ≤ 2, with L, w and s held fixed and Z recomputed from the same dipole/Babinet/line model at each frequency f′
 /// (edges found by a 0.1 % step search out to ±40 % and bisection to 1e-9 relative).</para>
 /// </remarks>
-public static class GroundPlaneSlot
+internal static class GroundPlaneSlot
 {
     /// <summary>VSWR that bounds the reported bandwidth.</summary>
     public const double BandwidthVswr = 2.0;

@@ -19,7 +19,7 @@ namespace SlotArray.Core.Slots;
 /// <param name="BandLow">Lower edge of the VSWR ≤ 2 band (against the target resistance); null when not matched at f.</param>
 /// <param name="BandHigh">Upper edge of the VSWR ≤ 2 band; null when not matched at f.</param>
 /// <param name="Warnings">Validity limits met.</param>
-public sealed record GroundPlaneSlotAnalysis(
+internal sealed record GroundPlaneSlotAnalysis(
     Length Length,
     Length Width,
     Frequency Frequency,

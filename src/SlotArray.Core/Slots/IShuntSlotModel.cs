@@ -10,7 +10,7 @@ namespace SlotArray.Core.Slots;
 /// All admittances are normalised to the guide's TE10 characteristic admittance: y = Y/G0.
 /// Lengths are equivalent rectangular lengths; round-ended cuts are converted in Fabrication.
 /// </summary>
-public interface IShuntSlotModel : ISlotAdmittance
+internal interface IShuntSlotModel : ISlotAdmittance
 {
     /// <summary>Largest |coupling| the model accepts (m or rad).</summary>
     double MaximumCoupling { get; }

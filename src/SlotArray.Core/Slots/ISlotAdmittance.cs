@@ -10,7 +10,7 @@ namespace SlotArray.Core.Slots;
 /// Behind it: the built-in models, or a user's table (<c>slots.data</c>). Resonance and the inverse
 /// (coupling for a conductance) are found from it by <see cref="SlotResonanceSolver"/>.
 /// </summary>
-public interface ISlotAdmittance
+internal interface ISlotAdmittance
 {
     /// <summary>The guide the slot is cut in (dimensions, wall thickness).</summary>
     RectangularWaveguide Guide { get; }
@@ -45,7 +45,7 @@ public interface ISlotAdmittance
 /// <param name="LengthRatioHigh">Largest L/L_r known (+∞ for a model).</param>
 /// <param name="FrequencyLow">Lowest frequency known, Hz (0 for a model).</param>
 /// <param name="FrequencyHigh">Highest frequency known, Hz (+∞ for a model).</param>
-public sealed record SlotDataRange(double CouplingLow, double CouplingHigh, double LengthRatioLow, double LengthRatioHigh,
+internal sealed record SlotDataRange(double CouplingLow, double CouplingHigh, double LengthRatioLow, double LengthRatioHigh,
     double FrequencyLow, double FrequencyHigh)
 {
     /// <summary>A model's range: |coupling| up to <paramref name="maximumCoupling"/>, any length and frequency.</summary>

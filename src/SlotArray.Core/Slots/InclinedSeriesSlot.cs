@@ -23,7 +23,7 @@ namespace SlotArray.Core.Slots;
 /// few per cent shorter than λ/2. Series slots are spaced λg/2 with alternating tilt; the short goes λg/2 beyond the
 /// last slot centre (Elliott 1981, from memory).
 /// </remarks>
-public static class InclinedSeriesSlot
+internal static class InclinedSeriesSlot
 {
     /// <summary>Stevenson's prefactor 30/(π R_d) with R_d = 73 Ω (dimensionless; 0.13081).</summary>
     public const double StevensonFactor = 30.0 / (Math.PI * PhysicalConstants.HalfWaveDipoleResistance);

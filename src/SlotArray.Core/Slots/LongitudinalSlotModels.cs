@@ -4,7 +4,7 @@ using SlotArray.Core.Waveguides;
 namespace SlotArray.Core.Slots;
 
 /// <summary>Builds the longitudinal broad-wall slot model a spec asks for (<c>slots.model</c>).</summary>
-public static class LongitudinalSlotModels
+internal static class LongitudinalSlotModels
 {
     /// <summary>
     /// The model of the given kind: <see cref="MomentMethodSlotModel"/> ("moment-method", finite wall) or

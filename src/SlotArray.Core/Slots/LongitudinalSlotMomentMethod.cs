@@ -18,7 +18,7 @@ namespace SlotArray.Core.Slots;
 /// at t = 1.27 mm: the (9, 15) and (31, 41) extrapolations agree to 1e-3 |y|, while P = 9 alone is 2–4 % off near resonance).
 /// Thin walls converge more slowly (about P^(−1/2)), which the extrapolation only partly corrects.
 /// </param>
-public sealed record MomentMethodOptions(
+internal sealed record MomentMethodOptions(
     int BasisFunctions = 9,
     double ModeCutFactor = 4,
     int ClosedFormTerms = 24,
@@ -35,7 +35,7 @@ public sealed record MomentMethodOptions(
 /// <param name="Admittance">Normalised shunt admittance y = Y/G0 = −2B/(1 + B).</param>
 /// <param name="Backward">Backward scattered TE10 amplitude B (incident amplitude 1, reference plane at the slot centre).</param>
 /// <param name="Forward">Forward scattered TE10 amplitude C.</param>
-public readonly record struct SlotScattering(Complex Admittance, Complex Backward, Complex Forward)
+internal readonly record struct SlotScattering(Complex Admittance, Complex Backward, Complex Forward)
 {
     /// <summary>|B − C|/|B|: zero for an ideal shunt element (Stern and Elliott 1985).</summary>
     public double ShuntAsymmetry => (Backward - Forward).Magnitude / Backward.Magnitude;
@@ -67,7 +67,7 @@ public readonly record struct SlotScattering(Complex Admittance, Complex Backwar
 /// thin-wall model with the reduced exterior kernel is not converged in P, and its resonant length carries an
 /// uncertainty of order 1 %.</para>
 /// </remarks>
-public sealed class LongitudinalSlotMomentMethod
+internal sealed class LongitudinalSlotMomentMethod
 {
     private const int CacheLimit = 128;
     private readonly ConcurrentDictionary<(double Offset, double Frequency, int Basis), WaveguideSlotModalSums> _sums = new();

@@ -9,7 +9,7 @@ namespace SlotArray.Core.Slots;
 /// (<see cref="LongitudinalSlotMomentMethod"/>): admittance solved directly, resonances from the cached
 /// <see cref="ResonantCharacterisation"/> at each frequency asked for.
 /// </summary>
-public sealed class MomentMethodSlotModel : IShuntSlotModel
+internal sealed class MomentMethodSlotModel : IShuntSlotModel
 {
     /// <summary>Shunt asymmetry |B − C|/|B| above which the shunt representation is flagged (10 %).</summary>
     public const double ShuntAsymmetryLimit = 0.10;

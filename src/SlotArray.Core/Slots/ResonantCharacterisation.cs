@@ -15,7 +15,7 @@ namespace SlotArray.Core.Slots;
 /// u = x² (MathNet <c>CubicSpline</c>); g_r = sin²(πx/a) × spline. Offsets are x_i = i·(a/4)/N, i = 1..N. Resonances and
 /// the inverse (offset for a conductance, a root of the interpolated g_r) come from the shared <see cref="SlotResonanceSolver"/>.
 /// </remarks>
-public sealed class ResonantCharacterisation
+internal sealed class ResonantCharacterisation
 {
     private readonly CubicSpline _length, _ratio;
     private readonly double _a;

@@ -11,7 +11,7 @@ namespace SlotArray.Core.Slots;
 /// to the slot models, so runs and tests that share it compute each table once and runs that do not stay apart.
 /// Thread-safe; a table's values do not depend on which caller computed it first.
 /// </summary>
-public sealed class ResonantCharacterisationCache
+internal sealed class ResonantCharacterisationCache
 {
     private readonly ConcurrentDictionary<string, Lazy<ResonantCharacterisation>> _tables = new();
 
@@ -106,4 +106,4 @@ public sealed class ResonantCharacterisationCache
 /// <param name="FrequencyHertz">Frequency, Hz.</param>
 /// <param name="Real">Re y.</param>
 /// <param name="Imaginary">Im y.</param>
-public sealed record SlotAdmittanceEntry(string Solver, double OffsetMeters, double LengthMeters, double FrequencyHertz, double Real, double Imaginary);
+internal sealed record SlotAdmittanceEntry(string Solver, double OffsetMeters, double LengthMeters, double FrequencyHertz, double Real, double Imaginary);

@@ -12,7 +12,7 @@ namespace SlotArray.Core.Slots;
 /// <param name="ResonantLengthsMeters">Resonant full lengths L_r(x_i) (m), where Im y = 0.</param>
 /// <param name="Conductances">Resonant conductances g_r(x_i) = Re y at L_r (normalised to G0).</param>
 /// <param name="ShuntAsymmetries">|B − C|/|B| at resonance (Stern and Elliott's validity measure of the shunt model).</param>
-public sealed record ResonantCharacterisationTable(
+internal sealed record ResonantCharacterisationTable(
     int FormatVersion,
     string Key,
     double FrequencyHertz,

@@ -13,7 +13,7 @@ namespace SlotArray.Core.Slots;
 /// <param name="baseModel">The tabulated slot (as measured).</param>
 /// <param name="changed">The built-in model in the changed guide or width.</param>
 /// <param name="asMeasured">The built-in model in the guide and width of the table.</param>
-public sealed class ShiftedSlotModel(IShuntSlotModel baseModel, IShuntSlotModel changed, IShuntSlotModel asMeasured) : IShuntSlotModel
+internal sealed class ShiftedSlotModel(IShuntSlotModel baseModel, IShuntSlotModel changed, IShuntSlotModel asMeasured) : IShuntSlotModel
 {
     /// <inheritdoc />
     public RectangularWaveguide Guide => changed.Guide;

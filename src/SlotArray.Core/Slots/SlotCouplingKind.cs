@@ -1,7 +1,7 @@
 namespace SlotArray.Core.Slots;
 
 /// <summary>What sets a shunt slot's coupling to the guide.</summary>
-public enum SlotCouplingKind
+internal enum SlotCouplingKind
 {
     /// <summary>Longitudinal broad-wall slot: the coupling parameter is the signed offset from the centreline, metres.</summary>
     Offset,

@@ -6,4 +6,4 @@ namespace SlotArray.Core.Slots;
 /// <param name="Coupling">Offset (m) or tilt (rad), as the model's <see cref="SlotCouplingKind"/> says; signed.</param>
 /// <param name="ResonantLength">Equivalent rectangular length at which Im y = 0.</param>
 /// <param name="Conductance">Resonant conductance g_r = G/G0 (normalised to the TE10 admittance).</param>
-public readonly record struct SlotResonance(double Coupling, Length ResonantLength, double Conductance);
+internal readonly record struct SlotResonance(double Coupling, Length ResonantLength, double Conductance);

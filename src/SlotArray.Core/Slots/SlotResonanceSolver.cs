@@ -13,7 +13,7 @@ namespace SlotArray.Core.Slots;
 /// Im y &lt; 0 for a longer one (a series-resonant branch in shunt; R. S. Elliott, <i>Antenna Theory and Design</i>,
 /// Prentice-Hall 1981, ch. 8, measured Y/G0 curves). The bracket must show that sign change.
 /// </remarks>
-public static class SlotResonanceSolver
+internal static class SlotResonanceSolver
 {
     /// <summary>
     /// The resonant length: the root of Im y(L) between the first bracket that shows the sign change, [0.44λ, 0.52λ], else

@@ -13,7 +13,7 @@ namespace SlotArray.Core.Slots;
 /// memory [M], re-derived by reciprocity [D]). Assumptions: zero wall thickness, narrow resonant half-wave slot, TE10 only, isolated slot radiating into a
 /// half-space. λ is the wavelength in the guide's filling.
 /// </remarks>
-public static class StevensonLongitudinalSlot
+internal static class StevensonLongitudinalSlot
 {
     /// <summary>Largest offset treated as usable, a/4 (common practice, no source); the maximum conductance is g(a/4).</summary>
     public static double MaximumOffset(RectangularWaveguide guide) => guide.BroadWall.Meters / 4;

@@ -18,7 +18,7 @@ namespace SlotArray.Core.Slots;
 /// x_ref = a/8, on 0.6 ≤ ν ≤ 1.35 (for a slot wider than 0.3 L_r from just above 2w/L_r, since the moment method needs
 /// L &gt; 2w; 61 points, natural cubic splines of Re h and Im h). h(1) = 1 by construction.</para>
 /// </remarks>
-public sealed class StevensonSlotModel : IShuntSlotModel
+internal sealed class StevensonSlotModel : IShuntSlotModel
 {
     /// <summary>Smallest L/L_r at which h is tabulated.</summary>
     public const double MinimumLengthRatio = 0.6;

@@ -16,7 +16,7 @@ namespace SlotArray.Core.Stick;
 /// <param name="Width">Slot width.</param>
 /// <param name="Conductance">Designed resonant conductance g = G/G0 (normalised to the TE10 admittance).</param>
 /// <param name="TargetAmplitude">Aperture amplitude asked of this slot, as given to the designer (signed).</param>
-public sealed record SlotDesign(int Index, Length Position, double Coupling, Length Length, Length Width,
+internal sealed record SlotDesign(int Index, Length Position, double Coupling, Length Length, Length Width,
     double Conductance, double TargetAmplitude);
 
 /// <summary>
@@ -46,7 +46,7 @@ public sealed record SlotDesign(int Index, Length Position, double Coupling, Len
 /// <param name="FeedPlane">z of the feed reference plane: S11 is referred to it.</param>
 /// <param name="JunctionRatio">Centre feed: impedance ratio n² of the ideal series junction, z_feed = (z_left + z_right)/n²; 1 for an end feed.</param>
 /// <param name="Warnings">Validity limits and cautions met while designing (deterministic order).</param>
-public sealed record ArrayDesign(
+internal sealed record ArrayDesign(
     string Name,
     Frequency DesignFrequency,
     RectangularWaveguide Guide,

@@ -4,7 +4,7 @@ using SlotArray.Core.Quantities;
 namespace SlotArray.Core.Stick;
 
 /// <summary>How a line of slots is terminated beyond its outermost slot.</summary>
-public enum TerminationKind
+internal enum TerminationKind
 {
     /// <summary>A short-circuit plate (end wall) at <see cref="Termination.Distance"/> beyond the outermost slot centre.</summary>
     Short,
@@ -22,7 +22,7 @@ public enum TerminationKind
 /// <param name="Kind">Short, matched load or general admittance.</param>
 /// <param name="Distance">Outermost slot centre to the termination plane, ≥ 0.</param>
 /// <param name="LoadAdmittance">Normalised load admittance; used only for <see cref="TerminationKind.Admittance"/>.</param>
-public sealed record Termination(TerminationKind Kind, Length Distance, Complex LoadAdmittance)
+internal sealed record Termination(TerminationKind Kind, Length Distance, Complex LoadAdmittance)
 {
     /// <summary>A short-circuit plate at the given distance beyond the outermost slot centre.</summary>
     public static Termination ShortAt(Length distance) => Create(TerminationKind.Short, distance, Complex.Zero);

@@ -8,7 +8,7 @@ namespace SlotArray.Core.Tapers;
 /// Syst. Tech. J. 47(5), 623–650, 1968). The first four zeros ξ1…ξ4 and A come from
 /// Bayliss's quartic fits in the sidelobe level (the table "below Fig. 4"), the rest are √(A² + n²).
 /// </summary>
-public static class Bayliss
+internal static class Bayliss
 {
     // Rows A, ξ1, ξ2, ξ3, ξ4, p0; columns c0…c4 of P(S) = Σ c_i S^i, S the level in dB entered as a negative
     // number (Bayliss 1968, table below Fig. 4).

@@ -7,7 +7,7 @@ namespace SlotArray.Core.Tapers;
 /// aperture distributions, from memory). Sampled like the other line sources at the element centres with L = N d,
 /// so the outermost element sits half a cell inside the edge and is slightly above P.
 /// </summary>
-public static class CosinePedestal
+internal static class CosinePedestal
 {
     /// <summary>The distribution g(p) (not normalised; g(0) = 1, g(±1) = P).</summary>
     /// <param name="pedestal">P, 0 … 1.</param>

@@ -9,7 +9,7 @@ namespace SlotArray.Core.Tapers;
 /// Proc. IRE 34, 335–348, 1946). Pattern AF(ψ) = T_{N−1}(x0 cos(ψ/2)), x0 = cosh(acosh(R)/(N − 1))
 /// (Dolph 1946).
 /// </summary>
-public static class DolphChebyshev
+internal static class DolphChebyshev
 {
     /// <summary>x0 = cosh(acosh(R)/(N − 1)), the argument that maps the main-beam peak to T_{N−1}(x0) = R (Dolph 1946).</summary>
     /// <param name="count">Number of elements, ≥ 2.</param>

@@ -1,7 +1,7 @@
 namespace SlotArray.Core.Tapers;
 
 /// <summary>Weights given by the user (the spec's <c>weights:</c> list), any signs, normalised to max |a| = 1.</summary>
-public static class GivenWeights
+internal static class GivenWeights
 {
     /// <summary>Checks and normalises the given weights.</summary>
     /// <param name="weights">One finite weight per element, not all zero.</param>

@@ -9,7 +9,7 @@ namespace SlotArray.Core.Tapers;
 /// <param name="Weights">Amplitude of each element (real; a difference taper has both signs).</param>
 /// <param name="IsDifference">True for an odd (difference, monopulse) taper.</param>
 /// <param name="Warnings">Validity limits met while synthesising, as data.</param>
-public sealed record TaperResult(string Method, ImmutableArray<double> Weights, bool IsDifference, IReadOnlyList<DesignWarning> Warnings)
+internal sealed record TaperResult(string Method, ImmutableArray<double> Weights, bool IsDifference, IReadOnlyList<DesignWarning> Warnings)
 {
     /// <summary>Number of elements.</summary>
     public int Count => Weights.Length;

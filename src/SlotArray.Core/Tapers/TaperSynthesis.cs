@@ -9,7 +9,7 @@ namespace SlotArray.Core.Tapers;
 /// validity warnings of each method (cited in its own type) as data. Invalid parameters throw
 /// <see cref="ArgumentException"/> with a message that says what to change.
 /// </summary>
-public static class TaperSynthesis
+internal static class TaperSynthesis
 {
     /// <summary>Largest N for which the achieved sidelobe level is measured (the check costs O(N²)).</summary>
     public const int MeasuredSidelobeCheckLimit = 2000;

@@ -8,7 +8,7 @@ namespace SlotArray.Core.Tapers;
 /// eqs. 3.31–3.33). The first n̄ − 1 zeros are moved to σ√(A² + (n − ½)²), the rest stay
 /// at the uniform source's integers; the distribution is a finite cosine series.
 /// </summary>
-public static class TaylorLineSource
+internal static class TaylorLineSource
 {
     /// <summary>The parameters of one design: A, σ, the moved zeros and the cosine coefficients.</summary>
     /// <param name="A">Taylor's A = acosh(R)/π.</param>

@@ -8,7 +8,7 @@ namespace SlotArray.Core.Tapers;
 /// <i>Phased Array Antennas</i>, Wiley): g(p) = I0(πB√(1 − p²)), p = 2x/L ∈ [−1, 1], pattern
 /// sinh(π√(B² − u²))/(π√(B² − u²)); the sidelobes fall off like 1/u.
 /// </summary>
-public static class TaylorOneParameter
+internal static class TaylorOneParameter
 {
     /// <summary>
     /// |sin x / x| at its first sidelobe, x = 4.493409457909064 (first positive root of tan x = x; Abramowitz &amp;

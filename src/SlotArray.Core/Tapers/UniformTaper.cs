@@ -1,7 +1,7 @@
 namespace SlotArray.Core.Tapers;
 
 /// <summary>Uniform illumination: every element at amplitude 1 (the maximum-directivity taper of a broadside array).</summary>
-public static class UniformTaper
+internal static class UniformTaper
 {
     /// <summary>N amplitudes equal to 1.</summary>
     /// <param name="count">Number of elements, 2 … 100,000.</param>

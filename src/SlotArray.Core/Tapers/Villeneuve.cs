@@ -5,7 +5,7 @@ namespace SlotArray.Core.Tapers;
 /// AP-32(10), 1089–1093, 1984): the first n̄ − 1 zeros of the N-element Dolph–Chebyshev
 /// pattern are dilated by σ_V = (2πn̄/N)/ψ^C_{n̄}, the rest placed at the uniform array's zeros 2πp/N.
 /// </summary>
-public static class Villeneuve
+internal static class Villeneuve
 {
     /// <summary>σ_V = (2π n̄/N)/ψ^C_{n̄} (Villeneuve 1984).</summary>
     /// <param name="count">Number of elements.</param>

@@ -18,9 +18,16 @@ namespace SlotArray.Core.Tolerance;
 /// </summary>
 /// <remarks>
 /// <para>Errors per trial, drawn in this fixed order from the trial's stream: guide width a, wall t, then for each slot
-/// offset, length, position, width. The offset error is a signed error in x (the cutter's position across the broad
-/// wall; for an edge slot, the error at the slot's end, i.e. a tilt error δx/(L/2)); the systematic offset is a shift of
+/// offset, length, position, width (broad-wall slots) or tilt, length, position, width, depth (edge slots). The offset
+/// error is a signed error in x (the cutter's position across the broad wall); the systematic offset is a shift of
 /// every slot toward +x (a fixture offset), the systematic length the same extra length on every slot.</para>
+/// <para>Edge slots are cut by a cutter plunged square to the narrow wall at the slot's tilt θ to a depth D into each
+/// broad wall, so their machining errors are the tilt δθ and the depth δD, not an offset. The tilt error changes the
+/// coupling directly; a slot that wraps into the broad walls (L &gt; b/cos θ) has the cut path
+/// L = b/cos θ + 2(D − t) (<see cref="Fabrication.Datums.EdgeSlotDepthOfCut"/>, the project's geometric approximation), so at
+/// fixed depth its length also changes by δL = b sin|θ|/cos²θ · δ|θ|, and a depth error lengthens it by 2 δD. A slot that
+/// does not wrap has no depth; its length is then the milled length alone. The length tolerance applies to both kinds
+/// on top (a cut path longer or shorter than drawn).</para>
 /// <para>Datums: positions are from the inner face of the end short (z = 0), which stays put; a centre feed's junction and
 /// far short stay at their nominal places.</para>
 /// <para>Coupled designs (<c>coupling: mutual</c>): each trial is solved on the coupled network of the pipeline
@@ -32,12 +39,13 @@ namespace SlotArray.Core.Tolerance;
 /// z_in Z'/Z at the feed flange (an impedance step between equal-height guides, the usual first approximation; D. M. Pozar,
 /// <i>Microwave Engineering</i>, 4th ed., Wiley 2012, Sec. 3.3 for Z_TE, from memory).</para>
 /// </remarks>
-public sealed class ArrayTrialModel : IToleranceTrialModel
+internal sealed class ArrayTrialModel : IToleranceTrialModel
 {
     private readonly ArrayDesign design;
     private readonly ToleranceRequest tolerance;
     private readonly SlotSurrogate[] surrogates;
-    private readonly double[] positions, signs, couplingPerOffset;
+    private readonly double[] positions, signs, lengthPerTilt, lengthPerDepth;
+    private readonly bool edge;
     private readonly double nominalImpedance;
 
     private readonly Coupling.CouplingMatrix? mutual;
@@ -50,7 +58,9 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
         this.surrogates = surrogates;
         positions = design.Slots.Select(s => s.Position.Meters).ToArray();
         signs = design.Slots.Select(s => (double)Math.Sign(s.Coupling)).ToArray();
-        couplingPerOffset = design.Slots.Select(s => CouplingPerOffset(design, s)).ToArray();
+        edge = design.CouplingKind == SlotCouplingKind.Tilt;
+        lengthPerTilt = design.Slots.Select(s => LengthPerTilt(design, s)).ToArray();
+        lengthPerDepth = design.Slots.Select(s => LengthPerDepth(design, s)).ToArray();
         nominalImpedance = design.Guide.WaveImpedance(design.DesignFrequency);
         var y0 = surrogates.Select(s => s.Nominal).ToArray();
         NominalAdmittances = Array.AsReadOnly(y0);
@@ -77,26 +87,55 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
         ArgumentNullException.ThrowIfNull(tolerance);
         options ??= ToleranceOptions.Default;
         options.Validate();
+        CheckApplies(design, tolerance);
         double Range(MachiningTolerance t) => t.Distribution == ErrorDistribution.Normal ? options.NormalRange * t.Value.Meters : t.Value.Meters;
-        double offsetRange = Range(tolerance.Offset) + Math.Abs(tolerance.SystematicOffset.Meters);
+        bool edge = design.CouplingKind == SlotCouplingKind.Tilt;
+        double tiltRange = tolerance.Tilt.Range(options.NormalRange);
+        double couplingRange = edge ? tiltRange : Range(tolerance.Offset) + Math.Abs(tolerance.SystematicOffset.Meters);
         double lengthRange = Range(tolerance.Length) + Math.Abs(tolerance.SystematicLength.Meters);
-        var keys = design.Slots.Select(s => (Coupling: Math.Abs(s.Coupling), Length: s.Length.Meters, PerOffset: CouplingPerOffset(design, s))).ToArray();
+        var keys = design.Slots.Select(s => (Coupling: Math.Abs(s.Coupling), Length: s.Length.Meters,
+            LengthRange: lengthRange + LengthPerDepth(design, s) * Range(tolerance.Depth) + LengthPerTilt(design, s) * tiltRange)).ToArray();
         var distinct = keys.Distinct().ToArray();
         var built = new SlotSurrogate[distinct.Length];
         Parallel.For(0, distinct.Length, new ParallelOptions { MaxDegreeOfParallelism = options.Threads }, i =>
         {
             var k = distinct[i];
             built[i] = new SlotSurrogate(slot, factory, k.Coupling, Length.FromMeters(k.Length), design.DesignFrequency,
-                offsetRange * k.PerOffset, lengthRange, Range(tolerance.Width), Range(tolerance.Wall), Range(tolerance.GuideWidth),
+                couplingRange, k.LengthRange, Range(tolerance.Width), Range(tolerance.Wall), Range(tolerance.GuideWidth),
                 options.SurrogateNodes);
         });
         var index = distinct.Select((k, i) => (k, i)).ToDictionary(p => p.k, p => p.i);
         return new ArrayTrialModel(design, tolerance, keys.Select(k => built[index[k]]).ToArray(), coupled);
     }
 
-    /// <summary>Coupling change per metre of offset error: 1 for an offset, 1/(L/2) rad/m for a tilt (error at the slot end).</summary>
-    private static double CouplingPerOffset(ArrayDesign design, SlotDesign s)
-        => design.CouplingKind == SlotCouplingKind.Offset ? 1.0 : 2.0 / s.Length.Meters;
+    /// <summary>
+    /// dL/d|θ| of an edge slot at fixed depth, m/rad: b sin|θ|/cos²θ when it wraps into the broad walls, else 0 (and 0
+    /// for broad-wall slots); see remarks.
+    /// </summary>
+    private static double LengthPerTilt(ArrayDesign design, SlotDesign s)
+    {
+        if (LengthPerDepth(design, s) == 0) return 0;
+        double c = Math.Cos(s.Coupling);
+        return design.Guide.NarrowWall.Meters * Math.Sin(Math.Abs(s.Coupling)) / (c * c);
+    }
+
+    /// <summary>dL/dD of an edge slot: 2 when it wraps into the broad walls (the cut runs D − t into each), else 0.</summary>
+    private static double LengthPerDepth(ArrayDesign design, SlotDesign s)
+        => design.CouplingKind == SlotCouplingKind.Tilt
+            && Fabrication.Datums.EdgeSlotDepthOfCut(s.Length, Angle.FromRadians(s.Coupling), design.Guide.NarrowWall, design.Guide.WallThickness) is not null
+            ? 2.0 : 0.0;
+
+    /// <summary>Refuses errors that the design's slots do not have: an offset on edge slots, a tilt or depth on broad-wall slots.</summary>
+    private static void CheckApplies(ArrayDesign design, ToleranceRequest t)
+    {
+        if (design.CouplingKind == SlotCouplingKind.Tilt)
+        {
+            if (t.Offset.Value.Meters != 0 || t.SystematicOffset.Meters != 0)
+                throw new ArgumentException("edge slots have no offset error: give their tilt and depth-of-cut tolerances (tolerance.tilt, tolerance.depth)", nameof(t));
+        }
+        else if (t.Tilt.Value.Radians != 0 || t.Depth.Value.Meters != 0)
+            throw new ArgumentException("broad-wall slots have no tilt or depth-of-cut error: give their offset tolerance (tolerance.offset)", nameof(t));
+    }
 
     /// <inheritdoc />
     public Frequency Frequency => design.DesignFrequency;
@@ -119,8 +158,14 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
     /// <summary>z_n of the nominal slots, m.</summary>
     public IReadOnlyList<double> NominalPositions => positions;
 
-    /// <summary>dc/dx of slot n: coupling change per metre of offset error.</summary>
-    public double CouplingPerOffsetError(int slot) => couplingPerOffset[slot];
+    /// <summary>Whether the slots are edge slots (errors tilt and depth) rather than broad-wall slots (error offset).</summary>
+    public bool EdgeSlots => edge;
+
+    /// <summary>dL/d|θ| of slot n at fixed depth, m/rad (0 unless an edge slot that wraps into the broad walls).</summary>
+    public double LengthPerTiltError(int slot) => lengthPerTilt[slot];
+
+    /// <summary>dL/dD of slot n: 2 for an edge slot that wraps into the broad walls, else 0.</summary>
+    public double LengthPerDepthError(int slot) => lengthPerDepth[slot];
 
     /// <inheritdoc />
     public TrialNetwork Trial(ref TrialRandom random)
@@ -130,24 +175,30 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
         int n = positions.Length;
         var y = new Complex[n];
         var z = new double[n];
+        var tilts = edge ? new double[n] : null;
         for (int i = 0; i < n; i++)
         {
-            double dx = random.Draw(tolerance.Offset) + tolerance.SystematicOffset.Meters;
+            double dx = edge ? random.Draw(tolerance.Tilt) : random.Draw(tolerance.Offset) + tolerance.SystematicOffset.Meters;
             double dl = random.Draw(tolerance.Length) + tolerance.SystematicLength.Meters;
             double dz = random.Draw(tolerance.Position);
             double dw = random.Draw(tolerance.Width);
-            // |c| grows when the error points away from the centreline on the slot's side.
-            y[i] = surrogates[i].Admittance(signs[i] * dx * couplingPerOffset[i], dl, dw, dt, da);
+            // |c| grows when the error points away from the centreline (the direction across the narrow wall) on the slot's side.
+            double dc = signs[i] * dx;
+            if (edge) dl += lengthPerTilt[i] * dc + lengthPerDepth[i] * random.Draw(tolerance.Depth);
+            y[i] = surrogates[i].Admittance(dc, dl, dw, dt, da);
             z[i] = positions[i] + dz;
+            if (tilts is not null) tilts[i] = design.Slots[i].Coupling + signs[i] * dc;
         }
-        return Solve(y, z, da);
+        return Solve(y, z, da, tilts);
     }
 
     /// <summary>
     /// The line network at the design frequency with the given slot admittances and positions and a guide whose inside
-    /// width is off by <paramref name="guideWidthError"/> (m); terminations at their nominal places.
+    /// width is off by <paramref name="guideWidthError"/> (m); terminations at their nominal places. Edge slots: the
+    /// excitations are split into co- and cross-polarised sources at the slots' signed tilts <paramref name="tilts"/>
+    /// (rad; the nominal tilts when null), as <see cref="ArrayFigures"/> splits them for the design's figures.
     /// </summary>
-    public TrialNetwork Solve(Complex[] admittances, double[] slotPositions, double guideWidthError)
+    public TrialNetwork Solve(Complex[] admittances, double[] slotPositions, double guideWidthError, double[]? tilts = null)
     {
         ArgumentNullException.ThrowIfNull(admittances);
         ArgumentNullException.ThrowIfNull(slotPositions);
@@ -175,6 +226,9 @@ public sealed class ArrayTrialModel : IToleranceTrialModel
             Complex zin = (1 + s11) / (1 - s11) * ratio;
             s11 = (zin - 1) / (zin + 1);
         }
-        return new TrialNetwork(slotPositions, sol.Excitations.ToArray(), s11, sol.RadiatedPower);
+        if (!edge) return new TrialNetwork(slotPositions, sol.Excitations.ToArray(), s11, sol.RadiatedPower);
+        var theta = tilts ?? design.Slots.Select(x => x.Coupling).ToArray();
+        return new TrialNetwork(slotPositions, Patterns.CrossPolarPattern.CoPolarSources(sol.Excitations, theta), s11, sol.RadiatedPower,
+            Patterns.CrossPolarPattern.CrossPolarSources(sol.Excitations, theta));
     }
 }

@@ -14,7 +14,7 @@ namespace SlotArray.Core.Tolerance;
 /// eq. (5.4) and Sec. 5 (from memory). The interpolation error of an analytic function decays geometrically in n
 /// (ibid., Sec. 6); the tolerance tests state the error measured against direct solves.
 /// </remarks>
-public sealed class BarycentricSurface
+internal sealed class BarycentricSurface
 {
     private readonly double[] nodesX, nodesY, weightsX, weightsY;
     private readonly Complex[] values;   // row-major [ix * ny + iy]

@@ -8,7 +8,7 @@ namespace SlotArray.Core.Tolerance;
 /// <summary>Builds a slot model for a (perturbed) guide and slot width: how the tolerance analysis reaches the slot model of the design.</summary>
 /// <param name="guide">The guide, possibly with a perturbed broad wall or wall thickness.</param>
 /// <param name="width">The slot width, possibly perturbed.</param>
-public delegate IShuntSlotModel SlotModelFactory(RectangularWaveguide guide, Length width);
+internal delegate IShuntSlotModel SlotModelFactory(RectangularWaveguide guide, Length width);
 
 /// <summary>
 /// The slot model of one designed slot at the design frequency, made cheap for the Monte Carlo: a barycentric
@@ -28,7 +28,7 @@ public delegate IShuntSlotModel SlotModelFactory(RectangularWaveguide guide, Len
 /// <para>Symmetry: y depends on |c| only (y(x) = y(−x) for the longitudinal slot; the tilt sign for the edge slot),
 /// so slots of equal |c| and L share one surrogate.</para>
 /// </remarks>
-public sealed class SlotSurrogate
+internal sealed class SlotSurrogate
 {
     /// <summary>Step of the per-slot sensitivities (finite differences on the nominal design): 0.01 mm.</summary>
     public const double SensitivityStep = 1e-5;

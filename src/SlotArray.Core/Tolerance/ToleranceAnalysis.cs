@@ -17,7 +17,7 @@ public sealed record ToleranceResult(ToleranceRequest Tolerance, MonteCarloResul
 /// the request's machining tolerances, by Monte Carlo with the slot model (through per-slot surrogates,
 /// <see cref="SlotSurrogate"/>) and the line network on every trial, plus per-slot sensitivities.
 /// </summary>
-public static class ToleranceAnalysis
+internal static class ToleranceAnalysis
 {
     /// <summary>
     /// The sidelobe target, by the one rule the requirement verdicts also use (<see cref="Verdicts.SidelobeTarget"/>):

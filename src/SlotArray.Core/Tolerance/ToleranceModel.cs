@@ -12,14 +12,17 @@ namespace SlotArray.Core.Tolerance;
 /// <param name="Excitations">e_n, complex, any common scale.</param>
 /// <param name="S11">Reflection at the feed, referred to the nominal guide's wave impedance.</param>
 /// <param name="RadiatedPower">Σ P_n / P_inc.</param>
-public sealed record TrialNetwork(double[] Positions, Complex[] Excitations, Complex S11, double RadiatedPower);
+/// <param name="CrossExcitations">Edge (tilted) slots: the cross-polarised sources e_n sin θ_n, with
+/// <paramref name="Excitations"/> then the co-polarised sources e_n cos θ_n (<see cref="Patterns.CrossPolarPattern"/>,
+/// as <see cref="Network.ArrayFigures"/> splits them); null for untilted slots.</param>
+internal sealed record TrialNetwork(double[] Positions, Complex[] Excitations, Complex S11, double RadiatedPower, Complex[]? CrossExcitations = null);
 
 /// <summary>
 /// A source of Monte Carlo trials: the nominal network and, for a random stream, one perturbed network. The array
 /// model (<see cref="ArrayTrialModel"/>) reruns the slot model and the line network; tests may perturb excitations
 /// directly to check the statistics alone.
 /// </summary>
-public interface IToleranceTrialModel
+internal interface IToleranceTrialModel
 {
     /// <summary>The analysis frequency (the design frequency).</summary>
     Frequency Frequency { get; }

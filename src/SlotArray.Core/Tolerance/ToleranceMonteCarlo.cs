@@ -4,9 +4,10 @@ namespace SlotArray.Core.Tolerance;
 
 /// <summary>
 /// Runs Monte Carlo trials of a <see cref="IToleranceTrialModel"/> and reduces them to statistics. Trial i draws from
-/// <see cref="TrialRandom"/>(seed, i) and is evaluated on its own; the trials run in parallel in fixed chunks, their
-/// outcomes go to slot i of an array, and every reduction (sums, sorts) runs over that array in trial order afterwards,
-/// so the result is identical for any thread count.
+/// <see cref="TrialRandom"/>(seed, i) and is evaluated on its own (its vector lanes are angles of its own cut, never other
+/// trials, and every thread reuses only scratch arrays that each trial overwrites); the trials run in parallel in fixed
+/// chunks of 64, their outcomes and envelope rows go to slot i of two arrays, and every reduction (sums in trial order,
+/// order statistics by selection) runs over those arrays afterwards, so the result is identical for any thread count.
 /// </summary>
 /// <remarks>
 /// Analytic floor: for independent random relative errors of excitation with variances σ_a² (amplitude) and σ_φ²
@@ -18,7 +19,7 @@ namespace SlotArray.Core.Tolerance;
 /// inputs; errors that are correlated from slot to slot (a guide-width error, a systematic error) break the
 /// independence the formula assumes and make the two differ.
 /// </remarks>
-public static class ToleranceMonteCarlo
+internal static class ToleranceMonteCarlo
 {
     private const int Chunk = 64;
 

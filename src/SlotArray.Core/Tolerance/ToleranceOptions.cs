@@ -7,7 +7,7 @@ namespace SlotArray.Core.Tolerance;
 /// <param name="EnvelopePoints">Angles kept per trial for the percentile envelope (a subsample of the cut); 0 keeps none; default 256.</param>
 /// <param name="FloorPoints">Points in u = sin θ over which the error-pattern floor is averaged; ≥ 16, default 256.</param>
 /// <param name="NormalRange">Half-width of a normal error's surrogate range in σ; beyond it the slot model is solved directly; default 4.</param>
-public sealed record ToleranceOptions(int PatternPoints = 2048, int SurrogateNodes = 5, int MaxThreads = 0, int EnvelopePoints = 256,
+internal sealed record ToleranceOptions(int PatternPoints = 2048, int SurrogateNodes = 5, int MaxThreads = 0, int EnvelopePoints = 256,
     int FloorPoints = 256, double NormalRange = 4)
 {
     /// <summary>The defaults.</summary>

@@ -18,7 +18,11 @@ internal readonly record struct TrialOutcome(double PeakSidelobeDb, double BeamD
     double AmplitudeErrorSquares, double PhaseErrorSquares, double PositionPhaseSquares);
 
 /// <summary>
-/// The per-trial analysis at one frequency on fixed grids: array factor × half-wave slot element on the cut, the
+/// The per-trial analysis at one frequency on fixed grids: array factor × the element pattern of the design's figures
+/// (<see cref="Network.ArrayFigures"/>: the half-wave slot for broad-wall slots; for edge slots the co-polarised sources
+/// e_n cos θ_n with a uniform element, and the cross-polarised power of e_n sin θ_n with the cos ψ element added to the
+/// radiated power, D = 4|AF_co(θb)|²/(∫|AF_co|² du + ∫|AF_x|² cos²ψ du), the same directivity as the design's
+/// 2 D_iso,co/(1 + P_x/P_co)) on the cut, the
 /// Patterns library's metrics, the half-space directivity (the rule of <see cref="Directivity.HalfSpace(IReadOnlyList{double}, IReadOnlyList{Complex}, double, Func{double, double}, double)"/>
 /// with its nodes and element values computed once), the realised gain, and the excitation-error statistics against
 /// the nominal network. Same angle convention as <see cref="Network.ArrayFigures"/>: the pattern positions are −z_n.
@@ -39,6 +43,9 @@ internal sealed class TrialEvaluator
     private readonly double k;
     private readonly AngleGrid grid;
     private readonly double[] element, floorSines, quadSines, quadWeights;
+    private readonly Func<double, double> elementOf;
+    private readonly double[]? crossQuadWeights;
+    private readonly HalfSpacePowerKernel? crossKernel;
     private readonly int envelopeStride;
     private readonly TrialNetwork nominal;
     private readonly double[] nominalPatternPositions;
@@ -54,7 +61,10 @@ internal sealed class TrialEvaluator
         // An odd count puts broadside on a sample: an even grid straddles a symmetric beam with two equal samples,
         // and the metrics would count the second as a sidelobe.
         grid = AngleGrid.HalfSpaceInTheta(options.PatternPoints | 1);
-        var e = ElementPatterns.HalfWaveSlotHPlane;
+        bool edge = nominal.CrossExcitations is not null;
+        var e = edge ? CrossPolarPattern.EdgeSlotCoPolarElement : ElementPatterns.HalfWaveSlotHPlane;
+        var ex = CrossPolarPattern.EdgeSlotCrossPolarElement;
+        elementOf = e;
         element = grid.Theta.Select(e).ToArray();
         envelopeStride = options.EnvelopePoints == 0 ? 0 : Math.Max(1, options.PatternPoints / options.EnvelopePoints);
         int m = options.FloorPoints;
@@ -66,6 +76,7 @@ internal sealed class TrialEvaluator
         var rule = new GaussLegendreRule(-1, 1, 16);
         quadSines = new double[panels * rule.Order];
         quadWeights = new double[quadSines.Length];
+        crossQuadWeights = edge ? new double[quadSines.Length] : null;
         double h = 2.0 / panels;
         for (int p = 0; p < panels; p++)
             for (int q = 0; q < rule.Order; q++)
@@ -74,6 +85,11 @@ internal sealed class TrialEvaluator
                 quadSines[i] = -1 + h * (p + 0.5 * (rule.Abscissas[q] + 1));
                 double el = e(Math.Asin(quadSines[i]));
                 quadWeights[i] = 0.5 * h * rule.Weights[q] * el * el;
+                if (crossQuadWeights is not null)
+                {
+                    double xl = ex(Math.Asin(quadSines[i]));
+                    crossQuadWeights[i] = 0.5 * h * rule.Weights[q] * xl * xl;
+                }
             }
         nominalPatternPositions = nominal.Positions.Select(z => -z).ToArray();
         if (IsEquallySpaced(nominalPatternPositions))
@@ -81,6 +97,7 @@ internal sealed class TrialEvaluator
             gridSum = new NearUniformArrayFactor(nominalPatternPositions, k, grid.Sines.ToArray());
             floorSum = new NearUniformArrayFactor(nominalPatternPositions, k, floorSines);
             powerKernel = new HalfSpacePowerKernel(nominalPatternPositions, k, e);
+            if (edge) crossKernel = new HalfSpacePowerKernel(nominalPatternPositions, k, ex);
             nominalFloorField = floorSum.Evaluate(nominal.Excitations, new double[nominal.Excitations.Length]);
         }
         var (nominalBeam, _) = PatternOf(nominalPatternPositions, nominal.Excitations, new double[nominal.Excitations.Length], NewWorkspace());
@@ -137,6 +154,16 @@ internal sealed class TrialEvaluator
         return PatternMetrics.BeamAndPeakSidelobe(grid.Theta, System.Runtime.InteropServices.ImmutableCollectionsMarshal.AsImmutableArray(w.Power), peak);
     }
 
+    /// <summary>∫ |E·AF|² du over the half-space by the kernel (displaced equally spaced slots) or the quadrature directly.</summary>
+    private double RadiatedPower(HalfSpacePowerKernel? kernel, double[] weights, double[] pos, Complex[] excitations, double[] offsets)
+    {
+        if (kernel is not null && kernel.TryPower(excitations, offsets, out double integral)) return integral;
+        var afq = ArrayFactor.AtSines(pos, excitations, k, quadSines);
+        integral = 0;
+        for (int i = 0; i < afq.Length; i++) integral += weights[i] * (afq[i].Real * afq[i].Real + afq[i].Imaginary * afq[i].Imaginary);
+        return integral;
+    }
+
     /// <summary>One trial's figures (allocates its own workspace; no envelope).</summary>
     public TrialOutcome Evaluate(TrialNetwork t) => Evaluate(t, NewWorkspace(), default);
 
@@ -158,13 +185,9 @@ internal sealed class TrialEvaluator
 
         // Half-space directivity D = 4 |E·AF|²(θb) / ∫ |E·AF|² du (Directivity.HalfSpace, same rule).
         var afBeam = ArrayFactor.AtSines(pos, t.Excitations, k, [Math.Sin(beam)])[0];
-        double eb = ElementPatterns.HalfWaveSlotHPlane(beam);
-        if (powerKernel is null || !powerKernel.TryPower(t.Excitations, offsets, out double integral))
-        {
-            var afq = ArrayFactor.AtSines(pos, t.Excitations, k, quadSines);
-            integral = 0;
-            for (int i = 0; i < afq.Length; i++) integral += quadWeights[i] * (afq[i].Real * afq[i].Real + afq[i].Imaginary * afq[i].Imaginary);
-        }
+        double eb = elementOf(beam);
+        double integral = RadiatedPower(powerKernel, quadWeights, pos, t.Excitations, offsets);
+        if (t.CrossExcitations is { } cross) integral += RadiatedPower(crossKernel, crossQuadWeights!, pos, cross, offsets);
         double directivity = 4 * eb * eb * (afBeam.Real * afBeam.Real + afBeam.Imaginary * afBeam.Imaginary) / integral;
 
         // Excitation errors against the nominal, common factor removed.

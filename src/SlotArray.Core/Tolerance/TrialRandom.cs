@@ -17,7 +17,7 @@ namespace SlotArray.Core.Tolerance;
 /// random normal deviates", Ann. Math. Statist. 29, 610–611, 1958), one deviate per pair of uniforms (the second
 /// is discarded, which keeps the number of draws per error fixed).</para>
 /// </remarks>
-public struct TrialRandom
+internal struct TrialRandom
 {
     private ulong s0, s1, s2, s3;
 
@@ -66,8 +66,19 @@ public struct TrialRandom
     public double Draw(MachiningTolerance tolerance)
     {
         ArgumentNullException.ThrowIfNull(tolerance);
-        double v = tolerance.Value.Meters;
-        if (tolerance.Distribution == ErrorDistribution.Normal) return v == 0 ? Discard(0.0) : v * NextNormal();
+        return Draw(tolerance.Value.Meters, tolerance.Distribution);
+    }
+
+    /// <summary>One tilt error, rad, by the same rule as <see cref="Draw(MachiningTolerance)"/>.</summary>
+    public double Draw(AngleTolerance tolerance)
+    {
+        ArgumentNullException.ThrowIfNull(tolerance);
+        return Draw(tolerance.Value.Radians, tolerance.Distribution);
+    }
+
+    private double Draw(double v, ErrorDistribution law)
+    {
+        if (law == ErrorDistribution.Normal) return v == 0 ? Discard(0.0) : v * NextNormal();
         double u = NextUniform();
         NextUniform();
         return v == 0 ? 0.0 : v * (2 * u - 1);

@@ -9,7 +9,7 @@ namespace SlotArray.Core.Verdicts;
 /// <param name="Verdicts">One per requirement checked, in a fixed order: sidelobes at the design frequency and over the
 /// band, VSWR, cross-polar level, power handling.</param>
 /// <param name="Notes">Requirements given but not checkable by this analysis (e.g. cross-polar level of broad-wall slots).</param>
-public sealed record RequirementVerdicts(IReadOnlyList<RequirementVerdict> Verdicts, IReadOnlyList<DesignWarning> Notes)
+internal sealed record RequirementVerdicts(IReadOnlyList<RequirementVerdict> Verdicts, IReadOnlyList<DesignWarning> Notes)
 {
     /// <summary>True when every verdict passed (exit code 0; otherwise 4, "a stated requirement is not met").</summary>
     public bool AllMet => Verdicts.All(v => v.Passed);
@@ -26,7 +26,7 @@ public sealed record RequirementVerdicts(IReadOnlyList<RequirementVerdict> Verdi
 /// achieved −13.15 dB: FAIL" over a difference the report does not show. The margin this allows (half the last
 /// printed digit) is far below the accuracy of any of the models behind the figures.
 /// </remarks>
-public static class RequirementChecks
+internal static class RequirementChecks
 {
     /// <summary>Checks every stated requirement of <paramref name="result"/>'s request.</summary>
     /// <param name="result">The pipeline's result.</param>
@@ -80,7 +80,7 @@ public static class RequirementChecks
         }
         if (request.Requirements.VerticalBeamwidth is { } vbw)
         {
-            if (result.Flare is { } flare)
+            if (result.AddOns.Flare is { } flare)
             {
                 double got = flare.VerticalBeamwidth.Degrees;
                 list.Add(new RequirementVerdict(RequirementKind.VerticalBeamwidth, vbw.Degrees, got, f0,

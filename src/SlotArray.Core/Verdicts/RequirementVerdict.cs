@@ -3,7 +3,7 @@ using SlotArray.Core.Quantities;
 namespace SlotArray.Core.Verdicts;
 
 /// <summary>What a requirement verdict is about.</summary>
-public enum RequirementKind
+internal enum RequirementKind
 {
     /// <summary>Peak sidelobe at the design frequency, dB (<see cref="SidelobeTarget"/>).</summary>
     SidelobesAtDesign,
@@ -28,7 +28,7 @@ public enum RequirementKind
 /// <param name="Achieved">The design's value (worst over the frequencies checked; power: the transmitter's peak power).</param>
 /// <param name="At">The frequency of <paramref name="Achieved"/>.</param>
 /// <param name="Passed">Whether <paramref name="Achieved"/> is within <paramref name="Limit"/>, compared as printed (<see cref="RequirementChecks"/>).</param>
-public sealed record RequirementVerdict(RequirementKind Kind, double Limit, double Achieved, Frequency At, bool Passed)
+internal sealed record RequirementVerdict(RequirementKind Kind, double Limit, double Achieved, Frequency At, bool Passed)
 {
     /// <summary>Sidelobe kinds: where the limit comes from.</summary>
     public SidelobeTargetOrigin? Origin { get; init; }

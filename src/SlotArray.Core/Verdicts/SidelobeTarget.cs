@@ -4,7 +4,7 @@ using SlotArray.Core.Tapers;
 namespace SlotArray.Core.Verdicts;
 
 /// <summary>Where a sidelobe target comes from.</summary>
-public enum SidelobeTargetOrigin
+internal enum SidelobeTargetOrigin
 {
     /// <summary>The spec's <c>requirements.sidelobes</c>.</summary>
     Requirement,
@@ -32,7 +32,7 @@ public enum SidelobeTargetOrigin
 /// </remarks>
 /// <param name="LevelDb">The target, dB relative to the beam peak (negative).</param>
 /// <param name="Origin">Where it comes from.</param>
-public sealed record SidelobeTarget(double LevelDb, SidelobeTargetOrigin Origin)
+internal sealed record SidelobeTarget(double LevelDb, SidelobeTargetOrigin Origin)
 {
     /// <summary>The target of a request whose taper is already synthesised; null when there is none (a taper without sidelobes, e.g. two elements).</summary>
     /// <param name="request">The request (requirements and taper family).</param>

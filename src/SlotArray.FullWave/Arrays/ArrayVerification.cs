@@ -13,7 +13,7 @@ namespace SlotArray.FullWave.Arrays;
 /// <param name="BeamDeg">Beam direction at the design frequency, deg from broadside (+ toward +z).</param>
 /// <param name="PeakSidelobeDb">Peak sidelobe at the design frequency, dB (null if none).</param>
 /// <param name="HpbwDeg">Half-power beamwidth at the design frequency, deg.</param>
-public sealed record ArrayFigures(double BestMatchHz, double S11AtDesignDb, double BeamDeg, double? PeakSidelobeDb, double HpbwDeg);
+internal sealed record ArrayFigures(double BestMatchHz, double S11AtDesignDb, double BeamDeg, double? PeakSidelobeDb, double HpbwDeg);
 
 /// <summary>The full-wave response of the array: |S11| across the band and the principal-plane cut at the design frequency.</summary>
 /// <param name="FrequenciesHz">Sweep frequencies, Hz.</param>
@@ -22,7 +22,7 @@ public sealed record ArrayFigures(double BestMatchHz, double S11AtDesignDb, doub
 /// <param name="PatternDeg">Pattern cut angles, deg.</param>
 /// <param name="PatternDb">Pattern cut levels, dB (peak 0).</param>
 /// <param name="Figures">Key figures.</param>
-public sealed record FullWaveArrayResult(IReadOnlyList<double> FrequenciesHz, IReadOnlyList<Complex> S11, IReadOnlyList<Complex> SlotVoltages,
+internal sealed record FullWaveArrayResult(IReadOnlyList<double> FrequenciesHz, IReadOnlyList<Complex> S11, IReadOnlyList<Complex> SlotVoltages,
     IReadOnlyList<double> PatternDeg, IReadOnlyList<double> PatternDb, ArrayFigures Figures);
 
 /// <summary>
@@ -33,7 +33,7 @@ public sealed record FullWaveArrayResult(IReadOnlyList<double> FrequenciesHz, IR
 /// principal-plane pattern from the full-wave slot voltages (each slot's E integrated across its centre on the outer
 /// face) times the half-wave slot element pattern, as the design's own pattern is formed.
 /// </summary>
-public sealed class ArrayVerification
+internal sealed class ArrayVerification
 {
     private ArrayVerification(DesignFolder design, TubeLayout layout, RunRequest run, double portZMm)
     {

@@ -13,12 +13,12 @@ namespace SlotArray.FullWave.Arrays;
 /// <param name="LengthMm">Overall length tip to tip, mm.</param>
 /// <param name="WidthMm">Width, mm.</param>
 /// <param name="RoundEnds">Round ends (radius = width/2), else square.</param>
-public sealed record CutListSlot(int Index, double PositionMm, double OffsetMm, double LengthMm, double WidthMm, bool RoundEnds);
+internal sealed record CutListSlot(int Index, double PositionMm, double OffsetMm, double LengthMm, double WidthMm, bool RoundEnds);
 
 /// <summary>The tool's own prediction at one frequency, from design.json's sweep.</summary>
 /// <param name="FrequencyHz">Frequency, Hz.</param>
 /// <param name="S11Db">|S11|, dB.</param>
-public sealed record PredictedPoint(double FrequencyHz, double S11Db);
+internal sealed record PredictedPoint(double FrequencyHz, double S11Db);
 
 /// <summary>
 /// What <c>verify</c> reads from a design folder: the slots from <c>cutlist.csv</c> (exactly as the machinist
@@ -39,7 +39,7 @@ public sealed record PredictedPoint(double FrequencyHz, double S11Db);
 /// <param name="PredictedBeamDeg">Predicted beam direction, deg.</param>
 /// <param name="PredictedHpbwDeg">Predicted HPBW, deg.</param>
 /// <param name="PredictedPeakSidelobeDb">Predicted peak sidelobe, dB.</param>
-public sealed record DesignFolder(string Name, GuideSection Guide, double DesignFrequencyHz, double BandLowHz, double BandHighHz, string SlotType,
+internal sealed record DesignFolder(string Name, GuideSection Guide, double DesignFrequencyHz, double BandLowHz, double BandHighHz, string SlotType,
     string Termination, double FeedPositionMm, IReadOnlyList<CutListSlot> Slots, IReadOnlyList<PredictedPoint> Predicted,
     IReadOnlyList<double> PredictedPatternDeg, IReadOnlyList<double> PredictedPatternDb, double PredictedBeamDeg, double PredictedHpbwDeg,
     double? PredictedPeakSidelobeDb)

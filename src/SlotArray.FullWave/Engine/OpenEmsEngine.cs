@@ -5,16 +5,16 @@ using System.Text.RegularExpressions;
 namespace SlotArray.FullWave.Engine;
 
 /// <summary>The engine is not installed (or not where it was said to be); the message says how to install it.</summary>
-public sealed class EngineNotFoundException(string message) : Exception(message);
+internal sealed class EngineNotFoundException(string message) : Exception(message);
 
 /// <summary>The engine ran but failed; the message names the run folder and the last lines of its log.</summary>
-public sealed class EngineRunException(string message) : Exception(message);
+internal sealed class EngineRunException(string message) : Exception(message);
 
 /// <summary>What one finished engine run reports about itself.</summary>
 /// <param name="Cells">FDTD cells.</param>
 /// <param name="Timesteps">Time steps taken.</param>
 /// <param name="Seconds">Wall-clock seconds of the engine process.</param>
-public sealed record EngineRunStats(long Cells, long Timesteps, double Seconds)
+internal sealed record EngineRunStats(long Cells, long Timesteps, double Seconds)
 {
     /// <summary>Throughput, cell updates per second.</summary>
     public double CellsPerSecond => Seconds > 0 ? Cells * (double)Timesteps / Seconds : 0;
@@ -24,7 +24,7 @@ public sealed record EngineRunStats(long Cells, long Timesteps, double Seconds)
 /// The openEMS FDTD engine as an external process: <c>openEMS FILE.xml --numThreads=1</c> run in the file's
 /// folder, which then holds the probe files. Found on PATH, or at the path the user gives.
 /// </summary>
-public sealed class OpenEmsEngine
+internal sealed class OpenEmsEngine
 {
     /// <summary>The executable's file name on PATH.</summary>
     public const string ExecutableName = "openEMS";

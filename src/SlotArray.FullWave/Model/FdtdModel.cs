@@ -4,10 +4,10 @@ namespace SlotArray.FullWave.Model;
 /// <param name="X">x, mm.</param>
 /// <param name="Y">y, mm.</param>
 /// <param name="Z">z, mm.</param>
-public readonly record struct Point3(double X, double Y, double Z);
+internal readonly record struct Point3(double X, double Y, double Z);
 
 /// <summary>What fills a solid.</summary>
-public enum FillKind
+internal enum FillKind
 {
     /// <summary>Perfect electric conductor.</summary>
     Metal,
@@ -21,20 +21,20 @@ public enum FillKind
 
 /// <summary>One geometric primitive of a solid; a higher priority wins where primitives overlap.</summary>
 /// <param name="Priority">Overlap priority (higher wins).</param>
-public abstract record Primitive(int Priority);
+internal abstract record Primitive(int Priority);
 
 /// <summary>An axis-aligned box between two corners, mm.</summary>
 /// <param name="P1">One corner.</param>
 /// <param name="P2">The opposite corner.</param>
 /// <param name="Priority">Overlap priority.</param>
-public sealed record BoxPrimitive(Point3 P1, Point3 P2, int Priority) : Primitive(Priority);
+internal sealed record BoxPrimitive(Point3 P1, Point3 P2, int Priority) : Primitive(Priority);
 
 /// <summary>A circular cylinder of radius <paramref name="RadiusMm"/> on the axis from <paramref name="P1"/> to <paramref name="P2"/>, mm.</summary>
 /// <param name="P1">Axis start.</param>
 /// <param name="P2">Axis end.</param>
 /// <param name="RadiusMm">Radius, mm, &gt; 0.</param>
 /// <param name="Priority">Overlap priority.</param>
-public sealed record CylinderPrimitive(Point3 P1, Point3 P2, double RadiusMm, int Priority) : Primitive(Priority);
+internal sealed record CylinderPrimitive(Point3 P1, Point3 P2, double RadiusMm, int Priority) : Primitive(Priority);
 
 /// <summary>
 /// A polygon in the plane normal to axis <paramref name="NormalAxis"/> (0 = x, 1 = y, 2 = z), extruded from
@@ -46,7 +46,7 @@ public sealed record CylinderPrimitive(Point3 P1, Point3 P2, double RadiusMm, in
 /// <param name="LengthMm">Extrusion length along the normal, mm.</param>
 /// <param name="Vertices">Polygon vertices (first, second in-plane coordinate), mm.</param>
 /// <param name="Priority">Overlap priority.</param>
-public sealed record ExtrudedPolygon(int NormalAxis, double ElevationMm, double LengthMm, IReadOnlyList<(double First, double Second)> Vertices,
+internal sealed record ExtrudedPolygon(int NormalAxis, double ElevationMm, double LengthMm, IReadOnlyList<(double First, double Second)> Vertices,
     int Priority) : Primitive(Priority);
 
 /// <summary>A named solid: a fill and the primitives it occupies.</summary>
@@ -55,7 +55,7 @@ public sealed record ExtrudedPolygon(int NormalAxis, double ElevationMm, double 
 /// <param name="Permittivity">Relative permittivity (dielectric only; 1 otherwise).</param>
 /// <param name="Conductivity">Conductivity, S/m (dielectric loss; 0 otherwise).</param>
 /// <param name="Primitives">Where it is.</param>
-public sealed record Solid(string Name, FillKind Kind, double Permittivity, double Conductivity, IReadOnlyList<Primitive> Primitives);
+internal sealed record Solid(string Name, FillKind Kind, double Permittivity, double Conductivity, IReadOnlyList<Primitive> Primitives);
 
 /// <summary>
 /// A rectangular-waveguide port for the TE10 mode along z: the guide's inside spans x in [XMin, XMax] (broad, width a)
@@ -71,7 +71,7 @@ public sealed record Solid(string Name, FillKind Kind, double Permittivity, doub
 /// <param name="ExciteZMm">Excitation plane, mm.</param>
 /// <param name="MeasureZMm">Measurement plane, mm.</param>
 /// <param name="Excited">Whether this port launches the TE10 wave.</param>
-public sealed record WaveguidePortDefinition(int Number, double XMinMm, double XMaxMm, double YMinMm, double YMaxMm, double ExciteZMm,
+internal sealed record WaveguidePortDefinition(int Number, double XMinMm, double XMaxMm, double YMinMm, double YMaxMm, double ExciteZMm,
     double MeasureZMm, bool Excited)
 {
     /// <summary>+1 when the port points toward +z (its measurement plane beyond its excitation plane), else −1.</summary>
@@ -88,13 +88,13 @@ public sealed record WaveguidePortDefinition(int Number, double XMinMm, double X
 /// <param name="Name">Probe (file) name.</param>
 /// <param name="From">Start point, mm.</param>
 /// <param name="To">End point, mm.</param>
-public sealed record VoltageProbe(string Name, Point3 From, Point3 To);
+internal sealed record VoltageProbe(string Name, Point3 From, Point3 To);
 
 /// <summary>Rectilinear mesh lines of the three axes, mm, each ascending.</summary>
 /// <param name="X">x lines.</param>
 /// <param name="Y">y lines.</param>
 /// <param name="Z">z lines.</param>
-public sealed record MeshLines(IReadOnlyList<double> X, IReadOnlyList<double> Y, IReadOnlyList<double> Z)
+internal sealed record MeshLines(IReadOnlyList<double> X, IReadOnlyList<double> Y, IReadOnlyList<double> Z)
 {
     /// <summary>Number of FDTD cells.</summary>
     public long Cells => (long)(X.Count - 1) * (Y.Count - 1) * (Z.Count - 1);
@@ -118,5 +118,5 @@ public sealed record MeshLines(IReadOnlyList<double> X, IReadOnlyList<double> Y,
 /// <param name="MaxTimesteps">Upper bound on time steps.</param>
 /// <param name="EndCriterion">Stop when the field energy falls to this fraction of its peak (1e-4 = −40 dB).</param>
 /// <param name="PmlCells">PML thickness in cells on every face.</param>
-public sealed record FdtdModel(string Title, MeshLines Mesh, IReadOnlyList<Solid> Solids, IReadOnlyList<WaveguidePortDefinition> Ports,
+internal sealed record FdtdModel(string Title, MeshLines Mesh, IReadOnlyList<Solid> Solids, IReadOnlyList<WaveguidePortDefinition> Ports,
     IReadOnlyList<VoltageProbe> Probes, double CentreFrequencyHz, double HalfBandwidthHz, int MaxTimesteps, double EndCriterion, int PmlCells);

@@ -6,7 +6,7 @@ namespace SlotArray.FullWave.Model;
 /// most the grading ratio and never above the largest cell. Grading of 1.3–1.5 between neighbouring FDTD cells
 /// is common practice (no source).
 /// </summary>
-public static class MeshBuilder
+internal static class MeshBuilder
 {
     /// <summary>Mesh lines, mm, ascending, from the anchors (edge position and local cell size there, mm).</summary>
     /// <param name="anchors">Geometry edges with the cell size wanted at each, mm; at least two distinct positions.</param>

@@ -1,7 +1,7 @@
 namespace SlotArray.FullWave.Model;
 
 /// <summary>How fine the FDTD mesh is (cells per wavelength, cells across the slot and through the wall).</summary>
-public enum MeshDensity
+internal enum MeshDensity
 {
     /// <summary>λ/15 largest cell, 2 cells across the slot and through the wall: quick, for checks and tests.</summary>
     Coarse,
@@ -18,7 +18,7 @@ public enum MeshDensity
 /// <param name="CellsAcrossSlot">Cells across the slot width (and along its ends).</param>
 /// <param name="CellsThroughWall">Cells through the wall thickness.</param>
 /// <param name="EndCriterion">Energy fraction at which the run stops.</param>
-public sealed record MeshSettings(int CellsPerWavelength, int CellsAcrossSlot, int CellsThroughWall, double EndCriterion)
+internal sealed record MeshSettings(int CellsPerWavelength, int CellsAcrossSlot, int CellsThroughWall, double EndCriterion)
 {
     /// <summary>The settings of a density.</summary>
     public static MeshSettings Of(MeshDensity density) => density switch

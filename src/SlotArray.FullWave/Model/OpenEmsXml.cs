@@ -14,7 +14,7 @@ namespace SlotArray.FullWave.Model;
 /// rectangular waveguide port does: E_y ∝ −sin(π(x − x0)/a), H_x ∝ +sin(π(x − x0)/a) (D. M. Pozar, Microwave
 /// Engineering, 4th ed., Wiley 2012, section 3.3, eq. 3.89, from memory).
 /// </summary>
-public static class OpenEmsXml
+internal static class OpenEmsXml
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

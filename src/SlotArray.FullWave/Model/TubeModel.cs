@@ -6,7 +6,7 @@ namespace SlotArray.FullWave.Model;
 /// <summary>A slot of a tube and where its centre is along the guide, mm.</summary>
 /// <param name="Cut">The slot.</param>
 /// <param name="CentreZMm">Its centre's z, mm.</param>
-public sealed record PlacedSlot(SlotCut Cut, double CentreZMm);
+internal sealed record PlacedSlot(SlotCut Cut, double CentreZMm);
 
 /// <summary>
 /// What to build: a rectangular tube along z (inside a × b, wall t, PEC) in free space, its slots, an optional end
@@ -25,11 +25,11 @@ public sealed record PlacedSlot(SlotCut Cut, double CentreZMm);
 /// <param name="HalfBandwidthHz">Pulse half-bandwidth (20 dB), Hz.</param>
 /// <param name="Density">Mesh density.</param>
 /// <param name="SlotVoltageProbes">Whether to probe every slot's voltage across its centre on the outer face.</param>
-public sealed record TubeLayout(GuideSection Guide, IReadOnlyList<PlacedSlot> Slots, bool CutSlots, double? ShortZMm, double Port1ZMm,
+internal sealed record TubeLayout(GuideSection Guide, IReadOnlyList<PlacedSlot> Slots, bool CutSlots, double? ShortZMm, double Port1ZMm,
     double? Port2ZMm, double CentreFrequencyHz, double HalfBandwidthHz, MeshDensity Density, bool SlotVoltageProbes);
 
 /// <summary>Builds the <see cref="FdtdModel"/> of a <see cref="TubeLayout"/>: geometry, graded mesh, ports and probes.</summary>
-public static class TubeModel
+internal static class TubeModel
 {
     /// <summary>PML thickness in cells (the engine's usual 8).</summary>
     public const int PmlCells = 8;

@@ -10,7 +10,7 @@ namespace SlotArray.FullWave.Results;
 /// </summary>
 /// <param name="Incident">Wave travelling into the structure, V.</param>
 /// <param name="Reflected">Wave travelling out of it, V.</param>
-public readonly record struct PortWaves(Complex Incident, Complex Reflected)
+internal readonly record struct PortWaves(Complex Incident, Complex Reflected)
 {
     /// <summary>Splits U and I into the two waves with the wave impedance <paramref name="waveImpedanceOhm"/>.</summary>
     public static PortWaves FromVoltageCurrent(Complex voltage, Complex current, double waveImpedanceOhm)

@@ -9,7 +9,7 @@ namespace SlotArray.FullWave.Results;
 /// </summary>
 /// <param name="Time">Sample times, s.</param>
 /// <param name="Value">Samples.</param>
-public sealed record ProbeSeries(IReadOnlyList<double> Time, IReadOnlyList<double> Value)
+internal sealed record ProbeSeries(IReadOnlyList<double> Time, IReadOnlyList<double> Value)
 {
     /// <summary>Reads a probe file.</summary>
     /// <exception cref="InvalidDataException">A row does not parse or the file has fewer than two rows.</exception>

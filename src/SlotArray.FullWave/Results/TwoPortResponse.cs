@@ -9,7 +9,7 @@ namespace SlotArray.FullWave.Results;
 /// <param name="S11">Reflection at port 1.</param>
 /// <param name="S21">Transmission to port 2 (0 when the run has one port).</param>
 /// <param name="Probes">Extra voltage probes ÷ port 1's incident wave, in the model's probe order.</param>
-public sealed record TwoPortPoint(double FrequencyHz, Complex S11, Complex S21, IReadOnlyList<Complex> Probes);
+internal sealed record TwoPortPoint(double FrequencyHz, Complex S11, Complex S21, IReadOnlyList<Complex> Probes);
 
 /// <summary>
 /// The frequency response of one engine run, read from its probe files: S11 = u_ref,1/u_inc,1 and
@@ -17,7 +17,7 @@ public sealed record TwoPortPoint(double FrequencyHz, Complex S11, Complex S21, 
 /// post-processing forms the same ratios). Stored as a small CSV beside the run so a rerun need not read the probes.
 /// </summary>
 /// <param name="Points">One entry per frequency, ascending.</param>
-public sealed record TwoPortResponse(IReadOnlyList<TwoPortPoint> Points)
+internal sealed record TwoPortResponse(IReadOnlyList<TwoPortPoint> Points)
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

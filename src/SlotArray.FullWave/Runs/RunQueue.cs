@@ -5,13 +5,13 @@ namespace SlotArray.FullWave.Runs;
 /// <param name="Total">Runs in the batch.</param>
 /// <param name="SecondsLeft">Estimated seconds left (null until one run has finished in this invocation).</param>
 /// <param name="Last">The run that just finished, or null at the start.</param>
-public sealed record RunProgress(int Done, int Total, double? SecondsLeft, RunOutcome? Last);
+internal sealed record RunProgress(int Done, int Total, double? SecondsLeft, RunOutcome? Last);
 
 /// <summary>
 /// Runs a batch of engine runs, <c>jobs</c> at a time (one engine thread each), skipping those already finished in
 /// the store. Killing the process loses only the runs in flight: a rerun resumes from the store.
 /// </summary>
-public static class RunQueue
+internal static class RunQueue
 {
     /// <summary>Runs every request not yet in the store; the outcomes come back in request order.</summary>
     public static async Task<IReadOnlyList<RunOutcome>> RunAllAsync(Engine.OpenEmsEngine engine, RunStore store, IReadOnlyList<RunRequest> requests,

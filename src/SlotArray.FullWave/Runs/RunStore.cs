@@ -12,7 +12,7 @@ namespace SlotArray.FullWave.Runs;
 /// <param name="Model">The model.</param>
 /// <param name="BroadWallMeters">Inside broad dimension a of the ports' guide, m.</param>
 /// <param name="FrequenciesHz">Frequencies of the response, Hz.</param>
-public sealed record RunRequest(string Label, FdtdModel Model, double BroadWallMeters, IReadOnlyList<double> FrequenciesHz)
+internal sealed record RunRequest(string Label, FdtdModel Model, double BroadWallMeters, IReadOnlyList<double> FrequenciesHz)
 {
     /// <summary>The XML the engine reads.</summary>
     public string Xml { get; } = OpenEmsXml.ToText(Model);
@@ -33,14 +33,14 @@ public sealed record RunRequest(string Label, FdtdModel Model, double BroadWallM
 /// <param name="Response">The response.</param>
 /// <param name="Stats">Cells, time steps, seconds (of the run that made it, also when read back from the cache).</param>
 /// <param name="FromCache">True when an earlier invocation made it.</param>
-public sealed record RunOutcome(RunRequest Request, TwoPortResponse Response, EngineRunStats Stats, bool FromCache);
+internal sealed record RunOutcome(RunRequest Request, TwoPortResponse Response, EngineRunStats Stats, bool FromCache);
 
 /// <summary>
 /// A folder of runs, one sub-folder per content key: <c>model.xml</c>, the engine's probe files and log, then
 /// <c>response.csv</c> and <c>stats.txt</c> written atomically when the run has finished and been read. A folder
 /// without <c>response.csv</c> is an unfinished run (killed): it is cleared and run again.
 /// </summary>
-public sealed class RunStore(string root)
+internal sealed class RunStore(string root)
 {
     /// <summary>The store's folder.</summary>
     public string Root { get; } = root;

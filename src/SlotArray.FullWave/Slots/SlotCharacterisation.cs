@@ -12,7 +12,7 @@ namespace SlotArray.FullWave.Slots;
 /// <param name="Coupling">Offset, mm (longitudinal) or tilt, degrees (edge); ≥ 0.</param>
 /// <param name="LengthMm">Rectangular-equivalent length (longitudinal) or developed length (edge), mm.</param>
 /// <param name="Cut">The cut the engine builds.</param>
-public sealed record SlotSample(double Coupling, double LengthMm, SlotCut Cut)
+internal sealed record SlotSample(double Coupling, double LengthMm, SlotCut Cut)
 {
     /// <summary>Edge slots: the cut depth, mm; else null.</summary>
     public double? CutDepthMm => (Cut as EdgeCut)?.CutDepthMm;
@@ -23,7 +23,7 @@ public sealed record SlotSample(double Coupling, double LengthMm, SlotCut Cut)
 /// <param name="FrequencyHz">Frequency, Hz.</param>
 /// <param name="Admittance">y = Y/G0 at the slot's centre plane.</param>
 /// <param name="ShuntResidual">|1 + S11 − S21| at the slot plane (0 for a pure shunt element).</param>
-public sealed record SlotSampleResult(SlotSample Sample, double FrequencyHz, Complex Admittance, double ShuntResidual);
+internal sealed record SlotSampleResult(SlotSample Sample, double FrequencyHz, Complex Admittance, double ShuntResidual);
 
 /// <summary>
 /// Plans and reduces a full-wave characterisation of the spec's slot: the couplings (offsets or tilts) the
@@ -31,7 +31,7 @@ public sealed record SlotSampleResult(SlotSample Sample, double FrequencyHz, Com
 /// tube (ports λg-ish away on either side, guide ends matched), plus one plain-tube calibration run on the same
 /// mesh; then de-embeds every run to the slot plane (<see cref="SlotPlaneDeembedding"/>).
 /// </summary>
-public sealed class SlotCharacterisation
+internal sealed class SlotCharacterisation
 {
     /// <summary>Distance from the slot's end to each port's measurement plane, mm: TE20 and TE01 fields of the slot decay by e⁻⁴ or more over it at X band (α = √(k_c² − k²), Pozar 2012, eq. 3.84, from memory).</summary>
     public const double PortClearanceMm = 25;

@@ -4,10 +4,10 @@ namespace SlotArray.FullWave.Slots;
 /// <param name="AMm">Inside broad dimension a, mm.</param>
 /// <param name="BMm">Inside narrow dimension b, mm.</param>
 /// <param name="WallMm">Wall thickness t, mm.</param>
-public sealed record GuideSection(double AMm, double BMm, double WallMm);
+internal sealed record GuideSection(double AMm, double BMm, double WallMm);
 
 /// <summary>A slot cut in the guide, centred at z = 0.</summary>
-public abstract record SlotCut
+internal abstract record SlotCut
 {
     /// <summary>Slot width, mm.</summary>
     public abstract double WidthMm { get; }
@@ -22,7 +22,7 @@ public abstract record SlotCut
 /// <param name="OverallLengthMm">Tip-to-tip length, mm.</param>
 /// <param name="Width">Slot width, mm.</param>
 /// <param name="CutterMm">End-mill diameter, mm, or null for square ends.</param>
-public sealed record LongitudinalCut(double OffsetMm, double OverallLengthMm, double Width, double? CutterMm) : SlotCut
+internal sealed record LongitudinalCut(double OffsetMm, double OverallLengthMm, double Width, double? CutterMm) : SlotCut
 {
     /// <inheritdoc/>
     public override double WidthMm => Width;
@@ -36,7 +36,7 @@ public sealed record LongitudinalCut(double OffsetMm, double OverallLengthMm, do
 /// <param name="TiltDeg">Tilt from the perpendicular to the guide axis, degrees (signed).</param>
 /// <param name="CutDepthMm">Depth D from the outer narrow-wall face, mm (&gt; t, or the cut does not open the guide).</param>
 /// <param name="Width">Saw kerf, mm.</param>
-public sealed record EdgeCut(double TiltDeg, double CutDepthMm, double Width) : SlotCut
+internal sealed record EdgeCut(double TiltDeg, double CutDepthMm, double Width) : SlotCut
 {
     /// <inheritdoc/>
     public override double WidthMm => Width;

@@ -12,7 +12,7 @@ namespace SlotArray.FullWave.Slots;
 /// A longitudinal or edge slot is a shunt element (A. F. Stevenson, "Theory of slots in rectangular wave-guides",
 /// J. Appl. Phys. 19, 1948): y = Y/G0 = −2 S11/(1 + S11) (Pozar 2012, Table 4.2, from memory).
 /// </summary>
-public static class SlotPlaneDeembedding
+internal static class SlotPlaneDeembedding
 {
     /// <summary>S11 and S21 at the slot plane from the measured and calibration responses at one frequency.</summary>
     public static (Complex S11, Complex S21) ToSlotPlane(Complex s11Measured, Complex s21Measured, Complex s11Calibration, Complex s21Calibration)

@@ -9,7 +9,7 @@ namespace SlotArray.FullWave.Slots;
 /// response g, b (y = Y/G0 at the slot's centre plane). Longitudinal: offset_mm, length_mm; edge: tilt_deg,
 /// cut_depth_mm, length_mm (developed length).
 /// </summary>
-public static class SlotTableCsv
+internal static class SlotTableCsv
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
@@ -37,7 +37,7 @@ public static class SlotTableCsv
 /// <param name="ResonantConductance">g at that length, or the largest g seen when not bracketed.</param>
 /// <param name="PeakConductanceLengthMm">Length of the largest g among the samples, mm.</param>
 /// <param name="CutDepthMm">Edge slots: the cut depth at resonance (or at the peak when not bracketed), mm.</param>
-public sealed record SampledResonance(double Coupling, double FrequencyHz, double? ResonantLengthMm, double ResonantConductance, double PeakConductanceLengthMm,
+internal sealed record SampledResonance(double Coupling, double FrequencyHz, double? ResonantLengthMm, double ResonantConductance, double PeakConductanceLengthMm,
     double? CutDepthMm)
 {
     /// <summary>The resonance of every coupling at <paramref name="frequencyHz"/>.</summary>

@@ -8,7 +8,7 @@ using SlotArray.Reports.Plots;
 namespace SlotArray.Reports.Compare;
 
 /// <summary>The overlays of <c>compare</c>: return loss, VSWR, and each pattern cut, measured against predicted.</summary>
-public static class ComparePlots
+internal static class ComparePlots
 {
     private static readonly OxyColor[] Colors = [OxyColors.Black, OxyColors.Navy, OxyColors.DarkOrange, OxyColors.ForestGreen, OxyColors.Firebrick];
 

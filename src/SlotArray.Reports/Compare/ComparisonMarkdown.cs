@@ -6,7 +6,7 @@ using SlotArray.Core.Slots;
 namespace SlotArray.Reports.Compare;
 
 /// <summary>The text of <c>compare</c>: the table, the diagnosis stage by stage, the trims and the next plate (Markdown; the console prints the same).</summary>
-public static class ComparisonMarkdown
+internal static class ComparisonMarkdown
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

@@ -10,13 +10,13 @@ namespace SlotArray.Reports.Compare;
 /// <param name="Label">Legend text.</param>
 /// <param name="Frequencies">Hz.</param>
 /// <param name="S11">Reflection at each frequency.</param>
-public sealed record S11Curve(string Label, IReadOnlyList<double> Frequencies, IReadOnlyList<Complex> S11);
+internal sealed record S11Curve(string Label, IReadOnlyList<double> Frequencies, IReadOnlyList<Complex> S11);
 
 /// <summary>A cut's curves for its overlay.</summary>
 /// <param name="Title">Plot title.</param>
 /// <param name="AnglesDeg">Angles, deg.</param>
 /// <param name="Curves">(label, level dB relative to its own peak) pairs; the first is the measurement.</param>
-public sealed record CutOverlay(string Title, IReadOnlyList<double> AnglesDeg, IReadOnlyList<(string Label, double[] LevelsDb)> Curves);
+internal sealed record CutOverlay(string Title, IReadOnlyList<double> AnglesDeg, IReadOnlyList<(string Label, double[] LevelsDb)> Curves);
 
 /// <summary>Everything <c>compare</c> prints and writes, as plain data (SI inside).</summary>
 /// <param name="Name">Array name.</param>
@@ -30,12 +30,12 @@ public sealed record CutOverlay(string Title, IReadOnlyList<double> AnglesDeg, I
 /// <param name="NextPlate">The next plate's analysis, or null when it could not be designed.</param>
 /// <param name="NextPlateProblem">Why there is no next plate, or null.</param>
 /// <param name="Notes">Remarks for the user (model used, coupling, unseen slots).</param>
-public sealed record ComparisonReport(string Name, double DesignFrequencyHz, IReadOnlyList<string> Inputs, IReadOnlyList<ComparisonRow> Table,
+internal sealed record ComparisonReport(string Name, double DesignFrequencyHz, IReadOnlyList<string> Inputs, IReadOnlyList<ComparisonRow> Table,
     IReadOnlyList<S11Curve> MatchCurves, IReadOnlyList<CutOverlay> Cuts, PrototypeDiagnosis Diagnosis, TrimPlan Trim, ArrayResult? NextPlate,
     string? NextPlateProblem, IReadOnlyList<string> Notes);
 
 /// <summary>Builds the <see cref="ComparisonReport"/> from the design, the measurements, the diagnosis and the fixes.</summary>
-public static class ComparisonReportBuilder
+internal static class ComparisonReportBuilder
 {
     /// <summary>Builds the report.</summary>
     /// <param name="design">The design as cut (the pipeline's result from the design folder's spec).</param>
@@ -54,7 +54,7 @@ public static class ComparisonReportBuilder
         ArgumentNullException.ThrowIfNull(trim);
         var d = design.Design;
         var f0 = d.DesignFrequency;
-        bool coupledDesign = design.Coupling is not null || design.CoupledTravellingWave is not null;
+        bool coupledDesign = design.Procedure is ElliottProcedure or CoupledTravellingWaveProcedure;
         var analysis = ArrayPipeline.AnalysisModel(design.Request, d, design.SlotModel, AnalysisOptions.Default);
         NetworkSolution Predict(Frequency f) => coupledDesign ? CoupledArrayNetwork.Solve(d, analysis, f) : ArrayNetwork.Solve(d, analysis, f);
         var model = diagnosis.Model;

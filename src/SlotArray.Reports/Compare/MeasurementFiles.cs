@@ -8,7 +8,7 @@ namespace SlotArray.Reports.Compare;
 /// Writes measurements in the formats <c>compare</c> reads: Touchstone 1.1 (1 or 2 ports, Hz, RI) and pattern-cut CSV
 /// with <c>#</c> header lines. Used for synthetic prototypes, whose files say so in their first header line.
 /// </summary>
-public static class MeasurementFiles
+internal static class MeasurementFiles
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

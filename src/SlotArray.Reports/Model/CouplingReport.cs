@@ -35,11 +35,12 @@ public sealed record CouplingReport
         "coupling through the guide's higher-order modes and the finite ground plane are neglected";
 
     /// <summary>The report of a pipeline run, or null when it was designed without mutual coupling.</summary>
-    public static CouplingReport? Of(ArrayResult result)
+    internal static CouplingReport? Of(ArrayResult result)
     {
         ArgumentNullException.ThrowIfNull(result);
-        if (result.CoupledTravellingWave is { } t)
-            return new CouplingReport
+        return result.Procedure switch
+        {
+            CoupledTravellingWaveProcedure { Comparison: var t } => new CouplingReport
             {
                 Coupled = CoupledDesignFigures.Of(t.Coupled),
                 Uncoupled = CoupledDesignFigures.Of(t.Uncoupled),
@@ -47,15 +48,16 @@ public sealed record CouplingReport
                 Tolerance = 0,
                 SurrogateError = double.NaN,
                 TravellingWaveResidualsDb = t.Result.History,
-            };
-        if (result.Coupling is not { } c) return null;
-        return new CouplingReport
-        {
-            Coupled = CoupledDesignFigures.Of(c.Coupled),
-            Uncoupled = CoupledDesignFigures.Of(c.Uncoupled),
-            Iterations = c.Elliott.Iterations,
-            Tolerance = c.Elliott.Tolerance,
-            SurrogateError = c.Elliott.SurrogateError,
+            },
+            ElliottProcedure { Comparison: var c } => new CouplingReport
+            {
+                Coupled = CoupledDesignFigures.Of(c.Coupled),
+                Uncoupled = CoupledDesignFigures.Of(c.Uncoupled),
+                Iterations = c.Elliott.Iterations,
+                Tolerance = c.Elliott.Tolerance,
+                SurrogateError = c.Elliott.SurrogateError,
+            },
+            _ => null,
         };
     }
 }
@@ -76,7 +78,7 @@ public sealed record CoupledDesignFigures
     public required double PeakSidelobeDb { get; init; }
 
     /// <summary>From the Core figures.</summary>
-    public static CoupledDesignFigures Of(CoupledFigures f)
+    internal static CoupledDesignFigures Of(CoupledFigures f)
     {
         ArgumentNullException.ThrowIfNull(f);
         return new CoupledDesignFigures

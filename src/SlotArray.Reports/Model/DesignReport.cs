@@ -360,6 +360,15 @@ public sealed record PatternReport
 
     /// <summary>Edge slots: cross-polarised level at each angle of <see cref="CutAngleDeg"/>, dB relative to the co-polar peak; empty otherwise.</summary>
     public IReadOnlyList<double> CrossCutLevelDb { get; init; } = [];
+
+    /// <summary>Outside width of the slotted face (a + 2t broad-wall, b + 2t edge slots), m; NaN when unknown.</summary>
+    public double TransverseFaceWidth { get; init; } = double.NaN;
+
+    /// <summary>
+    /// Lower bound on the transverse-plane (E-plane) half-power beamwidth set by that face's width at the design frequency,
+    /// degrees (<see cref="Core.Patterns.FiniteFaceBeamwidth"/>); NaN when the face is too narrow to form a beam (the pattern wraps behind the tube).
+    /// </summary>
+    public double TransverseHpbwLowerBoundDeg { get; init; } = double.NaN;
 }
 
 /// <summary>Input match.</summary>

@@ -6,6 +6,7 @@ using SlotArray.Core;
 using SlotArray.Core.Design;
 using SlotArray.Core.Fabrication;
 using SlotArray.Core.Network;
+using SlotArray.Core.Patterns;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Safety;
 using SlotArray.Core.Slots;
@@ -34,7 +35,7 @@ namespace SlotArray.Reports.Model;
 /// exposure screen and the power-handling margin with the network's own standing-wave peak field.</item>
 /// </list>
 /// </remarks>
-public static class DesignReportBuilder
+internal static class DesignReportBuilder
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
@@ -48,16 +49,17 @@ public static class DesignReportBuilder
     /// <summary>Builds the report of one pipeline run.</summary>
     /// <param name="result">The pipeline's result.</param>
     /// <param name="document">Drawing number, revision, date and spec checksum for the fabrication documents; null: <see cref="DocumentInfo.Unnamed"/>.</param>
+    /// <param name="plan">The fabrication plan, e.g. a next plate's with its changes flagged (<see cref="Core.Prototype.NextPlate.Plan"/>); null: the design's own, a first issue.</param>
     /// <exception cref="Core.InfeasibleDesignException">A slot cannot be cut as designed (it reaches the side wall, or the cutter is wider than the slot).</exception>
-    public static DesignReport Build(ArrayResult result, DocumentInfo? document = null)
+    public static DesignReport Build(ArrayResult result, DocumentInfo? document = null, FabricationPlan? plan = null)
     {
         ArgumentNullException.ThrowIfNull(result);
         var request = result.Request;
         var design = result.Design;
         var guide = design.Guide;
         var f0 = design.DesignFrequency;
-        double tolerance = CutTolerance(request.Tolerance);
-        var plan = FabricationPlan.Build(design, request.Feed.Type, request.Slots.Cutter, request.Tolerance);
+        double tolerance = FeatureTolerances.CutListTolerance(request.Tolerance).Meters;
+        plan ??= FabricationPlan.Build(design, request.Feed.Type, request.Slots.Cutter, request.Tolerance);
         var atDesign = result.AtDesign;
         var slots = Slots(result, plan);
         var outside = SlotTableRangeCheck.Outside(design, result.SlotModel).Select(o => o.Index).ToHashSet();
@@ -69,11 +71,18 @@ public static class DesignReportBuilder
         foreach (var b in new[] { result.BandVswr15, result.BandVswr2 })
             if (b is { } band && (band.LowLimited || band.HighLimited))
                 warnings.Add(string.Create(Inv, $"the VSWR ≤ {band.VswrLimit:0.0#} band reaches the edge of the search range ({band.Low} to {band.High}): it is at least as wide as reported"));
+        var addOns = result.AddOns;
+        var travelling = result.Procedure switch
+        {
+            TravellingWaveProcedure p => p.TravellingWave,
+            CoupledTravellingWaveProcedure p => p.TravellingWave,
+            _ => null,
+        };
         var safety = ArraySafety.Assess(result);
         var verdicts = RequirementChecks.Evaluate(result, safety);
         warnings.AddRange(verdicts.Notes.Select(n => n.Message));
         // Over-stress is a FAIL verdict and also a warning, so the console shows it as it happens.
-        warnings.AddRange(safety.Cautions.Where(c => c.Code == "power-handling-exceeded").Select(c => c.Message));
+        warnings.AddRange(safety.OverStress.Select(c => c.Message));
 
         return new DesignReport
         {
@@ -81,18 +90,7 @@ public static class DesignReportBuilder
             FrequencyHz = f0.Hertz,
             BandLowHz = request.BandLow.Hertz,
             BandHighHz = request.BandHigh.Hertz,
-            Guide = new GuideReport
-            {
-                Designation = guide.Designation == "custom"
-                    ? string.Create(Inv, $"custom tube {guide.BroadWall.Millimeters:0.###} × {guide.NarrowWall.Millimeters:0.###} mm inside")
-                    : guide.Designation,
-                A = guide.BroadWall.Meters,
-                B = guide.NarrowWall.Meters,
-                Wall = guide.WallThickness.Meters,
-                Metal = guide.MetalName,
-                GuideWavelength = design.GuideWavelength.Meters,
-                WaveImpedanceOhm = guide.WaveImpedance(f0),
-            },
+            Guide = GuideOf(design),
             Slots = slots,
             SlotData = SlotDataOf(result.SlotModel),
             Termination = new TerminationReport
@@ -102,21 +100,7 @@ public static class DesignReportBuilder
                 FeedPosition = design.FeedPlane.Meters,
                 FarShortPosition = design.FarTermination is { } far ? (design.Slots[^1].Position + far.Distance).Meters : null,
             },
-            Pattern = new PatternReport
-            {
-                BeamDeg = atDesign.Metrics.BeamDirection.Degrees,
-                HpbwDeg = atDesign.Metrics.HalfPowerBeamwidth.Degrees,
-                PeakSidelobeDb = atDesign.Metrics.PeakSidelobeDb ?? double.NaN,
-                FirstSidelobeDb = atDesign.Metrics.FirstSidelobeDb ?? double.NaN,
-                DirectivityDbi = atDesign.DirectivityDbi,
-                GainDbi = atDesign.GainDbi,
-                DesignSidelobeDb = SidelobeTarget.OfTaper(request.Taper, result.Taper)?.LevelDb ?? double.NaN,
-                CutAngleDeg = [.. atDesign.Pattern.Theta.Select(t => t * 180 / Math.PI)],
-                CutLevelDb = atDesign.Pattern.RelativeDecibels(PatternFloorDb),
-                CrossPolarDb = atDesign.CrossPolar?.PeakLevelDb,
-                CrossPolarDirectionDeg = atDesign.CrossPolar?.PeakDirection.Degrees,
-                CrossCutLevelDb = atDesign.CrossPolar is { } x ? CrossLevels(x, atDesign.Pattern.PeakPower) : [],
-            },
+            Pattern = PatternOf(result),
             Match = new MatchReport
             {
                 S11DbAtDesign = 20 * Math.Log10(atDesign.Network.S11.Magnitude),
@@ -124,19 +108,8 @@ public static class DesignReportBuilder
                 BandwidthVswr15Hz = result.BandVswr15?.Width.Hertz ?? 0,
                 BandwidthVswr2Hz = result.BandVswr2?.Width.Hertz ?? 0,
             },
-            Sweep = [.. result.SweepFigures.Select(p => new SweepPoint
-            {
-                FrequencyHz = p.Frequency.Hertz,
-                S11 = p.Network.S11,
-                BeamDeg = p.Metrics.BeamDirection.Degrees,
-                PeakSidelobeDb = p.Metrics.PeakSidelobeDb ?? double.NaN,
-                GainDbi = p.GainDbi,
-                HpbwDeg = p.Metrics.HalfPowerBeamwidth.Degrees,
-                CrossPolarDb = p.CrossPolar?.PeakLevelDb,
-            })],
-            MatchSweep = result.MatchSweep is { } ms
-                ? [.. ms.Points.Select(n => new MatchPoint { FrequencyHz = n.Frequency.Hertz, S11 = n.S11 })]
-                : [],
+            Sweep = SweepOf(result),
+            MatchSweep = [.. result.MatchSweep.Points.Select(n => new MatchPoint { FrequencyHz = n.Frequency.Hertz, S11 = n.S11 })],
             Inputs = new InputsSummary
             {
                 SlotType = SlotTypeName(request.Slots.Type),
@@ -150,23 +123,76 @@ public static class DesignReportBuilder
             Fabrication = plan,
             Document = document ?? DocumentInfo.Unnamed,
             Cautions = [.. safety.Cautions.Select(c => c.Message)],
-            SafetyExceedances = [.. safety.Cautions.Where(c => c.Code.EndsWith("-exceeded", StringComparison.Ordinal)).Select(c => c.Message)],
-            Eirp = request.Transmitter is { } tx ? new EirpReport
-            {
-                PeakW = tx.PeakPower is { } pk ? EffectiveRadiatedPower.Watts(pk, atDesign.GainDbi) : null,
-                AverageW = tx.AveragePower is { } av ? EffectiveRadiatedPower.Watts(av, atDesign.GainDbi) : null,
-            } : null,
+            SafetyExceedances = [.. safety.Exceedances.Select(c => c.Message)],
+            Eirp = request.Transmitter is not null ? new EirpReport { PeakW = safety.PeakEirpWatts, AverageW = safety.AverageEirpWatts } : null,
             Requirements = Requirements(verdicts, result),
-            Load = result.TravellingWave is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
-            TravellingWave = result.TravellingWave is { } t ? TravellingWaveOf(result, t) : null,
-            Pointing = result.Pointing is { } pb ? PointingReport.Of(pb) : null,
-            Parts = plan is not null && (result.Flare is not null || result.Filter is not null)
-                ? PartRow.Of(Core.Marine.MarineParts.Of(design, plan.DesignOrigin, result.Flare?.Flare, result.Filter?.Filter)) : [],
-            Flare = result.Flare is { } fo ? FlareReport.Of(fo, request.Requirements.VerticalBeamwidth) : null,
-            Filter = result.Filter is { } flt && atDesign.CrossPolar is { } xc
+            Load = travelling is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
+            TravellingWave = travelling is { } t ? TravellingWaveOf(result, t) : null,
+            Pointing = addOns.Pointing is { } pb ? PointingReport.Of(pb) : null,
+            Parts = plan is not null && (addOns.Flare is not null || addOns.Filter is not null)
+                ? PartRow.Of(Core.Marine.MarineParts.Of(design, plan.DesignOrigin, addOns.Flare?.Flare, addOns.Filter?.Filter)) : [],
+            Flare = addOns.Flare is { } fo ? FlareReport.Of(fo, request.Requirements.VerticalBeamwidth) : null,
+            Filter = addOns.Filter is { } flt && atDesign.CrossPolar is { } xc
                 ? FilterReport.Of(flt, request.DesignFrequency, CrossLevels(xc, atDesign.Pattern.PeakPower), request.Requirements.CrossPolarDb) : null,
             Coupling = CouplingReport.Of(result),
         };
+    }
+
+    private static GuideReport GuideOf(ArrayDesign design)
+    {
+        var guide = design.Guide;
+        var f0 = design.DesignFrequency;
+        return new GuideReport
+        {
+            Designation = guide.Designation == "custom"
+                ? string.Create(Inv, $"custom tube {guide.BroadWall.Millimeters:0.###} × {guide.NarrowWall.Millimeters:0.###} mm inside")
+                : guide.Designation,
+            A = guide.BroadWall.Meters,
+            B = guide.NarrowWall.Meters,
+            Wall = guide.WallThickness.Meters,
+            Metal = guide.MetalName,
+            GuideWavelength = design.GuideWavelength.Meters,
+            WaveImpedanceOhm = guide.WaveImpedance(f0),
+        };
+    }
+
+    private static PatternReport PatternOf(ArrayResult result)
+    {
+        var request = result.Request;
+        var atDesign = result.AtDesign;
+        var design = result.Design;
+        var face = FiniteFaceBeamwidth.SlottedFaceWidth(design.Guide, design.CouplingKind == SlotCouplingKind.Tilt);
+        return new PatternReport
+        {
+            BeamDeg = atDesign.Metrics.BeamDirection.Degrees,
+            HpbwDeg = atDesign.Metrics.HalfPowerBeamwidth.Degrees,
+            PeakSidelobeDb = atDesign.Metrics.PeakSidelobeDb ?? double.NaN,
+            FirstSidelobeDb = atDesign.Metrics.FirstSidelobeDb ?? double.NaN,
+            DirectivityDbi = atDesign.DirectivityDbi,
+            GainDbi = atDesign.GainDbi,
+            DesignSidelobeDb = SidelobeTarget.OfTaper(request.Taper, result.Taper)?.LevelDb ?? double.NaN,
+            CutAngleDeg = [.. atDesign.Pattern.Theta.Select(t => t * 180 / Math.PI)],
+            CutLevelDb = atDesign.Pattern.RelativeDecibels(PatternFloorDb),
+            CrossPolarDb = atDesign.CrossPolar?.PeakLevelDb,
+            CrossPolarDirectionDeg = atDesign.CrossPolar?.PeakDirection.Degrees,
+            CrossCutLevelDb = atDesign.CrossPolar is { } x ? CrossLevels(x, atDesign.Pattern.PeakPower) : [],
+            TransverseFaceWidth = face.Meters,
+            TransverseHpbwLowerBoundDeg = FiniteFaceBeamwidth.LowerBound(face, request.DesignFrequency)?.Degrees ?? double.NaN,
+        };
+    }
+
+    private static IReadOnlyList<SweepPoint> SweepOf(ArrayResult result)
+    {
+        return [.. result.SweepFigures.Select(p => new SweepPoint
+        {
+            FrequencyHz = p.Frequency.Hertz,
+            S11 = p.Network.S11,
+            BeamDeg = p.Metrics.BeamDirection.Degrees,
+            PeakSidelobeDb = p.Metrics.PeakSidelobeDb ?? double.NaN,
+            GainDbi = p.GainDbi,
+            HpbwDeg = p.Metrics.HalfPowerBeamwidth.Degrees,
+            CrossPolarDb = p.CrossPolar?.PeakLevelDb,
+        })];
     }
 
     /// <summary>Cross-polar cut in dB relative to the co-polar peak, floored at <see cref="PatternFloorDb"/>.</summary>
@@ -176,16 +202,7 @@ public static class DesignReportBuilder
     private static TravellingWaveReport TravellingWaveOf(ArrayResult result, TravellingWaveDesign tw)
     {
         var n = result.AtDesign.Network;
-        // Least-squares slope of the network beam direction against frequency over the sweep.
-        var pts = result.SweepFigures;
-        double slope = double.NaN;
-        if (pts.Count >= 2)
-        {
-            double mf = pts.Average(p => p.Frequency.Hertz), mb = pts.Average(p => p.Metrics.BeamDirection.Degrees);
-            double sxy = pts.Sum(p => (p.Frequency.Hertz - mf) * (p.Metrics.BeamDirection.Degrees - mb));
-            double sxx = pts.Sum(p => (p.Frequency.Hertz - mf) * (p.Frequency.Hertz - mf));
-            slope = sxx > 0 ? sxy / sxx * 1e8 : double.NaN;
-        }
+        double slope = BeamScan.DegreesPer100MHz(result.SweepFigures);
         return new TravellingWaveReport
         {
             SquintDeg = tw.Squint?.Degrees ?? double.NaN,
@@ -209,36 +226,15 @@ public static class DesignReportBuilder
         };
     }
 
-    /// <summary>
-    /// The ± tolerance printed on every cut-list row: the tightest of the spec's offset, length, position and width
-    /// tolerances (a normal σ counts as ±2σ, the 95 % band); without a tolerance block, routine precision CNC milling,
-    /// ±0.025 mm (<see cref="GeneralTolerances.PrecisionMilling"/>, common practice, no source).
-    /// </summary>
-    /// <param name="tolerance">The spec's tolerance block, or null.</param>
-    public static double CutTolerance(ToleranceRequest? tolerance)
-    {
-        if (tolerance is null) return GeneralTolerances.PrecisionMilling.Meters;
-        var values = new[] { tolerance.Offset, tolerance.Length, tolerance.Position, tolerance.Width }
-            .Select(t => t.Distribution == ErrorDistribution.Normal ? 2 * t.Value.Meters : t.Value.Meters)
-            .Where(v => v > 0).ToArray();
-        return values.Length > 0 ? values.Min() : GeneralTolerances.PrecisionMilling.Meters;
-    }
-
     private static List<SlotReport> Slots(ArrayResult result, FabricationPlan plan)
     {
         var design = result.Design;
-        var e = result.AtDesign.Network.Excitations;
-        double targetPeak = design.Slots.Max(s => Math.Abs(s.TargetAmplitude));
-        double achievedPeak = e.Max(x => x.Magnitude);
-        int reference = Enumerable.Range(0, e.Count).First(i => e[i].Magnitude == achievedPeak);
-        double phase0 = e[reference].Phase;
+        var excitation = RelativeExcitation.Of(design, result.AtDesign.Network);
         var list = new List<SlotReport>(design.Count);
         for (int i = 0; i < design.Count; i++)
         {
             var s = design.Slots[i];
             var row = plan.Slots[i].Row;
-            double phase = (e[i].Phase - phase0) * 180 / Math.PI;
-            phase = Math.IEEERemainder(phase, 360);
             list.Add(new SlotReport
             {
                 Index = s.Index,
@@ -251,9 +247,9 @@ public static class DesignReportBuilder
                 Width = s.Width.Meters,
                 EndForm = row.End.Form == Core.Fabrication.SlotEndForm.Round ? SlotEndForm.Round : SlotEndForm.Square,
                 Conductance = s.Conductance,
-                TargetAmplitude = s.TargetAmplitude / targetPeak,
-                AchievedAmplitude = e[i].Magnitude / achievedPeak,
-                AchievedPhaseDeg = phase,
+                TargetAmplitude = excitation[i].TargetAmplitude,
+                AchievedAmplitude = excitation[i].AchievedAmplitude,
+                AchievedPhaseDeg = excitation[i].AchievedPhaseDegrees,
             });
         }
         return list;

@@ -59,7 +59,7 @@ public sealed record FilterReport
     /// <param name="f0">Design frequency.</param>
     /// <param name="filteredCut">The filtered cross-polar cut at f0, dB (the pattern report's).</param>
     /// <param name="requirementDb"><c>requirements.cross_polar</c>, dB, or null.</param>
-    public static FilterReport Of(FilterOutcome outcome, Core.Quantities.Frequency f0, IReadOnlyList<double> filteredCut, double? requirementDb)
+    internal static FilterReport Of(FilterOutcome outcome, Core.Quantities.Frequency f0, IReadOnlyList<double> filteredCut, double? requirementDb)
     {
         ArgumentNullException.ThrowIfNull(outcome);
         ArgumentNullException.ThrowIfNull(filteredCut);
@@ -141,7 +141,7 @@ public sealed record FlareReport
     /// <summary>The report of a flare outcome.</summary>
     /// <param name="o">What the flare does.</param>
     /// <param name="required">requirements.vertical_beamwidth, or null.</param>
-    public static FlareReport Of(FlareOutcome o, Core.Quantities.Angle? required)
+    internal static FlareReport Of(FlareOutcome o, Core.Quantities.Angle? required)
     {
         ArgumentNullException.ThrowIfNull(o);
         var chosen = new List<string>();
@@ -225,7 +225,7 @@ public sealed record PointingReport
 
     /// <summary>The report of a pointing budget.</summary>
     /// <param name="b">The budget.</param>
-    public static PointingReport Of(PointingBudget b)
+    internal static PointingReport Of(PointingBudget b)
     {
         ArgumentNullException.ThrowIfNull(b);
         return new PointingReport
@@ -281,7 +281,7 @@ public sealed record PartRow
 
     /// <summary>The rows of the Core parts.</summary>
     /// <param name="parts">The parts.</param>
-    public static IReadOnlyList<PartRow> Of(IReadOnlyList<MarinePart> parts)
+    internal static IReadOnlyList<PartRow> Of(IReadOnlyList<MarinePart> parts)
     {
         ArgumentNullException.ThrowIfNull(parts);
         return [.. parts.Select(p => new PartRow

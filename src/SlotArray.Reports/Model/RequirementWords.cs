@@ -5,7 +5,7 @@ using SlotArray.Core.Verdicts;
 namespace SlotArray.Reports.Model;
 
 /// <summary>Words a Core <see cref="RequirementVerdict"/> for the reports: what, required, achieved; the verdict itself is Core's.</summary>
-public static class RequirementWords
+internal static class RequirementWords
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 

@@ -1,7 +1,7 @@
 namespace SlotArray.Reports;
 
 /// <summary>Atomic file writes: a failed write leaves no half-written file behind.</summary>
-public static class AtomicFile
+internal static class AtomicFile
 {
     /// <summary>Writes through a temporary file in the target folder and renames it into place.</summary>
     public static void Write(string path, Action<Stream> write)

@@ -3,7 +3,7 @@ using SlotArray.Reports.Model;
 namespace SlotArray.Reports;
 
 /// <summary>The summary.md section of a <c>coupling: mutual</c> design: coupled and isolated-slot designs side by side, and the iterations.</summary>
-public static class CouplingSummary
+internal static class CouplingSummary
 {
     /// <summary>Writes the section through <paramref name="line"/> (one call per line).</summary>
     public static void Write(CouplingReport c, Action<string> line)

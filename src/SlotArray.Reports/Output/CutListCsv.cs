@@ -11,7 +11,7 @@ namespace SlotArray.Reports;
 /// <c>#</c>, padded with empty fields; units are in the column names (mm, deg). Only formats the
 /// <see cref="FabricationPlan"/> of the report (geometry and tolerances are computed in Core/Fabrication).
 /// </summary>
-public static class CutListCsv
+internal static class CutListCsv
 {
     /// <summary>Columns for broad-wall (longitudinal) slots.</summary>
     public static readonly IReadOnlyList<string> OffsetColumns =
@@ -54,7 +54,10 @@ public static class CutListCsv
         };
         if (tilt)
         {
-            comments.Add($"# tolerances: tilt_tol_deg per slot from the offset tolerance +/- {Invariant.Mm(t.Offset.Value)} mm ({t.Offset.Source}) taken at the slot's end: delta-tilt = dx/(L/2); cut depth +/- {Invariant.Mm(t.CutDepth.Value)} mm ({t.CutDepth.Source})");
+            comments.Add((t.Tilt is { } tt
+                ? $"# tolerances: tilt +/- {Invariant.Fixed(tt.Value * 180 / Math.PI, 3)} deg ({tt.Source})"
+                : $"# tolerances: tilt_tol_deg per slot: +/- {Invariant.Mm(FeatureTolerances.Default.Value)} mm at the slot's end, delta-tilt = dx/(L/2) (default: routine precision CNC milling, common practice, no source)")
+                + $"; cut depth +/- {Invariant.Mm(t.CutDepth.Value)} mm ({t.CutDepth.Source})");
             comments.Add("# " + TiltSignRule);
             comments.Add($"# cut_depth_*_broad_wall_mm: depth of cut into that broad wall measured from the outer narrow-wall face (>= wall {Invariant.Mm(g.Wall)} mm when the cut wraps)");
             comments.Add($"# length_mm (edge slots): the one definition: path length of the cut on the inner surfaces = b/cos(tilt) + 2 x (cut depth - wall), b = {Invariant.Mm(g.B)} mm; for reference: cut to tilt and depth");

@@ -12,7 +12,7 @@ namespace SlotArray.Reports;
 /// renamed). Numbers are written in the shortest round-trip form; a non-finite number is written as null.
 /// Keys are written in a fixed order, two-space indent, "\n" line ends, UTF-8 without byte-order mark.
 /// </summary>
-public static class DesignJson
+internal static class DesignJson
 {
     /// <summary>Writes the report as JSON to <paramref name="stream"/>.</summary>
     public static void Write(DesignReport report, Stream stream)
@@ -39,6 +39,25 @@ public static class DesignJson
     private static void WriteReport(Utf8JsonWriter w, DesignReport r)
     {
         w.WriteStartObject();
+        WriteHeader(w, r);
+        WriteSlots(w, r);
+        WriteTermination(w, r);
+        WriteTravellingWave(w, r);
+        WriteFlareAndFilter(w, r);
+        WriteCoupling(w, r);
+        WritePattern(w, r);
+        WriteMatch(w, r);
+        WriteInputs(w, r);
+        WriteRequirements(w, r);
+        Strings(w, "warnings", r.Warnings);
+        Strings(w, "cautions", r.Cautions);
+        Strings(w, "tolerance", r.Tolerance);
+        w.WriteEndObject();
+    }
+
+    /// <summary>Name, frequency, normalisation, band and guide.</summary>
+    private static void WriteHeader(Utf8JsonWriter w, DesignReport r)
+    {
         w.WriteString("name", r.Name);
         Num(w, "frequency_hz", r.FrequencyHz);
         w.WriteString("normalisation", Invariant.Normalisation);
@@ -56,7 +75,11 @@ public static class DesignJson
         Num(w, "guide_wavelength_m", r.Guide.GuideWavelength);
         Num(w, "wave_impedance_ohm", r.Guide.WaveImpedanceOhm);
         w.WriteEndObject();
+    }
 
+    /// <summary>One object per slot: geometry, conductance, target and achieved excitation.</summary>
+    private static void WriteSlots(Utf8JsonWriter w, DesignReport r)
+    {
         w.WriteStartArray("slots");
         foreach (var s in r.Slots)
         {
@@ -78,7 +101,11 @@ public static class DesignJson
             w.WriteEndObject();
         }
         w.WriteEndArray();
+    }
 
+    /// <summary>The near termination and feed, then the fabrication plan.</summary>
+    private static void WriteTermination(Utf8JsonWriter w, DesignReport r)
+    {
         w.WriteStartObject("termination");
         w.WriteString("type", r.Termination.Type);
         Num(w, "distance_m", r.Termination.Distance);
@@ -86,7 +113,11 @@ public static class DesignJson
         if (r.Termination.FarShortPosition is { } far) Num(w, "far_short_position_m", far);
         w.WriteEndObject();
         if (r.Fabrication is { } plan) WriteFabrication(w, r, plan);
+    }
 
+    /// <summary>Travelling-wave arrays: the load and the designer's figures.</summary>
+    private static void WriteTravellingWave(Utf8JsonWriter w, DesignReport r)
+    {
         if (r.Load is { } load)
         {
             w.WriteStartObject("load");
@@ -112,7 +143,12 @@ public static class DesignJson
             w.WriteBoolean("load_auto", tw.LoadAuto);
             w.WriteEndObject();
         }
+        WritePointing(w, r);
+    }
 
+    /// <summary>The beam over the operating range (temperature, transmitter frequency tolerance).</summary>
+    private static void WritePointing(Utf8JsonWriter w, DesignReport r)
+    {
         if (r.Pointing is { } pt)
         {
             w.WriteStartObject("pointing");
@@ -140,6 +176,11 @@ public static class DesignJson
             w.WriteEndArray();
             w.WriteEndObject();
         }
+    }
+
+    /// <summary>The antenna's add-ons in front of the slots: the flare and the polarisation filter.</summary>
+    private static void WriteFlareAndFilter(Utf8JsonWriter w, DesignReport r)
+    {
         if (r.Flare is { } fl)
         {
             w.WriteStartObject("flare");
@@ -181,7 +222,11 @@ public static class DesignJson
             NumArray(w, "bare_cross_level_db", flt.BareCrossCutLevelDb);
             w.WriteEndObject();
         }
+    }
 
+    /// <summary>Mutual-coupling designs: the coupled and isolated-slot figures and Elliott's iterations.</summary>
+    private static void WriteCoupling(Utf8JsonWriter w, DesignReport r)
+    {
         if (r.Coupling is { } c)
         {
             w.WriteStartObject("mutual_coupling");
@@ -204,7 +249,11 @@ public static class DesignJson
             w.WriteEndArray();
             w.WriteEndObject();
         }
+    }
 
+    /// <summary>The pattern figures and cut at the design frequency.</summary>
+    private static void WritePattern(Utf8JsonWriter w, DesignReport r)
+    {
         var p = r.Pattern;
         w.WriteStartObject("pattern");
         Num(w, "beam_deg", p.BeamDeg);
@@ -221,8 +270,14 @@ public static class DesignJson
         w.WriteEndObject();
         if (p.CrossPolarDb is { } xp) Num(w, "cross_polar_db", xp);
         if (p.CrossPolarDirectionDeg is { } xd) Num(w, "cross_polar_direction_deg", xd);
+        Num(w, "transverse_face_width_m", p.TransverseFaceWidth);
+        Num(w, "transverse_hpbw_lower_bound_deg", p.TransverseHpbwLowerBoundDeg);
         w.WriteEndObject();
+    }
 
+    /// <summary>The match at the design frequency and the band sweep.</summary>
+    private static void WriteMatch(Utf8JsonWriter w, DesignReport r)
+    {
         w.WriteStartObject("match");
         Num(w, "s11_db_at_design", r.Match.S11DbAtDesign);
         Num(w, "vswr_at_design", r.Match.VswrAtDesign);
@@ -245,7 +300,11 @@ public static class DesignJson
             w.WriteEndObject();
         }
         w.WriteEndArray();
+    }
 
+    /// <summary>The inputs in words and the user's slot table, if any.</summary>
+    private static void WriteInputs(Utf8JsonWriter w, DesignReport r)
+    {
         var i = r.Inputs;
         w.WriteStartObject("inputs");
         w.WriteString("slot_type", i.SlotType);
@@ -271,7 +330,11 @@ public static class DesignJson
             w.WriteEndObject();
             w.WriteEndObject();
         }
+    }
 
+    /// <summary>One object per requirement verdict.</summary>
+    private static void WriteRequirements(Utf8JsonWriter w, DesignReport r)
+    {
         w.WriteStartArray("requirements");
         foreach (var q in r.Requirements)
         {
@@ -283,11 +346,6 @@ public static class DesignJson
             w.WriteEndObject();
         }
         w.WriteEndArray();
-
-        Strings(w, "warnings", r.Warnings);
-        Strings(w, "cautions", r.Cautions);
-        Strings(w, "tolerance", r.Tolerance);
-        w.WriteEndObject();
     }
 
     /// <summary>The fabrication plan: datum A, tube length, features and each slot's tolerances (SI, from datum A).</summary>
@@ -398,22 +456,7 @@ public static class DesignJson
                 GuideWavelength = D(g, "guide_wavelength_m"),
                 WaveImpedanceOhm = D(g, "wave_impedance_ohm"),
             },
-            Slots = [.. root.GetProperty("slots").EnumerateArray().Select(s => new SlotReport
-            {
-                Index = s.GetProperty("index").GetInt32(),
-                Position = D(s, "position_m"),
-                Offset = OptD(s, "offset_m"),
-                TiltDeg = OptD(s, "tilt_deg"),
-                CutDepth = OptD(s, "cut_depth_m"),
-                Length = D(s, "length_m"),
-                OverallLength = D(s, "overall_length_m"),
-                Width = D(s, "width_m"),
-                EndForm = Str(s, "end") == "round" ? SlotEndForm.Round : SlotEndForm.Square,
-                Conductance = D(s, "conductance"),
-                TargetAmplitude = D(s, "target_amplitude"),
-                AchievedAmplitude = D(s, "achieved_amplitude"),
-                AchievedPhaseDeg = D(s, "achieved_phase_deg"),
-            })],
+            Slots = ReadSlots(root),
             Termination = new TerminationReport
             {
                 Type = Str(t, "type"),
@@ -421,21 +464,7 @@ public static class DesignJson
                 FeedPosition = OptD(t, "feed_position_m"),
                 FarShortPosition = OptD(t, "far_short_position_m"),
             },
-            Pattern = new PatternReport
-            {
-                BeamDeg = D(p, "beam_deg"),
-                HpbwDeg = D(p, "hpbw_deg"),
-                PeakSidelobeDb = D(p, "peak_sidelobe_db"),
-                FirstSidelobeDb = D(p, "first_sidelobe_db"),
-                DirectivityDbi = D(p, "directivity_dbi"),
-                GainDbi = D(p, "gain_dbi"),
-                DesignSidelobeDb = D(p, "design_sidelobe_db"),
-                CutAngleDeg = Doubles(p.GetProperty("cut").GetProperty("angle_deg")),
-                CutLevelDb = Doubles(p.GetProperty("cut").GetProperty("level_db")),
-                CrossCutLevelDb = p.GetProperty("cut").TryGetProperty("cross_level_db", out var xc) ? Doubles(xc) : [],
-                CrossPolarDb = OptD(p, "cross_polar_db"),
-                CrossPolarDirectionDeg = OptD(p, "cross_polar_direction_deg"),
-            },
+            Pattern = ReadPattern(p),
             Match = new MatchReport
             {
                 S11DbAtDesign = D(m, "s11_db_at_design"),
@@ -443,16 +472,7 @@ public static class DesignJson
                 BandwidthVswr15Hz = D(m, "bandwidth_vswr15_hz"),
                 BandwidthVswr2Hz = D(m, "bandwidth_vswr2_hz"),
             },
-            Sweep = [.. root.GetProperty("sweep").EnumerateArray().Select(q => new SweepPoint
-            {
-                FrequencyHz = D(q, "frequency_hz"),
-                S11 = new Complex(D(q, "s11_re"), D(q, "s11_im")),
-                BeamDeg = D(q, "beam_deg"),
-                PeakSidelobeDb = D(q, "peak_sidelobe_db"),
-                GainDbi = D(q, "gain_dbi"),
-                HpbwDeg = OptD(q, "hpbw_deg") ?? double.NaN,
-                CrossPolarDb = OptD(q, "cross_polar_db"),
-            })],
+            Sweep = ReadSweep(root),
             Inputs = new InputsSummary
             {
                 SlotType = Str(inp, "slot_type"),
@@ -477,25 +497,85 @@ public static class DesignJson
             Filter = root.TryGetProperty("filter", out var flt) ? ReadFilter(flt) : null,
             Load = root.TryGetProperty("load", out var ld)
                 ? new LoadReport { Fraction = D(ld, "fraction"), PowerWPerWIn = D(ld, "power_w_per_w_in") } : null,
-            TravellingWave = root.TryGetProperty("travelling_wave", out var tw)
-                ? new TravellingWaveReport
-                {
-                    SquintDeg = D(tw, "squint_deg"),
-                    ScanDegPer100MHz = D(tw, "scan_deg_per_100mhz"),
-                    ScanFromSweepDegPer100MHz = D(tw, "scan_from_sweep_deg_per_100mhz"),
-                    Efficiency = D(tw, "efficiency"),
-                    WallLossWPerWIn = D(tw, "wall_loss_w_per_w_in"),
-                    RefinementIterations = tw.GetProperty("refinement_iterations").GetInt32(),
-                    RefinementResidualDb = D(tw, "refinement_residual_db"),
-                    PhaseErrorDeg = D(tw, "phase_error_deg"),
-                    BeamAskedDeg = tw.TryGetProperty("beam_asked_deg", out _) ? D(tw, "beam_asked_deg") : double.NaN,
-                    BeamResidualDeg = tw.TryGetProperty("beam_residual_deg", out _) ? D(tw, "beam_residual_deg") : double.NaN,
-                    PointingCorrection = tw.TryGetProperty("pointing_correction", out var pc) ? pc.GetString() ?? "none" : "none",
-                    SpacingM = tw.TryGetProperty("spacing_m", out _) ? D(tw, "spacing_m") : double.NaN,
-                    LoadAuto = tw.TryGetProperty("load_auto", out var la) && la.GetBoolean(),
-                }
-                : null,
+            TravellingWave = ReadTravellingWave(root),
         };
+    }
+
+    private static IReadOnlyList<SlotReport> ReadSlots(JsonElement root)
+    {
+        return [.. root.GetProperty("slots").EnumerateArray().Select(s => new SlotReport
+        {
+            Index = s.GetProperty("index").GetInt32(),
+            Position = D(s, "position_m"),
+            Offset = OptD(s, "offset_m"),
+            TiltDeg = OptD(s, "tilt_deg"),
+            CutDepth = OptD(s, "cut_depth_m"),
+            Length = D(s, "length_m"),
+            OverallLength = D(s, "overall_length_m"),
+            Width = D(s, "width_m"),
+            EndForm = Str(s, "end") == "round" ? SlotEndForm.Round : SlotEndForm.Square,
+            Conductance = D(s, "conductance"),
+            TargetAmplitude = D(s, "target_amplitude"),
+            AchievedAmplitude = D(s, "achieved_amplitude"),
+            AchievedPhaseDeg = D(s, "achieved_phase_deg"),
+        })];
+    }
+
+    private static PatternReport ReadPattern(JsonElement p)
+    {
+        return new PatternReport
+        {
+            BeamDeg = D(p, "beam_deg"),
+            HpbwDeg = D(p, "hpbw_deg"),
+            PeakSidelobeDb = D(p, "peak_sidelobe_db"),
+            FirstSidelobeDb = D(p, "first_sidelobe_db"),
+            DirectivityDbi = D(p, "directivity_dbi"),
+            GainDbi = D(p, "gain_dbi"),
+            DesignSidelobeDb = D(p, "design_sidelobe_db"),
+            CutAngleDeg = Doubles(p.GetProperty("cut").GetProperty("angle_deg")),
+            CutLevelDb = Doubles(p.GetProperty("cut").GetProperty("level_db")),
+            CrossCutLevelDb = p.GetProperty("cut").TryGetProperty("cross_level_db", out var xc) ? Doubles(xc) : [],
+            CrossPolarDb = OptD(p, "cross_polar_db"),
+            CrossPolarDirectionDeg = OptD(p, "cross_polar_direction_deg"),
+            TransverseFaceWidth = D(p, "transverse_face_width_m"),
+            TransverseHpbwLowerBoundDeg = D(p, "transverse_hpbw_lower_bound_deg"),
+        };
+    }
+
+    private static IReadOnlyList<SweepPoint> ReadSweep(JsonElement root)
+    {
+        return [.. root.GetProperty("sweep").EnumerateArray().Select(q => new SweepPoint
+        {
+            FrequencyHz = D(q, "frequency_hz"),
+            S11 = new Complex(D(q, "s11_re"), D(q, "s11_im")),
+            BeamDeg = D(q, "beam_deg"),
+            PeakSidelobeDb = D(q, "peak_sidelobe_db"),
+            GainDbi = D(q, "gain_dbi"),
+            HpbwDeg = OptD(q, "hpbw_deg") ?? double.NaN,
+            CrossPolarDb = OptD(q, "cross_polar_db"),
+        })];
+    }
+
+    private static TravellingWaveReport? ReadTravellingWave(JsonElement root)
+    {
+        return root.TryGetProperty("travelling_wave", out var tw)
+            ? new TravellingWaveReport
+            {
+                SquintDeg = D(tw, "squint_deg"),
+                ScanDegPer100MHz = D(tw, "scan_deg_per_100mhz"),
+                ScanFromSweepDegPer100MHz = D(tw, "scan_from_sweep_deg_per_100mhz"),
+                Efficiency = D(tw, "efficiency"),
+                WallLossWPerWIn = D(tw, "wall_loss_w_per_w_in"),
+                RefinementIterations = tw.GetProperty("refinement_iterations").GetInt32(),
+                RefinementResidualDb = D(tw, "refinement_residual_db"),
+                PhaseErrorDeg = D(tw, "phase_error_deg"),
+                BeamAskedDeg = tw.TryGetProperty("beam_asked_deg", out _) ? D(tw, "beam_asked_deg") : double.NaN,
+                BeamResidualDeg = tw.TryGetProperty("beam_residual_deg", out _) ? D(tw, "beam_residual_deg") : double.NaN,
+                PointingCorrection = tw.TryGetProperty("pointing_correction", out var pc) ? pc.GetString() ?? "none" : "none",
+                SpacingM = tw.TryGetProperty("spacing_m", out _) ? D(tw, "spacing_m") : double.NaN,
+                LoadAuto = tw.TryGetProperty("load_auto", out var la) && la.GetBoolean(),
+            }
+            : null;
     }
 
     private static string Str(JsonElement e, string key) => e.GetProperty(key).GetString()

@@ -18,7 +18,7 @@ namespace SlotArray.Reports;
 /// Edge slots are drawn on the narrow face with the broad walls folded out above and below (developed view). Only
 /// formats: the geometry is Core's (<see cref="FabricationPlan"/>, <see cref="GuideFaces"/>).
 /// </summary>
-public static class LayoutSvg
+internal static class LayoutSvg
 {
     private const double Margin = 10, Text = 2.5, RowHeight = 4.5, TitleWidth = 180, TitleHeight = 40, OrdinateZone = 26;
 
@@ -98,130 +98,145 @@ public static class LayoutSvg
         int number, int count, (double X0, double X1) range, double left, double faceTop, double faceHeight, double wrap,
         double tableTop, double[] colW, double blockW, int rowsPerBlock)
     {
+        var c = new SheetCanvas(left, range.X0);
+        double viewLeft = c.X(range.X0), viewRight = c.X(range.X1);
+        SheetHead(c, report, size, number, count, viewLeft, viewRight);
+        Face(c, report, plan, tilt, faceTop, faceHeight, wrap);
+        var own = plan.Slots.Where(s => ToMm(s.Position.Meters) >= range.X0 && ToMm(s.Position.Meters) < range.X1 + (number == count ? 1e-9 : 0)).ToList();
+        Ordinates(c, plan, own, tilt, number, count, range, left, faceTop, faceHeight, wrap, tableTop, viewLeft);
+        SlotTable(c, report, own, tilt, tableTop, colW, blockW, rowsPerBlock);
+        TitleBlock(c, report, plan, tilt, size, number, count);
+        return c.ToString();
+    }
+
+    private static double ToMm(double m) => m * 1e3;
+
+    /// <summary>The XML prologue, title, styles, clip path of this sheet's stretch of tube and the frame.</summary>
+    private static void SheetHead(SheetCanvas c, DesignReport report, (double Width, double Height) size, int number, int count,
+        double viewLeft, double viewRight)
+    {
+        c.Ln("<?xml version=\"1.0\" encoding=\"UTF-8\"?>");
+        c.Ln($"<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"{SheetCanvas.F(size.Width)}mm\" height=\"{SheetCanvas.F(size.Height)}mm\" viewBox=\"0 0 {SheetCanvas.F(size.Width)} {SheetCanvas.F(size.Height)}\" font-family=\"DejaVu Sans, sans-serif\">");
+        c.Ln($"<title>{Xml(report.Name)}: slot layout, sheet {Invariant.Int(number)} of {Invariant.Int(count)}, {report.Document.Sheet}, scale 1:1, mm</title>");
+        c.Ln("<style>");
+        c.Ln("line, rect, path { fill: none; stroke: black; stroke-width: 0.25; }");
+        c.Ln(".outline { stroke-width: 0.5; } .datum { stroke-width: 0.7; } .hidden { stroke-dasharray: 2 1; stroke-width: 0.18; }");
+        c.Ln(".centre { stroke-dasharray: 8 1.5 1 1.5; stroke-width: 0.18; } .thin { stroke-width: 0.18; } .match { stroke-width: 0.7; stroke-dasharray: 12 2 2 2; }");
+        c.Ln(".slot { stroke-width: 0.35; fill: #d9d9d9; } text { fill: black; stroke: none; }");
+        c.Ln("</style>");
+        c.Ln($"<defs><clipPath id=\"view\"><rect x=\"{SheetCanvas.F(viewLeft)}\" y=\"0\" width=\"{SheetCanvas.F(viewRight - viewLeft)}\" height=\"{SheetCanvas.F(size.Height)}\"/></clipPath></defs>");
+        c.Ln($"<rect class=\"outline\" id=\"frame\" x=\"{SheetCanvas.F(Margin)}\" y=\"{SheetCanvas.F(Margin)}\" width=\"{SheetCanvas.F(size.Width - 2 * Margin)}\" height=\"{SheetCanvas.F(size.Height - 2 * Margin)}\"/>");
+    }
+
+    /// <summary>The face, its walls and centreline and the slots, clipped to this sheet's stretch of tube.</summary>
+    private static void Face(SheetCanvas c, DesignReport report, FabricationPlan plan, bool tilt, double faceTop, double faceHeight, double wrap)
+    {
         var g = report.Guide;
-        var d = report.Document;
-        double mm(double m) => m * 1e3;
         double faceBottom = faceTop + faceHeight, cl = faceTop + faceHeight / 2;
-        double X(double zMm) => left + zMm - range.X0;
-        double viewLeft = X(range.X0), viewRight = X(range.X1);
-        var sb = new StringBuilder();
-        void Ln(string s) { sb.Append(s); sb.Append('\n'); }
-        string F(double v) => Invariant.Fixed(v, 3);
-        void Line(double x1, double y1, double x2, double y2, string cls, string extra = "") =>
-            Ln($"<line class=\"{cls}\" x1=\"{F(x1)}\" y1=\"{F(y1)}\" x2=\"{F(x2)}\" y2=\"{F(y2)}\"{extra}/>");
-        void TextAt(double x, double y, string text, string anchor = "start", double sizeMm = Text, string extra = "") =>
-            Ln($"<text x=\"{F(x)}\" y=\"{F(y)}\" font-size=\"{F(sizeMm)}\" text-anchor=\"{anchor}\"{extra}>{Xml(text)}</text>");
-        void Vertical(double x, double y, string text, string anchor) =>   // reads bottom to top, baseline on the extension line
-            TextAt(x + Text / 3, y, text, anchor, Text, $" transform=\"rotate(-90 {F(x + Text / 3)} {F(y)})\"");
-
-        Ln("<?xml version=\"1.0\" encoding=\"UTF-8\"?>");
-        Ln($"<svg xmlns=\"http://www.w3.org/2000/svg\" version=\"1.1\" width=\"{F(size.Width)}mm\" height=\"{F(size.Height)}mm\" viewBox=\"0 0 {F(size.Width)} {F(size.Height)}\" font-family=\"DejaVu Sans, sans-serif\">");
-        Ln($"<title>{Xml(report.Name)}: slot layout, sheet {Invariant.Int(number)} of {Invariant.Int(count)}, {report.Document.Sheet}, scale 1:1, mm</title>");
-        Ln("<style>");
-        Ln("line, rect, path { fill: none; stroke: black; stroke-width: 0.25; }");
-        Ln(".outline { stroke-width: 0.5; } .datum { stroke-width: 0.7; } .hidden { stroke-dasharray: 2 1; stroke-width: 0.18; }");
-        Ln(".centre { stroke-dasharray: 8 1.5 1 1.5; stroke-width: 0.18; } .thin { stroke-width: 0.18; } .match { stroke-width: 0.7; stroke-dasharray: 12 2 2 2; }");
-        Ln(".slot { stroke-width: 0.35; fill: #d9d9d9; } text { fill: black; stroke: none; }");
-        Ln("</style>");
-        Ln($"<defs><clipPath id=\"view\"><rect x=\"{F(viewLeft)}\" y=\"0\" width=\"{F(viewRight - viewLeft)}\" height=\"{F(size.Height)}\"/></clipPath></defs>");
-        Ln($"<rect class=\"outline\" id=\"frame\" x=\"{F(Margin)}\" y=\"{F(Margin)}\" width=\"{F(size.Width - 2 * Margin)}\" height=\"{F(size.Height - 2 * Margin)}\"/>");
-
-        // the face, its walls and centreline, clipped to this sheet's stretch of tube
-        Ln("<g clip-path=\"url(#view)\">");
-        Ln($"<rect class=\"outline\" id=\"face\" x=\"{F(X(0))}\" y=\"{F(faceTop)}\" width=\"{F(mm(plan.TubeLength.Meters))}\" height=\"{F(faceHeight)}\"/>");
-        double inner = mm(g.Wall);
-        Line(X(0), faceTop + inner, X(mm(plan.TubeLength.Meters)), faceTop + inner, "hidden");
-        Line(X(0), faceBottom - inner, X(mm(plan.TubeLength.Meters)), faceBottom - inner, "hidden");
-        Line(X(0) - 4, cl, X(mm(plan.TubeLength.Meters)) + 6, cl, "centre");
+        c.Ln("<g clip-path=\"url(#view)\">");
+        c.Ln($"<rect class=\"outline\" id=\"face\" x=\"{SheetCanvas.F(c.X(0))}\" y=\"{SheetCanvas.F(faceTop)}\" width=\"{SheetCanvas.F(ToMm(plan.TubeLength.Meters))}\" height=\"{SheetCanvas.F(faceHeight)}\"/>");
+        double inner = ToMm(g.Wall);
+        c.Line(c.X(0), faceTop + inner, c.X(ToMm(plan.TubeLength.Meters)), faceTop + inner, "hidden");
+        c.Line(c.X(0), faceBottom - inner, c.X(ToMm(plan.TubeLength.Meters)), faceBottom - inner, "hidden");
+        c.Line(c.X(0) - 4, cl, c.X(ToMm(plan.TubeLength.Meters)) + 6, cl, "centre");
         if (tilt)
         {
-            Ln($"<rect class=\"thin\" id=\"upper-broad-wall\" x=\"{F(X(0))}\" y=\"{F(faceTop - wrap)}\" width=\"{F(mm(plan.TubeLength.Meters))}\" height=\"{F(wrap)}\"/>");
-            Ln($"<rect class=\"thin\" id=\"lower-broad-wall\" x=\"{F(X(0))}\" y=\"{F(faceBottom)}\" width=\"{F(mm(plan.TubeLength.Meters))}\" height=\"{F(wrap)}\"/>");
+            c.Ln($"<rect class=\"thin\" id=\"upper-broad-wall\" x=\"{SheetCanvas.F(c.X(0))}\" y=\"{SheetCanvas.F(faceTop - wrap)}\" width=\"{SheetCanvas.F(ToMm(plan.TubeLength.Meters))}\" height=\"{SheetCanvas.F(wrap)}\"/>");
+            c.Ln($"<rect class=\"thin\" id=\"lower-broad-wall\" x=\"{SheetCanvas.F(c.X(0))}\" y=\"{SheetCanvas.F(faceBottom)}\" width=\"{SheetCanvas.F(ToMm(plan.TubeLength.Meters))}\" height=\"{SheetCanvas.F(wrap)}\"/>");
         }
         foreach (var s in plan.Slots)
         {
-            double zc = mm(s.Position.Meters), w = mm(s.Row.Width.Meters), r = mm(s.Row.EndRadius?.Meters ?? 0);
+            double zc = ToMm(s.Position.Meters), w = ToMm(s.Row.Width.Meters), r = ToMm(s.Row.EndRadius?.Meters ?? 0);
             if (tilt)
             {
-                double th = s.Row.Tilt!.Value.Radians, deg = s.Row.Tilt.Value.Degrees, run = faceHeight / 2 * Math.Tan(th), depth = mm(s.Row.DepthOfCut?.Meters ?? 0);
-                double across = depth > 0 ? faceHeight / Math.Cos(th) : mm(s.Row.OverallLength.Meters);
-                Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Row.Slot)}\" x=\"{F(X(zc) - w / 2)}\" y=\"{F(cl - across / 2)}\" width=\"{F(w)}\" height=\"{F(across)}\" transform=\"rotate({F(deg)} {F(X(zc))} {F(cl)})\"/>");
+                double th = s.Row.Tilt!.Value.Radians, deg = s.Row.Tilt.Value.Degrees, run = faceHeight / 2 * Math.Tan(th), depth = ToMm(s.Row.DepthOfCut?.Meters ?? 0);
+                double across = depth > 0 ? faceHeight / Math.Cos(th) : ToMm(s.Row.OverallLength.Meters);
+                c.Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Row.Slot)}\" x=\"{SheetCanvas.F(c.X(zc) - w / 2)}\" y=\"{SheetCanvas.F(cl - across / 2)}\" width=\"{SheetCanvas.F(w)}\" height=\"{SheetCanvas.F(across)}\" transform=\"rotate({SheetCanvas.F(deg)} {SheetCanvas.F(c.X(zc))} {SheetCanvas.F(cl)})\"/>");
                 if (depth > 0)
                 {
                     double wz = w / Math.Cos(th);
-                    Ln($"<rect class=\"slot\" id=\"wrap-upper-{Invariant.Int(s.Row.Slot)}\" x=\"{F(X(zc + run) - wz / 2)}\" y=\"{F(faceTop - depth)}\" width=\"{F(wz)}\" height=\"{F(depth)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
-                    Ln($"<rect class=\"slot\" id=\"wrap-lower-{Invariant.Int(s.Row.Slot)}\" x=\"{F(X(zc - run) - wz / 2)}\" y=\"{F(faceBottom)}\" width=\"{F(wz)}\" height=\"{F(depth)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
+                    c.Ln($"<rect class=\"slot\" id=\"wrap-upper-{Invariant.Int(s.Row.Slot)}\" x=\"{SheetCanvas.F(c.X(zc + run) - wz / 2)}\" y=\"{SheetCanvas.F(faceTop - depth)}\" width=\"{SheetCanvas.F(wz)}\" height=\"{SheetCanvas.F(depth)}\" rx=\"{SheetCanvas.F(r)}\" ry=\"{SheetCanvas.F(r)}\"/>");
+                    c.Ln($"<rect class=\"slot\" id=\"wrap-lower-{Invariant.Int(s.Row.Slot)}\" x=\"{SheetCanvas.F(c.X(zc - run) - wz / 2)}\" y=\"{SheetCanvas.F(faceBottom)}\" width=\"{SheetCanvas.F(wz)}\" height=\"{SheetCanvas.F(depth)}\" rx=\"{SheetCanvas.F(r)}\" ry=\"{SheetCanvas.F(r)}\"/>");
                 }
             }
             else
             {
-                double len = mm(s.Row.OverallLength.Meters), yc = cl - mm(s.Row.Offset!.Value.Meters);
-                Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Row.Slot)}\" x=\"{F(X(zc) - len / 2)}\" y=\"{F(yc - w / 2)}\" width=\"{F(len)}\" height=\"{F(w)}\" rx=\"{F(r)}\" ry=\"{F(r)}\"/>");
+                double len = ToMm(s.Row.OverallLength.Meters), yc = cl - ToMm(s.Row.Offset!.Value.Meters);
+                c.Ln($"<rect class=\"slot\" id=\"slot-{Invariant.Int(s.Row.Slot)}\" x=\"{SheetCanvas.F(c.X(zc) - len / 2)}\" y=\"{SheetCanvas.F(yc - w / 2)}\" width=\"{SheetCanvas.F(len)}\" height=\"{SheetCanvas.F(w)}\" rx=\"{SheetCanvas.F(r)}\" ry=\"{SheetCanvas.F(r)}\"/>");
             }
         }
-        Ln("</g>");
+        c.Ln("</g>");
+    }
 
-        // centre marks, numbers and ordinates of the slots whose centres lie on this sheet
+    /// <summary>Centre marks, numbers and ordinates of this sheet's slots, the feature ordinates, datum A, match lines and notes.</summary>
+    private static void Ordinates(SheetCanvas c, FabricationPlan plan, List<SlotCut> own, bool tilt, int number, int count,
+        (double X0, double X1) range, double left, double faceTop, double faceHeight, double wrap, double tableTop, double viewLeft)
+    {
+        double faceBottom = faceTop + faceHeight, cl = faceTop + faceHeight / 2;
         double ordinateBase = faceTop - wrap - 2;
-        var own = plan.Slots.Where(s => mm(s.Position.Meters) >= range.X0 && mm(s.Position.Meters) < range.X1 + (number == count ? 1e-9 : 0)).ToList();
         foreach (var s in own)
         {
-            double zc = mm(s.Position.Meters);
-            double yc = tilt ? cl : cl - mm(s.Row.Offset!.Value.Meters);
-            Line(X(zc) - 1.2, yc, X(zc) + 1.2, yc, "thin", $" id=\"centre-{Invariant.Int(s.Row.Slot)}\"");
-            Line(X(zc), yc - 1.2, X(zc), yc + 1.2, "thin");
+            double zc = ToMm(s.Position.Meters);
+            double yc = tilt ? cl : cl - ToMm(s.Row.Offset!.Value.Meters);
+            c.Line(c.X(zc) - 1.2, yc, c.X(zc) + 1.2, yc, "thin", $" id=\"centre-{Invariant.Int(s.Row.Slot)}\"");
+            c.Line(c.X(zc), yc - 1.2, c.X(zc), yc + 1.2, "thin");
             double side = tilt || s.Row.Offset!.Value.Meters >= 0 ? 1 : -1;
             double yn = tilt ? faceBottom + wrap + 3.5 : cl + side * (faceHeight / 2 - 1.2) + (side > 0 ? 0 : Text);
-            TextAt(X(zc), yn, Invariant.Int(s.Row.Slot), "middle", Text, " font-weight=\"bold\"");
-            Line(X(zc), faceTop - wrap - 0.5, X(zc), ordinateBase - OrdinateZone + 4, "thin");
-            Vertical(X(zc), ordinateBase - 1, Invariant.Mm(s.Position.Meters), "start");
+            c.TextAt(c.X(zc), yn, Invariant.Int(s.Row.Slot), "middle", Text, " font-weight=\"bold\"");
+            c.Line(c.X(zc), faceTop - wrap - 0.5, c.X(zc), ordinateBase - OrdinateZone + 4, "thin");
+            c.Vertical(c.X(zc), ordinateBase - 1, Invariant.Mm(s.Position.Meters), "start");
         }
         // feature ordinates below the face
         double below = faceBottom + wrap + (tilt ? 6 : 2);
         double lastText = double.NegativeInfinity;
-        foreach (var f in plan.Features.Where(f => mm(f.Position.Meters) >= range.X0 - 1e-9 && mm(f.Position.Meters) <= range.X1 + 1e-9))
+        foreach (var f in plan.Features.Where(f => ToMm(f.Position.Meters) >= range.X0 - 1e-9 && ToMm(f.Position.Meters) <= range.X1 + 1e-9))
         {
             // ordinates closer than a text height apart get a jogged extension line, so their figures never overlap
-            double xf = X(mm(f.Position.Meters)), xt = Math.Max(xf, lastText + 3.5);
+            double xf = c.X(ToMm(f.Position.Meters)), xt = Math.Max(xf, lastText + 3.5);
             lastText = xt;
-            Line(xf, faceTop - wrap, xf, below + 3, f.Position.Meters == 0 ? "datum" : "thin", $" id=\"feature-{f.Key}\"");
-            Line(xf, below + 3, xt, below + 6, "thin");
-            Line(xt, below + 6, xt, below + OrdinateZone, "thin");
-            Vertical(xt, below + OrdinateZone, Invariant.Mm(f.Position.Meters) + " " + Short(f), "start");
+            c.Line(xf, faceTop - wrap, xf, below + 3, f.Position.Meters == 0 ? "datum" : "thin", $" id=\"feature-{f.Key}\"");
+            c.Line(xf, below + 3, xt, below + 6, "thin");
+            c.Line(xt, below + 6, xt, below + OrdinateZone, "thin");
+            c.Vertical(xt, below + OrdinateZone, Invariant.Mm(f.Position.Meters) + " " + Short(f), "start");
         }
         if (number == 1)
         {
-            Line(X(0), Margin + 4, X(0), faceBottom + wrap + 4, "datum");
-            TextAt(X(0) - 2, Margin + 7, "A", "end", 4, " font-weight=\"bold\"");
+            c.Line(c.X(0), Margin + 4, c.X(0), faceBottom + wrap + 4, "datum");
+            c.TextAt(c.X(0) - 2, Margin + 7, "A", "end", 4, " font-weight=\"bold\"");
         }
-        TextAt(left, Margin + 5, $"ORDINATE DIMENSIONS FROM DATUM A (tube end face), mm; sheet {Invariant.Int(number)} of {Invariant.Int(count)}", "start", Text);
+        c.TextAt(left, Margin + 5, $"ORDINATE DIMENSIONS FROM DATUM A (tube end face), mm; sheet {Invariant.Int(number)} of {Invariant.Int(count)}", "start", Text);
         if (number > 1) Match(range.X0, number - 1);
         if (number < count) Match(range.X1, number + 1);
         void Match(double xMatch, int other)
         {
-            Line(X(xMatch), faceTop - wrap - 4, X(xMatch), faceBottom + wrap + 4, "match", $" id=\"match-{Invariant.Int(other)}\"");
-            TextAt(X(xMatch) + (other > number ? -1 : 1), faceBottom + wrap + 8, $"MATCH LINE {Invariant.Fixed(xMatch, 3)} FROM A: SEE SHEET {Invariant.Int(other)}",
+            c.Line(c.X(xMatch), faceTop - wrap - 4, c.X(xMatch), faceBottom + wrap + 4, "match", $" id=\"match-{Invariant.Int(other)}\"");
+            c.TextAt(c.X(xMatch) + (other > number ? -1 : 1), faceBottom + wrap + 8, $"MATCH LINE {Invariant.Fixed(xMatch, 3)} FROM A: SEE SHEET {Invariant.Int(other)}",
                 other > number ? "end" : "start", Text, " font-weight=\"bold\"");
         }
-        if (!tilt) TextAt(Margin + 2, tableTop - 6, "DATUM B: outside face of the -x side wall (bottom edge of the face); +x side at top", "start", Text);
-        else TextAt(viewLeft + 1, faceTop - wrap - 0.8, "upper broad wall, folded out; + tilt: upper end farther from A (clockwise)", "start", 2);
+        if (!tilt) c.TextAt(Margin + 2, tableTop - 6, "DATUM B: outside face of the -x side wall (bottom edge of the face); +x side at top", "start", Text);
+        else c.TextAt(viewLeft + 1, faceTop - wrap - 0.8, "upper broad wall, folded out; + tilt: upper end farther from A (clockwise)", "start", 2);
+    }
 
-        // slot table of this sheet's slots
+    /// <summary>The slot table of this sheet's slots, in blocks side by side.</summary>
+    private static void SlotTable(SheetCanvas c, DesignReport report, List<SlotCut> own, bool tilt, double tableTop, double[] colW, double blockW,
+        int rowsPerBlock)
+    {
+        var g = report.Guide;
         string[] head = tilt
             ? ["slot", "z from A", "tilt deg", "+/-deg", "depth each", "length", "width", "+/-z"]
             : ["slot", "z from A", "offset", "side", "B, nom. wall", "length", "width", "+/-z"];
-        TextAt(Margin + 2, tableTop - 2, tilt
+        c.TextAt(Margin + 2, tableTop - 2, tilt
             ? "Slot table (mm, deg): z from datum A; depth of cut into each broad wall from the outer narrow-wall face; length = path on the inner surfaces"
             : "Slot table (mm): offset from the broad-wall centreline; 'B, nom. wall' = wall + a/2 + offset from the outside of the -x side wall at the nominal wall", "start", 2.2);
         for (int b = 0; b * rowsPerBlock < own.Count || b == 0; b++)
         {
             double bx = Margin + 2 + b * blockW, cx = bx;
-            for (int c = 0; c < head.Length; c++)
+            for (int col = 0; col < head.Length; col++)
             {
-                TextAt(cx + colW[c] - 1, tableTop + RowHeight - 1.2, head[c], "end", 2.2, " font-weight=\"bold\"");
-                cx += colW[c];
+                c.TextAt(cx + colW[col] - 1, tableTop + RowHeight - 1.2, head[col], "end", 2.2, " font-weight=\"bold\"");
+                cx += colW[col];
             }
-            Line(bx, tableTop + RowHeight, bx + colW.Sum(), tableTop + RowHeight, "thin");
+            c.Line(bx, tableTop + RowHeight, bx + colW.Sum(), tableTop + RowHeight, "thin");
             var rows = own.Skip(b * rowsPerBlock).Take(rowsPerBlock).ToArray();
             for (int i = 0; i < rows.Length; i++)
             {
@@ -233,20 +248,26 @@ public static class LayoutSvg
                        Invariant.Mm(g.Wall + g.A / 2 + s.Row.Offset.Value.Meters), Invariant.Mm(s.Row.OverallLength.Meters), Invariant.Mm(s.Row.Width.Meters), Invariant.Mm(s.PositionTolerance.Value)];
                 cx = bx;
                 double y = tableTop + RowHeight * (i + 2) - 1.2;
-                for (int c = 0; c < cells.Length; c++)
+                for (int col = 0; col < cells.Length; col++)
                 {
-                    TextAt(cx + colW[c] - 1, y, cells[c], "end", 2.2);
-                    cx += colW[c];
+                    c.TextAt(cx + colW[col] - 1, y, cells[col], "end", 2.2);
+                    cx += colW[col];
                 }
             }
         }
+    }
 
-        // title block (ISO 7200 layout is not imitated; these are the fields a shop needs)
+    /// <summary>The title block (ISO 7200 layout is not imitated; these are the fields a shop needs).</summary>
+    private static void TitleBlock(SheetCanvas c, DesignReport report, FabricationPlan plan, bool tilt, (double Width, double Height) size,
+        int number, int count)
+    {
+        var g = report.Guide;
+        var d = report.Document;
         double tx = size.Width - Margin - TitleWidth, ty = size.Height - Margin - TitleHeight;
-        Ln($"<rect class=\"outline\" id=\"title-block\" x=\"{F(tx)}\" y=\"{F(ty)}\" width=\"{F(TitleWidth)}\" height=\"{F(TitleHeight)}\"/>");
-        Line(tx, ty + 9, tx + TitleWidth, ty + 9, "thin");
-        TextAt(tx + 2, ty + 6.5, report.Name, "start", 4.5, " font-weight=\"bold\"");
-        TextAt(tx + TitleWidth - 2, ty + 6.5, $"SHEET {Invariant.Int(number)} OF {Invariant.Int(count)}", "end", 3.5, " font-weight=\"bold\" id=\"sheet-number\"");
+        c.Ln($"<rect class=\"outline\" id=\"title-block\" x=\"{SheetCanvas.F(tx)}\" y=\"{SheetCanvas.F(ty)}\" width=\"{SheetCanvas.F(TitleWidth)}\" height=\"{SheetCanvas.F(TitleHeight)}\"/>");
+        c.Line(tx, ty + 9, tx + TitleWidth, ty + 9, "thin");
+        c.TextAt(tx + 2, ty + 6.5, report.Name, "start", 4.5, " font-weight=\"bold\"");
+        c.TextAt(tx + TitleWidth - 2, ty + 6.5, $"SHEET {Invariant.Int(number)} OF {Invariant.Int(count)}", "end", 3.5, " font-weight=\"bold\" id=\"sheet-number\"");
         var t = plan.Tolerances;
         string[] lines =
         [
@@ -257,9 +278,36 @@ public static class LayoutSvg
             $"Datum A: tube end face ({(plan.EndPlateThickness.Meters > 0 ? "end-short plate flush" : "load-end flange face")}). Slot lengths overall tip to tip, end radius = cutter radius.",
             $"{Invariant.Int(report.Slots.Count)} slots; {Invariant.Ghz(report.FrequencyHz, 4)} GHz. SlotArray {d.ToolVersion}; spec SHA-256 {(d.SpecSha256 is { } h ? h[..16] + "..." : "not from a file")}",
         ];
-        for (int i = 0; i < lines.Length; i++) TextAt(tx + 2, ty + 14 + 4.6 * i, lines[i], "start", 2.4);
-        Ln("</svg>");
-        return sb.ToString();
+        for (int i = 0; i < lines.Length; i++) c.TextAt(tx + 2, ty + 14 + 4.6 * i, lines[i], "start", 2.4);
+        c.Ln("</svg>");
+    }
+
+    /// <summary>One sheet being drawn: its SVG text so far, its z origin and the drawing primitives (mm on the sheet).</summary>
+    private sealed class SheetCanvas(double left, double x0)
+    {
+        private readonly StringBuilder sb = new();
+
+        public static string F(double v) => Invariant.Fixed(v, 3);
+
+        public double X(double zMm) => left + zMm - x0;
+
+        public void Ln(string s)
+        {
+            sb.Append(s);
+            sb.Append('\n');
+        }
+
+        public void Line(double x1, double y1, double x2, double y2, string cls, string extra = "") =>
+            Ln($"<line class=\"{cls}\" x1=\"{F(x1)}\" y1=\"{F(y1)}\" x2=\"{F(x2)}\" y2=\"{F(y2)}\"{extra}/>");
+
+        public void TextAt(double x, double y, string text, string anchor = "start", double sizeMm = Text, string extra = "") =>
+            Ln($"<text x=\"{F(x)}\" y=\"{F(y)}\" font-size=\"{F(sizeMm)}\" text-anchor=\"{anchor}\"{extra}>{Xml(text)}</text>");
+
+        /// <summary>Text reading bottom to top, its baseline on the extension line.</summary>
+        public void Vertical(double x, double y, string text, string anchor) =>
+            TextAt(x + Text / 3, y, text, anchor, Text, $" transform=\"rotate(-90 {F(x + Text / 3)} {F(y)})\"");
+
+        public override string ToString() => sb.ToString();
     }
 
     /// <summary>A short label for a feature's ordinate.</summary>

@@ -7,7 +7,7 @@ namespace SlotArray.Reports;
 /// <summary>One file of the output folder: its name and the writer that fills it.</summary>
 /// <param name="Name">File name inside the folder, e.g. "design.json".</param>
 /// <param name="Write">Writes the file's bytes for a report to a stream.</param>
-public sealed record OutputFile(string Name, Action<DesignReport, Stream> Write)
+internal sealed record OutputFile(string Name, Action<DesignReport, Stream> Write)
 {
     /// <summary>
     /// For an entry that writes a varying set of files (drawing sheets, one DXF per face): the files for a report,
@@ -28,7 +28,7 @@ public sealed record OutputFile(string Name, Action<DesignReport, Stream> Write)
 /// if it is empty or holds nothing but files of this tool; otherwise the run fails before writing anything, naming the
 /// foreign entries (<see cref="OutputFolderCheck"/>, which commands also call before computing).
 /// </summary>
-public static class OutputFolder
+internal static class OutputFolder
 {
     /// <summary>The files of the output folder, in the order they are written.</summary>
     public static readonly IReadOnlyList<OutputFile> Files =

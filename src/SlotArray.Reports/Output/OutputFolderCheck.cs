@@ -21,7 +21,7 @@ public sealed class OutputFolderException(string message) : IOException(message)
 /// hidden files <c>.FILE.PID.tmp</c> of a run whose process PID no longer runs. An orphaned <c>.old</c> folder (a run
 /// killed between its two renames) is moved back into place when the output folder itself is missing.
 /// </remarks>
-public static partial class OutputFolderCheck
+internal static partial class OutputFolderCheck
 {
     /// <summary>The files the <c>tolerance</c> command writes.</summary>
     public static readonly IReadOnlyList<string> ToleranceFiles = ["tolerance.json", "tolerance.png", "sensitivity.csv"];

@@ -7,7 +7,7 @@ namespace SlotArray.Reports;
 /// <c>parts.csv</c>: the flare's and the filter's plates for the shop (RFC 4180, mm and degrees, positions from datum A
 /// as in <c>cutlist.csv</c>); written only when the spec has a flare or a filter.
 /// </summary>
-public static class PartsCsv
+internal static class PartsCsv
 {
     /// <summary>The file's text.</summary>
     /// <param name="report">The report (its <see cref="DesignReport.Parts"/>).</param>

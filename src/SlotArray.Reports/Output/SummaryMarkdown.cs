@@ -7,7 +7,7 @@ namespace SlotArray.Reports;
 /// <c>summary.md</c>: the human-readable report: inputs, key figures (units stated), the per-slot table, a
 /// pass/fail line per requirement, warnings, optional tolerance lines and the cautions. "\n" line ends.
 /// </summary>
-public static class SummaryMarkdown
+internal static class SummaryMarkdown
 {
     /// <summary>The caution printed when the report carries none of its own (issue 5, item 5).</summary>
     public const string StandardCaution =
@@ -16,9 +16,6 @@ public static class SummaryMarkdown
     /// <summary>Writes the summary of <paramref name="report"/>.</summary>
     public static void Write(DesignReport report, TextWriter writer)
     {
-        var g = report.Guide;
-        var i = report.Inputs;
-        bool tilt = CutListCsv.UsesTilt(report);
         void L(string line = "") { writer.Write(line); writer.Write('\n'); }
 
         L($"# {Escape(report.Name)}: slotted-waveguide array design");
@@ -28,8 +25,33 @@ public static class SummaryMarkdown
             L($"- not met: {Escape(q.Description)}: required {Escape(q.Required)}, achieved {Escape(q.Achieved)}");
         foreach (string x in report.SafetyExceedances) L($"- **SAFETY LIMIT EXCEEDED**: {Escape(x)}");
         L();
-        L("## Inputs");
+        WriteInputs(report, L);
+        WriteSlotData(report, L);
+        WriteKeyFigures(report, L);
         L();
+        if (report.Flare is { } flare) MarineSummary.WriteFlare(flare, report, s => L(s));
+        if (report.Pointing is { } pointing) MarineSummary.WritePointing(pointing, s => L(s));
+        MarineSummary.WriteParts(report.Parts, s => L(s));
+        if (report.Filter is { } flt) MarineSummary.WriteFilter(flt, report.FrequencyHz, s => L(s));
+        WriteScan(report, L);
+        L();
+        if (report.Coupling is { } coupling) CouplingSummary.Write(coupling, s => L(s));
+        L("## Requirements");
+        L();
+        if (report.Requirements.Count == 0) L("No requirements were given.");
+        foreach (var q in report.Requirements) L(RequirementLine(q));
+        L();
+        WriteSlotTable(report, L);
+        WriteNotes(report, L);
+    }
+
+    /// <summary>The inputs table.</summary>
+    private static void WriteInputs(DesignReport report, Action<string> L)
+    {
+        var g = report.Guide;
+        var i = report.Inputs;
+        L("## Inputs");
+        L("");
         L("| item | value |");
         L("| --- | --- |");
         L($"| guide | {Escape(g.Designation)}: a = {Invariant.Mm(g.A)} mm, b = {Invariant.Mm(g.B)} mm |");
@@ -42,24 +64,35 @@ public static class SummaryMarkdown
         L($"| slot model | {Escape(i.SlotModelName)} |");
         L($"| datum A | {Escape(report.Fabrication?.Datum ?? i.DatumDescription)} |");
         L($"| cut tolerance | ± {Invariant.Mm(i.CutTolerance)} mm |");
-        L();
+        L("");
+    }
+
+    /// <summary>The user's slot table, when the slots were designed from one.</summary>
+    private static void WriteSlotData(DesignReport report, Action<string> L)
+    {
         if (report.SlotData is { } sd)
         {
             L("## Slot data");
-            L();
+            L("");
             L($"The slots were designed from the table `{Escape(sd.File)}` (SHA-256 `{sd.Sha256}`), {Invariant.Int(sd.Rows)} rows: {Escape(sd.Range)}.");
             L($"Fit residuals (leave-one-out): L_r rms {Invariant.Fixed(sd.Residuals[0] * 100, 4)} %, max {Invariant.Fixed(sd.Residuals[1] * 100, 4)} %; g_r rms {Invariant.Fixed(sd.Residuals[2] * 100, 4)} %, max {Invariant.Fixed(sd.Residuals[3] * 100, 4)} %; y/g_r rms {Invariant.Fixed(sd.Residuals[4], 4)}, max {Invariant.Fixed(sd.Residuals[5], 4)}.");
             int outside = report.Slots.Count(s => s.OutsideSlotTable);
             if (outside > 0) L($"{Invariant.Int(outside)} slot(s) lie outside the table and were extrapolated (slots.extrapolate: true); they are marked \"outside table\" below and in the cut list.");
-            L();
+            L("");
             L("Provenance (the table's comment lines):");
-            L();
+            L("");
             foreach (string line in sd.Provenance) L($"> {Escape(line)}");
             if (sd.Provenance.Count == 0) L("> (the table has no comment lines)");
-            L();
+            L("");
         }
+    }
+
+    /// <summary>The key figures table: guide, termination, tube, pattern, match, EIRP, load, travelling wave.</summary>
+    private static void WriteKeyFigures(DesignReport report, Action<string> L)
+    {
+        var g = report.Guide;
         L("## Key figures");
-        L();
+        L("");
         var p = report.Pattern;
         var m = report.Match;
         L("| quantity | value | unit |");
@@ -76,6 +109,10 @@ public static class SummaryMarkdown
         }
         L($"| beam direction from broadside | {Invariant.Fixed(p.BeamDeg, 2)} | deg |");
         L($"| half-power beamwidth | {Invariant.Fixed(p.HpbwDeg, 2)} | deg |");
+        if (!double.IsNaN(p.TransverseFaceWidth))
+            L(double.IsNaN(p.TransverseHpbwLowerBoundDeg)
+                ? $"| transverse-plane (E-plane) half-power beamwidth, slotted face {Invariant.Mm(p.TransverseFaceWidth)} mm wide | no beam: wider than the front half-space | (see note) |"
+                : $"| transverse-plane (E-plane) half-power beamwidth, slotted face {Invariant.Mm(p.TransverseFaceWidth)} mm wide | ≥ {Invariant.Fixed(p.TransverseHpbwLowerBoundDeg, 1)} | deg (lower bound, see note) |");
         L($"| peak sidelobe (design level {Invariant.Fixed(p.DesignSidelobeDb, 1)} dB) | {Invariant.Fixed(p.PeakSidelobeDb, 2)} | dB |");
         L($"| first sidelobe | {Invariant.Fixed(p.FirstSidelobeDb, 2)} | dB |");
         L($"| directivity | {Invariant.Fixed(p.DirectivityDbi, 2)} | dBi |");
@@ -111,23 +148,28 @@ public static class SummaryMarkdown
             L($"| beam asked / achieved residual (pointing correction: {tw.PointingCorrection}) | {Invariant.Fixed(tw.BeamAskedDeg, 3)} / {Invariant.Fixed(tw.BeamResidualDeg, 3)} | deg |");
             L($"| slot spacing of the design{(tw.LoadAuto ? "; load chosen by load: auto" : "")} | {Invariant.Fixed(tw.SpacingM * 1e3, 3)} | mm |");
         }
-        L();
-        if (report.Flare is { } flare) MarineSummary.WriteFlare(flare, report, s => L(s));
-        if (report.Pointing is { } pointing) MarineSummary.WritePointing(pointing, s => L(s));
-        MarineSummary.WriteParts(report.Parts, s => L(s));
-        if (report.Filter is { } flt) MarineSummary.WriteFilter(flt, report.FrequencyHz, s => L(s));
-        WriteScan(report, L);
-        L();
-        if (report.Coupling is { } coupling) CouplingSummary.Write(coupling, s => L(s));
-        L("## Requirements");
-        L();
-        if (report.Requirements.Count == 0) L("No requirements were given.");
-        foreach (var q in report.Requirements) L(RequirementLine(q));
-        L();
+        if (!double.IsNaN(p.TransverseFaceWidth))
+        {
+            L("");
+            L("Transverse plane (perpendicular to the guide axis, the slots' E-plane): on an infinite ground plane a slot radiates "
+              + "uniformly over the half-space in this plane, so the beam here is set by the width w of the slotted face alone. "
+              + "Model: a lower bound, the uniform aperture of width w, HPBW ≥ 2 asin(0.443 λ/w) (about 50.8 λ/w deg for w ≫ λ; "
+              + "Balanis, Antenna Theory, 3rd ed., 2005, Table 12.1). Limit: the face is not uniformly lit; its edges diffract the "
+              + "slot's grazing field (GTD), which broadens and ripples the beam and radiates behind the tube, so the true beamwidth is "
+              + "wider; a face narrower than 0.443 λ forms no beam at all (the pattern wraps round the tube, as in an omnidirectional "
+              + "slotted tube). For sector and omnidirectional builds measure it or model the tube full-wave.");
+        }
+    }
+
+    /// <summary>The per-slot table (offset or tilt columns).</summary>
+    private static void WriteSlotTable(DesignReport report, Action<string> L)
+    {
+        var i = report.Inputs;
+        bool tilt = CutListCsv.UsesTilt(report);
         L("## Slots");
-        L();
+        L("");
         L($"Positions z from the {Escape(i.DatumDescription)} (z = 0; the cut list gives them from datum A, the tube's end face); {Invariant.Normalisation}; amplitudes linear, each normalised to its largest value; phase in degrees.");
-        L();
+        L("");
         if (tilt)
         {
             L("| slot | position (mm) | tilt (deg) | cut depth (mm) | length (mm) | overall (mm) | width (mm) | end | g | target amp. | achieved amp. | phase (deg) |");
@@ -145,25 +187,30 @@ public static class SummaryMarkdown
                 : $"{Invariant.Mm(s.Offset!.Value)} | {CutListCsv.Side(s.Offset.Value)}";
             L($"| {Invariant.Int(s.Index)}{(s.OutsideSlotTable ? " (outside table)" : "")} | {Invariant.Mm(s.Position)} | {mid} | {Invariant.Mm(s.Length)} | {Invariant.Mm(s.OverallLength)} | {Invariant.Mm(s.Width)} | {(s.EndForm == SlotEndForm.Round ? "round" : "square")} | {Invariant.Fixed(s.Conductance, 5)} | {Invariant.Fixed(s.TargetAmplitude, 4)} | {Invariant.Fixed(s.AchievedAmplitude, 4)} | {Invariant.Fixed(s.AchievedPhaseDeg, 2)} |");
         }
-        L();
+        L("");
+    }
+
+    /// <summary>Tolerance lines, warnings and cautions.</summary>
+    private static void WriteNotes(DesignReport report, Action<string> L)
+    {
         if (report.Tolerance.Count > 0)
         {
             L("## Tolerance");
-            L();
+            L("");
             foreach (string t in report.Tolerance) L($"- {Escape(t)}");
-            L();
+            L("");
         }
         L("## Warnings");
-        L();
+        L("");
         if (report.Warnings.Count == 0) L("None.");
         foreach (string w in report.Warnings) L($"- {Escape(w)}");
-        L();
+        L("");
         L("## Cautions");
-        L();
+        L("");
         var cautions = report.Cautions.Count > 0 ? report.Cautions : [StandardCaution];
         for (int k = 0; k < cautions.Count; k++)
         {
-            if (k > 0) L();
+            if (k > 0) L("");
             L(Escape(cautions[k]));
         }
     }

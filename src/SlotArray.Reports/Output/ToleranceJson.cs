@@ -10,7 +10,7 @@ namespace SlotArray.Reports;
 /// <c>tolerance.json</c>: the Monte Carlo statistics and the ranked sensitivities, keys with unit suffixes, numbers
 /// rounded to 6 decimals so that the same spec and seed give byte-identical files.
 /// </summary>
-public static class ToleranceJson
+internal static class ToleranceJson
 {
     /// <summary>Writes the document (UTF-8, indented, '\n' line ends).</summary>
     /// <param name="name">Array name.</param>
@@ -35,6 +35,13 @@ public static class ToleranceJson
             w.WriteStartObject(key);
             w.WriteNumber("value_mm", R(tol.Value.Millimeters));
             w.WriteString("law", tol.Distribution == ErrorDistribution.Normal ? "normal sigma" : "uniform +/-");
+            w.WriteEndObject();
+        }
+        if (t.Tilt.Value.Radians != 0)
+        {
+            w.WriteStartObject("tilt");
+            w.WriteNumber("value_deg", R(t.Tilt.Value.Degrees));
+            w.WriteString("law", t.Tilt.Distribution == ErrorDistribution.Normal ? "normal sigma" : "uniform +/-");
             w.WriteEndObject();
         }
         w.WriteNumber("systematic_length_mm", R(t.SystematicLength.Millimeters));
@@ -63,13 +70,14 @@ public static class ToleranceJson
             w.WriteStartObject();
             w.WriteNumber("slot", s.Slot);
             w.WriteString("quantity", QuantityName(s.Quantity));
-            w.WriteNumber("dsll_db_per_mm", R(s.DsllDbPerMm));
-            w.WriteNumber("ds11_db_per_mm", R(s.Ds11DbPerMm));
+            w.WriteNumber("dsll_db_per_" + s.Unit, R(s.DsllDbPerUnit));
+            w.WriteNumber("ds11_db_per_" + s.Unit, R(s.Ds11DbPerUnit));
             w.WriteEndObject();
         }
         w.WriteEndArray();
         w.WriteString("notes", "offset errors count positive away from the centreline, position errors toward +z; S11 at the design frequency; "
-            + "sensitivities by central differences of 0.01 mm on the nominal design with the slot model; " + Invariant.Normalisation);
+            + "sensitivities by central differences of 0.01 mm on the nominal design with the slot model (edge slots: tilt per degree, "
+            + "stepped by the angle that moves the slot's end 0.01 mm; depth of cut into each broad wall per mm); " + Invariant.Normalisation);
         w.WriteEndObject();
         w.Flush();
         stream.WriteByte((byte)'\n');
@@ -83,10 +91,11 @@ public static class ToleranceJson
         return System.Text.Encoding.UTF8.GetString(ms.ToArray());
     }
 
-    /// <summary>The spec's key of each random tolerance, in the spec's order.</summary>
+    /// <summary>The spec's key of each random length tolerance, in the spec's order (the edge slots' depth only when given; the tilt, an angle, apart).</summary>
     internal static IEnumerable<(string Key, MachiningTolerance Value)> Tolerances(ToleranceRequest t) =>
     [
         ("offset", t.Offset), ("length", t.Length), ("position", t.Position), ("width", t.Width), ("guide_width", t.GuideWidth), ("wall", t.Wall),
+        .. t.Depth.Value.Meters != 0 ? [("depth", t.Depth)] : Array.Empty<(string, MachiningTolerance)>(),
     ];
 
     /// <summary>The report name of a quantity.</summary>
@@ -95,6 +104,8 @@ public static class ToleranceJson
         ToleranceQuantity.Offset => "offset",
         ToleranceQuantity.Length => "length",
         ToleranceQuantity.Position => "position",
+        ToleranceQuantity.Tilt => "tilt",
+        ToleranceQuantity.Depth => "depth",
         _ => "width",
     };
 

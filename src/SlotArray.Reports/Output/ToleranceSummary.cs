@@ -6,7 +6,7 @@ using SlotArray.Core.Tolerance;
 namespace SlotArray.Reports;
 
 /// <summary>The tolerance result in plain words, for <c>summary.md</c> and the terminal.</summary>
-public static class ToleranceSummary
+internal static class ToleranceSummary
 {
     /// <summary>
     /// The lines: what was applied and how many builds meet the target ("with ±0.02 mm on offsets and lengths, 87 % of
@@ -28,7 +28,7 @@ public static class ToleranceSummary
             $"Random-error floor (Ruze 1966): {Invariant.Fixed(mc.AnalyticFloorDb, 1)} dB from the excitation errors the trials produced (σ_a = {Invariant.Fixed(100 * mc.AmplitudeErrorRms, 2)} %, σ_φ = {Invariant.Fixed(mc.PhaseErrorRms * 180 / Math.PI, 2)} deg); the Monte Carlo mean floor is {Invariant.Fixed(mc.MonteCarloFloorDb, 1)} dB.",
         };
         var most = result.Sensitivities.Take(top).Select(s =>
-            $"slot {Invariant.Int(s.Slot)} {ToleranceJson.QuantityName(s.Quantity)} ({Invariant.Fixed(s.DsllDbPerMm, 2)} dB of sidelobe per mm)").ToArray();
+            $"slot {Invariant.Int(s.Slot)} {ToleranceJson.QuantityName(s.Quantity)} ({Invariant.Fixed(s.DsllDbPerUnit, 2)} dB of sidelobe per {(s.Unit == "deg" ? "degree" : s.Unit)})").ToArray();
         if (most.Length > 0) lines.Add($"The dimensions that matter most: {string.Join(", ", most)}.");
         return lines;
     }
@@ -37,11 +37,13 @@ public static class ToleranceSummary
     public static string Applied(ToleranceRequest t)
     {
         ArgumentNullException.ThrowIfNull(t);
-        string[] nouns = ["offsets", "lengths", "positions", "widths", "the guide width", "the wall"];
+        string[] nouns = ["offsets", "lengths", "positions", "widths", "the guide width", "the wall", "depths of cut"];
         var groups = ToleranceJson.Tolerances(t).Select((p, i) => (p.Value, Noun: nouns[i])).Where(p => p.Value.Value.Meters != 0)
             .GroupBy(p => (p.Value.Value.Meters, p.Value.Distribution))
             .Select(g => $"{(g.Key.Distribution == ErrorDistribution.Normal ? "σ " : "±")}{Invariant.Mm(g.Key.Meters, 3).TrimEnd('0').TrimEnd('.')} mm on {Join(g.Select(p => p.Noun).ToList())}")
             .ToList();
+        if (t.Tilt.Value.Radians != 0)
+            groups.Add($"{(t.Tilt.Distribution == ErrorDistribution.Normal ? "σ " : "±")}{Invariant.Fixed(t.Tilt.Value.Degrees, 3).TrimEnd('0').TrimEnd('.')} deg on tilts");
         if (t.SystematicLength.Meters != 0) groups.Add($"every slot {Invariant.Mm(t.SystematicLength.Meters)} mm {(t.SystematicLength.Meters > 0 ? "long" : "short")}");
         if (t.SystematicOffset.Meters != 0) groups.Add($"every slot shifted {Invariant.Mm(t.SystematicOffset.Meters)} mm in x");
         return groups.Count == 0 ? "no machining errors" : Join(groups);

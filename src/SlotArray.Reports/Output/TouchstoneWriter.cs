@@ -10,7 +10,7 @@ namespace SlotArray.Reports;
 /// <c>R 1</c> (normalised impedance), so an overlay with a measured waveguide file shows no false mismatch.
 /// Frequencies in Hz with 3 decimals, S11 real and imaginary parts with 9 decimals, "\n" line ends.
 /// </summary>
-public static class TouchstoneWriter
+internal static class TouchstoneWriter
 {
     /// <summary>The option line: Hz, S-parameters, real/imaginary, reference resistance 1 (normalised).</summary>
     public const string OptionLine = "# Hz S RI R 1";

@@ -12,7 +12,7 @@ namespace SlotArray.Reports.Plots;
 /// The plots of the <c>design</c> output folder as OxyPlot models (exported by <see cref="PlotExport"/>):
 /// pattern, taper (designed vs achieved), slot dimensions, and the match sweep. Titles carry the array name.
 /// </summary>
-public static class DesignPlots
+internal static class DesignPlots
 {
     /// <summary>Far-field pattern cut in dB (−60…0 dB) vs angle from broadside, with the design sidelobe level dashed.</summary>
     public static PlotModel Pattern(DesignReport report)

@@ -8,7 +8,7 @@ namespace SlotArray.Reports.Plots;
 /// Exports an OxyPlot model to PNG or SVG through SkiaSharp (headless). The core OxyPlot SVG exporter
 /// mislays text, so the Skia one is used for both formats.
 /// </summary>
-public static class PlotExport
+internal static class PlotExport
 {
     /// <summary>The font every plot uses; DejaVu Sans ships with fonts-dejavu-core on Debian.</summary>
     public const string Font = "DejaVu Sans";

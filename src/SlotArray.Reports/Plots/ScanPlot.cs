@@ -10,7 +10,7 @@ namespace SlotArray.Reports.Plots;
 /// frequency axis, each with its own vertical axis and unit: beam direction (deg), half-power beamwidth (deg), peak
 /// sidelobe (dB), gain (dBi) and, for edge slots, the peak cross-polar level (dB).
 /// </summary>
-public static class ScanPlot
+internal static class ScanPlot
 {
     /// <summary>Pixel height of <c>scan.png</c> for <paramref name="report"/>: 200 px per panel plus the title and axis.</summary>
     public static int Height(DesignReport report) => 120 + 200 * Panels(report).Count;

@@ -9,7 +9,7 @@ namespace SlotArray.Reports.Plots;
 /// Plots of an aperture taper: the far-field pattern in dB against angle with the design sidelobe level drawn, and
 /// the element amplitudes. Exported through <see cref="PlotExport"/>.
 /// </summary>
-public static class TaperPlots
+internal static class TaperPlots
 {
     /// <summary>Pattern cut: relative level (dB, floored) against θ (deg from broadside), with the design level as a dashed line.</summary>
     /// <param name="title">Plot title.</param>

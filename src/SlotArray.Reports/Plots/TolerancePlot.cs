@@ -11,7 +11,7 @@ namespace SlotArray.Reports.Plots;
 /// <c>tolerance.png</c>: on the left the histogram of the trials' peak sidelobe with the target marked, on the right the
 /// envelope of the perturbed patterns (5–95 % band, median, highest level reached) over the nominal pattern.
 /// </summary>
-public static class TolerancePlot
+internal static class TolerancePlot
 {
     private static readonly OxyColor Grid = OxyColor.FromRgb(225, 225, 225);
 

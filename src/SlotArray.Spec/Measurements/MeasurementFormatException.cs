@@ -4,7 +4,7 @@ namespace SlotArray.Spec.Measurements;
 /// <param name="file">File name as given.</param>
 /// <param name="line">1-based line (0 when the problem is the file as a whole).</param>
 /// <param name="reason">What is wrong and what to write instead.</param>
-public sealed class MeasurementFormatException(string file, int line, string reason)
+internal sealed class MeasurementFormatException(string file, int line, string reason)
     : Exception(line > 0 ? FormattableString.Invariant($"{file}:{line}: {reason}") : $"{file}: {reason}")
 {
     /// <summary>File name.</summary>

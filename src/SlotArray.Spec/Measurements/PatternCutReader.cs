@@ -8,7 +8,7 @@ namespace SlotArray.Spec.Measurements;
 /// <param name="Frequency">Frequency of the cut, or null.</param>
 /// <param name="Plane">Plane, or null (default: the plane of the guide axis).</param>
 /// <param name="Polarisation">Polarisation, or null (default: co).</param>
-public sealed record CutDefaults(Frequency? Frequency = null, string? Plane = null, string? Polarisation = null);
+internal sealed record CutDefaults(Frequency? Frequency = null, string? Plane = null, string? Polarisation = null);
 
 /// <summary>What a cut file said about itself, to show back to the user.</summary>
 /// <param name="Frequency">Frequency and where it came from.</param>
@@ -16,7 +16,7 @@ public sealed record CutDefaults(Frequency? Frequency = null, string? Plane = nu
 /// <param name="Polarisation">Polarisation and where it came from.</param>
 /// <param name="Points">Number of angles.</param>
 /// <param name="HasPhase">Whether a phase column was read.</param>
-public sealed record CutHeader(string Frequency, string Plane, string Polarisation, int Points, bool HasPhase)
+internal sealed record CutHeader(string Frequency, string Plane, string Polarisation, int Points, bool HasPhase)
 {
     /// <summary>One line for the user.</summary>
     public string Describe() => $"pattern cut, {Points} angles (deg), level in dB{(HasPhase ? ", phase in deg" : ", no phase")}; frequency {Frequency}; plane {Plane}; polarisation {Polarisation}";
@@ -30,7 +30,7 @@ public sealed record CutHeader(string Frequency, string Plane, string Polarisati
 /// end (the end short or load), as in the tool's own pattern. Only co-polarised cuts in the plane of the guide axis are
 /// compared (the other plane is the element pattern alone and carries nothing about the slot excitations).
 /// </summary>
-public static class PatternCutReader
+internal static class PatternCutReader
 {
     /// <summary>Reads a file.</summary>
     /// <exception cref="MeasurementFormatException">The file is malformed (file:line: message).</exception>

@@ -12,7 +12,7 @@ namespace SlotArray.Spec.Schema;
 /// The schema is permissive where the parser is: it never refuses a spec the parser accepts (a quoted number, a word in
 /// another letter case), while the parser also checks what a schema cannot (ranges of dimensioned values, b &lt; a).
 /// </summary>
-public static class SpecJsonSchema
+internal static class SpecJsonSchema
 {
     /// <summary>The schema's identifier.</summary>
     public const string Id = "urn:slotarray:spec:1";

@@ -41,6 +41,16 @@ internal static class SpecKeys
 
     private static readonly AnyOfValue Tolerance = new([ToleranceLength, new BlockValue(Sigma)]);
 
+    private static readonly QuantityValue ToleranceAngle = Q(QuantityKind.Angle, "0 to 5 deg");
+
+    /// <summary><c>tolerance.tilt: {sigma: …}</c>: a normally distributed tilt error.</summary>
+    public static readonly SpecSection SigmaAngle = new("tolerance.tilt.sigma", "a normally distributed tilt error given by its standard deviation",
+    [
+        new("sigma", ToleranceAngle, "standard deviation of a normally distributed tilt error") { Required = true, Example = "0.05 deg" },
+    ]);
+
+    private static readonly AnyOfValue TiltTolerance = new([ToleranceAngle, new BlockValue(SigmaAngle)]);
+
     /// <summary><c>guide</c>: the waveguide or tube the slots are cut in.</summary>
     public static readonly SpecSection Guide = new("guide", "the waveguide or rectangular tube the slots are cut in",
     [
@@ -125,13 +135,17 @@ internal static class SpecKeys
     public static readonly SpecSection Systematic = new("tolerance.systematic", "the same error on every slot",
     [
         new("length", Q(QuantityKind.Length, "within ±10 mm"), "error added to every slot length") { Default = "0 mm" },
-        new("offset", Q(QuantityKind.Length, "within ±10 mm"), "error added to every slot offset") { Default = "0 mm" },
+        new("offset", Q(QuantityKind.Length, "within ±10 mm"), "broad-wall slots: error added to every slot offset") { Default = "0 mm" },
     ]);
 
     /// <summary><c>tolerance</c>: machining errors for the Monte Carlo analysis.</summary>
     public static readonly SpecSection ToleranceBlock = new("tolerance", "machining errors for the Monte Carlo analysis: '0.02 mm' is uniform ±, '{sigma: 0.02 mm}' normal",
     [
-        new("offset", Tolerance, "error of each slot's offset from the centreline") { DefaultText = "no error", Example = "0.02 mm" },
+        new("offset", Tolerance, "broad-wall slots: error of each slot's offset from the centreline") { DefaultText = "no error", Example = "0.02 mm" },
+        new("tilt", TiltTolerance, "edge slots: error of each slot's tilt")
+            { DefaultText = "no error (the cut list states ±0.025 mm at the slot's end, common practice)", Example = "0.1 deg" },
+        new("depth", Tolerance, "edge slots: error of each slot's depth of cut into each broad wall")
+            { DefaultText = "no error (the cut list states half the length tolerance, which keeps the cut path within it)", Example = "0.02 mm" },
         new("length", Tolerance, "error of each slot's length") { DefaultText = "no error", Example = "0.02 mm" },
         new("position", Tolerance, "error of each slot's position along the guide") { DefaultText = "no error", Example = "0.02 mm" },
         new("width", Tolerance, "error of each slot's width") { DefaultText = "no error", Example = "0.02 mm" },
@@ -230,5 +244,5 @@ internal static class SpecKeys
     ]);
 
     /// <summary>Every block, the top level first.</summary>
-    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, Requirements, Transmitter, Fabrication, Filter, Flare, Environment];
+    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, SigmaAngle, Requirements, Transmitter, Fabrication, Filter, Flare, Environment];
 }

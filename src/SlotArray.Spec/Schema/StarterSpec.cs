@@ -3,7 +3,7 @@ using System.Text;
 namespace SlotArray.Spec.Schema;
 
 /// <summary>The kinds of starter spec <c>slotarray init</c> writes.</summary>
-public enum StarterKind
+internal enum StarterKind
 {
     /// <summary>Longitudinal broad-wall slots, standing-wave, end-fed against a short.</summary>
     StandingWave,
@@ -18,7 +18,7 @@ public enum StarterKind
 /// line on what it does. Keys the kind uses carry the values of an invented scenario (which designs as written);
 /// the others are commented out with their default or a typical value. New keys appear here without further work.
 /// </summary>
-public static class StarterSpec
+internal static class StarterSpec
 {
     /// <summary>The kinds as written on the command line.</summary>
     public static IReadOnlyList<KeyValuePair<string, StarterKind>> Kinds { get; } =
@@ -142,6 +142,9 @@ public static class StarterSpec
                 common["name"] = "deck-radar-32";
                 common["frequency"] = "9.41 GHz"; common["band"] = "[9.35 GHz, 9.47 GHz]";
                 common["slots.type"] = "edge"; common["slots.count"] = "32";
+                // Edge slots' machining errors are the tilt and the depth of cut, not an offset.
+                common.Remove("tolerance.offset"); common.Remove("tolerance.systematic.offset");
+                common["tolerance.tilt"] = "0.1 deg"; common["tolerance.depth"] = "0.02 mm";
                 common["feed.type"] = "travelling-wave"; common["feed.spacing"] = "20 mm"; common["feed.load"] = "5 %";
                 common["taper.sidelobes"] = "-25 dB";
                 common["requirements.sidelobes"] = "-20 dB";

@@ -1,6 +1,7 @@
 using SlotArray.Core.Design;
 using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
+using SlotArray.Core.Slots;
 using SlotArray.Spec.Schema;
 
 namespace SlotArray.Spec.Yaml;
@@ -10,6 +11,7 @@ internal sealed partial class SpecBuilder
     private static IReadOnlyList<string> ToleranceKeys => SpecKeys.ToleranceBlock.Names;
     private static IReadOnlyList<string> SystematicKeys => SpecKeys.Systematic.Names;
     private static IReadOnlyList<string> SigmaKeys => SpecKeys.Sigma.Names;
+    private static IReadOnlyList<string> SigmaAngleKeys => SpecKeys.SigmaAngle.Names;
     private static IReadOnlyList<string> RequirementKeys => SpecKeys.Requirements.Names;
     private static IReadOnlyList<string> TransmitterKeys => SpecKeys.Transmitter.Names;
     private static IReadOnlyList<string> FabricationKeys => SpecKeys.Fabrication.Names;
@@ -18,15 +20,36 @@ internal sealed partial class SpecBuilder
     internal const int DefaultTrials = 1000, DefaultSeed = 1;
     /// <summary>Largest machining tolerance accepted (10 mm): beyond, a unit is surely wrong.</summary>
     private const double MaxTolerance = 0.01;
+    /// <summary>Largest tilt tolerance accepted (5°, a sixth of the edge slot's largest tilt): beyond, a unit is surely wrong.</summary>
+    private const double MaxTiltTolerance = 5 * Math.PI / 180;
 
-    /// <summary>Tolerance block (optional): each error `0.02 mm` (uniform ±) or `{sigma: 0.02 mm}` (normal), absent = none.</summary>
-    private ToleranceRequest? Tolerance(Section root, out bool ok)
+    /// <summary>
+    /// Tolerance block (optional): each error `0.02 mm` (uniform ±) or `{sigma: 0.02 mm}` (normal), absent = none; the
+    /// tilt an angle (`0.1 deg`). The errors must be the slots' own: an offset for broad-wall slots, a tilt and a depth of
+    /// cut for edge slots. A key for the other kind is refused rather than ignored: an engineer who writes it expects it
+    /// in the Monte Carlo, and a yield computed without it would be read as covering it.
+    /// </summary>
+    private ToleranceRequest? Tolerance(Section root, SlotType? slotType, out bool ok)
     {
         ok = true;
         if (!root.Has("tolerance")) return null;
         var s = Sub(root, "tolerance", ToleranceKeys, false);
         if (s is null) { ok = false; return null; }
+        bool kindOk = true;
+        if (slotType == SlotType.Edge)
+        {
+            kindOk &= Require(s, "offset", !s.Has("offset"),
+                "edge slots have no offset: their machining errors are the tilt and the depth of cut; write e.g. 'tilt: 0.1 deg' and 'depth: 0.02 mm' instead of 'offset'");
+        }
+        else if (slotType is not null)
+        {
+            foreach (string key in new[] { "tilt", "depth" })
+                kindOk &= Require(s, key, !s.Has(key),
+                    $"'{key}' applies to edge slots only; broad-wall slots' machining errors are offset, length, position and width: remove '{key}' (or give 'offset')");
+        }
         var offset = OneTolerance(s, "offset");
+        var tilt = TiltTolerance(s);
+        var depth = OneTolerance(s, "depth");
         var length = OneTolerance(s, "length");
         var position = OneTolerance(s, "position");
         var width = OneTolerance(s, "width");
@@ -41,6 +64,9 @@ internal sealed partial class SpecBuilder
             {
                 sysLength = sys.Has("length") ? Quantity(sys, "length", QuantityKind.Length, false, "0.01 mm") : 0;
                 sysOffset = sys.Has("offset") ? Quantity(sys, "offset", QuantityKind.Length, false, "0.01 mm") : 0;
+                if (slotType == SlotType.Edge && !Require(sys, "offset", !sys.Has("offset"),
+                        "edge slots have no offset: remove 'systematic.offset' (a systematic error of edge slots is a length: 'systematic: {length: …}')"))
+                    sysOffset = null;
                 if (sysLength is not null && !Require(sys, "length", Math.Abs(sysLength.Value) <= MaxTolerance, $"'length' must be within ±10 mm, got {Mm(sysLength.Value)}")) sysLength = null;
                 if (sysOffset is not null && !Require(sys, "offset", Math.Abs(sysOffset.Value) <= MaxTolerance, $"'offset' must be within ±10 mm, got {Mm(sysOffset.Value)}")) sysOffset = null;
             }
@@ -48,42 +74,58 @@ internal sealed partial class SpecBuilder
         int? trials = s.Has("trials") ? Integer(s, "trials", false, SpecKeys.MinTrials, SpecKeys.MaxTrials, "2000") : DefaultTrials;
         int? seed = s.Has("seed") ? Integer(s, "seed", false, 0, int.MaxValue, "7") : DefaultSeed;
         if (offset is null || length is null || position is null || width is null || guideWidth is null || wall is null
-            || sysLength is null || sysOffset is null || trials is null || seed is null)
+            || tilt is null || depth is null || !kindOk || sysLength is null || sysOffset is null || trials is null || seed is null)
         {
             ok = false;
             return null;
         }
         return new ToleranceRequest(offset, length, position, width, guideWidth, wall,
-            Length.FromMeters(sysLength.Value), Length.FromMeters(sysOffset.Value), trials.Value, seed.Value);
+            Length.FromMeters(sysLength.Value), Length.FromMeters(sysOffset.Value), trials.Value, seed.Value) { Tilt = tilt, Depth = depth };
+    }
+
+    /// <summary>The tilt error: `0.1 deg` (uniform ±) or `{sigma: 0.05 deg}` (normal), absent = none.</summary>
+    private AngleTolerance? TiltTolerance(Section s)
+    {
+        if (!s.Has("tilt")) return AngleTolerance.None;
+        var e = Error(s, "tilt", QuantityKind.Angle, SigmaAngleKeys, MaxTiltTolerance, "0.1 deg", v => $"between 0 and 5 deg, got {Num(v * 180 / Math.PI)} deg");
+        return e is { } x ? new AngleTolerance(Angle.FromRadians(x.Value), x.Law) : null;
     }
 
     private MachiningTolerance? OneTolerance(Section s, string key)
     {
-        var node = s[key];
-        if (node is null) return MachiningTolerance.None;
+        if (!s.Has(key)) return MachiningTolerance.None;
+        var e = Error(s, key, QuantityKind.Length, SigmaKeys, MaxTolerance, "0.02 mm", v => $"between 0 and 10 mm, got {Mm(v)}");
+        return e is { } x ? new MachiningTolerance(Length.FromMeters(x.Value), x.Law) : null;
+    }
+
+    /// <summary>One machining error, SI: a quantity (uniform ±) or `{sigma: …}` (normal), 0 to <paramref name="max"/>; null after an error.</summary>
+    private (double Value, ErrorDistribution Law)? Error(Section s, string key, QuantityKind kind, IReadOnlyList<string> sigmaKeys, double max,
+        string example, Func<double, string> range)
+    {
+        var node = s[key]!;
         Current = node;
         double? v;
         ErrorDistribution law;
         Section? sigma = null;
         if (node is MappingNode)
         {
-            sigma = Sub(s, key, SigmaKeys, false);
+            sigma = Sub(s, key, sigmaKeys, false);
             if (sigma is null) return null;
-            v = Quantity(sigma, "sigma", QuantityKind.Length, true, "0.02 mm");
+            v = Quantity(sigma, "sigma", kind, true, example);
             law = ErrorDistribution.Normal;
         }
         else
         {
-            v = Quantity(s, key, QuantityKind.Length, false, "0.02 mm");
+            v = Quantity(s, key, kind, false, example);
             law = ErrorDistribution.Uniform;
         }
         if (v is null) return null;
-        if (!(v >= 0 && v <= MaxTolerance))
+        if (!(v >= 0 && v <= max))
         {
-            D.Error((SpecNode?)sigma?["sigma"] ?? node, $"'{key}' tolerance must be between 0 and 10 mm, got {Mm(v.Value)}");
+            D.Error((SpecNode?)sigma?["sigma"] ?? node, $"'{key}' tolerance must be {range(v.Value)}");
             return null;
         }
-        return new MachiningTolerance(Length.FromMeters(v.Value), law);
+        return (v.Value, law);
     }
 
     /// <summary>Requirements (optional): sidelobes and cross_polar in dB (negative), vswr &gt; 1 (a number, or '1.5:1').</summary>

@@ -55,7 +55,7 @@ internal sealed partial class SpecBuilder
         if (coupling == CouplingMode.Mutual && slots?.Type == SlotType.Edge && !Require(s, "coupling", false,
                 "'coupling: mutual' is designed for broad-wall (longitudinal) slots only; edge slots have no coupled designer yet: write 'coupling: none'"))
             coupling = null;
-        var tolerance = Tolerance(s, out bool toleranceOk);
+        var tolerance = Tolerance(s, slots?.Type, out bool toleranceOk);
         var requirements = Requirements(s);
         var transmitter = Transmitter(s, out bool transmitterOk);
         double margin = Fabrication(s, out bool fabricationOk);

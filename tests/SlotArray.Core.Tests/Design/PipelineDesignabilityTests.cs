@@ -85,7 +85,7 @@ public class PipelineDesignabilityTests
         // and a Taylor n̄ far above 4A²: every warning they raise is read by the user.
         var slot = new StevensonTestSlot(Wr90, Width);
         var warnings = new List<DesignWarning>();
-        warnings.AddRange(StandingWaveDesigner.Design(Request(8, spacing: 0.9), slot, Uniform(8)).Warnings);
+        warnings.AddRange(StandingWaveDesigner.Design(StickRequest.Of(Request(8, spacing: 0.9), slot, Uniform(8))).Design.Warnings);
         warnings.AddRange(TaperSynthesis.Synthesize(new TaperRequest(TaperType.Chebyshev, -20, 4, -20, 2, null), 60).Warnings);
         warnings.AddRange(TaperSynthesis.Synthesize(new TaperRequest(TaperType.Taylor, -20, 12, -20, 2, null), 40).Warnings);
         Assert.Contains(warnings, w => w.Code == "grating-lobe");

@@ -19,7 +19,7 @@ public class StandingWaveDesignerTests
     [Fact]
     public void Uniform_ten_slot_array_matches_the_reference_offsets_spacing_and_short()
     {
-        var d = StandingWaveDesigner.Design(Request(10), Slot, Uniform(10));
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(10), Slot, Uniform(10))).Design;
 
         Check.Absolute(1.0, d.TotalConductance, 1e-12, "Σ g_n = 1 by construction (Elliott 1981, Ch. 8 match rule)");
         Check.Absolute(22.3714e-3, d.Spacing.Meters, 0.5e-7, Ref51 + ": λg/2");
@@ -46,7 +46,7 @@ public class StandingWaveDesignerTests
         // Elliott 1981, Ch. 8 [N]: |x_n| = 1.09428, 1.45128, 2.02898, 2.56950, 2.86456 mm (symmetric); the given g_n
         // carry 4–5 digits, so the offsets agree to about 1e-4 relative.
         double[] x = [1.09428, 1.45128, 2.02898, 2.56950, 2.86456];
-        var d = StandingWaveDesigner.Design(Request(10), Slot, Taylor25Amplitudes);
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(10), Slot, Taylor25Amplitudes)).Design;
         Check.Absolute(1.0, d.TotalConductance, 1e-12, "Σ g_n = 1 (Elliott 1981, Ch. 8)");
         for (int i = 0; i < 10; i++)
         {
@@ -59,7 +59,7 @@ public class StandingWaveDesignerTests
     [Fact]
     public void Three_quarter_wave_short_is_placed_33_5572_mm_beyond_the_last_slot()
     {
-        var d = StandingWaveDesigner.Design(Request(10, shortDistance: 0.75), Slot, Uniform(10));
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(10, shortDistance: 0.75), Slot, Uniform(10))).Design;
         Check.Absolute(33.5572e-3, d.NearTermination.Distance.Meters, 0.5e-7, "Elliott 1981, Ch. 8 [N]: 3λg/4");
         Check.Absolute(33.5572e-3, d.Slots[0].Position.Meters, 0.5e-7, "slot 1 at the short distance from the datum");
         Assert.Empty(d.Warnings);
@@ -69,7 +69,7 @@ public class StandingWaveDesignerTests
     public void A_negative_amplitude_flips_the_offset_side_of_that_slot_only()
     {
         double[] a = [1, 1, -1, 1];
-        var d = StandingWaveDesigner.Design(Request(4), Slot, a);
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(4), Slot, a)).Design;
         Assert.Equal([1, -1, -1, -1], d.Slots.Select(s => Math.Sign(s.Coupling)));
         Assert.Equal(-1.0, d.Slots[2].TargetAmplitude);
     }
@@ -77,7 +77,7 @@ public class StandingWaveDesignerTests
     [Fact]
     public void Centre_fed_design_has_two_shorted_halves_and_the_junction_midway()
     {
-        var d = StandingWaveDesigner.Design(Request(10, FeedPosition.Centre), Slot, Uniform(10));
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(10, FeedPosition.Centre), Slot, Uniform(10))).Design;
         Assert.Equal(FeedPosition.Centre, d.Feed);
         Assert.NotNull(d.FarTermination);
         Check.Absolute(11.1857e-3, d.FarTermination!.Distance.Meters, 0.5e-7, Ref51 + ": λg/4 short at each end");
@@ -92,7 +92,7 @@ public class StandingWaveDesignerTests
     public void A_slot_needing_more_than_the_maximum_conductance_is_named_with_the_numbers()
     {
         // g_3 = 9/12 = 0.75; the double's maximum at x = 5 mm is 0.49776 (Stevenson 1948 table [N]).
-        var e = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(Request(4), Slot, [1, 1, 3, 1]));
+        var e = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(StickRequest.Of(Request(4), Slot, [1, 1, 3, 1])).Design);
         Assert.Contains("slot 3 needs g = 0.750", e.Message);
         Assert.Contains("above the 0.498", e.Message);
         Assert.Contains("9.375 GHz", e.Message);
@@ -103,11 +103,11 @@ public class StandingWaveDesignerTests
     [Fact]
     public void Taper_the_slot_count_cannot_realise_is_rejected_with_what_to_change()
     {
-        var count = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(Request(10), Slot, Uniform(8)));
+        var count = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(StickRequest.Of(Request(10), Slot, Uniform(8))).Design);
         Assert.Contains("8 amplitudes but the array has 10 slots", count.Message);
-        var zero = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(Request(4), Slot, [1, 0, 1, 1]));
+        var zero = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(StickRequest.Of(Request(4), Slot, [1, 0, 1, 1])).Design);
         Assert.Contains("slot 2 has amplitude 0", zero.Message);
-        var odd = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(Request(9, FeedPosition.Centre), Slot, Uniform(9)));
+        var odd = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(StickRequest.Of(Request(9, FeedPosition.Centre), Slot, Uniform(9))).Design);
         Assert.Contains("use 8 or 10 slots", odd.Message);
     }
 
@@ -115,10 +115,10 @@ public class StandingWaveDesignerTests
     public void Spacing_off_half_guide_wavelength_and_grating_lobes_are_warned()
     {
         // 0.75 λg = 33.56 mm > λ = 31.98 mm: grating lobes (Elliott 1981, Ch. 8 rule d < λ).
-        var d = StandingWaveDesigner.Design(Request(4, spacing: 0.75), Slot, Uniform(4));
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(4, spacing: 0.75), Slot, Uniform(4))).Design;
         Assert.Contains(d.Warnings, w => w.Code == "grating-lobe");
         Assert.Contains(d.Warnings, w => w.Code == "spacing-not-half-guide-wavelength");
-        var s = StandingWaveDesigner.Design(Request(4, shortDistance: 0.3), Slot, Uniform(4));
+        var s = StandingWaveDesigner.Design(StickRequest.Of(Request(4, shortDistance: 0.3), Slot, Uniform(4))).Design;
         Assert.Contains(s.Warnings, w => w.Code == "short-not-odd-quarter-wave");
     }
 
@@ -126,13 +126,13 @@ public class StandingWaveDesignerTests
     public void A_travelling_wave_request_is_not_accepted()
     {
         var r = Request(4) with { Feed = Request(4).Feed with { Type = FeedType.TravellingWave } };
-        Assert.Throws<ArgumentException>(() => StandingWaveDesigner.Design(r, Slot, Uniform(4)));
+        Assert.Throws<ArgumentException>(() => StandingWaveDesigner.Design(StickRequest.Of(r, Slot, Uniform(4))).Design);
     }
 
     [Fact]
     public void A_slot_model_for_another_guide_is_not_accepted()
     {
-        var e = Assert.Throws<ArgumentException>(() => StandingWaveDesigner.Design(Request(4), new StevensonTestSlot(Wr90Lossless, Width), Uniform(4)));
+        var e = Assert.Throws<ArgumentException>(() => StandingWaveDesigner.Design(StickRequest.Of(Request(4), new StevensonTestSlot(Wr90Lossless, Width), Uniform(4))).Design);
         Assert.Contains("slot model is for the guide", e.Message);
     }
 }

@@ -42,8 +42,8 @@ public class ElliottDesignerTests
         // offset-independent resonant length (the test double) the targets f_n|a_n|/Σ f|a| equal a_n²/Σ a² (Elliott 1981, Ch. 8).
         var slot = new StevensonTestSlot(Wr90, Width);
         var request = Request(10, feed);
-        var plain = StandingWaveDesigner.Design(request, slot, Taylor25Amplitudes);
-        var r = ElliottDesigner.Design(request, slot, Taylor25Amplitudes, new ElliottOptions(Coupling: CoupledSlotImpedances.None));
+        var plain = StandingWaveDesigner.Design(StickRequest.Of(request, slot, Taylor25Amplitudes)).Design;
+        var r = ElliottDesigner.Design(StickRequest.Of(request, slot, Taylor25Amplitudes), new ElliottOptions(Coupling: CoupledSlotImpedances.None));
         for (int i = 0; i < 10; i++)
         {
             Check.Absolute(plain.Slots[i].Coupling, r.Design.Slots[i].Coupling, 1e-9, "isolated-slot design, Elliott 1981, Ch. 8 (1e-6 mm)");
@@ -65,7 +65,7 @@ public class ElliottDesignerTests
         // analysis (the same (E2) structure, Elliott 1983). Lossless line: equal mode voltages (Elliott 1983).
         var slot = new StevensonTestSlot(Wr90Lossless, Width, maximumCoupling: 6e-3);
         var a = Taylor(n, sll);
-        var r = ElliottDesigner.Design(Request(n, guide: Wr90Lossless), slot, a);
+        var r = ElliottDesigner.Design(StickRequest.Of(Request(n, guide: Wr90Lossless), slot, a));
         var last = r.Iterations[^1];
         Assert.True(Math.Max(last.MaximumOffsetChange, last.MaximumLengthChange) < r.Tolerance);
         Assert.Equal(Enumerable.Range(1, r.Iterations.Count), r.Iterations.Select(i => i.Index));
@@ -84,7 +84,7 @@ public class ElliottDesignerTests
         // The moment-method slot through the spline surrogate; checked with direct solves in the coupled analysis.
         var mom = new MomentMethodSlotModel(Wr90Lossless, Width);
         var a = Uniform(6);
-        var r = ElliottDesigner.Design(Request(6, guide: Wr90Lossless), mom, a);
+        var r = ElliottDesigner.Design(StickRequest.Of(Request(6, guide: Wr90Lossless), mom, a));
         Assert.True(r.SurrogateError < 5e-3, $"surrogate error {r.SurrogateError:G3}");
         var s = CoupledArrayNetwork.Solve(r.Design, mom, F0);
         Assert.True(20 * Math.Log10(s.S11.Magnitude) < -30, $"S11 = {20 * Math.Log10(s.S11.Magnitude):0.0} dB");
@@ -113,7 +113,7 @@ public class ElliottDesignerTests
     {
         var slot = new StevensonTestSlot(Wr90, Width);
         var e = Assert.Throws<ConvergenceException>(() =>
-            ElliottDesigner.Design(Request(10), slot, Taylor25Amplitudes, new ElliottOptions(MaximumIterations: 1)));
+            ElliottDesigner.Design(StickRequest.Of(Request(10), slot, Taylor25Amplitudes), new ElliottOptions(MaximumIterations: 1)));
         Assert.Contains("slot ", e.Message);
         Assert.True(e.Residual > 1e-7);
     }
@@ -123,9 +123,9 @@ public class ElliottDesignerTests
     {
         // Uniform 6: the isolated design needs |x| = 2.75 mm class offsets; coupling raises them (inner slots most).
         var probe = new StevensonTestSlot(Wr90, Width);
-        double x0 = Math.Abs(StandingWaveDesigner.Design(Request(6), probe, Uniform(6)).Slots[0].Coupling);
+        double x0 = Math.Abs(StandingWaveDesigner.Design(StickRequest.Of(Request(6), probe, Uniform(6))).Design.Slots[0].Coupling);
         var slot = new StevensonTestSlot(Wr90, Width, maximumCoupling: 1.002 * x0);
-        var e = Assert.Throws<InfeasibleDesignException>(() => ElliottDesigner.Design(Request(6), slot, Uniform(6)));
+        var e = Assert.Throws<InfeasibleDesignException>(() => ElliottDesigner.Design(StickRequest.Of(Request(6), slot, Uniform(6))));
         Assert.Contains("slot ", e.Message);
     }
 }

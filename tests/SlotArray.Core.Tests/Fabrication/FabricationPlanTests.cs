@@ -95,7 +95,21 @@ public class FabricationPlanTests
         Assert.StartsWith("spec tolerance.length: ±2σ", t.Length.Source);
         Check.Absolute(0.025, t.Position.Value * 1e3, 1e-12, "no position tolerance: the default");
         Assert.Contains("common practice, no source", t.Position.Source);
-        Check.Absolute(0.015, t.CutDepth.Value * 1e3, 1e-12, "half the length tolerance");
+        Check.Absolute(0.015, t.CutDepth.Value * 1e3, 1e-12, "no tolerance.depth: half the length tolerance (cut path b/cos θ + 2(D − t))");
+        Assert.Null(t.Tilt);
+        // No tolerance.tilt: the default ±0.025 mm at the end of a 16 mm slot, δθ = δx/(L/2) (common practice, no source).
+        Check.Absolute(0.025 / 8, t.TiltFor(Mm(16)).Value, 1e-15, "default milling tolerance at the slot's end");
+        Assert.Contains("common practice, no source", t.TiltFor(Mm(16)).Source);
+
+        var edge = FeatureTolerances.From(spec with
+        {
+            Tilt = new AngleTolerance(Angle.FromDegrees(0.1), ErrorDistribution.Uniform),
+            Depth = new MachiningTolerance(Mm(0.01), ErrorDistribution.Normal),
+        });
+        Check.Absolute(0.1, edge.TiltFor(Mm(16)).Value * 180 / Math.PI, 1e-12, "tolerance.tilt, uniform ±, the same for every slot");
+        Assert.Equal("spec tolerance.tilt (uniform ±)", edge.TiltFor(Mm(16)).Source);
+        Check.Absolute(0.02, edge.CutDepth.Value * 1e3, 1e-12, "tolerance.depth: ±2σ of σ = 0.01 mm");
+        Assert.StartsWith("spec tolerance.depth: ±2σ", edge.CutDepth.Source);
     }
 
     [Fact]

@@ -77,7 +77,7 @@ public class SlotClearanceTests
         // The old neighbour check compared a tilt in radians with a width in metres, so these designed (exit 0).
         var request = Request(8, spacing: 0.07) with { Slots = new SlotRequest(SlotType.Edge, 8, W, null, SlotModelKind.MomentMethod) };
         var slot = EdgeSlot.Create(Wr90, W);
-        var e = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(request, slot, Uniform(8)));
+        var e = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(StickRequest.Of(request, slot, Uniform(8))).Design);
         Assert.Contains("meet on the narrow wall", e.Message, StringComparison.Ordinal);
     }
 
@@ -88,8 +88,7 @@ public class SlotClearanceTests
         // longer tip to tip than its equivalent length, so each end reaches 0.322 mm further.
         var width = Length.FromMillimeters(3);
         var slot = new StevensonTestSlot(Wr90, width);
-        var square = StandingWaveDesigner.Design(Request(4) with { Slots = new SlotRequest(SlotType.Longitudinal, 4, width, null, SlotModelKind.Stevenson) },
-            slot, Uniform(4));
+        var square = StandingWaveDesigner.Design(StickRequest.Of(Request(4) with { Slots = new SlotRequest(SlotType.Longitudinal, 4, width, null, SlotModelKind.Stevenson) }, slot, Uniform(4))).Design;
         double half = square.Slots[0].Length.Meters / 2;
         var shortDistance = GuideDistance.OfLength(Length.FromMeters(half + 0.15e-3));   // clear of the equivalent length, not of the round end
         var squareRequest = Request(4) with
@@ -97,9 +96,9 @@ public class SlotClearanceTests
             Slots = new SlotRequest(SlotType.Longitudinal, 4, width, null, SlotModelKind.Stevenson),
             Feed = Request(4).Feed with { ShortDistance = shortDistance },
         };
-        StandingWaveDesigner.Design(squareRequest, slot, Uniform(4));   // square ends fit
+        _ = StandingWaveDesigner.Design(StickRequest.Of(squareRequest, slot, Uniform(4)));   // square ends fit
         var round = squareRequest with { Slots = squareRequest.Slots with { Cutter = width } };
-        var e = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(round, slot, Uniform(4)));
+        var e = Assert.Throws<InfeasibleDesignException>(() => StandingWaveDesigner.Design(StickRequest.Of(round, slot, Uniform(4))).Design);
         Assert.Contains("past the end short", e.Message, StringComparison.Ordinal);
         Assert.Contains("feed.short", e.Message, StringComparison.Ordinal);
     }

@@ -17,14 +17,14 @@ public class ArrayFiguresTests
         // IEEE Std 145-2013 directivity [N]: N = 10 uniform, d = 0.69959 λ (= λg/2 at 9.375 GHz in WR-90), half-wave slot
         // element, half-space: D = 28.420. Lossless and matched: gain = D.
         var slot = StevensonTestSlot.FrequencyIndependent(Wr90Lossless, Width, F0);
-        var d = StandingWaveDesigner.Design(Request(10, guide: Wr90Lossless), slot, Uniform(10));
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(10, guide: Wr90Lossless), slot, Uniform(10))).Design;
         var fig = ArrayFigures.At(d, ArrayNetwork.Solve(d, slot, F0));
         Check.Relative(28.420, fig.Directivity, 2e-5, "IEEE Std 145-2013 directivity [N]");
         Check.Relative(28.420, fig.Gain, 2e-5, "lossless, matched: gain = directivity");
         Check.Absolute(0, fig.Metrics.BeamDirection.Degrees, 1e-6, "resonant array: broadside beam (Elliott 1981, Ch. 8)");
         // Aluminium walls: gain = D × radiated fraction of the incident power (definition, issue 5 item 3).
         var lossySlot = new StevensonTestSlot(Wr90, Width);
-        var lossy = StandingWaveDesigner.Design(Request(10), lossySlot, Uniform(10));
+        var lossy = StandingWaveDesigner.Design(StickRequest.Of(Request(10), lossySlot, Uniform(10))).Design;
         var lf = ArrayFigures.At(lossy, ArrayNetwork.Solve(lossy, lossySlot, F0));
         Check.Relative(lf.Directivity * lf.Network.RadiationEfficiency * (1 - lf.Network.ReflectedPower), lf.Gain, 1e-12, "G = D η (1 − |S11|²)");
         Assert.True(lf.Gain < lf.Directivity);
@@ -38,7 +38,7 @@ public class ArrayFiguresTests
         // Elliott 1981, Ch. 8 [N]: alternating offsets, d = λg0/2 = 22.3714 mm: 9.0 GHz → −3.412°, 9.75 GHz → +3.030°,
         // positive toward the load end (architecture.md "Axes"). Weak slots (g = 0.02) keep slot reflections small.
         var slot = StevensonTestSlot.FrequencyIndependent(Wr90Lossless, Width, F0);
-        var design = StandingWaveDesigner.Design(Request(50, guide: Wr90Lossless), slot, Uniform(50));
+        var design = StandingWaveDesigner.Design(StickRequest.Of(Request(50, guide: Wr90Lossless), slot, Uniform(50))).Design;
         design = design with { NearTermination = Termination.MatchedLoadAt(design.NearTermination.Distance) };
         var fig = ArrayFigures.At(design, ArrayNetwork.Solve(design, slot, Frequency.FromGigahertz(ghz)));
         Check.Absolute(degrees, fig.Metrics.BeamDirection.Degrees, 0.02, "Elliott 1981, Ch. 8 [N] travelling-wave beam");
@@ -48,7 +48,7 @@ public class ArrayFiguresTests
     public void Sweep_figures_cover_every_point_and_the_design_frequency()
     {
         var slot = new StevensonTestSlot(Wr90, Width);
-        var d = StandingWaveDesigner.Design(Request(10), slot, Taylor25Amplitudes);
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(10), slot, Taylor25Amplitudes)).Design;
         var sweep = ArrayNetwork.Sweep(d, slot, Frequency.FromGigahertz(9.2), Frequency.FromGigahertz(9.55), 8);
         var (atDesign, points) = ArrayFigures.ForSweep(d, sweep);
         Assert.Equal(8, points.Count);

@@ -25,7 +25,7 @@ public class ArrayNetworkTests
     public void Radiated_plus_wall_loss_plus_load_plus_reflected_is_the_incident_power(FeedPosition feed, bool taylor, string end)
     {
         var slot = new StevensonTestSlot(Wr90, Width, maximumCoupling: 8e-3);
-        var d = StandingWaveDesigner.Design(Request(10, feed), slot, taylor ? Taylor25Amplitudes : Uniform(10));
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(10, feed), slot, taylor ? Taylor25Amplitudes : Uniform(10))).Design;
         d = end switch
         {
             "matched" => d with { NearTermination = Termination.MatchedLoadAt(Length.FromMillimeters(40)) },
@@ -48,14 +48,14 @@ public class ArrayNetworkTests
     {
         // Elliott 1981, Ch. 8 [M]: all slots resonant, Σ g = 1 (per half), short λg/4 → y_in = 1. Lossless line: exact.
         var slot = new StevensonTestSlot(Wr90Lossless, Width);
-        var d = StandingWaveDesigner.Design(Request(16, feed, Wr90Lossless), slot, Uniform(16));
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(16, feed, Wr90Lossless), slot, Uniform(16))).Design;
         var s = ArrayNetwork.Solve(d, slot, F0);
         Check.Absolute(0, s.S11.Magnitude, 1e-9, "Elliott 1981, Ch. 8: resonant array matched at f0");
         Check.Absolute(1, s.RadiatedPower, 1e-9, "lossless: all power radiated");
         if (feed == FeedPosition.End)   // derived: each section looks into a real y ≤ 1, so its voltage maximum is at a slot, where |V| = 1
             Check.Absolute(1, s.PeakModeVoltage, 1e-9, "matched resonant line: peak |V| equals the incident wave's");
         // Aluminium walls: the loss unbalances the mode voltages slightly; the match stays better than 40 dB return loss.
-        var lossy = StandingWaveDesigner.Design(Request(16, feed), new StevensonTestSlot(Wr90, Width), Uniform(16));
+        var lossy = StandingWaveDesigner.Design(StickRequest.Of(Request(16, feed), new StevensonTestSlot(Wr90, Width), Uniform(16))).Design;
         Assert.True(ArrayNetwork.Solve(lossy, new StevensonTestSlot(Wr90, Width), F0).ReturnLossDb > 40);
     }
 
@@ -70,7 +70,7 @@ public class ArrayNetworkTests
         var slot = new StevensonTestSlot(Wr90Lossless, Width);
         var a = Taylor25Amplitudes;
         a[3] = -a[3];
-        var d = StandingWaveDesigner.Design(Request(10, feed, Wr90Lossless), slot, a);
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(10, feed, Wr90Lossless), slot, a)).Design;
         var s = ArrayNetwork.Solve(d, slot, F0);
         var reference = s.Excitations[0] / a[0];
         for (int i = 0; i < 10; i++)
@@ -86,7 +86,7 @@ public class ArrayNetworkTests
     public void Slot_admittances_are_evaluated_at_each_slots_geometry_and_frequency()
     {
         var slot = new StevensonTestSlot(Wr90, Width);
-        var d = StandingWaveDesigner.Design(Request(10), slot, Taylor25Amplitudes);
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(10), slot, Taylor25Amplitudes)).Design;
         var f = Frequency.FromGigahertz(9.6);
         var s = ArrayNetwork.Solve(d, slot, f);
         for (int i = 0; i < 10; i++)
@@ -148,7 +148,7 @@ public class ArrayNetworkTests
     public void Sweep_bands_agree_with_the_root_found_bands_and_nest()
     {
         var slot = new StevensonTestSlot(Wr90, Width);
-        var d = StandingWaveDesigner.Design(Request(10), slot, Taylor25Amplitudes);
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(10), slot, Taylor25Amplitudes)).Design;
         var sweep = ArrayNetwork.Sweep(d, slot, Frequency.FromGigahertz(9.0), Frequency.FromGigahertz(9.8), 401);
         double step = 0.8e9 / 400;
         foreach (double limit in new[] { 1.5, 2.0 })
@@ -172,7 +172,7 @@ public class ArrayNetworkTests
 
     private static MatchBand Band(StevensonTestSlot slot, int n, FeedPosition feed = FeedPosition.End)
     {
-        var d = StandingWaveDesigner.Design(Request(n, feed, Wr90Lossless), slot, Uniform(n));
+        var d = StandingWaveDesigner.Design(StickRequest.Of(Request(n, feed, Wr90Lossless), slot, Uniform(n))).Design;
         return ArrayNetwork.FindBand(d, slot, 2.0, Low, High, Step)!;
     }
 }

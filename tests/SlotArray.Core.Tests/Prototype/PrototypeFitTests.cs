@@ -19,7 +19,7 @@ public class PrototypeFitTests(ITestOutputHelper output)
     private static (PrototypeModel Real, ArrayDesign Design) Plate(int count = 16)
     {
         var slot = new StevensonTestSlot(Wr90, Width);
-        var design = StandingWaveDesigner.Design(Request(count), slot, Taylor25Like(count));
+        var design = StandingWaveDesigner.Design(StickRequest.Of(Request(count), slot, Taylor25Like(count))).Design;
         return (new PrototypeModel(design, slot), design);
     }
 

@@ -23,8 +23,8 @@ public class ToleranceSensitivitiesTests(ITestOutputHelper output)
         var (design, slot) = Designed(Enumerable.Repeat(1.0, N).ToArray(), Wr90Lossless);
         var model = ArrayTrialModel.Build(design, slot, Factory, Request(), new ToleranceOptions(PatternPoints: 4096, EnvelopePoints: 0));
         var s = ToleranceSensitivities.Compute(model, new ToleranceOptions(PatternPoints: 4096, EnvelopePoints: 0));
-        foreach (var r in s.Take(8)) output.WriteLine($"slot {r.Slot} {r.Quantity}: dSLL {r.DsllDbPerMm:F4} dB/mm, dS11 {r.Ds11DbPerMm:F3} dB/mm");
-        double Dsll(int slotNumber) => s.Single(r => r.Slot == slotNumber && r.Quantity == ToleranceQuantity.Offset).DsllDbPerMm;
+        foreach (var r in s.Take(8)) output.WriteLine($"slot {r.Slot} {r.Quantity}: dSLL {r.DsllDbPerUnit:F4} dB/mm, dS11 {r.Ds11DbPerUnit:F3} dB/mm");
+        double Dsll(int slotNumber) => s.Single(r => r.Slot == slotNumber && r.Quantity == ToleranceQuantity.Offset).DsllDbPerUnit;
 
         double a = Wr90.BroadWall.Meters, x = Math.Abs(design.Slots[0].Coupling);
         double rel = Math.PI / a / Math.Tan(Math.PI * x / a) * 1e-3;          // δa/a per mm
@@ -37,7 +37,7 @@ public class ToleranceSensitivitiesTests(ITestOutputHelper output)
         Check.Relative(Expected(1), Dsll(1), 0.05, "array-factor perturbation, derived in the test comment");
         Check.Relative(Dsll(1), Dsll(16), 1e-3, "mirror symmetry of a uniform array");
         // Ranked: the largest |dSLL| first.
-        Assert.True(Math.Abs(s[0].DsllDbPerMm) >= Math.Abs(s[^1].DsllDbPerMm));
+        Assert.True(Math.Abs(s[0].DsllDbPerUnit) >= Math.Abs(s[^1].DsllDbPerUnit));
         Assert.Equal(4 * N, s.Count);
     }
 }

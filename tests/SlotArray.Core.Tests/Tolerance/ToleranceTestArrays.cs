@@ -30,7 +30,7 @@ internal static class ToleranceTestArrays
     {
         var g = guide ?? Wr90;
         var slot = new StevensonTestSlot(g, Width);
-        return (StandingWaveDesigner.Design(TestArrays.Request(amplitudes.Length, guide: g), slot, amplitudes), slot);
+        return (StandingWaveDesigner.Design(StickRequest.Of(TestArrays.Request(amplitudes.Length, guide: g), slot, amplitudes)).Design, slot);
     }
 
     /// <summary>Taylor-like smooth taper for tests: a cosine on a pedestal (any taper with η_t &lt; 1 will do).</summary>

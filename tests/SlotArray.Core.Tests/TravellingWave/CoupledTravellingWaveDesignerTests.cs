@@ -35,8 +35,8 @@ public class CoupledTravellingWaveDesignerTests(ITestOutputHelper output)
         var slot = new StevensonTestSlot(Wr90, Width);
         var request = TravellingWaveDesignerTests.Travelling(16, 0.2);
         var a = Taylor30(16);
-        var plain = TravellingWaveDesigner.Design(request, slot, a);
-        var r = CoupledTravellingWaveDesigner.Design(request, slot, a, new CoupledTravellingWaveOptions(CoupledSlotImpedances.None, CorrectPhase: false));
+        var plain = TravellingWaveDesigner.Design(StickRequest.Of(request, slot, a));
+        var r = CoupledTravellingWaveDesigner.Design(StickRequest.Of(request, slot, a), new CoupledTravellingWaveOptions(CoupledSlotImpedances.None, CorrectPhase: false));
         Assert.Equal(1, r.Iterations);
         for (int i = 0; i < 16; i++)
         {
@@ -55,7 +55,7 @@ public class CoupledTravellingWaveDesignerTests(ITestOutputHelper output)
         const int n = 24;
         var request = TravellingWaveDesignerTests.Travelling(n, 0.05);
         var a = Taylor30(n);
-        var r = CoupledTravellingWaveDesigner.Design(request, slot, a);
+        var r = CoupledTravellingWaveDesigner.Design(StickRequest.Of(request, slot, a));
         var s = CoupledArrayNetwork.Solve(r.Design, slot, F0);
         var u = CoupledArrayNetwork.Solve(r.Uncoupled.Design, slot, F0);
         double coupledDb = MagnitudeErrorDb(s.Excitations, a), uncoupledDb = MagnitudeErrorDb(u.Excitations, a);
@@ -90,7 +90,7 @@ public class CoupledTravellingWaveDesignerTests(ITestOutputHelper output)
         var slot = new StevensonTestSlot(Wr90, Width);
         var request = TravellingWaveDesignerTests.Travelling(16, 0.2);
         var ex = Assert.Throws<ConvergenceException>(() =>
-            CoupledTravellingWaveDesigner.Design(request, slot, Taylor30(16), new CoupledTravellingWaveOptions(MaximumIterations: 1)));
+            CoupledTravellingWaveDesigner.Design(StickRequest.Of(request, slot, Taylor30(16)), new CoupledTravellingWaveOptions(MaximumIterations: 1)));
         Assert.Equal(1, ex.Iterations);
         Assert.Contains("slot voltage", ex.Message);
     }

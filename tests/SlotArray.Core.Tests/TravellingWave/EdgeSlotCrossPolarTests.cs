@@ -25,7 +25,7 @@ public class EdgeSlotCrossPolarTests
         // edge-slot formula (Stevenson 1948; Silver 1949): lobes at sin ψ = ±λ/(2d), d = λg/2 → sin ψ = λ/λg (WR-90, 9.375 GHz: ±45.6°), level tan θ
         // relative to the co-polar beam before element weighting. Uniform taper: every slot g = 1/N, the same |θ|.
         var slot = EdgeSlot.Create(Wr90Lossless, Width);
-        var design = StandingWaveDesigner.Design(StandingEdge(n), slot, Uniform(n));
+        var design = StandingWaveDesigner.Design(StickRequest.Of(StandingEdge(n), slot, Uniform(n))).Design;
         var sol = ArrayNetwork.Solve(design, slot, F0);
         var fig = ArrayFigures.At(design, sol);
         var positions = design.Slots.Select(s => -s.Position.Meters).ToArray();
@@ -52,7 +52,7 @@ public class EdgeSlotCrossPolarTests
         var slot = EdgeSlot.Create(Wr90Lossless, Width);
         var tilt = EdgeSlotConductance.TiltForConductance(Wr90Lossless, 0.10395, F0, EdgeSlot.MaximumTilt);
         Check.Absolute(15, tilt.Degrees, 2e-3, "edge-slot formula (Stevenson 1948; Silver 1949) table [N]: g(15°) = 0.10395");
-        var design = StandingWaveDesigner.Design(StandingEdge(10), slot, Uniform(10));
+        var design = StandingWaveDesigner.Design(StickRequest.Of(StandingEdge(10), slot, Uniform(10))).Design;
         // g = 0.1 per slot, not 0.10395: compare with tan of the designed tilt and, separately, the reference at 15°.
         var sol = ArrayNetwork.Solve(design, slot, F0);
         var fig = ArrayFigures.At(design, sol);
@@ -70,7 +70,7 @@ public class EdgeSlotCrossPolarTests
         var slot = EdgeSlot.Create(Wr90Lossless, Width);
         var request = TravellingWaveDesignerTests.Travelling(40, 0.30, spacing: 0.46, guide: Wr90Lossless, type: SlotType.Edge,
             taper: TaperRequest.Uniform);
-        var tw = TravellingWaveDesigner.Design(request, slot, Uniform(40));
+        var tw = TravellingWaveDesigner.Design(StickRequest.Of(request, slot, Uniform(40)));
         var sol = ArrayNetwork.Solve(tw.Design, slot, F0);
         var fig = ArrayFigures.At(tw.Design, sol);
         var bare = CrossPolarPattern.Compute(tw.Design.Slots.Select(s => -s.Position.Meters).ToArray(), sol.Excitations,

@@ -31,8 +31,7 @@ public class SquintedBeamFiguresTests
     {
         // Edge slots: co-polar element uniform over the half-space, D = D_co/(1 + X/C) with the cross-polar power ratio.
         var slot = EdgeSlot.Create(Wr90, Width);
-        var tw = TravellingWaveDesigner.Design(TravellingWaveDesignerTests.Travelling(40, 0.10, spacing: 0.44, type: SlotType.Edge), slot,
-            SlotArray.Core.Tapers.TaylorLineSource.Weights(40, -25, 4));
+        var tw = TravellingWaveDesigner.Design(StickRequest.Of(TravellingWaveDesignerTests.Travelling(40, 0.10, spacing: 0.44, type: SlotType.Edge), slot, SlotArray.Core.Tapers.TaylorLineSource.Weights(40, -25, 4)));
         var sol = ArrayNetwork.Solve(tw.Design, slot, F0);
         var fig = ArrayFigures.At(tw.Design, sol);
         var z = tw.Design.Slots.Select(s => -s.Position.Meters).ToArray();

@@ -28,7 +28,7 @@ public class TravellingWaveDesignerTests
     public void Refined_design_radiates_the_taper_and_leaves_the_asked_power_for_the_load()
     {
         var slot = new StevensonTestSlot(Wr90, Width);
-        var tw = TravellingWaveDesigner.Design(Travelling(32, 0.05), slot, Taylor30(32));
+        var tw = TravellingWaveDesigner.Design(StickRequest.Of(Travelling(32, 0.05), slot, Taylor30(32)));
         var sol = ArrayNetwork.Solve(tw.Design, slot, F0);
         // The taper: P_n ∝ a_n² (Elliott 1981, Ch. 8). Tolerance 0.01 dB in amplitude (the refinement stops at 1e-4 dB in power).
         var a = Taylor30(32);
@@ -50,7 +50,7 @@ public class TravellingWaveDesignerTests
     {
         // radiated + wall loss + load + reflected = incident (LineNetwork, exact power bookkeeping) within 1e-9.
         var slot = new StevensonTestSlot(Wr90, Width);
-        var tw = TravellingWaveDesigner.Design(Travelling(24, 0.08), slot, Taylor30(24));
+        var tw = TravellingWaveDesigner.Design(StickRequest.Of(Travelling(24, 0.08), slot, Taylor30(24)));
         var sweep = ArrayNetwork.Sweep(tw.Design, slot, Frequency.FromGigahertz(9.2), Frequency.FromGigahertz(9.55), 15);
         foreach (var p in sweep.Points.Append(sweep.AtDesign))
         {
@@ -67,7 +67,7 @@ public class TravellingWaveDesignerTests
         double[] expected = [0.00742, 0.01219, 0.02339, 0.04219, 0.06813, 0.09980, 0.13551, 0.17307,
             0.20929, 0.23973, 0.25797, 0.25469, 0.22094, 0.16098, 0.10125, 0.06907];
         var slot = new StevensonTestSlot(Wr90Lossless, Width);
-        var tw = TravellingWaveDesigner.Design(Travelling(16, 0.10, guide: Wr90Lossless), slot, Taylor30(16),
+        var tw = TravellingWaveDesigner.Design(StickRequest.Of(Travelling(16, 0.10, guide: Wr90Lossless), slot, Taylor30(16)),
             new TravellingWaveOptions(TravellingWaveConductanceForm.SmallConductance, Refine: false));
         for (int k = 0; k < 16; k++)
             Check.Absolute(expected[k], tw.Design.Slots[15 - k].Conductance, 5.1e-6, "Elliott 1981, Ch. 8 [N]");
@@ -81,7 +81,7 @@ public class TravellingWaveDesignerTests
         // which leaves exactly 5 % for the load, asks more of the strongest slots than the slot model can give.
         var slot = new StevensonTestSlot(Wr90Lossless, Width);
         var e = Assert.Throws<InfeasibleDesignException>(() =>
-            TravellingWaveDesigner.Design(Travelling(16, 0.05, guide: Wr90Lossless), slot, Taylor30(16)));
+            TravellingWaveDesigner.Design(StickRequest.Of(Travelling(16, 0.05, guide: Wr90Lossless), slot, Taylor30(16))));
         // The slot model's largest conductance (g ≈ 0.5 at the test slot's 5 mm offset limit) binds before p = 0.5 (g = 2).
         Assert.Matches(@"slot \d+ needs g = 0\.\d+, above the 0\.\d+", e.Message);
         Assert.Contains("leave more power for the load (now 5 %)", e.Message);
@@ -92,7 +92,7 @@ public class TravellingWaveDesignerTests
     {
         var slot = new StevensonTestSlot(Wr90, Width);
         var e = Assert.Throws<ConvergenceException>(() =>
-            TravellingWaveDesigner.Design(Travelling(24, 0.08), slot, Taylor30(24), new TravellingWaveOptions(MaximumIterations: 1)));
+            TravellingWaveDesigner.Design(StickRequest.Of(Travelling(24, 0.08), slot, Taylor30(24)), new TravellingWaveOptions(MaximumIterations: 1)));
         Assert.Equal(1, e.Iterations);
         Assert.True(e.Residual > 1e-4);
     }
@@ -101,7 +101,7 @@ public class TravellingWaveDesignerTests
     public void Refinement_converges_geometrically()
     {
         var slot = new StevensonTestSlot(Wr90, Width);
-        var tw = TravellingWaveDesigner.Design(Travelling(32, 0.05), slot, Taylor30(32), new TravellingWaveOptions(ToleranceDb: 1e-9));
+        var tw = TravellingWaveDesigner.Design(StickRequest.Of(Travelling(32, 0.05), slot, Taylor30(32)), new TravellingWaveOptions(ToleranceDb: 1e-9));
         var h = tw.Refinement.History;
         // Measured contraction (not monotone step by step: the residual oscillates with a period of about three
         // iterations while the reflections settle): at least tenfold every ten iterations.
@@ -116,7 +116,7 @@ public class TravellingWaveDesignerTests
         // Elliott 1981, Ch. 8: sin θ_b = λ/λg − λ/(2d), positive toward the load end; the network's pattern peak must agree.
         // Tolerance 0.05°: the array factor's peak moves slightly with the taper's residual phase ripple.
         var slot = new StevensonTestSlot(Wr90, Width);
-        var tw = TravellingWaveDesigner.Design(Travelling(40, 0.05, spacing: 0.47), slot, Taylor30(40));
+        var tw = TravellingWaveDesigner.Design(StickRequest.Of(Travelling(40, 0.05, spacing: 0.47), slot, Taylor30(40)));
         var fig = ArrayFigures.At(tw.Design, ArrayNetwork.Solve(tw.Design, slot, F0));
         double lam = F0.FreeSpaceWavelength.Meters, lg = Wr90.GuideWavelength(F0).Meters, d = 0.47 * lg;
         double expected = Math.Asin(lam / lg - lam / (2 * d)) * 180 / Math.PI;
@@ -130,7 +130,7 @@ public class TravellingWaveDesignerTests
     {
         var guide = Wr90;
         var slot = EdgeSlot.Create(guide, Width);
-        var tw = TravellingWaveDesigner.Design(Travelling(30, 0.05, guide: guide, type: SlotType.Edge), slot, Taylor30(30));
+        var tw = TravellingWaveDesigner.Design(StickRequest.Of(Travelling(30, 0.05, guide: guide, type: SlotType.Edge), slot, Taylor30(30)));
         Assert.Equal(SlotCouplingKind.Tilt, tw.Design.CouplingKind);
         foreach (var s in tw.Design.Slots)
         {
@@ -153,7 +153,7 @@ public class TravellingWaveDesignerTests
         // line, so the network pattern must follow the closed form off the design frequency too (real slots, whose
         // susceptance loads the line away from resonance, scan at a different rate: see the marine demo's summary).
         var slot = StevensonTestSlot.FrequencyIndependent(Wr90Lossless, Width, F0);
-        var tw = TravellingWaveDesigner.Design(Travelling(40, 0.10, spacing: 0.45, guide: Wr90Lossless), slot, Taylor30(40));
+        var tw = TravellingWaveDesigner.Design(StickRequest.Of(Travelling(40, 0.10, spacing: 0.45, guide: Wr90Lossless), slot, Taylor30(40)));
         var f = Frequency.FromGigahertz(ghz);
         var fig = ArrayFigures.At(tw.Design, ArrayNetwork.Solve(tw.Design, slot, f));
         Check.Absolute(TravellingWaveBeam.Direction(Wr90Lossless, tw.Design.Spacing, f)!.Value.Degrees, fig.Metrics.BeamDirection.Degrees, 0.03,

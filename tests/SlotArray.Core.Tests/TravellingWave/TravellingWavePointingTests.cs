@@ -88,11 +88,11 @@ public class TravellingWavePointingTests
         double asked = TravellingWaveBeam.Direction(Wr90, D21, F0)!.Value.Degrees;
 
         // Without the correction the resonant design misses (the test can fail): measured −3.04°.
-        var resonant = TravellingWaveDesigner.Design(request, slot, a);
+        var resonant = TravellingWaveDesigner.Design(StickRequest.Of(request, slot, a));
         double missed = TravellingWavePointing.AchievedBeam(resonant.Design, slot).Degrees - asked;
         Assert.True(missed < -0.2, $"the resonant design's beam should lie well toward the feed, residual {missed:0.###} deg");
 
-        var tw = TravellingWavePointing.Design(request, slot, a);
+        var tw = TravellingWavePointing.Design(StickRequest.Of(request, slot, a));
         Assert.NotEqual(PointingCorrection.None, tw.Correction);
         var solution = ArrayNetwork.Solve(tw.Design, slot, F0);
         Check.Absolute(asked, TravellingWavePointing.AchievedBeam(tw.Design, slot).Degrees, 0.05, "issue 18: the beam within 0.05° of the phase condition");
@@ -105,7 +105,7 @@ public class TravellingWavePointingTests
     {
         var request = Sixteen(0.08, -25, CouplingMode.Mutual);
         var slot = ArrayPipeline.SlotModelFor(request);
-        var r = CoupledTravellingWaveDesigner.Design(request, slot, TaylorLineSource.Weights(16, -25, 4));
+        var r = CoupledTravellingWaveDesigner.Design(StickRequest.Of(request, slot, TaylorLineSource.Weights(16, -25, 4)));
         double asked = TravellingWaveBeam.Direction(Wr90, D21, F0)!.Value.Degrees;
         var solution = CoupledArrayNetwork.Solve(r.Design, slot, F0);
         Check.Absolute(asked, ArrayFigures.At(r.Design, solution).Metrics.BeamDirection.Degrees, 0.05,
@@ -120,7 +120,7 @@ public class TravellingWavePointingTests
         var spacing = TravellingWaveBeam.SpacingFor(Wr90, beam, F0);
         var request = Sixteen(0.08, -25, spacing: spacing) with { Feed = Sixteen(0.08, -25, spacing: spacing).Feed with { Beam = beam } };
         var slot = ArrayPipeline.SlotModelFor(request);
-        var tw = TravellingWavePointing.Design(request, slot, TaylorLineSource.Weights(16, -25, 4));
+        var tw = TravellingWavePointing.Design(StickRequest.Of(request, slot, TaylorLineSource.Weights(16, -25, 4)));
         Check.Absolute(-4.5, TravellingWavePointing.AchievedBeam(tw.Design, slot).Degrees, 0.05, "feed.beam: −4.5° (issue 18)");
         Check.Absolute(-4.5, tw.AskedBeam!.Value.Degrees, 1e-9, "the asked direction is reported");
     }
@@ -134,9 +134,9 @@ public class TravellingWavePointingTests
         var slot = ArrayPipeline.SlotModelFor(request);
         var a = TaylorLineSource.Weights(16, -30, 4);
         double load = TravellingWaveLoad.Smallest(request, slot, a)!.Value;
-        var designed = TravellingWavePointing.Design(TravellingWaveLoad.WithLoad(request, load), slot, a);
+        var designed = TravellingWavePointing.Design(StickRequest.Of(TravellingWaveLoad.WithLoad(request, load), slot, a));
         Assert.Equal(16, designed.Design.Count);
-        var refused = Assert.Throws<InfeasibleDesignException>(() => TravellingWavePointing.Design(TravellingWaveLoad.WithLoad(request, load - 0.005), slot, a));
+        var refused = Assert.Throws<InfeasibleDesignException>(() => TravellingWavePointing.Design(StickRequest.Of(TravellingWaveLoad.WithLoad(request, load - 0.005), slot, a)));
         Assert.Contains("slot", refused.Message);
         Assert.Equal(load, TravellingWaveLoad.Resolve(request, slot, a).Feed.LoadFraction);
     }

@@ -20,7 +20,7 @@ namespace SlotArray.Core.Slots.Tables;
 /// <para>Edge slot: a row with a cut depth D gets the developed length L = b/cos θ + 2(D − t), the inner-aperture
 /// convention of <see cref="EdgeSlot.DevelopedLength"/> that the cut list inverts.</para>
 /// </remarks>
-public static class SlotTableConversion
+internal static class SlotTableConversion
 {
     /// <summary>y from S11 of a shunt element: y = −2 S11/(1 + S11) (Pozar 2012, Tables 4.1–4.2).</summary>
     public static Complex ShuntAdmittanceFromS11(Complex s11) => -2 * s11 / (1 + s11);

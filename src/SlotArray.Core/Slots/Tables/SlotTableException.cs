@@ -4,7 +4,7 @@ namespace SlotArray.Core.Slots.Tables;
 /// <param name="message">What is wrong and what to change.</param>
 /// <param name="line">1-based line of the file the problem is on, or 0 when it concerns the whole table.</param>
 /// <param name="column">1-based column of the cell the problem is in, or 0.</param>
-public sealed class SlotTableException(string message, int line = 0, int column = 0) : Exception(message)
+internal sealed class SlotTableException(string message, int line = 0, int column = 0) : Exception(message)
 {
     /// <summary>1-based line of the file the problem is on, or 0 when it concerns the whole table.</summary>
     public int Line { get; } = line;

@@ -27,7 +27,7 @@ namespace SlotArray.Core.Slots.Tables;
 /// <para>Residuals: leave-one-out at the interior points of every fit (each point predicted by the fit through the
 /// others), a measure of how well the table's spacing resolves the curves.</para>
 /// </remarks>
-public sealed class SlotTableFit
+internal sealed class SlotTableFit
 {
     private readonly double[] _c, _f;
     private readonly Group[,] _g;            // [frequency k, coupling i]

@@ -11,7 +11,7 @@ namespace SlotArray.Core.Slots.Tables;
 /// <param name="AdmittanceRms">RMS of |Δy|/g_r over the interior lengths of every geometry and frequency.</param>
 /// <param name="AdmittanceMax">Largest |Δy|/g_r.</param>
 /// <param name="Points">Number of leave-one-out predictions behind the figures.</param>
-public sealed record SlotTableResiduals(double ResonantLengthRms, double ResonantLengthMax, double ResonantConductanceRms,
+internal sealed record SlotTableResiduals(double ResonantLengthRms, double ResonantLengthMax, double ResonantConductanceRms,
     double ResonantConductanceMax, double AdmittanceRms, double AdmittanceMax, int Points)
 {
     internal static SlotTableResiduals Of(double[] c, SlotTableFit.Group[,] g, Func<double, double> shape)

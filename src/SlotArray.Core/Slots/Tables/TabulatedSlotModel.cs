@@ -10,7 +10,7 @@ namespace SlotArray.Core.Slots.Tables;
 /// <see cref="Extrapolate"/> the couplings reach the built-in limit (a/4 offset, 30° tilt) beyond the table, else they
 /// stop at the table's largest.
 /// </summary>
-public sealed class TabulatedSlotModel : IShuntSlotModel
+internal sealed class TabulatedSlotModel : IShuntSlotModel
 {
     /// <summary>Largest offset reached when extrapolating: a/4, the usable limit of the built-in longitudinal models.</summary>
     private double BuiltInLimit => Fit.CouplingKind == SlotCouplingKind.Offset ? StevensonLongitudinalSlot.MaximumOffset(Guide) : EdgeSlot.MaximumTilt.Radians;

@@ -9,7 +9,7 @@ namespace SlotArray.Reports.Dxf;
 /// mm). Format: Autodesk, "DXF Reference" (group codes 0/2/8/10–40/50–51/62/70/72; HEADER, TABLES, ENTITIES
 /// sections; from memory of the public reference).
 /// </summary>
-public sealed class DxfWriter
+internal sealed class DxfWriter
 {
     private readonly StringBuilder _entities = new();
     private readonly List<(string Name, int Colour)> _layers = [];

@@ -10,7 +10,7 @@ namespace SlotArray.Reports.Dxf;
 /// CENTRES a centre mark (cross, 2 mm arms) at every slot centre, TEXT the slot numbers and the title (drawing number,
 /// revision, face). Only formats: the geometry is Core's.
 /// </summary>
-public static class GuideFaceDxf
+internal static class GuideFaceDxf
 {
     /// <summary>The layer names, in table order.</summary>
     public static readonly IReadOnlyList<string> Layers = ["TUBE", "DATUM", "SLOTS", "CENTRES", "TEXT"];
