@@ -39,6 +39,7 @@ internal static class CommandLine
             InitCommand.Build(output, error),
             CharacteriseCommand.Build(output, error),
             CalibrateEdgeCommand.Build(output, error),
+            VerifyEdgeCommand.Build(output, error),
             VerifyCommand.Build(output, error),
             CompareCommand.Build(output, error),
             SynthesiseCommand.Build(output, error),

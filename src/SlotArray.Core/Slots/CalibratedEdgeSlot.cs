@@ -119,7 +119,7 @@ internal sealed class CalibratedEdgeSlot : IShuntSlotModel
     public SlotCouplingKind CouplingKind => SlotCouplingKind.Tilt;
 
     /// <inheritdoc />
-    public string Name => $"edge slot (full-wave calibration, {Surface.Family.Guide}, {Word(Surround)})";
+    public string Name => $"edge slot (full-wave calibration, {Surface.Family.Guide}, {Word(Surface.Family.Surround)})";
 
     /// <inheritdoc />
     public double MaximumCoupling => MaximumTilt.Radians;
@@ -153,8 +153,7 @@ internal sealed class CalibratedEdgeSlot : IShuntSlotModel
         double th = Math.Abs(tilt);
         var (lo, hi) = Surface.Family.Band;
         double ff = Math.Clamp(Surface.FamilyFrequency(f), lo, hi);
-        var depths = Surface.Family.DepthsMm;
-        double d0 = depths[0], d1 = depths[^1];
+        var (d0, d1) = Surface.FamilyDepthRange(th);
         var grid = Enumerable.Range(0, DepthSamples).Select(i => d0 + (d1 - d0) * i / (DepthSamples - 1)).ToArray();
         var y = grid.Select(d => Surface.AtFamily(th, d, ff)).ToArray();
         int peak = Array.IndexOf(y, y.MaxBy(v => v.Real));
@@ -244,8 +243,9 @@ internal sealed class CalibratedEdgeSlot : IShuntSlotModel
     /// <summary>Golden-section refinement (MathNet) of a grid minimum of <paramref name="fn"/> between the grid's neighbours of index <paramref name="at"/>.</summary>
     private static double Refine(Func<double, double> fn, double[] grid, int at)
     {
-        double lo = grid[Math.Max(0, at - 1)], hi = grid[Math.Min(grid.Length - 1, at + 1)];
-        return FindMinimum.OfScalarFunctionConstrained(fn, lo, hi, 1e-7);
+        if (at == 0 || at == grid.Length - 1) return grid[at];
+        try { return FindMinimum.OfScalarFunctionConstrained(fn, grid[at - 1], grid[at + 1], 1e-7); }
+        catch (MathNet.Numerics.Optimization.OptimizationException) { return grid[at]; }
     }
 
     private static void RequireTilt(double tilt)

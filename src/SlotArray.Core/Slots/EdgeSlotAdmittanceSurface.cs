@@ -33,7 +33,7 @@ internal sealed class EdgeSlotAdmittanceSurface
     /// </summary>
     public const double MeshDepthCorrectionMm = 0.09;
 
-    private readonly CubicSpline[,] re, im;
+    private readonly CubicSpline[][] re, im;
     private readonly RectangularWaveguide familyGuide;
 
     /// <summary>Interpolates a family for slots cut in <paramref name="guide"/>.</summary>
@@ -44,17 +44,22 @@ internal sealed class EdgeSlotAdmittanceSurface
         Scale = guide.BroadWall.Millimeters / family.BroadWallMm;
         familyGuide = RectangularWaveguide.Create(Length.FromMillimeters(family.BroadWallMm), Length.FromMillimeters(family.NarrowWallMm),
             Length.FromMillimeters(family.WallMm), guide.Conductivity, guide.MetalName);
-        int nt = family.TiltsDeg.Count, nd = family.DepthsMm.Count;
+        int nt = family.Tilts.Count;
         var fGhz = family.FrequenciesHz.Select(f => f * 1e-9).ToArray();
-        re = new CubicSpline[nt, nd];
-        im = new CubicSpline[nt, nd];
+        re = new CubicSpline[nt][];
+        im = new CubicSpline[nt][];
         for (int i = 0; i < nt; i++)
-            for (int j = 0; j < nd; j++)
+        {
+            var t = family.Tilts[i];
+            re[i] = new CubicSpline[t.DepthsMm.Count];
+            im[i] = new CubicSpline[t.DepthsMm.Count];
+            for (int j = 0; j < t.DepthsMm.Count; j++)
             {
-                var y = Enumerable.Range(0, fGhz.Length).Select(k => family.Y[i, j, k]).ToArray();
-                re[i, j] = CubicSpline.InterpolateNaturalSorted(fGhz, y.Select(v => v.Real).ToArray());
-                im[i, j] = CubicSpline.InterpolateNaturalSorted(fGhz, y.Select(v => v.Imaginary).ToArray());
+                var y = Enumerable.Range(0, fGhz.Length).Select(k => t.Y[j, k]).ToArray();
+                re[i][j] = CubicSpline.InterpolateNaturalSorted(fGhz, y.Select(v => v.Real).ToArray());
+                im[i][j] = CubicSpline.InterpolateNaturalSorted(fGhz, y.Select(v => v.Imaginary).ToArray());
             }
+        }
     }
 
     /// <summary>The family interpolated.</summary>
@@ -90,19 +95,20 @@ internal sealed class EdgeSlotAdmittanceSurface
     {
         double th = Math.Abs(tilt), fGhz = familyHz * 1e-9;
         var f = Frequency.FromHertz(familyHz);
-        int nt = Family.TiltsDeg.Count, nd = Family.DepthsMm.Count;
-        var depths = Family.DepthsMm.ToArray();
-        var tilts = Family.TiltsDeg.Select(t => t * Math.PI / 180).ToArray();
+        int nt = Family.Tilts.Count;
+        var tilts = Family.Tilts.Select(t => t.TiltDeg * Math.PI / 180).ToArray();
         var ratioRe = new double[nt];
         var ratioIm = new double[nt];
         for (int i = 0; i < nt; i++)
         {
+            var depths = Family.Tilts[i].DepthsMm.ToArray();
+            int nd = depths.Length;
             var vr = new double[nd];
             var vi = new double[nd];
             for (int j = 0; j < nd; j++)
             {
-                vr[j] = re[i, j].Interpolate(fGhz);
-                vi[j] = im[i, j].Interpolate(fGhz);
+                vr[j] = re[i][j].Interpolate(fGhz);
+                vi[j] = im[i][j].Interpolate(fGhz);
             }
             double s = EdgeSlotConductance.Conductance(familyGuide, Angle.FromRadians(tilts[i]), f);
             ratioRe[i] = AcrossDepth(depths, vr, familyDepthMm) / s;
@@ -111,6 +117,18 @@ internal sealed class EdgeSlotAdmittanceSurface
         double at = Math.Clamp(th, tilts[0], tilts[^1]);
         double shape = EdgeSlotConductance.Conductance(familyGuide, Angle.FromRadians(th), f);
         return new Complex(shape * AcrossTilt(tilts, ratioRe, at), AcrossTilt(tilts, ratioIm, at));
+    }
+
+    /// <summary>
+    /// The family's depths, mm, over which a cut at tilt θ is read from runs on both sides in tilt: the overlap of the
+    /// depth ranges of the tilt nodes that bracket θ (the nearest node's outside the tilts run).
+    /// </summary>
+    public (double Low, double High) FamilyDepthRange(double tilt)
+    {
+        double deg = Math.Abs(tilt) * 180 / Math.PI;
+        var t = Family.Tilts;
+        int hi = Enumerable.Range(0, t.Count).FirstOrDefault(i => t[i].TiltDeg >= deg, t.Count - 1), lo = Math.Max(0, t[hi].TiltDeg > deg ? hi - 1 : hi);
+        return (Math.Max(t[lo].DepthsMm[0], t[hi].DepthsMm[0]), Math.Min(t[lo].DepthsMm[^1], t[hi].DepthsMm[^1]));
     }
 
     /// <summary>y = Y/G0 of a cut of depth <paramref name="depthMm"/> (request's guide) at tilt θ and frequency f.</summary>

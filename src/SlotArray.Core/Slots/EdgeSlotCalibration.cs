@@ -17,17 +17,23 @@ namespace SlotArray.Core.Slots;
 /// <param name="Surround">Surroundings.</param>
 /// <param name="FlareLengthMm">Flare: length, mm (else 0).</param>
 /// <param name="FlareApertureMm">Flare: aperture, mm (else 0).</param>
-/// <param name="TiltsDeg">Tilt nodes, degrees, ascending.</param>
-/// <param name="DepthsMm">Cut-depth nodes from the outer narrow-wall face, mm, ascending.</param>
-/// <param name="FrequenciesHz">Frequency nodes, Hz, ascending.</param>
-/// <param name="Y">y[tilt, depth, frequency].</param>
+/// <param name="Tilts">The runs of each tilt, tilts ascending.</param>
+/// <param name="FrequenciesHz">Frequency nodes, Hz, ascending (the same for every run).</param>
 internal sealed record EdgeSlotCalibrationFamily(string Guide, double BroadWallMm, double NarrowWallMm, double WallMm, double WidthMm, string Form,
-    EdgeSlotSurround Surround, double FlareLengthMm, double FlareApertureMm, IReadOnlyList<double> TiltsDeg, IReadOnlyList<double> DepthsMm,
-    IReadOnlyList<double> FrequenciesHz, Complex[,,] Y)
+    EdgeSlotSurround Surround, double FlareLengthMm, double FlareApertureMm, IReadOnlyList<EdgeSlotTiltRuns> Tilts, IReadOnlyList<double> FrequenciesHz)
 {
     /// <summary>Lowest and highest frequency of the family, Hz.</summary>
     public (double Low, double High) Band => (FrequenciesHz[0], FrequenciesHz[^1]);
+
+    /// <summary>Tilt nodes, degrees, ascending.</summary>
+    public IReadOnlyList<double> TiltsDeg => [.. Tilts.Select(t => t.TiltDeg)];
 }
+
+/// <summary>The runs of one tilt: its cut depths and y[depth, frequency].</summary>
+/// <param name="TiltDeg">Tilt, degrees.</param>
+/// <param name="DepthsMm">Cut depths from the outer narrow-wall face, mm, ascending.</param>
+/// <param name="Y">y[depth, frequency] = Y/G0.</param>
+internal sealed record EdgeSlotTiltRuns(double TiltDeg, IReadOnlyList<double> DepthsMm, Complex[,] Y);
 
 /// <summary>Reads the calibration table's text into families (pure: the text is compiled into the assembly).</summary>
 internal static class EdgeSlotCalibration
@@ -40,7 +46,8 @@ internal static class EdgeSlotCalibration
     /// <summary>
     /// Parses the table: '#' lines are provenance, the first other line the header (columns by name: guide, a_mm, b_mm,
     /// wall_mm, width_mm, form, surround, flare_length_mm, flare_aperture_mm, tilt_deg, cut_depth_mm, frequency_ghz, g, b);
-    /// rows group into families by their geometry columns; each family must fill its tilt × depth × frequency grid.
+    /// rows group into families by their geometry columns, and within a family by tilt; each tilt's depths must all be
+    /// given at the family's every frequency (tilts may have different depths).
     /// </summary>
     /// <exception cref="FormatException">A malformed row or an incomplete grid.</exception>
     public static IReadOnlyList<EdgeSlotCalibrationFamily> Parse(string text)
@@ -54,18 +61,23 @@ internal static class EdgeSlotCalibration
         foreach (var grp in rows.GroupBy(r => string.Join(",", new[] { "guide", "a_mm", "b_mm", "wall_mm", "width_mm", "form", "surround", "flare_length_mm", "flare_aperture_mm" }.Select(c => r[col[c]]))))
         {
             var first = grp.First();
-            var tilts = grp.Select(r => Num(r, "tilt_deg")).Distinct().Order().ToArray();
-            var depths = grp.Select(r => Num(r, "cut_depth_mm")).Distinct().Order().ToArray();
             var freqs = grp.Select(r => Math.Round(Num(r, "frequency_ghz") * 1e9)).Distinct().Order().ToArray();
-            var y = new Complex[tilts.Length, depths.Length, freqs.Length];
-            var filled = new bool[tilts.Length, depths.Length, freqs.Length];
-            foreach (var r in grp)
+            var tilts = new List<EdgeSlotTiltRuns>();
+            foreach (var byTilt in grp.GroupBy(r => Num(r, "tilt_deg")).OrderBy(t => t.Key))
             {
-                int i = Array.IndexOf(tilts, Num(r, "tilt_deg")), j = Array.IndexOf(depths, Num(r, "cut_depth_mm")), k = Array.IndexOf(freqs, Math.Round(Num(r, "frequency_ghz") * 1e9));
-                y[i, j, k] = new Complex(Num(r, "g"), Num(r, "b"));
-                filled[i, j, k] = true;
+                var depths = byTilt.Select(r => Num(r, "cut_depth_mm")).Distinct().Order().ToArray();
+                var y = new Complex[depths.Length, freqs.Length];
+                var filled = new bool[depths.Length, freqs.Length];
+                foreach (var r in byTilt)
+                {
+                    int j = Array.IndexOf(depths, Num(r, "cut_depth_mm")), k = Array.IndexOf(freqs, Math.Round(Num(r, "frequency_ghz") * 1e9));
+                    y[j, k] = new Complex(Num(r, "g"), Num(r, "b"));
+                    filled[j, k] = true;
+                }
+                if (filled.Cast<bool>().Any(f => !f))
+                    throw new FormatException($"the edge-slot calibration family {grp.Key} at tilt {byTilt.Key} deg does not give every depth at every frequency");
+                tilts.Add(new EdgeSlotTiltRuns(byTilt.Key, depths, y));
             }
-            if (filled.Cast<bool>().Any(f => !f)) throw new FormatException($"the edge-slot calibration family {grp.Key} does not fill its tilt × depth × frequency grid");
             var surround = first[col["surround"]] switch
             {
                 "tube" => EdgeSlotSurround.Tube,
@@ -74,7 +86,7 @@ internal static class EdgeSlotCalibration
                 var s => throw new FormatException($"unknown surroundings '{s}' in the edge-slot calibration table"),
             };
             families.Add(new EdgeSlotCalibrationFamily(first[col["guide"]], Num(first, "a_mm"), Num(first, "b_mm"), Num(first, "wall_mm"), Num(first, "width_mm"),
-                first[col["form"]], surround, Num(first, "flare_length_mm"), Num(first, "flare_aperture_mm"), tilts, depths, freqs, y));
+                first[col["form"]], surround, Num(first, "flare_length_mm"), Num(first, "flare_aperture_mm"), tilts, freqs));
         }
         return families;
     }

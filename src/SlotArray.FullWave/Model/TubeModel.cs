@@ -34,6 +34,9 @@ internal sealed record TubeLayout(GuideSection Guide, IReadOnlyList<PlacedSlot> 
 
     /// <summary>Extra x mesh lines (position, cell size there), mm: the depths of a family of cuts, so that every run of the family (and its plain-tube calibration) shares one mesh.</summary>
     public IReadOnlyList<(double AtMm, double CellMm)> ExtraXAnchors { get; init; } = [];
+
+    /// <summary>x edges closer than this share one mesh line, mm (default 0.001): an array of edge slots whose depths differ by hundredths of a millimetre would otherwise set a tiny time step.</summary>
+    public double XMergeMm { get; init; } = 1e-3;
 }
 
 /// <summary>Builds the <see cref="FdtdModel"/> of a <see cref="TubeLayout"/>: geometry, graded mesh, ports and probes.</summary>
@@ -108,7 +111,7 @@ internal static class TubeModel
         zs.Add((zEnd, hMax));
         // Every edge keeps its own line, so each aperture is exactly where the cut list puts it (near-coincident edges of
         // neighbouring slots then cost small cells and a short time step).
-        var mesh = new MeshLines(MeshBuilder.Lines(xs, hMax), MeshBuilder.Lines(ys, hMax), MeshBuilder.Lines(zs, hMax));
+        var mesh = new MeshLines(MeshBuilder.Lines(xs, hMax, mergeMm: l.XMergeMm), MeshBuilder.Lines(ys, hMax), MeshBuilder.Lines(zs, hMax));
 
         // The tube: four metal walls (a metal box owns its faces, so the inner faces at x = ±a/2, y = ±b/2 are PEC
         // exactly); free space (the background) inside and around; guide ends without a short run through the PML.
