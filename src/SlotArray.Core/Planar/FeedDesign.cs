@@ -95,7 +95,9 @@ internal static class FeedDesign
     {
         int k = design.Branches.Count;
         var ones = Enumerable.Repeat(1.0, k).ToArray();
-        var sol = PlanarNetwork.Solve(design, request.Slot, design.DesignFrequency, design.Coupled, ones);
+        // The signs depend on the lines only (which half-wave the current is in at each coupling slot): found from the
+        // network without the exterior coupling, where every branch is exactly in phase or in antiphase.
+        var sol = PlanarNetwork.Solve(design, request.Slot, design.DesignFrequency, false, ones);
         var phase = new Complex[k];
         for (int b = 0; b < k; b++)
             foreach (int i in design.Branches[b].SlotIndices)

@@ -106,10 +106,20 @@ internal static class PlanarDesigner
         double scale = 1 / (ElliottDesignEquations.Gamma0(guide, f0) * PhysicalConstants.HalfWaveDipoleResistance);
         int n = request.Layout.Count;
         var coupling = CoupledSlotImpedances.HalfCosineCentreReferred;
+        // The coupling sums C_n depend on the geometry only through Z (the amplitudes are fixed), and Z barely moves once
+        // the geometry has settled: Z and C are refilled whenever any offset or length has moved by more than
+        // RefillDistance since the last fill (a stale Z then changes C by ~1e-4 relative, far below the tolerance's effect).
+        Complex[] c = Array.Empty<Complex>();
+        double[]? filledAt = null;
         for (int it = 1; it <= request.MaximumIterations; it++)
         {
-            var placements = Placements(branches, n);
-            var z = coupling(placements, branches[0].Design.Slots[0].Width, f0);
+            var geometry = Geometry(branches, n);
+            if (filledAt is null || MaxDifference(filledAt, geometry) > RefillDistance)
+            {
+                var z = coupling(Placements(branches, n), branches[0].Design.Slots[0].Width, f0);
+                c = CouplingSums(z, amp, scale);
+                filledAt = geometry;
+            }
             double dMax = 0, dxMax = 0, dlMax = 0, match = 0;
             int worst = 0;
             foreach (var b in branches)
@@ -123,15 +133,12 @@ internal static class PlanarDesigner
                 for (int k = 0; k < slots.Count; k++)
                 {
                     int i = b.Indices[k];
-                    Complex c = 0;
-                    for (int m = 0; m < n; m++) if (m != i) c += amp[m] / amp[i] * z[i, m];
-                    c *= scale;
                     double target = StandingWaveDesigner.CentreJunctionRatio * fn[k] * Math.Abs(amp[i]) / sum;
                     double x = Math.Abs(slots[k].Coupling), l = slots[k].Length.Meters;
                     var y = surrogate.Admittance(x, l);
-                    total += y / (1 + y * c / (fn[k] * fn[k]));
+                    total += y / (1 + y * c[i] / (fn[k] * fn[k]));
                     (double X, double L) r;
-                    try { r = ElliottDesigner.SolveSlot(surrogate, guide, f0, k, x, l, c, target, 60); }
+                    try { r = ElliottDesigner.SolveSlot(surrogate, guide, f0, k, x, l, c[i], target, 60); }
                     catch (InfeasibleDesignException e) { throw new InfeasibleDesignException($"branch {b.Number}, {e.Message}"); }
                     catch (ConvergenceException e) { throw new ConvergenceException($"branch {b.Number}, {e.Message}", e.Iterations, e.Residual); }
                     double dx = Math.Abs(r.X - x), dl = Math.Abs(r.L - l);
@@ -155,6 +162,43 @@ internal static class PlanarDesigner
         throw new ConvergenceException(FormattableString.Invariant(
             $"Elliott's planar iteration did not converge in {request.MaximumIterations} sweeps: branch {wb} slot {ws} still moved by {Math.Max(last.MaximumOffsetChange, last.MaximumLengthChange) * 1e3:G3} mm in the last one; the coupling is too strong: use a gentler taper, more slots or coupling: none"),
             request.MaximumIterations, Math.Max(last.MaximumOffsetChange, last.MaximumLengthChange));
+    }
+
+    /// <summary>Geometry change (m) after which the coupling matrix is refilled during the iteration: 1 µm.</summary>
+    private const double RefillDistance = 1e-6;
+
+    /// <summary>C_n = Σ_{m≠n} (A_m/A_n) Z_nm/(Γ0 R_d) for every slot (the whole aperture).</summary>
+    private static Complex[] CouplingSums(CouplingMatrix z, double[] amp, double scale)
+    {
+        int n = amp.Length;
+        var c = new Complex[n];
+        Parallel.For(0, n, new ParallelOptions { MaxDegreeOfParallelism = 2 }, i =>
+        {
+            Complex sum = 0;
+            for (int m = 0; m < n; m++) if (m != i) sum += amp[m] * z[i, m];
+            c[i] = sum * (scale / amp[i]);
+        });
+        return c;
+    }
+
+    /// <summary>|offset| and length of every slot, layout order (2 values a slot).</summary>
+    private static double[] Geometry(List<BranchWork> branches, int n)
+    {
+        var g = new double[2 * n];
+        foreach (var b in branches)
+            for (int k = 0; k < b.Indices.Length; k++)
+            {
+                g[2 * b.Indices[k]] = Math.Abs(b.Design.Slots[k].Coupling);
+                g[2 * b.Indices[k] + 1] = b.Design.Slots[k].Length.Meters;
+            }
+        return g;
+    }
+
+    private static double MaxDifference(double[] a, double[] b)
+    {
+        double m = 0;
+        for (int i = 0; i < a.Length; i++) m = Math.Max(m, Math.Abs(a[i] - b[i]));
+        return m;
     }
 
     private static (int Branch, int Slot) Locate(List<BranchWork> branches, int index)

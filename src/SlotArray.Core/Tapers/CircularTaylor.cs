@@ -105,22 +105,8 @@ internal static class CircularTaylor
     public static double PeakSidelobeDb(Design design)
     {
         ArgumentNullException.ThrowIfNull(design);
-        double start = design.Zeros.Length > 0 ? design.Zeros[0] : design.UniformZeros[0], stop = design.Nbar + 3, h = 1.0 / 128;
-        double best = 0;
-        double prev2 = Math.Abs(design.Pattern(start)), prev = Math.Abs(design.Pattern(start + h));
-        for (double u = start + 2 * h; u <= stop; u += h)
-        {
-            double cur = Math.Abs(design.Pattern(u));
-            if (prev >= prev2 && prev >= cur)
-            {
-                double denom = prev2 - 2 * prev + cur;
-                double t = denom != 0 ? 0.5 * (prev2 - cur) / denom : 0;
-                best = Math.Max(best, Math.Abs(design.Pattern(u - h + t * h)));
-            }
-            prev2 = prev;
-            prev = cur;
-        }
-        return 20 * Math.Log10(best);
+        double start = design.Zeros.Length > 0 ? design.Zeros[0] : design.UniformZeros[0];
+        return TaperMath.ContinuousPeakSidelobeDb(design.Pattern, start, design.Nbar + 3, 1.0 / 128);
     }
 
     /// <summary>Half-power full width of F in u (u = (2R/λ) sin θ), by bisection on 0 … u_1.</summary>
