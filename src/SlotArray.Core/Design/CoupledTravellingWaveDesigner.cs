@@ -84,6 +84,12 @@ internal sealed record CoupledTravellingWaveDesign(
 /// </remarks>
 internal static class CoupledTravellingWaveDesigner
 {
+    /// <summary>Largest length change of one phase-correction step, as a fraction of the slot's resonant length (0.05).</summary>
+    public const double MaximumStepFraction = 0.05;
+
+    /// <summary>Largest total detuning of a slot, as a fraction of its resonant length (0.25), before the design is refused.</summary>
+    public const double MaximumDetuningFraction = 0.25;
+
     /// <summary>
     /// Designs the array (see remarks). Throws <see cref="InfeasibleDesignException"/> naming the slot when one must
     /// absorb more than a shunt slot can (p &gt; 0.5) or more than the slot model's largest conductance, and
@@ -97,13 +103,34 @@ internal static class CoupledTravellingWaveDesigner
         ArgumentNullException.ThrowIfNull(stick);
         options ??= CoupledTravellingWaveOptions.Default;
         var slot = stick.Slot;
-        var amplitudes = stick.Amplitudes;
         if (slot.CouplingKind != SlotCouplingKind.Offset)
             throw new ArgumentException("the coupled travelling-wave designer is for longitudinal (offset) slots", nameof(stick));
+        var start = TravellingWaveDesigner.Design(stick);
+        var f0 = stick.DesignFrequency;
+        return Iterate(stick, options, start, d => CoupledArrayNetwork.Solve(d, slot, f0, options.Coupling), " under mutual coupling");
+    }
+
+    /// <summary>
+    /// The fixed point of the remarks on a given network: <paramref name="solve"/> returns the network solution of a
+    /// geometry at the design frequency (the coupled network here; the isolated-slot line for
+    /// <see cref="TravellingWavePointing"/>, which corrects the phases of an uncoupled design the same way).
+    /// </summary>
+    /// <param name="stick">The stick (travelling-wave feed; amplitudes a_n, slot 1 first; the isolated-slot model).</param>
+    /// <param name="options">Tolerances and the phase switch (<see cref="CoupledTravellingWaveOptions.Coupling"/> is not read).</param>
+    /// <param name="start">The isolated-slot design to start from.</param>
+    /// <param name="solve">Network solution of a geometry at the design frequency.</param>
+    /// <param name="context">Words added to the error messages after "the power arriving at it", e.g. " under mutual coupling".</param>
+    /// <param name="phaseSlope">κ of the phase progression e^{jκz_n} the slot voltages are brought to, rad/m; null: β of the guide.</param>
+    internal static CoupledTravellingWaveDesign Iterate(StickRequest stick, CoupledTravellingWaveOptions options, TravellingWaveDesign start,
+        Func<ArrayDesign, NetworkSolution> solve, string context, double? phaseSlope = null)
+    {
+        ArgumentNullException.ThrowIfNull(stick);
+        ArgumentNullException.ThrowIfNull(options);
+        ArgumentNullException.ThrowIfNull(start);
         if (!(options.ToleranceDb > 0)) throw new ArgumentOutOfRangeException(nameof(options), options.ToleranceDb, "the tolerance must be positive (dB)");
         if (options.MaximumIterations < 1) throw new ArgumentOutOfRangeException(nameof(options), options.MaximumIterations, "at least one iteration is needed");
-
-        var start = TravellingWaveDesigner.Design(stick);
+        var slot = stick.Slot;
+        var amplitudes = stick.Amplitudes;
         var f0 = stick.DesignFrequency;
         double loadFraction = start.LoadFraction;
         int n = start.Design.Count;
@@ -114,18 +141,18 @@ internal static class CoupledTravellingWaveDesigner
         var design = start.Design;
         var history = new List<double>();
         var lengthShift = new double[n];
-        double beta = start.Design.Guide.PhaseConstant(f0);
+        double beta = phaseSlope ?? start.Design.Guide.PhaseConstant(f0);
         int iterations = 0;
         while (true)
         {
             options.Cancellation.ThrowIfCancellationRequested();
-            var sol = CoupledArrayNetwork.Solve(design, slot, f0, options.Coupling);
+            var sol = solve(design);
             iterations++;
             options.Progress?.Report(new WorkProgress("coupled travelling-wave iterations", iterations, options.MaximumIterations));
             double budget = 1 - loadFraction - sol.WallLoss - sol.ReflectedPower;
             if (!(budget > 0))
                 throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                    $"with mutual coupling, wall loss {sol.WallLoss:0.###} and reflection {sol.ReflectedPower:0.###} leave nothing to radiate after the {loadFraction * 100:0.###} % for the load: leave less for the load or move the spacing away from 0.5 guide wavelength"));
+                    $"wall loss {sol.WallLoss:0.###} and reflection {sol.ReflectedPower:0.###}{context} leave nothing to radiate after the {loadFraction * 100:0.###} % for the load: leave less for the load or move the spacing away from 0.5 guide wavelength"));
             double e2Sum = sol.Excitations.Sum(e => e.Magnitude * e.Magnitude);
             double scale = sol.RadiatedPower / e2Sum;
             var effective = sol.Excitations.Select(e => e.Magnitude * e.Magnitude * scale).ToArray();
@@ -143,7 +170,7 @@ internal static class CoupledTravellingWaveDesigner
             }
             if (iterations >= options.MaximumIterations)
                 throw new ConvergenceException(string.Create(CultureInfo.InvariantCulture,
-                    $"the coupled travelling-wave design did not bring every slot voltage within {options.ToleranceDb} dB of the taper (residual in power dB; phases {phaseError:0.###} deg off the progression): strong coupling between neighbours; increase the spacing or use a gentler taper"),
+                    $"the travelling-wave design{context} did not bring every slot voltage within {options.ToleranceDb} dB of the taper (residual in power dB; phases {phaseError:0.###} deg off the progression): strong coupling between neighbours; increase the spacing or use a gentler taper"),
                     iterations, residual);
             var slots = new SlotDesign[n];
             for (int i = 0; i < n; i++)
@@ -152,15 +179,24 @@ internal static class CoupledTravellingWaveDesigner
                 double p = shape[i] * budget / arriving;
                 if (!(p > 0 && p <= 0.5))
                     throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                        $"slot {i + 1} must absorb p = {p:0.###} of the power arriving at it under mutual coupling, beyond the 0.5 a shunt slot on a matched line can take: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
+                        $"slot {i + 1} must absorb p = {p:0.###} of the power arriving at it{context}, beyond the 0.5 a shunt slot on a matched line can take: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
                 g[i] = TravellingWaveConductances.SingleShuntConductance(p);
                 if (g[i] > gMax)
                     throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                        $"slot {i + 1} needs g = {g[i]:0.000} under mutual coupling, above the {gMax:0.000} the {slot.Name} can give at {f0}: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
+                        $"slot {i + 1} needs g = {g[i]:0.000}{context}, above the {gMax:0.000} the {slot.Name} can give at {f0}: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
                 var r = slot.ForConductance(g[i], f0);
                 var s0 = design.Slots[i];
                 if (options.CorrectPhase)
-                    lengthShift[i] += LengthForPhase(slot, r.Coupling, r.ResonantLength.Meters + lengthShift[i], -departure[i], f0, i);
+                {
+                    // A secant step of arg y(l) can overshoot far from resonance: take at most 5 % of the length per
+                    // iteration, and refuse a slot detuned by more than a quarter of its resonant length (its admittance
+                    // phase then saturates near ±90° and no length gives the phase asked).
+                    double resonant = r.ResonantLength.Meters, step = LengthForPhase(slot, r.Coupling, resonant + lengthShift[i], -departure[i], f0, i);
+                    lengthShift[i] += Math.Clamp(step, -MaximumStepFraction * resonant, MaximumStepFraction * resonant);
+                    if (Math.Abs(lengthShift[i]) > MaximumDetuningFraction * resonant)
+                        throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
+                            $"slot {i + 1} would have to be detuned by more than {MaximumDetuningFraction:P0} of its resonant length ({resonant * 1e3:0.###} mm) to turn its phase by {-departure[i] * 180 / Math.PI:0.#} deg{context}: move the spacing away from 0.5 guide-wavelength"));
+                }
                 slots[i] = s0 with
                 {
                     Coupling = Math.Sign(s0.Coupling) * Math.Abs(r.Coupling),

@@ -51,6 +51,16 @@ internal static class OutputFolder
         new("slots.png", (r, s) => PlotExport.Write(DesignPlots.Slots(r), s, "png")),
         new("sweep.png", (r, s) => PlotExport.Write(DesignPlots.Sweep(r), s, "png", 900, DesignPlots.SweepHeight)),
         new("scan.png", (r, s) => PlotExport.Write(ScanPlot.Build(r), s, "png", 900, ScanPlot.Height(r))),
+        new("vertical.png", (r, s) => PlotExport.Write(DesignPlots.Vertical(r), s, "png"))
+        {
+            Many = r => r.Flare is null ? [] : [("vertical.png", PlotBytes(DesignPlots.Vertical(r)))],
+            Owns = n => n == "vertical.png",
+        },
+        new("parts.csv", (r, s) => s.Write(Utf8(PartsCsv.ToText(r))))
+        {
+            Many = r => r.Parts.Count == 0 ? [] : [("parts.csv", Utf8(PartsCsv.ToText(r)))],
+            Owns = n => n == "parts.csv",
+        },
         new("input.s1p", Text(TouchstoneWriter.Write)),
         new("summary.md", Text(SummaryMarkdown.Write)),
         new("spec.yaml", (r, s) => s.Write(new UTF8Encoding(false).GetBytes(r.SpecText ?? "# the spec's text was not given to this writer\n"))),
@@ -130,6 +140,13 @@ internal static class OutputFolder
         [.. Files.SelectMany(f => f.Many is { } many ? many(report).Select(p => p.Name) : [f.Name])];
 
     private static byte[] Utf8(string text) => new UTF8Encoding(false).GetBytes(text);
+
+    private static byte[] PlotBytes(OxyPlot.PlotModel model)
+    {
+        using var stream = new MemoryStream();
+        PlotExport.Write(model, stream, "png");
+        return stream.ToArray();
+    }
 
     /// <summary>Adapts a text writer to a stream: UTF-8 without byte-order mark, invariant culture.</summary>
     private static Action<DesignReport, Stream> Text(Action<DesignReport, TextWriter> write) => (r, s) =>
