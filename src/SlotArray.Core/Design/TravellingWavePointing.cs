@@ -56,16 +56,23 @@ internal static class TravellingWavePointing
         var options = CoupledTravellingWaveOptions.Default with { ToleranceDegrees = ToleranceDegrees };
         try
         {
-            var corrected = CoupledTravellingWaveDesigner.Iterate(stick, options, start,
-                d => ArrayNetwork.Solve(d, slot, f0), " (isolated slots, lengths detuned for phase)");
-            // The element pattern pulls the beam slightly toward broadside: one more pass on a progression steeper by
-            // dκ = k cos θ · residual (from k sin θ = κ − π/d) removes it.
+            const string context = " (isolated slots, lengths detuned for phase)";
+            var corrected = CoupledTravellingWaveDesigner.Iterate(stick, options, start, d => ArrayNetwork.Solve(d, slot, f0), context,
+                releaseSaturated: true);
+            // The element pattern pulls the beam slightly toward broadside, and a slot left resonant (its phase free) pulls
+            // it toward the feed: further passes on a progression steeper by dκ = k cos θ · residual (from
+            // k sin θ = κ − π/d) remove it.
             double residual = AchievedBeam(corrected.Design, slot).Radians - asked.Value.Radians;
-            if (Math.Abs(residual) * 180 / Math.PI > ElementPullToleranceDegrees)
+            double kappa = stick.Guide.PhaseConstant(f0);
+            for (int pass = 0; Math.Abs(residual) * 180 / Math.PI > ElementPullToleranceDegrees; pass++)
             {
-                double kappa = stick.Guide.PhaseConstant(f0) - f0.FreeSpaceWavenumber * Math.Cos(asked.Value.Radians) * residual;
-                corrected = CoupledTravellingWaveDesigner.Iterate(stick, options, start,
-                    d => ArrayNetwork.Solve(d, slot, f0), " (isolated slots, lengths detuned for phase)", kappa);
+                if (pass == MaximumAimingPasses)
+                    throw new ConvergenceException(string.Create(CultureInfo.InvariantCulture,
+                        $"aiming the slot-phase progression left the beam {residual * 180 / Math.PI:0.###} deg off {asked.Value.Degrees:0.###} deg after {pass} passes"), pass, residual);
+                kappa -= f0.FreeSpaceWavenumber * Math.Cos(asked.Value.Radians) * residual;
+                corrected = CoupledTravellingWaveDesigner.Iterate(stick, options, start, d => ArrayNetwork.Solve(d, slot, f0), context, kappa,
+                    releaseSaturated: true);
+                residual = AchievedBeam(corrected.Design, slot).Radians - asked.Value.Radians;
             }
             return start with { Design = corrected.Design, AchievedErrorDb = corrected.ResidualDb / 2 }
                 with { PhaseErrorDegrees = corrected.PhaseErrorDegrees, Correction = PointingCorrection.LengthDetuning, AskedBeam = asked,
@@ -79,6 +86,9 @@ internal static class TravellingWavePointing
 
     /// <summary>Residual above which the detuned design takes one more pass to remove the element pattern's pull, degrees.</summary>
     public const double ElementPullToleranceDegrees = 0.01;
+
+    /// <summary>Passes aiming the progression's slope before the detuning is given up for the spacing correction.</summary>
+    public const int MaximumAimingPasses = 8;
 
     /// <summary>Pointing residual the spacing correction aims for, degrees.</summary>
     public const double SpacingToleranceDegrees = 0.005;

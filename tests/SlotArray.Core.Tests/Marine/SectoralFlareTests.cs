@@ -88,6 +88,27 @@ public class SectoralFlareTests
         Check.Absolute(90, flare.MaximumPhaseError(F).Degrees, 1e-6, "at the default 90° phase error");
     }
 
+    [Theory]
+    [InlineData(0.125)]
+    [InlineData(0.375)]
+    public void The_vertical_beamwidth_with_phase_error_agrees_with_an_independent_integration(double t)
+    {
+        // Balanis's universal patterns of the H-plane sectoral horn (Antenna Theory, 4th ed., 2016, §13.2) are the same
+        // aperture integral tabulated against t = A²/(8λR); here it is evaluated independently (MathNet double-exponential
+        // rule, Brent for the half-power angle) for t = 1/8 and 3/8 on a 3 λ aperture, against the tool's Gauss–Legendre rule.
+        var flare = WithPhase(3, t);
+        double a = flare.Aperture.Meters, r = flare.ApexDistance.Meters, k = 2 * Math.PI / Lambda;
+        Complex Integral(double sinPhi) => new(
+            Integrate.DoubleExponential(y => Math.Cos(Math.PI * y / a) * Math.Cos(-k * y * y / (2 * r) + k * y * sinPhi), -a / 2, a / 2, 1e-12),
+            Integrate.DoubleExponential(y => Math.Cos(Math.PI * y / a) * Math.Sin(-k * y * y / (2 * r) + k * y * sinPhi), -a / 2, a / 2, 1e-12));
+        double peak = Integral(0).Magnitude;
+        double Level(double phi) => Math.Pow(0.5 * (1 + Math.Cos(phi)) * Integral(Math.Sin(phi)).Magnitude / peak, 2) - 0.5;
+        double independent = 2 * Brent.FindRoot(Level, 1e-3, 0.8, 1e-10, 200) * 180 / Math.PI;
+        Check.Relative(independent, flare.HalfPowerBeamwidth(F).Degrees, 0.05, "independent aperture integration (MathNet double-exponential), issue 18: within 5 %");
+        // The phase error broadens the beam: wider than the uniform-phase cosine aperture's ≈ 68.8° λ/A (Balanis 2016 Table 12.1, from memory).
+        Assert.True(flare.HalfPowerBeamwidth(F).Degrees > 68.8 / 3 * 0.99, $"HPBW {flare.HalfPowerBeamwidth(F).Degrees:0.##} deg at t = {t}");
+    }
+
     [Fact]
     public void The_throat_decay_is_the_closed_form_integral_and_a_cut_off_aperture_is_refused()
     {

@@ -79,12 +79,14 @@ public class TravellingWavePointingTests
         return at;
     }
 
-    [Fact]
-    public void The_uncoupled_16_slot_design_points_within_0_05_deg_of_the_phase_condition()
+    [Theory]
+    [InlineData(-25)]
+    [InlineData(-30)]   // the issue's case: detuned, slots 5 and 6 would need more than the slot's largest conductance
+    public void The_uncoupled_16_slot_design_points_within_0_05_deg_of_the_phase_condition(double sidelobes)
     {
-        var request = Sixteen(0.08, -25);
+        var request = Sixteen(0.08, sidelobes);
         var slot = ArrayPipeline.SlotModelFor(request);
-        var a = TaylorLineSource.Weights(16, -25, 4);
+        var a = TaylorLineSource.Weights(16, sidelobes, 4);
         double asked = TravellingWaveBeam.Direction(Wr90, D21, F0)!.Value.Degrees;
 
         // Without the correction the resonant design misses (the test can fail): measured −3.04°.
@@ -98,14 +100,18 @@ public class TravellingWavePointingTests
         Check.Absolute(asked, TravellingWavePointing.AchievedBeam(tw.Design, slot).Degrees, 0.05, "issue 18: the beam within 0.05° of the phase condition");
         Check.Absolute(asked, ArrayFactorPeakDegrees(tw.Design, solution, asked), 0.05, "array factor peak found here by brute force, within 0.05°");
         Check.Absolute(0.08, solution.LoadPower, 2e-3, "feed.load = 8 % still reaches the load after the correction");
+        Assert.True(tw.AchievedErrorDb <= CoupledTravellingWaveDesigner.MaximumHeldShortfallDb / 2,
+            $"every slot within {CoupledTravellingWaveDesigner.MaximumHeldShortfallDb / 2} dB of its amplitude, largest {tw.AchievedErrorDb:0.####} dB");
     }
 
-    [Fact]
-    public void The_coupled_16_slot_design_points_within_0_05_deg_of_the_phase_condition()
+    [Theory]
+    [InlineData(-25)]
+    [InlineData(-30)]
+    public void The_coupled_16_slot_design_points_within_0_05_deg_of_the_phase_condition(double sidelobes)
     {
-        var request = Sixteen(0.08, -25, CouplingMode.Mutual);
+        var request = Sixteen(0.08, sidelobes, CouplingMode.Mutual);
         var slot = ArrayPipeline.SlotModelFor(request);
-        var r = CoupledTravellingWaveDesigner.Design(StickRequest.Of(request, slot, TaylorLineSource.Weights(16, -25, 4)));
+        var r = CoupledTravellingWaveDesigner.Design(StickRequest.Of(request, slot, TaylorLineSource.Weights(16, sidelobes, 4)));
         double asked = TravellingWaveBeam.Direction(Wr90, D21, F0)!.Value.Degrees;
         var solution = CoupledArrayNetwork.Solve(r.Design, slot, F0);
         Check.Absolute(asked, ArrayFigures.At(r.Design, solution).Metrics.BeamDirection.Degrees, 0.05,
@@ -128,8 +134,8 @@ public class TravellingWavePointingTests
     [Fact]
     public void Load_auto_returns_a_load_that_designs_and_half_a_percent_less_refuses()
     {
-        // The issue's 16-slot case (Taylor 30 dB, n̄ = 4): 8 % is just short of what the slots can deliver once the beam
-        // is put at −2.675°.
+        // The issue's 16-slot case (Taylor 30 dB, n̄ = 4): a little below 8 % is what the slots can deliver once the beam
+        // is put at −2.675° (the slots of largest conductance held at the slot's largest).
         var request = Sixteen(0.05, -30) with { Feed = Sixteen(0.05, -30).Feed with { AutoLoad = true } };
         var slot = ArrayPipeline.SlotModelFor(request);
         var a = TaylorLineSource.Weights(16, -30, 4);
