@@ -27,11 +27,11 @@ public class EdgeSlotToleranceTests
         return loaded.Request!;
     }
 
-    /// <summary>A 16-slot edge array, 20 % to the load with the tolerance block.</summary>
+    /// <summary>A 16-slot edge array, 50 % to the load (real edge slots top out near g = 0.095: issue 20) with the tolerance block.</summary>
     private static ArrayRequest Small()
     {
         const string yaml = "spec: 1\nname: edge16\nfrequency: 9.41 GHz\nband: [9.30 GHz, 9.50 GHz]\nguide:\n  size: WR-90\n  wall: 1.27 mm\n  metal: aluminium\n"
-            + "slots:\n  type: edge\n  count: 16\n  width: 1.6 mm\n  cutter: 1.6 mm\nfeed:\n  type: travelling-wave\n  spacing: 20.0 mm\n  load: 20 %\n"
+            + "slots:\n  type: edge\n  count: 16\n  width: 1.6 mm\n  cutter: 1.6 mm\nfeed:\n  type: travelling-wave\n  spacing: 20.0 mm\n  load: 50 %\n"
             + "taper:\n  type: taylor\n  sidelobes: -25 dB\n  nbar: 3\n" + Block;
         var loaded = SpecLoader.Parse(yaml, "edge10.yaml");
         Assert.True(loaded.IsValid, string.Join("\n", loaded.Errors));
@@ -51,9 +51,11 @@ public class EdgeSlotToleranceTests
         var sameGrid = ToleranceAnalysis.Run(result, request.Tolerance! with { Trials = 4 }, new ToleranceOptions(PatternPoints: designPoints - 1)).MonteCarlo;
         var byDefault = ToleranceAnalysis.Run(result, request.Tolerance! with { Trials = 4 }).MonteCarlo;
         double gainDbi = 10 * Math.Log10(sameGrid.Nominal.Gain);
-        Check.Absolute(at.GainDbi, gainDbi, 0.01, "design's gain, ArrayFigures (co/cross-polar split of the edge slots)");
+        // 0.02 dB: with the full-wave edge-slot model (issue 20) the design's figures (read through its frequency-
+        // interpolated slot model) and the tolerance's nominal (the slot model itself) differ by 0.0105 dB (measured).
+        Check.Absolute(at.GainDbi, gainDbi, 0.02, "design's gain, ArrayFigures (co/cross-polar split of the edge slots)");
         Check.Absolute(at.Metrics.PeakSidelobeDb!.Value, sameGrid.Nominal.PeakSidelobeDb, 0.01, "design's peak sidelobe, same grid");
-        Check.Absolute(at.GainDbi, 10 * Math.Log10(byDefault.Nominal.Gain), 0.01, "design's gain, tolerance default grid");
+        Check.Absolute(at.GainDbi, 10 * Math.Log10(byDefault.Nominal.Gain), 0.02, "design's gain, tolerance default grid");
         Check.Absolute(at.Metrics.PeakSidelobeDb!.Value, byDefault.Nominal.PeakSidelobeDb, 0.02, "design's peak sidelobe, tolerance default grid (sampling)");
         // Before: the half-wave broad-wall element and the half-space directivity of the raw excitations, 21.16 dBi.
         Assert.True(Math.Abs(gainDbi - 21.16) > 0.05, $"gain {gainDbi:0.000} dBi: still the broad-wall element model");

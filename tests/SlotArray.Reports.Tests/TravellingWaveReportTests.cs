@@ -12,7 +12,8 @@ namespace SlotArray.Reports.Tests;
 
 /// <summary>
 /// Report of a travelling-wave edge-slot array (issue 6): load, squint, cross-polar requirement, sweep entries, datum,
-/// scan table and plot. One small array (20 edge slots, 0.45 λg, Taylor −25 dB, 10 % to the load), 21 sweep points.
+/// scan table and plot. One small array (20 edge slots, 0.45 λg, Taylor −25 dB, 40 % to the load: real edge slots top out
+/// near g = 0.095, issue 20), 21 sweep points.
 /// </summary>
 public class TravellingWaveReportTests
 {
@@ -22,7 +23,7 @@ public class TravellingWaveReportTests
         new("tw-edge-20", F0, Frequency.FromGigahertz(9.3), Frequency.FromGigahertz(9.5),
             RectangularWaveguide.FromStandard(WaveguideCatalogue.Find("WR-90")!, Length.FromMillimeters(1.27), Metal.Aluminium),
             new SlotRequest(SlotType.Edge, 20, Length.FromMillimeters(1.6), Length.FromMillimeters(1.6), SlotModelKind.Stevenson),
-            new FeedRequest(FeedType.TravellingWave, GuideDistance.InGuideWavelengths(0.45), FeedPosition.End, 0.10, GuideDistance.InGuideWavelengths(0.25)),
+            new FeedRequest(FeedType.TravellingWave, GuideDistance.InGuideWavelengths(0.45), FeedPosition.End, 0.40, GuideDistance.InGuideWavelengths(0.25)),
             new TaperRequest(TaperType.Taylor, -25, 4, -20, 2, null), CouplingMode.None, null, new Requirements(null, crossPolarDb, null), null);
 
     private static readonly Lazy<(ArrayResult Result, DesignReport Report)> Run = new(() =>
@@ -36,14 +37,14 @@ public class TravellingWaveReportTests
     {
         var (result, report) = Run.Value;
         Assert.NotNull(report.Load);
-        Check.Absolute(0.10, report.Load!.Fraction, 0, "feed.load of the request");
-        Check.Absolute(0.10, report.Load.PowerWPerWIn, 1e-3, "the designer leaves P_L for the load (refinement to 1e-4 dB)");
+        Check.Absolute(0.40, report.Load!.Fraction, 0, "feed.load of the request");
+        Check.Absolute(0.40, report.Load.PowerWPerWIn, 1e-3, "the designer leaves P_L for the load (refinement to 1e-4 dB)");
         var tw = report.TravellingWave!;
         var d = result.Design.Spacing.Meters;
         double lam = F0.FreeSpaceWavelength.Meters, lg = result.Design.GuideWavelength.Meters;
         Check.Absolute(Math.Asin(lam / lg - lam / (2 * d)) * 180 / Math.PI, tw.SquintDeg, 1e-9, "Elliott 1981, Ch. 8: sin θ = λ/λg − λ/(2d)");
         Check.Absolute(tw.SquintDeg, report.Pattern.BeamDeg, 0.1, "the network pattern's beam agrees with the phase condition");
-        Assert.InRange(tw.Efficiency, 0.8, 0.9);   // 10 % to the load plus ~2 % wall loss (definition: radiated / accepted)
+        Assert.InRange(tw.Efficiency, 0.5, 0.6);   // 40 % to the load plus ~1 % wall loss (definition: radiated / accepted)
         Assert.Equal("matched-load", report.Termination.Type);
         Assert.Equal("inner face of the load-end flange (matched load)", report.Inputs.DatumDescription);
     }
@@ -55,7 +56,7 @@ public class TravellingWaveReportTests
         string json = DesignJson.ToText(report);
         using var doc = JsonDocument.Parse(json);
         var root = doc.RootElement;
-        Assert.Equal(0.10, root.GetProperty("load").GetProperty("fraction").GetDouble());
+        Assert.Equal(0.40, root.GetProperty("load").GetProperty("fraction").GetDouble());
         Assert.True(root.GetProperty("load").TryGetProperty("power_w_per_w_in", out _));
         foreach (var s in root.GetProperty("slots").EnumerateArray())
         {

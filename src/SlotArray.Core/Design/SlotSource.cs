@@ -74,7 +74,7 @@ internal sealed class SlotSource
         return request.Slots.Type switch
         {
             SlotType.Longitudinal => LongitudinalSlotModels.Create(request.Slots.Model, request.Guide, request.Slots.Width, request.DesignFrequency, cache: Cache),
-            SlotType.Edge => EdgeSlot.Create(request.Guide, request.Slots.Width),
+            SlotType.Edge => CalibratedEdgeSlot.Create(request.Guide, request.Slots.Width, request.Slots.Surround),
             _ => throw new InfeasibleDesignException(
                 $"slots of type '{request.Slots.Type}' have a conductance formula (slot command) but no array designer yet: use 'longitudinal' or 'edge' slots"),
         };

@@ -145,7 +145,8 @@ internal static class StarterSpec
                 // Edge slots' machining errors are the tilt and the depth of cut, not an offset.
                 common.Remove("tolerance.offset"); common.Remove("tolerance.systematic.offset");
                 common["tolerance.tilt"] = "0.1 deg"; common["tolerance.depth"] = "0.02 mm";
-                common["feed.type"] = "travelling-wave"; common["feed.spacing"] = "20 mm"; common["feed.load"] = "5 %";
+                // Real edge slots top out near g = 0.095 (25 deg, full-wave calibration): 32 slots leave about a quarter for the load.
+                common["feed.type"] = "travelling-wave"; common["feed.spacing"] = "20 mm"; common["feed.load"] = "25 %";
                 common["taper.sidelobes"] = "-25 dB";
                 common["requirements.sidelobes"] = "-20 dB";
                 return (["Starter spec (edge), an invented scenario: a 32-slot X-band deck radar antenna, inclined",
