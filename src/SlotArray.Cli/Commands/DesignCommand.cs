@@ -91,6 +91,7 @@ internal static class DesignCommand
     private static int Run(string path, string? outDir, bool json, SlotCache? cache, DocumentInfo document, TextWriter output, TextWriter error, bool progress)
     {
         var request = Load(path, error);
+        if (request.Planar is not null) return PlanarDesignRun.Run(request, outDir, cache, output, error);
         string folder = OutputFolderCheck.Prepare(outDir ?? DefaultFolder(request.Name), replacesWhole: true);
         var clock = Stopwatch.StartNew();
         var result = Analyse(request, cache, error, progress, out var source);

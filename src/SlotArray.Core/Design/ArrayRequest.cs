@@ -55,6 +55,9 @@ public sealed record ArrayRequest(
     /// budget (<see cref="Marine.PointingBudget"/>), or null when neither is given.
     /// </summary>
     public Marine.OperatingRange? Operating { get; init; }
+
+    /// <summary>A planar array (branch guides fed by a feed guide, spec <c>array: {type: planar, …}</c>); null for one stick.</summary>
+    internal PlanarArrayRequest? Planar { get; init; }
 }
 
 /// <summary>Slots of the array.</summary>

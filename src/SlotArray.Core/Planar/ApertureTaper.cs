@@ -1,3 +1,4 @@
+using SlotArray.Core.Design;
 using SlotArray.Core.Tapers;
 
 namespace SlotArray.Core.Planar;
@@ -43,7 +44,7 @@ internal sealed record ApertureTaper(TaperRequest Along, TaperRequest Across, do
         if (IsCircular)
         {
             if (layout.Outline == PlanarOutline.Rectangle)
-                throw new ArgumentException("the circular Taylor taper is for a circle or ellipse outline: set array.outline: circle (or ellipse), or use a separable taper");
+                throw new InfeasibleDesignException("the circular Taylor taper is for a circle or ellipse outline: set array.outline: circle (or ellipse), or use a separable taper");
             var d = Tapers.CircularTaylor.Parameters(CircularSidelobesDb!.Value, CircularNbar);
             var (rx, ry) = layout.SemiAxes;
             for (int i = 0; i < w.Length; i++)
@@ -61,7 +62,7 @@ internal sealed record ApertureTaper(TaperRequest Along, TaperRequest Across, do
             warnings.AddRange(along.Warnings);
             if (across is not null) warnings.AddRange(across.Warnings.Where(x => !warnings.Contains(x)));
             if (along.IsDifference || (across?.IsDifference ?? false))
-                throw new ArgumentException("a planar array here is designed for a sum pattern: difference tapers (Bayliss, odd given weights) are not supported yet");
+                throw new InfeasibleDesignException("a planar array here is designed for a sum pattern: difference tapers (Bayliss, odd given weights) are not supported yet; use a sum taper");
             for (int i = 0; i < w.Length; i++)
             {
                 var s = layout.Slots[i];

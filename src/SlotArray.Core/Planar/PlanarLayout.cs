@@ -1,17 +1,7 @@
+using SlotArray.Core.Design;
 using SlotArray.Core.Quantities;
 
 namespace SlotArray.Core.Planar;
-
-/// <summary>The outline of a planar aperture: slots whose centres fall outside it are left out.</summary>
-internal enum PlanarOutline
-{
-    /// <summary>The bounding rectangle: every slot kept.</summary>
-    Rectangle,
-    /// <summary>A circle of diameter the smaller side of the bounding rectangle.</summary>
-    Circle,
-    /// <summary>The ellipse inscribed in the bounding rectangle.</summary>
-    Ellipse,
-}
 
 /// <summary>
 /// One radiating slot's place on the aperture. Aperture axes: origin at the aperture centre, x along the branches,
@@ -39,6 +29,9 @@ internal readonly record struct ApertureSlot(int Branch, int Index, int Column, 
 /// <param name="Slots">The kept slots, ordered by branch, then x.</param>
 internal sealed record PlanarLayout(int Branches, int Columns, Length Spacing, Length Pitch, PlanarOutline Outline, IReadOnlyList<ApertureSlot> Slots)
 {
+    /// <summary>Largest bounding grid (branches × slots per branch) accepted.</summary>
+    public const int MaximumSlots = 2500;
+
     /// <summary>Number of kept slots.</summary>
     public int Count => Slots.Count;
 
@@ -71,14 +64,16 @@ internal sealed record PlanarLayout(int Branches, int Columns, Length Spacing, L
     /// a single slot or none at all overall.
     /// </summary>
     /// <param name="branches">Branch count M of the bounding grid, 1 … 200.</param>
-    /// <param name="columns">Slots per branch N of the bounding grid, even, 2 … 400.</param>
+    /// <param name="columns">Slots per branch N of the bounding grid, even, 2 … 1000; branches × columns ≤ <see cref="MaximumSlots"/>.</param>
     /// <param name="spacing">Slot spacing along the branches, &gt; 0.</param>
     /// <param name="pitch">Branch pitch, &gt; 0.</param>
     /// <param name="outline">The clipping outline.</param>
     public static PlanarLayout Create(int branches, int columns, Length spacing, Length pitch, PlanarOutline outline)
     {
         if (branches < 1 || branches > 200) throw new ArgumentOutOfRangeException(nameof(branches), branches, "a planar array needs 1 … 200 branches");
-        if (columns < 2 || columns > 400) throw new ArgumentOutOfRangeException(nameof(columns), columns, "each branch needs 2 … 400 slots");
+        if (columns < 2 || columns > 1000) throw new ArgumentOutOfRangeException(nameof(columns), columns, "each branch needs 2 … 1000 slots");
+        if ((long)branches * columns > MaximumSlots)
+            throw new InfeasibleDesignException($"{branches} branches × {columns} slots is {(long)branches * columns} slots; the planar design here handles at most {MaximumSlots} (its coupled network is one dense system): use fewer slots or branches");
         if (columns % 2 != 0)
             throw new ArgumentException($"slots.count = {columns}: a centre-fed branch needs an even number of slots (its coupling slot sits between the middle two); use {columns + 1} or {columns - 1}", nameof(columns));
         if (!(spacing.Meters > 0) || !(pitch.Meters > 0)) throw new ArgumentOutOfRangeException(nameof(spacing), "the slot spacing and the branch pitch must be positive");

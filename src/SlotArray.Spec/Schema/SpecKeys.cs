@@ -106,21 +106,27 @@ internal static class SpecKeys
             { Default = "5 %", DefaultText = "5 % (warning)", AppliesTo = TravellingWave },
         new("short", GuideDistance("between 0 and 1 guide-wavelength"), "last slot centre to the end short")
             { Default = "0.25 guide-wavelength", AppliesTo = StandingWave },
+        new("guide", new BlockValue(Guide), "planar arrays: the feed guide behind the branches (its λg/2 sets the pitch)")
+            { DefaultText = "the branch guide's section, broad wall solved for the pitch", AppliesTo = StandingWave },
     ])
     {
         Exclusive = [("spacing", "beam")],
     };
 
-    private static readonly string[] SidelobeTapers = TaperWords(Core.Tapers.TaperType.Chebyshev, Core.Tapers.TaperType.Taylor,
-        Core.Tapers.TaperType.Villeneuve, Core.Tapers.TaperType.TaylorOneParameter, Core.Tapers.TaperType.Bayliss);
-    private static readonly string[] NbarTapers = TaperWords(Core.Tapers.TaperType.Taylor, Core.Tapers.TaperType.Villeneuve, Core.Tapers.TaperType.Bayliss);
+    /// <summary>The taper word of Hansen's circular Taylor distribution (planar arrays with a circle or ellipse outline).</summary>
+    public const string CircularTaylor = "circular-taylor";
+
+    private static readonly string[] SidelobeTapers = [.. TaperWords(Core.Tapers.TaperType.Chebyshev, Core.Tapers.TaperType.Taylor,
+        Core.Tapers.TaperType.Villeneuve, Core.Tapers.TaperType.TaylorOneParameter, Core.Tapers.TaperType.Bayliss), CircularTaylor];
+    private static readonly string[] NbarTapers = [.. TaperWords(Core.Tapers.TaperType.Taylor, Core.Tapers.TaperType.Villeneuve, Core.Tapers.TaperType.Bayliss), CircularTaylor];
     private static readonly string[] PedestalTaper = TaperWords(Core.Tapers.TaperType.CosinePedestal);
     private static readonly string[] GivenTaper = TaperWords(Core.Tapers.TaperType.Given);
 
     /// <summary><c>taper</c>: the aperture amplitude distribution.</summary>
     public static readonly SpecSection Taper = new("taper", "the aperture amplitude distribution (sum or difference pattern)",
     [
-        new("type", Words(SpecNames.TaperTypes), "taper family") { Required = true, Example = "taylor" },
+        new("type", new ChoiceValue([.. SpecNames.TaperTypes.Select(p => p.Key), CircularTaylor], [], WordFolding.Words),
+            "taper family (circular-taylor: the whole aperture of a planar array with a circle or ellipse outline)") { Required = true, Example = "taylor" },
         new("sidelobes", Q(QuantityKind.Decibels, "-100 dB up to -13.3 dB (chebyshev: up to -1 dB; bayliss: -60 dB to -15 dB)"), "design sidelobe level")
             { AppliesTo = SidelobeTapers, RequiredFor = SidelobeTapers, Example = "-26 dB" },
         new("nbar", new IntegerValue(MinNbar, MaxNbar), "number of nearly equal sidelobes next to the main beam") { Default = 4L, AppliesTo = NbarTapers },
@@ -220,6 +226,24 @@ internal static class SpecKeys
             { DefaultText = "0 %: the designed lengths" },
     ]);
 
+    private static readonly string[] Planar = ["planar"];
+
+    /// <summary><c>array</c>: one stick (linear) or a planar array of branch guides fed by a feed guide.</summary>
+    public static readonly SpecSection ArrayLayout = new("array", "linear (one guide) or planar (branch guides side by side, fed by a feed guide behind them)",
+    [
+        new("type", new ChoiceValue(["linear", "planar"], [], WordFolding.Words), "linear: one guide; planar: branches fed through coupling slots")
+            { Default = "linear" },
+        new("branches", new IntegerValue(1, 200), "planar: number of branch guides of the bounding rectangle (slots.count is the slots per branch)")
+            { AppliesTo = Planar, RequiredFor = Planar, Example = "12" },
+        new("pitch", new AnyOfValue([Q(QuantityKind.Length, "at least the branch guide's a plus the common wall"), AutoWord]),
+            "planar: branch centre-line spacing; auto: a + common wall (or λg/2 of a given feed guide), the feed guide's a solved to match")
+            { Default = "auto", AppliesTo = Planar },
+        new("common_wall", Q(QuantityKind.Length, "0 or more, up to 20 mm"), "planar: thickness of the wall two neighbouring branch guides share")
+            { Default = "1 mm", AppliesTo = Planar },
+        new("outline", new ChoiceValue(["rectangle", "circle", "ellipse"], [], WordFolding.Words),
+            "planar: aperture outline; slots whose centres fall outside are left out") { Default = "rectangle", AppliesTo = Planar },
+    ]);
+
     /// <summary>The top level of the spec.</summary>
     public static readonly SpecSection Root = new("", "a SlotArray spec (version 1): one slotted-waveguide array from requirements to metal",
     [
@@ -233,6 +257,9 @@ internal static class SpecKeys
         new("slots", new BlockValue(Slots), Slots.Description) { Required = true },
         new("feed", new BlockValue(Feed), Feed.Description) { Required = true },
         new("taper", new BlockValue(Taper), Taper.Description) { DefaultText = "uniform (warning)" },
+        new("array", new BlockValue(ArrayLayout), ArrayLayout.Description) { DefaultText = "linear" },
+        new("taper_across", new BlockValue(Taper), "planar arrays: the taper across the branches (separable with taper along them)")
+            { DefaultText = "planar: the same as taper (warning)" },
         new("coupling", Words(SpecNames.CouplingModes), "mutual: Elliott's design with mutual coupling between slots") { Default = "none" },
         new("tolerance", new BlockValue(ToleranceBlock), "machining tolerances for the Monte Carlo analysis") { DefaultText = "no tolerance analysis" },
         new("requirements", new BlockValue(Requirements), Requirements.Description) { DefaultText = "none" },
@@ -244,5 +271,5 @@ internal static class SpecKeys
     ]);
 
     /// <summary>Every block, the top level first.</summary>
-    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, SigmaAngle, Requirements, Transmitter, Fabrication, Filter, Flare, Environment];
+    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ArrayLayout, ToleranceBlock, Systematic, Sigma, SigmaAngle, Requirements, Transmitter, Fabrication, Filter, Flare, Environment];
 }

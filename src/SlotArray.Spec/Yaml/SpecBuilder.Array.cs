@@ -86,6 +86,11 @@ internal sealed partial class SpecBuilder
     {
         var s = Sub(root, "feed", FeedKeys, true);
         if (s is null) return null;
+        if (s.Has("guide"))
+        {
+            feedGuideNode = s.KeyNode("guide");
+            feedGuide = Guide(s, f, null);
+        }
         FeedType? type = Choice(s, "type", SpecNames.FeedTypes, true);
         bool ok = type is not null;
         bool standing = type == FeedType.StandingWave, travelling = type == FeedType.TravellingWave;
@@ -238,15 +243,18 @@ internal sealed partial class SpecBuilder
     /// level); nbar (default 4); cosine-pedestal edge (required) and exponent (default 2); given weights (one per slot).
     /// A key the chosen family does not use is an error.
     /// </summary>
-    private TaperRequest? Taper(Section root, int? slotCount)
+    private TaperRequest? Taper(Section root, int? slotCount, string key = "taper")
     {
-        if (!root.Has("taper"))
+        if (!root.Has(key))
         {
-            D.Warn(root.Anchor, "no 'taper' given: using a uniform taper (first sidelobe about -13 dB); write e.g. 'taper: {type: taylor, sidelobes: -26 dB}'");
+            if (key == "taper")
+                D.Warn(root.Anchor, "no 'taper' given: using a uniform taper (first sidelobe about -13 dB); write e.g. 'taper: {type: taylor, sidelobes: -26 dB}'");
             return TaperRequest.Uniform;
         }
-        var s = Sub(root, "taper", TaperKeys, true);
+        var s = Sub(root, key, TaperKeys, true);
         if (s is null) return null;
+        if (s["type"] is ScalarNode { IsNull: false } typeNode && typeNode.Value.Trim().ToLowerInvariant().Replace('_', '-') == SpecKeys.CircularTaylor)
+            return CircularTaper(s, key);
         TaperType? type = Choice(s, "type", SpecNames.TaperTypes, true);
         if (type is null) return null;
         var t = type.Value;
@@ -254,8 +262,8 @@ internal sealed partial class SpecBuilder
         bool usesSll = SpecKeys.Taper["sidelobes"].Applies(family);
         bool usesNbar = SpecKeys.Taper["nbar"].Applies(family);
         bool ok = true;
-        foreach (var key in SpecKeys.Taper.Keys.Where(k => !k.Applies(family)).Select(k => k.Name))
-            if (s.Has(key)) ok &= Require(s, key, false, $"'{key}' does not apply to a {family} taper; remove it");
+        foreach (var name in SpecKeys.Taper.Keys.Where(k => !k.Applies(family)).Select(k => k.Name))
+            if (s.Has(name)) ok &= Require(s, name, false, $"'{name}' does not apply to a {family} taper; remove it");
 
         double? sll = UniformSidelobeDb;
         if (usesSll)

@@ -1,6 +1,7 @@
 using MathNet.Numerics;
 using MathNet.Numerics.Integration;
 using System.Numerics;
+using SlotArray.Core.Design;
 using SlotArray.Core.Patterns;
 using SlotArray.Core.Planar;
 using SlotArray.Core.Quantities;

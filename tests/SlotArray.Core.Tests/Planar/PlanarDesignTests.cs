@@ -1,5 +1,6 @@
 using System.Numerics;
 using SlotArray.Core.Coupling;
+using SlotArray.Core.Design;
 using SlotArray.Core.Patterns;
 using SlotArray.Core.Planar;
 using SlotArray.Core.Quantities;

@@ -1,4 +1,5 @@
 using System.Numerics;
+using SlotArray.Core.Design;
 using SlotArray.Core.Patterns;
 using SlotArray.Core.Planar;
 using SlotArray.Core.Quantities;
