@@ -169,25 +169,32 @@ internal static class CoupledArrayNetwork
             leftCount = centre ? design.Slots.Count(s => s.Position < design.FeedPlane) : design.Count;
         }
 
-        /// <summary>f_n, D + M and Γ0 at frequency f.</summary>
         /// <summary>The mutual impedances of the slots at f.</summary>
         public CouplingMatrix Mutual(Frequency f) => coupling(placements, design.Slots[0].Width, f);
 
+        /// <summary>f_n, D + M and Γ0 at frequency f.</summary>
         public (double[] F, Matrix<Complex> DM, double Gamma0) SlotBlocks(Frequency f)
+        {
+            var (fn, dm, gamma0) = SlotArrays(f);
+            return (fn, Matrix<Complex>.Build.Dense(fn.Length, fn.Length, dm), gamma0);
+        }
+
+        /// <summary>f_n, D + M (column-major) and Γ0 at frequency f.</summary>
+        private (double[] F, Complex[] DM, double Gamma0) SlotArrays(Frequency f)
         {
             int n = design.Count;
             double gamma0 = ElliottDesignEquations.Gamma0(design.Guide, f);
             var z = Mutual(f);
             double scale = 1 / (gamma0 * PhysicalConstants.HalfWaveDipoleResistance);
             var fn = new double[n];
-            var dm = Matrix<Complex>.Build.Dense(n, n);
+            var dm = new Complex[n * n];
             for (int i = 0; i < n; i++)
             {
                 var s = design.Slots[i];
                 fn[i] = ElliottDesignEquations.CouplingFunction(design.Guide, f, Length.FromMeters(s.Coupling), 0.5 * s.Length);
                 var y = admittances is null ? slot!.Admittance(s.Coupling, s.Length, f) : admittances[i];
                 for (int j = 0; j < n; j++)
-                    dm[i, j] = i == j ? fn[i] * fn[i] / y : scale * z[i, j];
+                    dm[j * n + i] = i == j ? fn[i] * fn[i] / y : scale * z[i, j];
             }
             return (fn, dm, gamma0);
         }
@@ -195,7 +202,7 @@ internal static class CoupledArrayNetwork
         public NetworkSolution Solve(Frequency f)
         {
             int n = design.Count;
-            var (fn, k, gamma0) = SlotBlocks(f);
+            var (fn, k, gamma0) = SlotArrays(f);
             var (source, response) = LineResponse(design.Guide.PropagationConstant(f));
             // Shunt current of slot j in its arm's polarity: i_j = p_j w_j, p_j = pol_j f_j. The slot rows
             // p_i V_i − Σ_j (D + M)_ij w_j = 0 with V = V_s + G i become (D + M − P G P) w = P V_s.
@@ -205,9 +212,9 @@ internal static class CoupledArrayNetwork
             for (int i = 0; i < n; i++)
             {
                 b[i] = p[i] * source[i];
-                for (int j = 0; j < n; j++) k[i, j] -= p[i] * response[i, j] * p[j];
+                for (int j = 0; j < n; j++) k[j * n + i] -= p[i] * response[i * n + j] * p[j];
             }
-            var w = k.LU().Solve(b);
+            var w = Matrix<Complex>.Build.Dense(n, n, k).LU().Solve(b);
 
             var ya = new Complex[n];
             var e = new Complex[n];
@@ -215,7 +222,7 @@ internal static class CoupledArrayNetwork
             for (int i = 0; i < n; i++)
             {
                 var vi = source[i];
-                for (int j = 0; j < n; j++) vi += response[i, j] * p[j] * w[j];
+                for (int j = 0; j < n; j++) vi += response[i * n + j] * p[j] * w[j];
                 ya[i] = fn[i] * w[i] / ((i < leftCount ? 1 : -1) * vi);
                 e[i] = w[i] / root;
             }
@@ -232,7 +239,7 @@ internal static class CoupledArrayNetwork
         /// conditions (end feed: V_f + I_f = 2; centre feed: equal currents out of both halves and (V_L + V_R)/n + n I_L = 2),
         /// which are linear in a and i. The same equations as the transfer-form assembly, reduced to the N slot unknowns.
         /// </summary>
-        private (Complex[] Source, Complex[,] Response) LineResponse(Complex gamma)
+        private (Complex[] Source, Complex[] Response) LineResponse(Complex gamma)
         {
             int n = design.Count;
             bool centre = design.Feed == FeedPosition.Centre;
@@ -281,16 +288,20 @@ internal static class CoupledArrayNetwork
             Complex[,] inv = { { a[1, 1] / det, -a[0, 1] / det }, { -a[1, 0] / det, a[0, 0] / det } };
 
             var source = new Complex[n];
-            var g = new Complex[n, n];
+            var g = new Complex[n * n];
+            var u = new Complex[2, n];       // row of A⁻¹C for each arm
+            for (int arm = 0; arm < 2; arm++)
+                for (int k = 0; k < n; k++) u[arm, k] = inv[arm, 0] * c[0, k] + inv[arm, 1] * c[1, k];
+            var back = ex.Select(x => 1 / x).ToArray();
             for (int j = 0; j < n; j++)
             {
                 int arm = j < leftCount ? 0 : 1;
                 source[j] = phi[j] * (inv[arm, 0] * r[0] + inv[arm, 1] * r[1]);
                 for (int k = 0; k < n; k++)
                 {
-                    var v = -phi[j] * (inv[arm, 0] * c[0, k] + inv[arm, 1] * c[1, k]);
-                    if ((k < leftCount) == (j < leftCount) && ell[k] < ell[j]) { var q = ex[j] / ex[k]; v += 0.5 * (q - 1 / q); }
-                    g[j, k] = v;
+                    var v = -phi[j] * u[arm, k];
+                    if ((k < leftCount) == (j < leftCount) && ell[k] < ell[j]) v += 0.5 * (ex[j] * back[k] - ex[k] * back[j]);
+                    g[j * n + k] = v;
                 }
             }
             return (source, g);
