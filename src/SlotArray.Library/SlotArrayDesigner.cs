@@ -81,6 +81,8 @@ public static class SlotArrayDesigner
     public static DesignedArray Design(ArraySpec spec, CancellationToken cancellation = default, IProgress<WorkProgress>? progress = null)
     {
         ArgumentNullException.ThrowIfNull(spec);
+        if (spec.Request.Planar is not null)
+            throw new InfeasibleDesignException("planar arrays (array: {type: planar}) are designed by 'slotarray design'; this facade returns linear designs only so far");
         var source = SlotSource.For(spec.Request, new ResonantCharacterisationCache());
         var options = AnalysisOptions.Default with { Cancellation = cancellation, Progress = progress };
         var result = ArrayPipeline.Run(spec.Request, options, source);

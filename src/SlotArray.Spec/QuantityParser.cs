@@ -25,6 +25,8 @@ internal enum QuantityKind
     Conductivity,
     /// <summary>A distance in guide wavelengths: guide-wavelength (λg).</summary>
     GuideWavelengths,
+    /// <summary>A temperature in degrees Celsius: degC (°C); kept in °C (an offset scale, not converted to kelvin).</summary>
+    Temperature,
 }
 
 /// <summary>
@@ -54,6 +56,7 @@ internal static partial class QuantityParser
         new("S/m", QuantityKind.Conductivity, 1),
         new("guide-wavelength", QuantityKind.GuideWavelengths, 1), new("guide-wavelengths", QuantityKind.GuideWavelengths, 1),
         new("λg", QuantityKind.GuideWavelengths, 1),
+        new("degC", QuantityKind.Temperature, 1), new("°C", QuantityKind.Temperature, 1),
     ];
 
     /// <summary>
@@ -97,6 +100,7 @@ internal static partial class QuantityParser
         QuantityKind.Power => "a power such as '25 kW' (W, kW, MW)",
         QuantityKind.Conductivity => "a conductivity such as '3.5e7 S/m'",
         QuantityKind.GuideWavelengths => "a distance such as '0.5 guide-wavelength'",
+        QuantityKind.Temperature => "a temperature such as '-25 degC' (degC, °C)",
         _ => kind.ToString(),
     };
 
@@ -110,6 +114,7 @@ internal static partial class QuantityParser
         QuantityKind.Power => "a power",
         QuantityKind.Conductivity => "a conductivity",
         QuantityKind.GuideWavelengths => "a distance in guide wavelengths",
+        QuantityKind.Temperature => "a temperature",
         _ => kind.ToString(),
     };
 

@@ -77,9 +77,8 @@ public class SlotTableDesignTests
 
         File.WriteAllText(spec, withData.Replace("  data: edge.csv", "  data: edge.csv\n  extrapolate: true"));
         var (c2, _, e2) = DesignRuns.Run("design", spec, "-o", Path.Combine(dir, "out2"), "--no-cache");
-        // The design is written; the marine example's -25 dB cross-polar requirement FAILs for bare edge slots (exit 4,
-        // as for the example itself in TravellingWaveDemoTests).
-        Assert.True(c2 == ExitCodes.RequirementsNotMet, e2);
+        // The design is written and, behind the example's automatic polarisation filter, meets its requirements.
+        Assert.True(c2 == 0, e2);
         var rows = DesignRuns.CsvRecords(Path.Combine(dir, "out2", "cutlist.csv"));
         int tilt = Array.IndexOf(rows[0], "tilt_deg");
         foreach (var r in rows.Skip(1))

@@ -55,7 +55,7 @@ public class CorePurityTests
     private static readonly string[][] Stages =
     [
         ["Core"], ["Quantities"], ["Waveguides"], ["Patterns", "Coupling"], ["Tapers", "Slots"], ["Stick"],
-        ["Network", "Fabrication"], ["Design"], ["Safety"], ["Verdicts"], ["Tolerance"], ["Prototype"],
+        ["Network", "Fabrication"], ["Marine"], ["Design"], ["Planar"], ["Safety"], ["Verdicts"], ["Tolerance"], ["Prototype"],
     ];
 
     private static readonly Lazy<Dictionary<(string From, string To), List<string>>> Edges = new(FolderEdges);

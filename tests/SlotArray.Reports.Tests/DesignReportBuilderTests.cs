@@ -40,7 +40,7 @@ public class DesignReportBuilderTests
         var (sweep, atDesign, points) = ArrayPipeline.Analyse(request, design, slot, options);
         // The band sweep doubles as the match sweep here (the pipeline's own spans the VSWR bands).
         return new ArrayResult(request, taper, slot, design, new StandingWaveProcedure(), sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2),
-            sweep, design.Warnings);
+            sweep, AntennaAddOns.None, design.Warnings);
     }
 
     [Fact]

@@ -16,7 +16,7 @@ internal sealed class FuzzSpec
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
     /// <summary>Sections in the order written; "" holds the top-level scalars.</summary>
-    private static readonly string[] Order = ["", "guide", "slots", "feed", "taper", "tolerance", "requirements", "transmitter", "coupling"];
+    private static readonly string[] Order = ["", "guide", "slots", "feed", "taper", "tolerance", "requirements", "transmitter", "environment", "coupling"];
 
     /// <summary>Candidate values of every key, "section.key" (top-level keys without a section).</summary>
     private static readonly Dictionary<string, string[]> Values = new(StringComparer.Ordinal)
@@ -44,9 +44,10 @@ internal sealed class FuzzSpec
         ["feed.spacing"] = ["0.5 guide-wavelength", "0.1 guide-wavelength", "0.07 guide-wavelength", "0.25 guide-wavelength", "0.3 guide-wavelength",
             "0.45 guide-wavelength", "0.7 guide-wavelength", "0.9 guide-wavelength", "0.99 guide-wavelength", "20 mm", "5 mm", "3 mm", "30 mm"],
         ["feed.position"] = ["end", "centre", "middle"],
-        ["feed.load"] = ["5 %", "1 %", "30 %", "0.1 %", "90 %"],
+        ["feed.load"] = ["5 %", "1 %", "30 %", "0.1 %", "90 %", "auto"],
+        ["feed.beam"] = ["-4.5 deg", "-10 deg", "5 deg", "60 deg", "-85 deg"],
         ["feed.short"] = ["0.25 guide-wavelength", "0.75 guide-wavelength", "0.05 guide-wavelength", "0.5 guide-wavelength", "0.1 guide-wavelength", "3 mm"],
-        ["taper.type"] = ["uniform", "chebyshev", "taylor", "villeneuve", "taylor-one-parameter", "cosine-pedestal", "bayliss", "given"],
+        ["taper.type"] = ["uniform", "chebyshev", "taylor", "villeneuve", "taylor-one-parameter", "cosine-pedestal", "bayliss", "given", "circular-taylor"],
         ["taper.sidelobes"] = ["-14 dB", "-15 dB", "-20 dB", "-26 dB", "-30 dB", "-40 dB", "-60 dB", "-61 dB", "-70 dB", "-13.3 dB"],
         ["taper.nbar"] = ["2", "3", "4", "5", "6", "8"],
         ["taper.edge"] = ["-20 dB", "-3 dB", "-40 dB"],
@@ -68,6 +69,15 @@ internal sealed class FuzzSpec
         ["requirements.vswr"] = ["1.5", "1.5:1", "0.9"],
         ["transmitter.peak_power"] = ["25 kW", "1 MW", "5 W"],
         ["transmitter.average_power"] = ["20 W", "30 kW"],
+        ["transmitter.frequency_tolerance"] = ["30 MHz", "0 Hz", "-1 MHz"],
+        ["environment.temperature"] = ["[-25 degC, 55 degC]", "[20 °C, 20 °C]", "[60 degC, 10 degC]", "[-25 K, 55 K]"],
+        ["requirements.vertical_beamwidth"] = ["22 deg", "60 deg", "2 deg", "0 deg"],
+        ["filter"] = ["auto", "{spacing: 12 mm, depth: 10 mm}", "{spacing: 20 mm, depth: auto}", "{depth: auto, thickness: 1 mm}", "{spacing: 1 mm, thickness: 2 mm}"],
+        ["array"] = ["{type: linear}", "{type: planar, branches: 2}", "{type: planar, branches: 4, outline: circle}", "{type: planar, branches: 2, pitch: 20 mm}",
+            "{type: planar, branches: 3, common_wall: 30 mm}", "{type: planar}", "{type: line}", "{branches: 2}"],
+        ["taper_across"] = ["{type: taylor, sidelobes: -20 dB}", "{type: uniform}", "{type: circular-taylor, sidelobes: -30 dB}", "{type: given, weights: [1, 1]}"],
+        ["feed.guide"] = ["{size: WR-90, wall: 1 mm}", "{a: 21.54 mm, b: 10.16 mm, wall: 1 mm}", "{a: 30 mm, b: 10 mm, wall: 1 mm}"],
+        ["flare"] = ["auto", "{aperture: 100 mm, length: 150 mm}", "{aperture: 10 mm, length: 50 mm}", "{aperture: auto, phase_error: 45 deg}", "{length: 200 mm}"],
     };
 
     /// <summary>Every key the generator can write.</summary>

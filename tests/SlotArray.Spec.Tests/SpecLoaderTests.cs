@@ -14,7 +14,7 @@ public class SpecLoaderTests
     [Fact]
     public void Every_example_loads_without_errors_or_warnings()
     {
-        Assert.Equal(3, RepoFiles.Examples.Count);   // harbour demo, custom tube, marine travelling-wave edge-slot demo
+        Assert.Equal(4, RepoFiles.Examples.Count);   // harbour demo, custom tube, marine travelling-wave edge-slot demo, circular planar array
         foreach (string path in RepoFiles.Examples)
         {
             var r = SpecLoader.LoadFile(path);

@@ -57,9 +57,11 @@ internal static class CheckCommand
             ? string.Format(Inv, "{0}-fed, short {1}", SpecNames.Of(f.Position), Distance(f.ShortDistance, lg))
             : string.Format(Inv, "load {0:0.##} %", f.LoadFraction * 100);
         o.WriteLine($"  feed             {SpecNames.Of(f.Type)}, spacing {Distance(f.Spacing, lg)}, {fed}");
-        o.WriteLine($"  taper            {Taper(r.Taper)}");
+        o.WriteLine($"  taper            {(r.Planar?.CircularSidelobesDb is { } cs ? string.Format(Inv, "circular-taylor (whole aperture), sidelobes {0:G4} dB, n̄ {1}", cs, r.Planar.CircularNbar) : Taper(r.Taper))}");
+        if (r.Planar is { CircularSidelobesDb: null } pl) o.WriteLine($"  taper_across     {Taper(pl.Across ?? r.Taper)}");
         o.WriteLine($"  coupling         {SpecNames.Of(r.Coupling)}");
         if (r.Tolerance is { } t) o.WriteLine(string.Format(Inv, "  tolerance        Monte Carlo, {0} trials, seed {1}", t.Trials, t.Seed));
+        foreach (string line in PlanarCheck.Of(r).Lines) o.WriteLine(line);
     }
 
     private static string Distance(GuideDistance d, Core.Quantities.Length lg) => d.GuideWavelengths is { } n
@@ -110,6 +112,7 @@ internal static class CheckCommand
             ["coupling"] = SpecNames.Of(r.Coupling),
             ["warnings"] = warnings.Select(w => w.ToString()).ToArray(),
         };
+        if (PlanarCheck.Of(r).Json is { } planar) doc["planar"] = planar;
         if (r.Slots.Data is { } data && doc["slots"] is Dictionary<string, object?> slots)
         {
             slots.Remove("model");

@@ -91,6 +91,7 @@ internal static class DesignCommand
     private static int Run(string path, string? outDir, bool json, SlotCache? cache, DocumentInfo document, TextWriter output, TextWriter error, bool progress)
     {
         var request = Load(path, error);
+        if (request.Planar is not null) return PlanarDesignRun.Run(request, outDir, cache, output, error);
         string folder = OutputFolderCheck.Prepare(outDir ?? DefaultFolder(request.Name), replacesWhole: true);
         var clock = Stopwatch.StartNew();
         var result = Analyse(request, cache, error, progress, out var source);
@@ -211,6 +212,8 @@ internal static class DesignCommand
         if (r.TravellingWave is { } tw && r.Load is { } load)
         {
             o.WriteLine(string.Format(Inv, "  squint, scan rate      {0:0.00} deg (+ toward the load), {1:0.000} deg per 100 MHz", tw.SquintDeg, tw.ScanFromSweepDegPer100MHz));
+            o.WriteLine(string.Format(Inv, "  beam asked, residual   {0:0.000} deg, {1:+0.000;-0.000} deg (correction: {2}; spacing {3:0.000} mm{4})",
+                tw.BeamAskedDeg, Math.Round(tw.BeamResidualDeg, 3) + 0.0, tw.PointingCorrection, tw.SpacingM * 1e3, tw.LoadAuto ? $", load {load.Fraction * 100:0.##} % by load: auto" : ""));
             o.WriteLine(string.Format(Inv, "  load power, efficiency {0:0.00} % of input (asked {1:0.##} %), {2:0.0} % radiated", load.PowerWPerWIn * 100, load.Fraction * 100, tw.Efficiency * 100));
         }
         if (r.Coupling is { } c)
@@ -232,6 +235,15 @@ internal static class DesignCommand
         }
         if (p.CrossPolarDb is { } xpol)
             o.WriteLine(string.Format(Inv, "  cross-polar peak       {0:0.00} dB at {1:0.0} deg", xpol, p.CrossPolarDirectionDeg ?? double.NaN));
+        if (r.Flare is { } fl)
+            o.WriteLine(string.Format(Inv, "  flare (vertical beam)  HPBW {0:0.00} deg, aperture {1:0.0} mm, depth {2:0.0} mm, phase error {3:0} deg; antenna gain {4:0.00} dBi",
+                fl.VerticalHpbwDeg, fl.ApertureM * 1e3, fl.LengthM * 1e3, fl.PhaseErrorDeg, fl.TotalGainDbi));
+        if (r.Pointing is { } pt)
+            o.WriteLine(string.Format(Inv, "  pointing budget        worst bearing error {0:0.000} deg over {1:0} to {2:0} degC and ±{3:0.#} MHz",
+                pt.WorstErrorDeg, pt.LowC, pt.HighC, pt.FrequencyToleranceHz * 1e-6));
+        if (r.Filter is { } flt)
+            o.WriteLine(string.Format(Inv, "  polarisation filter    plates {0:0.0} mm pitch, {1:0.0} mm deep, {2:0.0} mm thick: cross-polar {3:0.00} dB bare, {4:0.00} dB behind it (worst over the band)",
+                flt.SpacingM * 1e3, flt.DepthM * 1e3, flt.ThicknessM * 1e3, flt.BareWorstDb, flt.FilteredWorstDb));
         foreach (var q in r.Requirements)
             o.WriteLine($"  {(q.Passed ? "PASS" : "FAIL")}  {q.Description}: required {q.Required}, achieved {q.Achieved}");
         if (r.Tolerance.Count > 0) o.WriteLine($"  tolerance              {r.Tolerance[0]}");

@@ -65,6 +65,8 @@ internal sealed record AnalysisOptions(int SweepPoints = 201, double BandSearchF
 /// <param name="BandVswr2">The continuous band with VSWR ≤ 2 containing the design frequency, or null.</param>
 /// <param name="MatchSweep">The input match alone (network, no pattern) over the match span (<see cref="MatchSpan"/>; by
 /// default wide enough to show the VSWR band edges), with the analysis that made <paramref name="Sweep"/>.</param>
+/// <param name="AddOns">What the antenna adds to the stick (filter, flare, pointing budget), each null when not asked for;
+/// with a filter, <paramref name="AtDesign"/> and <paramref name="SweepFigures"/> are the figures behind it.</param>
 /// <param name="Warnings">Every validity limit met on the way (taper, slot model, designer), in order, without repeats.</param>
 internal sealed record ArrayResult(
     ArrayRequest Request,
@@ -78,6 +80,7 @@ internal sealed record ArrayResult(
     MatchBand? BandVswr15,
     MatchBand? BandVswr2,
     FrequencySweep MatchSweep,
+    AntennaAddOns AddOns,
     IReadOnlyList<DesignWarning> Warnings);
 
 /// <summary>
@@ -101,14 +104,16 @@ internal static class ArrayPipeline
     /// <summary>
     /// The design <see cref="Run"/> delivers, without its band analysis or prototype margin: with <c>coupling: mutual</c>
     /// the coupled design (Elliott's for a standing-wave feed, <see cref="CoupledTravellingWaveDesigner"/> for a
-    /// travelling-wave feed), else <see cref="Synthesise"/>'s. The tolerance analysis perturbs this design, so that its
-    /// nominal figures are the key figures.
+    /// travelling-wave feed), else <see cref="Synthesise"/>'s (with <c>feed.load: auto</c> resolved,
+    /// <see cref="TravellingWaveLoad.Resolve"/>). The tolerance analysis perturbs this design, so that its nominal figures
+    /// are the key figures.
     /// </summary>
     /// <exception cref="InfeasibleDesignException">The request cannot be realised.</exception>
     public static ArrayDesign DeliveredDesign(ArrayRequest request, IShuntSlotModel slot, TaperResult taper)
     {
         ArgumentNullException.ThrowIfNull(request);
         ArgumentNullException.ThrowIfNull(taper);
+        request = TravellingWaveLoad.Resolve(request, slot, taper.Weights);
         return DesignStick(StickRequest.Of(request, slot, taper.Weights), request.Coupling).Design;
     }
 
@@ -122,7 +127,7 @@ internal static class ArrayPipeline
 
     /// <summary>
     /// Designs one stick with the designer its feed and coupling call for: standing-wave <see cref="StandingWaveDesigner"/>,
-    /// travelling-wave <see cref="TravellingWaveDesigner"/>; with <paramref name="coupling"/> mutual <see cref="ElliottDesigner"/>
+    /// travelling-wave <see cref="TravellingWaveDesigner"/> with its beam put where asked (<see cref="TravellingWavePointing"/>); with <paramref name="coupling"/> mutual <see cref="ElliottDesigner"/>
     /// or <see cref="CoupledTravellingWaveDesigner"/> (reporting progress and stopping on <paramref name="options"/>' token).
     /// </summary>
     /// <exception cref="InfeasibleDesignException">The stick cannot be realised; the message says what to change.</exception>
@@ -138,7 +143,7 @@ internal static class ArrayPipeline
         return stick.Feed.Type switch
         {
             FeedType.StandingWave => StandingWaveDesigner.Design(stick),
-            FeedType.TravellingWave => TravellingWaveDesigner.Design(stick),
+            FeedType.TravellingWave => TravellingWavePointing.Design(stick),
             _ => throw new InfeasibleDesignException($"the '{stick.Feed.Type}' feed has no designer: use a standing-wave or travelling-wave feed"),
         };
     }
@@ -204,7 +209,9 @@ internal static class ArrayPipeline
 
     /// <summary>
     /// Runs the whole pipeline with a given slot model in place of the one the request names (e.g. a model corrected by
-    /// what a prototype showed, <see cref="Prototype.CalibratedSlotModel"/>).
+    /// what a prototype showed, <see cref="Prototype.CalibratedSlotModel"/>). A travelling-wave request with
+    /// <c>feed.load: auto</c> is designed with its smallest feasible load (<see cref="TravellingWaveLoad.Resolve"/>); an
+    /// infeasible one is refused with the nearest feasible load and count (<see cref="TravellingWaveLoad.Explained"/>).
     /// </summary>
     /// <exception cref="InfeasibleDesignException">The request cannot be realised; the message says what to change.</exception>
     public static ArrayResult RunWithSlotModel(ArrayRequest request, IShuntSlotModel slot, AnalysisOptions? options = null)
@@ -213,6 +220,13 @@ internal static class ArrayPipeline
         ArgumentNullException.ThrowIfNull(slot);
         options ??= AnalysisOptions.Default;
         var taper = TaperSynthesis.Synthesize(request.Taper, request.Slots.Count);
+        return TravellingWaveLoad.Explained(request,
+            r => TravellingWavePointing.Design(StickRequest.Of(r, slot, TaperSynthesis.Synthesize(r.Taper, r.Slots.Count).Weights)),
+            () => RunResolved(TravellingWaveLoad.Resolve(request, slot, taper.Weights), slot, options, taper));
+    }
+
+    private static ArrayResult RunResolved(ArrayRequest request, IShuntSlotModel slot, AnalysisOptions options, TaperResult taper)
+    {
         var stick = DesignStick(StickRequest.Of(request, slot, taper.Weights), request.Coupling, options);
         options.Cancellation.ThrowIfCancellationRequested();
         SlotClearance.Require(stick.Design, request.Slots.Cutter);
@@ -232,6 +246,7 @@ internal static class ArrayPipeline
         var outside = SlotTableRangeCheck.Check(design, slot);
         var analysis = AnalysisModel(request, design, slot, options);
         var (sweep, atDesign, points) = Analyse(request, design, analysis, options);
+        (atDesign, points, var addOns) = AntennaAddOns.Of(request, design, atDesign, points);
         var f0 = request.DesignFrequency;
         MatchBand? b15 = null, b2 = null;
         if (options.BandSearchFraction > 0)
@@ -244,12 +259,12 @@ internal static class ArrayPipeline
             b2 = ArrayNetwork.FindBand(design, analysis, 2.0, lo, hi, step);
         }
         var warnings = taper.Warnings.Concat(design.Warnings).Concat(slot.Warnings(design.Slots.Max(s => Math.Abs(s.Coupling)), f0))
-            .Concat(outside).DistinctBy(w => w.Message).ToList();
+            .Concat(outside).Concat(addOns.Warnings).DistinctBy(w => w.Message).ToList();
         var (mLo, mHi) = MatchSpan.Resolve(request, options, b15, b2);
         RequireMatchPoints(options);
         var match = ArrayNetwork.Sweep(design, analysis, mLo, mHi, options.MatchPoints);
         DesignProcedure procedure = stick is TravellingWaveDesign tw ? new TravellingWaveProcedure(tw) : new StandingWaveProcedure();
-        return new ArrayResult(request, taper, slot, design, procedure, sweep, atDesign, points, b15, b2, match, warnings);
+        return new ArrayResult(request, taper, slot, design, procedure, sweep, atDesign, points, b15, b2, match, addOns, warnings);
     }
 
     /// <summary>
@@ -265,20 +280,28 @@ internal static class ArrayPipeline
         var analysis = AnalysisModel(request, design, slot, options);
         var sweep = CoupledArrayNetwork.Sweep(design, analysis, request.BandLow, request.BandHigh, options.SweepPoints);
         var (atDesign, points) = ArrayFigures.ForSweep(design, sweep);
+        (atDesign, points, var addOns) = AntennaAddOns.Of(request, design, atDesign, points);
         DesignProcedure procedure = stick switch
         {
             ElliottResult elliott => new ElliottProcedure(ElliottComparison.Of(elliott, analysis,
                 AnalysisModel(request, elliott.Uncoupled, slot, options), request.BandLow, request.BandHigh)),
-            CoupledTravellingWaveDesign coupled => new CoupledTravellingWaveProcedure(coupled.Uncoupled with { Design = design },
+            CoupledTravellingWaveDesign coupled => new CoupledTravellingWaveProcedure(coupled.Uncoupled with
+                {
+                    Design = design,
+                    Correction = CoupledTravellingWaveOptions.Default.CorrectPhase ? PointingCorrection.LengthDetuning : PointingCorrection.None,
+                    AskedBeam = coupled.Uncoupled.Squint,
+                    PhaseErrorDegrees = coupled.PhaseErrorDegrees,
+                    PhaseIterations = coupled.Iterations,
+                },
                 CoupledTravellingWaveComparison.Of(coupled, analysis, AnalysisModel(request, coupled.Uncoupled.Design, slot, options),
                     request.BandLow, request.BandHigh)),
             _ => throw new ArgumentException($"{stick.GetType().Name} is not a coupled design", nameof(stick)),
         };
-        var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).DistinctBy(w => w.Message).ToList();
+        var warnings = taper.Warnings.Concat(design.Warnings).Concat(outside).Concat(addOns.Warnings).DistinctBy(w => w.Message).ToList();
         var (lo, hi) = MatchSpan.Resolve(request, options, sweep.Band(1.5), sweep.Band(2.0));
         RequireMatchPoints(options);
         var match = CoupledArrayNetwork.Sweep(design, analysis, lo, hi, options.MatchPoints);
-        return new ArrayResult(request, taper, slot, design, procedure, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), match, warnings);
+        return new ArrayResult(request, taper, slot, design, procedure, sweep, atDesign, points, sweep.Band(1.5), sweep.Band(2.0), match, addOns, warnings);
     }
 
     private static void RequireMatchPoints(AnalysisOptions options)

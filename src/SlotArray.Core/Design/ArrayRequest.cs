@@ -43,6 +43,21 @@ public sealed record ArrayRequest(
     /// practice, no source); 0 (default) cuts the designed lengths. The analysis and every output describe the plate as cut.
     /// </summary>
     public double PrototypeMargin { get; init; }
+
+    /// <summary><c>filter</c>: the polarisation filter in front of edge slots (<see cref="Marine.CrossPolarFilter"/>), or null for none.</summary>
+    public Marine.FilterRequest? Filter { get; init; }
+
+    /// <summary><c>flare</c>: the plates diverging from the slotted face that set the vertical beam (<see cref="Marine.SectoralFlare"/>), or null for none.</summary>
+    public Marine.FlareRequest? Flare { get; init; }
+
+    /// <summary>
+    /// <c>environment.temperature</c> and <c>transmitter.frequency_tolerance</c>: the operating range of the pointing
+    /// budget (<see cref="Marine.PointingBudget"/>), or null when neither is given.
+    /// </summary>
+    public Marine.OperatingRange? Operating { get; init; }
+
+    /// <summary>A planar array (branch guides fed by a feed guide, spec <c>array: {type: planar, …}</c>); null for one stick.</summary>
+    internal PlanarArrayRequest? Planar { get; init; }
 }
 
 /// <summary>Slots of the array.</summary>
@@ -77,6 +92,9 @@ public sealed record Requirements(double? SidelobesDb, double? CrossPolarDb, dou
 {
     /// <summary>No explicit requirement.</summary>
     public static Requirements None { get; } = new(null, null, null);
+
+    /// <summary><c>requirements.vertical_beamwidth</c>: the vertical half-power beamwidth asked of the flare (met within ±<see cref="Verdicts.RequirementChecks.VerticalBeamwidthToleranceDegrees"/>), or null.</summary>
+    public Quantities.Angle? VerticalBeamwidth { get; init; }
 }
 
 /// <summary>Transmitter powers for the safety checks.</summary>

@@ -84,6 +84,18 @@ internal sealed record CoupledTravellingWaveDesign(
 /// </remarks>
 internal static class CoupledTravellingWaveDesigner
 {
+    /// <summary>Largest length change of one phase-correction step, as a fraction of the slot's resonant length (0.05).</summary>
+    public const double MaximumStepFraction = 0.05;
+
+    /// <summary>Largest total detuning of a slot, as a fraction of its resonant length (0.25), before the design is refused.</summary>
+    public const double MaximumDetuningFraction = 0.25;
+
+    /// <summary>
+    /// Largest shortfall of a released slot held at the slot's largest conductance (<c>releaseSaturated</c>), power dB: 0.1 dB
+    /// (1.2 % in amplitude, below the spread a slot's machining tolerances give; common practice, no source).
+    /// </summary>
+    public const double MaximumHeldShortfallDb = 0.1;
+
     /// <summary>
     /// Designs the array (see remarks). Throws <see cref="InfeasibleDesignException"/> naming the slot when one must
     /// absorb more than a shunt slot can (p &gt; 0.5) or more than the slot model's largest conductance, and
@@ -97,13 +109,39 @@ internal static class CoupledTravellingWaveDesigner
         ArgumentNullException.ThrowIfNull(stick);
         options ??= CoupledTravellingWaveOptions.Default;
         var slot = stick.Slot;
-        var amplitudes = stick.Amplitudes;
         if (slot.CouplingKind != SlotCouplingKind.Offset)
             throw new ArgumentException("the coupled travelling-wave designer is for longitudinal (offset) slots", nameof(stick));
+        var start = TravellingWaveDesigner.Design(stick);
+        var f0 = stick.DesignFrequency;
+        return Iterate(stick, options, start, d => CoupledArrayNetwork.Solve(d, slot, f0, options.Coupling), " under mutual coupling");
+    }
+
+    /// <summary>
+    /// The fixed point of the remarks on a given network: <paramref name="solve"/> returns the network solution of a
+    /// geometry at the design frequency (the coupled network here; the isolated-slot line for
+    /// <see cref="TravellingWavePointing"/>, which corrects the phases of an uncoupled design the same way).
+    /// </summary>
+    /// <param name="stick">The stick (travelling-wave feed; amplitudes a_n, slot 1 first; the isolated-slot model).</param>
+    /// <param name="options">Tolerances and the phase switch (<see cref="CoupledTravellingWaveOptions.Coupling"/> is not read).</param>
+    /// <param name="start">The isolated-slot design to start from.</param>
+    /// <param name="solve">Network solution of a geometry at the design frequency.</param>
+    /// <param name="context">Words added to the error messages after "the power arriving at it", e.g. " under mutual coupling".</param>
+    /// <param name="phaseSlope">κ of the phase progression e^{jκz_n} the slot voltages are brought to, rad/m; null: β of the guide.</param>
+    /// <param name="releaseSaturated">When a detuned slot would need more conductance than the slot gives (detuning lowers the
+    /// real part of its admittance), put it back to resonance, leave its phase free and hold it at the slot's largest
+    /// conductance (its power may then fall short of its share by up to <see cref="MaximumHeldShortfallDb"/>) instead of
+    /// refusing the design; the other slots still follow the progression (the caller then aims the progression's slope at
+    /// the asked beam). Off for the coupled designer.</param>
+    internal static CoupledTravellingWaveDesign Iterate(StickRequest stick, CoupledTravellingWaveOptions options, TravellingWaveDesign start,
+        Func<ArrayDesign, NetworkSolution> solve, string context, double? phaseSlope = null, bool releaseSaturated = false)
+    {
+        ArgumentNullException.ThrowIfNull(stick);
+        ArgumentNullException.ThrowIfNull(options);
+        ArgumentNullException.ThrowIfNull(start);
         if (!(options.ToleranceDb > 0)) throw new ArgumentOutOfRangeException(nameof(options), options.ToleranceDb, "the tolerance must be positive (dB)");
         if (options.MaximumIterations < 1) throw new ArgumentOutOfRangeException(nameof(options), options.MaximumIterations, "at least one iteration is needed");
-
-        var start = TravellingWaveDesigner.Design(stick);
+        var slot = stick.Slot;
+        var amplitudes = stick.Amplitudes;
         var f0 = stick.DesignFrequency;
         double loadFraction = start.LoadFraction;
         int n = start.Design.Count;
@@ -114,69 +152,124 @@ internal static class CoupledTravellingWaveDesigner
         var design = start.Design;
         var history = new List<double>();
         var lengthShift = new double[n];
-        double beta = start.Design.Guide.PhaseConstant(f0);
+        var free = new bool[n];
+        double beta = phaseSlope ?? start.Design.Guide.PhaseConstant(f0);
         int iterations = 0;
         while (true)
         {
             options.Cancellation.ThrowIfCancellationRequested();
-            var sol = CoupledArrayNetwork.Solve(design, slot, f0, options.Coupling);
+            var sol = solve(design);
             iterations++;
             options.Progress?.Report(new WorkProgress("coupled travelling-wave iterations", iterations, options.MaximumIterations));
             double budget = 1 - loadFraction - sol.WallLoss - sol.ReflectedPower;
             if (!(budget > 0))
                 throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                    $"with mutual coupling, wall loss {sol.WallLoss:0.###} and reflection {sol.ReflectedPower:0.###} leave nothing to radiate after the {loadFraction * 100:0.###} % for the load: leave less for the load or move the spacing away from 0.5 guide wavelength"));
+                    $"wall loss {sol.WallLoss:0.###} and reflection {sol.ReflectedPower:0.###}{context} leave nothing to radiate after the {loadFraction * 100:0.###} % for the load: leave less for the load or move the spacing away from 0.5 guide wavelength"));
             double e2Sum = sol.Excitations.Sum(e => e.Magnitude * e.Magnitude);
             double scale = sol.RadiatedPower / e2Sum;
             var effective = sol.Excitations.Select(e => e.Magnitude * e.Magnitude * scale).ToArray();
-            double residual = 0;
-            for (int i = 0; i < n; i++) residual = Math.Max(residual, Math.Abs(10 * Math.Log10(effective[i] / (shape[i] * budget))));
-            history.Add(residual);
-            var departure = PhaseDepartures(sol, design, beta);
+            // A released slot held at the slot's largest conductance cannot follow its share: its shortfall is tracked apart
+            // and accepted up to MaximumHeldShortfallDb.
+            double residual = 0, held = 0;
+            for (int i = 0; i < n; i++)
+            {
+                double error = Math.Abs(10 * Math.Log10(effective[i] / (shape[i] * budget)));
+                if (free[i] && g[i] >= gMax) held = Math.Max(held, error);
+                else residual = Math.Max(residual, error);
+            }
+            history.Add(Math.Max(residual, held));
+            var departure = PhaseDepartures(sol, design, beta, free);
             double phaseError = departure.Max(Math.Abs) * 180 / Math.PI;
-            if (residual < options.ToleranceDb && (!options.CorrectPhase || phaseError < options.ToleranceDegrees))
+            if (residual < options.ToleranceDb && held <= MaximumHeldShortfallDb && (!options.CorrectPhase || phaseError < options.ToleranceDegrees))
             {
                 // The isolated-slot designer's phase-ripple warning no longer applies once the phases are corrected.
                 if (options.CorrectPhase)
-                    design = design with { Warnings = design.Warnings.Where(w => w.Code != "travelling-wave-phase-ripple").ToList().AsReadOnly() };
-                return new CoupledTravellingWaveDesign(design, start, iterations, residual, history.AsReadOnly(), sol, phaseError);
+                    design = design with { Warnings = [.. design.Warnings.Where(w => w.Code != "travelling-wave-phase-ripple"), .. FreeSlotsWarning(free, held, context)] };
+                return new CoupledTravellingWaveDesign(design, start, iterations, Math.Max(residual, held), history.AsReadOnly(), sol, phaseError);
             }
             if (iterations >= options.MaximumIterations)
                 throw new ConvergenceException(string.Create(CultureInfo.InvariantCulture,
-                    $"the coupled travelling-wave design did not bring every slot voltage within {options.ToleranceDb} dB of the taper (residual in power dB; phases {phaseError:0.###} deg off the progression): strong coupling between neighbours; increase the spacing or use a gentler taper"),
-                    iterations, residual);
-            var slots = new SlotDesign[n];
-            for (int i = 0; i < n; i++)
-            {
-                double arriving = effective[i] / TravellingWaveConductances.AbsorbedFraction(g[i]);
-                double p = shape[i] * budget / arriving;
-                if (!(p > 0 && p <= 0.5))
-                    throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                        $"slot {i + 1} must absorb p = {p:0.###} of the power arriving at it under mutual coupling, beyond the 0.5 a shunt slot on a matched line can take: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
-                g[i] = TravellingWaveConductances.SingleShuntConductance(p);
-                if (g[i] > gMax)
-                    throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
-                        $"slot {i + 1} needs g = {g[i]:0.000} under mutual coupling, above the {gMax:0.000} the {slot.Name} can give at {f0}: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
-                var r = slot.ForConductance(g[i], f0);
-                var s0 = design.Slots[i];
-                if (options.CorrectPhase)
-                    lengthShift[i] += LengthForPhase(slot, r.Coupling, r.ResonantLength.Meters + lengthShift[i], -departure[i], f0, i);
-                slots[i] = s0 with
-                {
-                    Coupling = Math.Sign(s0.Coupling) * Math.Abs(r.Coupling),
-                    Length = Quantities.Length.FromMeters(r.ResonantLength.Meters + lengthShift[i]),
-                    Conductance = g[i],
-                };
-            }
-            design = design with { Slots = Array.AsReadOnly(slots) };
+                    $"the travelling-wave design{context} did not bring every slot voltage within {options.ToleranceDb} dB of the taper (residual in power dB; phases {phaseError:0.###} deg off the progression): strong coupling between neighbours; increase the spacing or use a gentler taper"),
+                    iterations, Math.Max(residual, held));
+            var step = new CorrectionStep(stick, options, context, loadFraction, gMax, shape, budget, effective, departure, releaseSaturated);
+            design = design with { Slots = Array.AsReadOnly(NextSlots(step, design, g, lengthShift, free)) };
         }
+    }
+
+    /// <summary>What one iteration measured and the limits it works within, for <see cref="NextSlots"/>.</summary>
+    private sealed record CorrectionStep(StickRequest Stick, CoupledTravellingWaveOptions Options, string Context, double LoadFraction,
+        double MaximumConductance, double[] Shape, double Budget, double[] Effective, double[] Departure, bool ReleaseSaturated);
+
+    /// <summary>
+    /// The next geometry of the fixed point: each slot's conductance from its measured power (<paramref name="g"/> updated
+    /// in place), its offset from the slot model, and with phase correction its length moved by the departure of its voltage
+    /// phase (<paramref name="lengthShift"/> updated in place). A slot released by <see cref="CorrectionStep.ReleaseSaturated"/>
+    /// is marked in <paramref name="free"/>, put back to resonance and its conductance held at the slot's largest.
+    /// </summary>
+    private static SlotDesign[] NextSlots(CorrectionStep step, ArrayDesign design, double[] g, double[] lengthShift, bool[] free)
+    {
+        var slot = step.Stick.Slot;
+        var f0 = step.Stick.DesignFrequency;
+        string context = step.Context;
+        double loadFraction = step.LoadFraction, gMax = step.MaximumConductance;
+        int n = design.Count;
+        var slots = new SlotDesign[n];
+        for (int i = 0; i < n; i++)
+        {
+            double arriving = step.Effective[i] / TravellingWaveConductances.AbsorbedFraction(g[i]);
+            double p = step.Shape[i] * step.Budget / arriving;
+            if (!(p > 0 && p <= 0.5))
+                throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
+                    $"slot {i + 1} must absorb p = {p:0.###} of the power arriving at it{context}, beyond the 0.5 a shunt slot on a matched line can take: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
+            g[i] = TravellingWaveConductances.SingleShuntConductance(p);
+            if (g[i] > gMax && step.ReleaseSaturated && step.Options.CorrectPhase && (lengthShift[i] != 0 || free[i]))
+            {
+                // Detuning lowers the slot's real admittance, so it asks for more conductance than the slot gives: resonant
+                // again, its phase left to the line, and the most conductance the slot has.
+                free[i] = true;
+                lengthShift[i] = 0;
+                g[i] = gMax;
+            }
+            if (g[i] > gMax)
+                throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
+                    $"slot {i + 1} needs g = {g[i]:0.000}{context}, above the {gMax:0.000} the {slot.Name} can give at {f0}: leave more power for the load (now {loadFraction * 100:0.###} %), use more slots or a gentler taper"));
+            var r = slot.ForConductance(g[i], f0);
+            var s0 = design.Slots[i];
+            if (step.Options.CorrectPhase && !free[i])
+            {
+                // A secant step of arg y(l) can overshoot far from resonance: take at most 5 % of the length per
+                // iteration, and refuse a slot detuned by more than a quarter of its resonant length (its admittance
+                // phase then saturates near ±90° and no length gives the phase asked).
+                double resonant = r.ResonantLength.Meters, change = LengthForPhase(slot, r.Coupling, resonant + lengthShift[i], -step.Departure[i], f0, i);
+                lengthShift[i] += Math.Clamp(change, -MaximumStepFraction * resonant, MaximumStepFraction * resonant);
+                if (Math.Abs(lengthShift[i]) > MaximumDetuningFraction * resonant)
+                    throw new InfeasibleDesignException(string.Create(CultureInfo.InvariantCulture,
+                        $"slot {i + 1} would have to be detuned by more than {MaximumDetuningFraction:P0} of its resonant length ({resonant * 1e3:0.###} mm) to turn its phase by {-step.Departure[i] * 180 / Math.PI:0.#} deg{context}: move the spacing away from 0.5 guide-wavelength"));
+            }
+            slots[i] = s0 with
+            {
+                Coupling = Math.Sign(s0.Coupling) * Math.Abs(r.Coupling),
+                Length = Quantities.Length.FromMeters(r.ResonantLength.Meters + lengthShift[i]),
+                Conductance = g[i],
+            };
+        }
+        return slots;
+    }
+
+    /// <summary>The note that names the slots left resonant with their phase free (<see cref="NextSlots"/>); none when there are none.</summary>
+    private static IEnumerable<DesignWarning> FreeSlotsWarning(bool[] free, double heldDb, string context)
+    {
+        var names = Enumerable.Range(0, free.Length).Where(i => free[i]).Select(i => (i + 1).ToString(CultureInfo.InvariantCulture)).ToList();
+        if (names.Count == 0) yield break;
+        yield return new DesignWarning("travelling-wave-phase-free-slots", string.Create(CultureInfo.InvariantCulture,
+            $"slot{(names.Count > 1 ? "s" : "")} {string.Join(", ", names)} would need more conductance than the slot gives if detuned for phase{context}: left resonant with {(names.Count > 1 ? "their" : "its")} phase free (at most {heldDb:0.###} dB below {(names.Count > 1 ? "their shares" : "its share")} of the power, held at the slot's largest conductance); the other slots follow the progression, whose slope was aimed at the asked beam"));
     }
 
     /// <summary>
     /// Phase of each slot voltage (alternation sign removed) against the progression e^{jβz_n}, after removing the
-    /// circular mean, radians.
+    /// circular mean of the slots that follow it, radians; 0 for a slot whose phase is free.
     /// </summary>
-    private static double[] PhaseDepartures(NetworkSolution solution, ArrayDesign design, double beta)
+    private static double[] PhaseDepartures(NetworkSolution solution, ArrayDesign design, double beta, bool[] free)
     {
         int n = design.Count;
         var dev = new System.Numerics.Complex[n];
@@ -186,9 +279,9 @@ internal static class CoupledTravellingWaveDesigner
             var e = solution.Excitations[i] * Math.Sign(design.Slots[i].Coupling)
                 * System.Numerics.Complex.FromPolarCoordinates(1, -beta * design.Slots[i].Position.Meters);
             dev[i] = e / e.Magnitude;
-            mean += dev[i];
+            if (!free[i]) mean += dev[i];
         }
-        return dev.Select(d => (d / mean).Phase).ToArray();
+        return [.. dev.Select((d, i) => free[i] ? 0 : (d / mean).Phase)];
     }
 
     /// <summary>

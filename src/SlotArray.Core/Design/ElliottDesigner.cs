@@ -212,13 +212,13 @@ internal static class ElliottDesigner
         return p;
     }
 
-    private static double F(Waveguides.RectangularWaveguide guide, Frequency f0, double x, double len)
+    internal static double F(Waveguides.RectangularWaveguide guide, Frequency f0, double x, double len)
         => ElliottDesignEquations.CouplingFunction(guide, f0, Length.FromMeters(x), Length.FromMeters(0.5 * len));
 
     /// <summary>
     /// Damped 2-D Newton for slot i: 1/y(x, L) + C/f(x, L)² − 1/T = 0 (real and imaginary parts), scaled by T.
     /// </summary>
-    private static (double X, double L) SolveSlot(ElliottSlotSurrogate s, Waveguides.RectangularWaveguide guide, Frequency f0, int i,
+    internal static (double X, double L) SolveSlot(ElliottSlotSurrogate s, Waveguides.RectangularWaveguide guide, Frequency f0, int i,
         double x, double l, Complex c, double t, int newtonIterations)
     {
         double xMin = 0.25 * s.MinimumOffset, xMax = s.MaximumOffset;

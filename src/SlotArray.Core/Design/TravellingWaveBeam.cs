@@ -79,4 +79,23 @@ internal static class TravellingWaveBeam
         if (s is null) return false;
         return spacing.Meters * (1 + Math.Abs(s.Value)) >= f.FreeSpaceWavelength.Meters;
     }
+
+    /// <summary>
+    /// The spacing that puts the main beam of alternating slots at <paramref name="beam"/>: the phase condition
+    /// sin θ_b = λ/λg − λ/(2d) solved for d = λ / (2 (λ/λg − sin θ_b)) (m = 0; the inverse of <see cref="SineOfBeam"/>).
+    /// </summary>
+    /// <param name="guide">The guide.</param>
+    /// <param name="beam">Asked direction from broadside, positive toward the load end; |θ| &lt; 90°.</param>
+    /// <param name="f">Frequency, above the TE10 cutoff.</param>
+    /// <exception cref="ArgumentOutOfRangeException">No positive spacing gives that direction (λ/λg ≤ sin θ_b).</exception>
+    public static Length SpacingFor(RectangularWaveguide guide, Angle beam, Frequency f)
+    {
+        ArgumentNullException.ThrowIfNull(guide);
+        double lam = f.FreeSpaceWavelength.Meters, lg = guide.GuideWavelength(f).Meters;
+        double denominator = lam / lg - Math.Sin(beam.Radians);
+        if (!(Math.Abs(beam.Degrees) < 90) || !(denominator > 0))
+            throw new ArgumentOutOfRangeException(nameof(beam), beam.ToString(),
+                $"alternating slots cannot point a beam at {beam.Degrees:0.###} deg in {guide.Designation} at {f}: sin θ must be below λ/λg = {lam / lg:0.####}");
+        return Length.FromMeters(lam / (2 * denominator));
+    }
 }

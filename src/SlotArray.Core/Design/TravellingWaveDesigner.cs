@@ -24,6 +24,17 @@ internal sealed record TravellingWaveOptions(
     public static TravellingWaveOptions Default { get; } = new();
 }
 
+/// <summary>How a travelling-wave design's beam was put where it was asked (<see cref="TravellingWavePointing"/>).</summary>
+internal enum PointingCorrection
+{
+    /// <summary>Resonant slots, the spacing as given: the beam lies where the loaded line puts it.</summary>
+    None,
+    /// <summary>Slot lengths detuned so that the slot voltages follow the unloaded progression e^{jβz_n}.</summary>
+    LengthDetuning,
+    /// <summary>Resonant slots, the spacing moved until the achieved beam lies where it was asked.</summary>
+    Spacing,
+}
+
 /// <summary>How the network refinement went.</summary>
 /// <param name="Iterations">Network solutions performed (0 when refinement was off).</param>
 /// <param name="ResidualDb">Final largest |10 log10(P_n/T_n)| over the slots, power dB (P_n radiated in the network, T_n the target).</param>
@@ -51,6 +62,15 @@ internal sealed record TravellingWaveDesign(
 {
     /// <summary>Largest departure of the slot excitations' phases from the travelling-wave progression at the design frequency, degrees (mean removed).</summary>
     public double PhaseErrorDegrees { get; init; }
+
+    /// <summary>How the beam was put where the phase condition asks (<see cref="TravellingWavePointing"/>).</summary>
+    public PointingCorrection Correction { get; init; }
+
+    /// <summary>The direction asked for: the phase condition at the spacing given (or from <c>feed.beam</c>); null when not in real space.</summary>
+    public Angle? AskedBeam { get; init; }
+
+    /// <summary>Iterations of the pointing correction (0 when not corrected).</summary>
+    public int PhaseIterations { get; init; }
 
     /// <summary>Scan rate in degrees per 100 MHz, or null.</summary>
     public double? ScanRateDegreesPer100MHz => ScanRate is { } r ? r * 180 / Math.PI * 1e8 : null;

@@ -42,4 +42,11 @@ public sealed record GuideDistance(double? GuideWavelengths, Length? Fixed)
 /// <param name="Position">End- or centre-fed (standing-wave only).</param>
 /// <param name="LoadFraction">Travelling-wave: fraction of input power left for the load, 0 &lt; P_L &lt; 1.</param>
 /// <param name="ShortDistance">Standing-wave: last slot centre to the short's inner face (default 0.25 guide-wavelength).</param>
-public sealed record FeedRequest(FeedType Type, GuideDistance Spacing, FeedPosition Position, double LoadFraction, GuideDistance ShortDistance);
+public sealed record FeedRequest(FeedType Type, GuideDistance Spacing, FeedPosition Position, double LoadFraction, GuideDistance ShortDistance)
+{
+    /// <summary>Travelling-wave, <c>feed.load: auto</c>: the smallest load fraction the slots can deliver is chosen (<see cref="Design.TravellingWaveLoad"/>); <see cref="LoadFraction"/> is then only the starting value.</summary>
+    public bool AutoLoad { get; init; }
+
+    /// <summary>Travelling-wave, <c>feed.beam</c>: the direction asked for, from which <see cref="Spacing"/> was solved (<see cref="Design.TravellingWaveBeam.SpacingFor"/>); null when the spacing was given.</summary>
+    public Quantities.Angle? Beam { get; init; }
+}

@@ -9,6 +9,33 @@ internal static class TaperMath
     /// <summary>Element position in units of the aperture length L = N d: x_n/L = (n − (N − 1)/2)/N (the sampling of Taylor 1955 that scipy.signal.windows.taylor uses).</summary>
     public static double CellCentre(int n, int count) => (n - (count - 1) / 2.0) / count;
 
+    /// <summary>
+    /// Highest local maximum of |F(u)| over [start, stop], dB (20 log10, F normalised to F(0) = 1): sampled at step h,
+    /// each sampled maximum refined by a parabola through its two neighbours. Used for the continuous Taylor patterns.
+    /// </summary>
+    /// <param name="pattern">F(u).</param>
+    /// <param name="start">First u (e.g. the first moved zero).</param>
+    /// <param name="stop">Last u.</param>
+    /// <param name="h">Sampling step.</param>
+    public static double ContinuousPeakSidelobeDb(Func<double, double> pattern, double start, double stop, double h)
+    {
+        double best = 0;
+        double prev2 = Math.Abs(pattern(start)), prev = Math.Abs(pattern(start + h));
+        for (double u = start + 2 * h; u <= stop; u += h)
+        {
+            double cur = Math.Abs(pattern(u));
+            if (prev >= prev2 && prev >= cur)
+            {
+                double denom = prev2 - 2 * prev + cur;
+                double t = denom != 0 ? 0.5 * (prev2 - cur) / denom : 0;
+                best = Math.Max(best, Math.Abs(pattern(u - h + t * h)));
+            }
+            prev2 = prev;
+            prev = cur;
+        }
+        return 20 * Math.Log10(best);
+    }
+
     /// <summary>Divides by the largest magnitude so that max |a| = 1.</summary>
     public static double[] NormalizeToPeak(double[] a)
     {

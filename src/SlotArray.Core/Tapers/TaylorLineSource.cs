@@ -102,21 +102,8 @@ internal static class TaylorLineSource
     public static double ContinuousPeakSidelobeDb(Design design)
     {
         ArgumentNullException.ThrowIfNull(design);
-        double start = design.Zeros.Length > 0 ? design.Zeros[0] : 1, stop = design.Nbar + 2, h = 1.0 / 64;
-        double best = 0;
-        double prev2 = Math.Abs(design.Pattern(start)), prev = Math.Abs(design.Pattern(start + h));
-        for (double u = start + 2 * h; u <= stop; u += h)
-        {
-            double cur = Math.Abs(design.Pattern(u));
-            if (prev >= prev2 && prev >= cur)
-            {
-                double denom = prev2 - 2 * prev + cur;
-                double t = denom != 0 ? 0.5 * (prev2 - cur) / denom : 0;
-                best = Math.Max(best, Math.Abs(design.Pattern(u - h + t * h)));
-            }
-            prev2 = prev; prev = cur;
-        }
-        return 20 * Math.Log10(best);
+        double start = design.Zeros.Length > 0 ? design.Zeros[0] : 1;
+        return TaperMath.ContinuousPeakSidelobeDb(design.Pattern, start, design.Nbar + 2, 1.0 / 64);
     }
 
     /// <summary>

@@ -78,8 +78,23 @@ internal static class RequirementChecks
             list.Add(new RequirementVerdict(RequirementKind.PowerHandling, power.AllowedPeakPower, peak, power.Frequency, Math.Round(margin, 1) >= 0)
                 { DetailDb = margin });
         }
+        if (request.Requirements.VerticalBeamwidth is { } vbw)
+        {
+            if (result.AddOns.Flare is { } flare)
+            {
+                double got = flare.VerticalBeamwidth.Degrees;
+                list.Add(new RequirementVerdict(RequirementKind.VerticalBeamwidth, vbw.Degrees, got, f0,
+                    Math.Round(Math.Abs(got - vbw.Degrees), 2) <= VerticalBeamwidthToleranceDegrees));
+            }
+            else
+                notes.Add(new DesignWarning("vertical-beamwidth-not-checked", string.Create(CultureInfo.InvariantCulture,
+                    $"requirements.vertical_beamwidth ({vbw.Degrees:0.##} deg) is not checked: the vertical beam is set by a flare, and the spec has none (add 'flare: auto')")));
+        }
         return new RequirementVerdicts(list, notes);
     }
+
+    /// <summary>How far the flare's vertical beamwidth may lie from <c>requirements.vertical_beamwidth</c>, ±1° (issue 18: "within 1° of its requirement").</summary>
+    public const double VerticalBeamwidthToleranceDegrees = 1.0;
 
     /// <summary>achieved ≤ limit, both rounded to 0.01 dB as printed.</summary>
     private static bool WithinDb(double achieved, double limit) => Math.Round(achieved, 2) <= Math.Round(limit, 2);

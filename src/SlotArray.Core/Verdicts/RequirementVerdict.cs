@@ -15,6 +15,8 @@ internal enum RequirementKind
     CrossPolar,
     /// <summary>Transmitter peak power against the guide's derated power handling, W.</summary>
     PowerHandling,
+    /// <summary>Vertical half-power beamwidth of the flare at the design frequency, degrees, within ±1° of the asked value.</summary>
+    VerticalBeamwidth,
 }
 
 /// <summary>

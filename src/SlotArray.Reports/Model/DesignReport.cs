@@ -84,6 +84,18 @@ public sealed record DesignReport
     /// <summary>Travelling-wave arrays: squint, scan rate, efficiency and the designer's refinement; null otherwise.</summary>
     public TravellingWaveReport? TravellingWave { get; init; }
 
+    /// <summary>The polarisation filter (<c>filter</c>); null without one.</summary>
+    public FilterReport? Filter { get; init; }
+
+    /// <summary>The flare (<c>flare</c>); null without one.</summary>
+    public FlareReport? Flare { get; init; }
+
+    /// <summary>The beam over the operating range (<c>environment</c>, <c>transmitter.frequency_tolerance</c>); null without one.</summary>
+    public PointingReport? Pointing { get; init; }
+
+    /// <summary>The flare's and the filter's plates (<c>parts.csv</c>); empty without either.</summary>
+    public IReadOnlyList<PartRow> Parts { get; init; } = [];
+
     /// <summary><c>coupling: mutual</c>: the coupled and isolated-slot designs side by side; null otherwise.</summary>
     public CouplingReport? Coupling { get; init; }
 
@@ -192,6 +204,21 @@ public sealed record TravellingWaveReport
 
     /// <summary>Largest departure of the slot phases from the travelling-wave progression, degrees (mean removed).</summary>
     public required double PhaseErrorDeg { get; init; }
+
+    /// <summary>The direction asked for (<c>feed.beam</c>, else the phase condition at the given spacing), degrees, + toward the load end.</summary>
+    public double BeamAskedDeg { get; init; } = double.NaN;
+
+    /// <summary>Achieved main-beam direction (network and pattern at the design frequency) minus the asked one, degrees.</summary>
+    public double BeamResidualDeg { get; init; } = double.NaN;
+
+    /// <summary>How the beam was put where asked: "length-detuning", "spacing" or "none".</summary>
+    public string PointingCorrection { get; init; } = "none";
+
+    /// <summary>Slot spacing of the design, m (solved from <c>feed.beam</c> or moved by the spacing correction).</summary>
+    public double SpacingM { get; init; } = double.NaN;
+
+    /// <summary>Whether the load fraction was chosen by <c>feed.load: auto</c>.</summary>
+    public bool LoadAuto { get; init; }
 }
 
 /// <summary>The waveguide: inside dimensions, wall, metal and the TE10 figures at the design frequency.</summary>

@@ -71,6 +71,7 @@ internal static class DesignReportBuilder
         foreach (var b in new[] { result.BandVswr15, result.BandVswr2 })
             if (b is { } band && (band.LowLimited || band.HighLimited))
                 warnings.Add(string.Create(Inv, $"the VSWR ≤ {band.VswrLimit:0.0#} band reaches the edge of the search range ({band.Low} to {band.High}): it is at least as wide as reported"));
+        var addOns = result.AddOns;
         var travelling = result.Procedure switch
         {
             TravellingWaveProcedure p => p.TravellingWave,
@@ -127,6 +128,12 @@ internal static class DesignReportBuilder
             Requirements = Requirements(verdicts, result),
             Load = travelling is { } tw ? new LoadReport { Fraction = tw.LoadFraction, PowerWPerWIn = atDesign.Network.LoadPower } : null,
             TravellingWave = travelling is { } t ? TravellingWaveOf(result, t) : null,
+            Pointing = addOns.Pointing is { } pb ? PointingReport.Of(pb) : null,
+            Parts = plan is not null && (addOns.Flare is not null || addOns.Filter is not null)
+                ? PartRow.Of(Core.Marine.MarineParts.Of(design, plan.DesignOrigin, addOns.Flare?.Flare, addOns.Filter?.Filter)) : [],
+            Flare = addOns.Flare is { } fo ? FlareReport.Of(fo, request.Requirements.VerticalBeamwidth) : null,
+            Filter = addOns.Filter is { } flt && atDesign.CrossPolar is { } xc
+                ? FilterReport.Of(flt, request.DesignFrequency, CrossLevels(xc, atDesign.Pattern.PeakPower), request.Requirements.CrossPolarDb) : null,
             Coupling = CouplingReport.Of(result),
         };
     }
@@ -206,6 +213,16 @@ internal static class DesignReportBuilder
             RefinementIterations = tw.Refinement.Iterations,
             RefinementResidualDb = tw.Refinement.ResidualDb,
             PhaseErrorDeg = tw.PhaseErrorDegrees,
+            BeamAskedDeg = (tw.AskedBeam ?? tw.Squint)?.Degrees ?? double.NaN,
+            BeamResidualDeg = TravellingWavePointing.ResidualDegrees(tw.AskedBeam ?? tw.Squint, result.AtDesign.Metrics.BeamDirection) ?? double.NaN,
+            PointingCorrection = tw.Correction switch
+            {
+                PointingCorrection.LengthDetuning => "length-detuning",
+                PointingCorrection.Spacing => "spacing",
+                _ => "none",
+            },
+            SpacingM = result.Design.Spacing.Meters,
+            LoadAuto = result.Request.Feed.AutoLoad,
         };
     }
 

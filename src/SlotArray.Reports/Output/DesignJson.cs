@@ -43,6 +43,7 @@ internal static class DesignJson
         WriteSlots(w, r);
         WriteTermination(w, r);
         WriteTravellingWave(w, r);
+        WriteFlareAndFilter(w, r);
         WriteCoupling(w, r);
         WritePattern(w, r);
         WriteMatch(w, r);
@@ -135,6 +136,90 @@ internal static class DesignJson
             w.WriteNumber("refinement_iterations", tw.RefinementIterations);
             Num(w, "refinement_residual_db", tw.RefinementResidualDb);
             Num(w, "phase_error_deg", tw.PhaseErrorDeg);
+            Num(w, "beam_asked_deg", tw.BeamAskedDeg);
+            Num(w, "beam_residual_deg", tw.BeamResidualDeg);
+            w.WriteString("pointing_correction", tw.PointingCorrection);
+            Num(w, "spacing_m", tw.SpacingM);
+            w.WriteBoolean("load_auto", tw.LoadAuto);
+            w.WriteEndObject();
+        }
+        WritePointing(w, r);
+    }
+
+    /// <summary>The beam over the operating range (temperature, transmitter frequency tolerance).</summary>
+    private static void WritePointing(Utf8JsonWriter w, DesignReport r)
+    {
+        if (r.Pointing is { } pt)
+        {
+            w.WriteStartObject("pointing");
+            Num(w, "low_temperature_c", pt.LowC);
+            Num(w, "high_temperature_c", pt.HighC);
+            Num(w, "frequency_tolerance_hz", pt.FrequencyToleranceHz);
+            Num(w, "expansion_per_k", pt.ExpansionPerKelvin);
+            w.WriteString("expansion_source", pt.ExpansionSource);
+            Num(w, "nominal_beam_deg", pt.NominalBeamDeg);
+            Num(w, "deg_per_k", pt.DegPerKelvin);
+            Num(w, "deg_per_mhz", pt.DegPerMhz);
+            Num(w, "worst_error_deg", pt.WorstErrorDeg);
+            w.WriteStartArray("cases");
+            foreach (var row in pt.Rows)
+            {
+                w.WriteStartObject();
+                Num(w, "temperature_c", row.TemperatureC);
+                Num(w, "frequency_hz", row.FrequencyHz);
+                Num(w, "equivalent_frequency_hz", row.EquivalentFrequencyHz);
+                Num(w, "beam_deg", row.BeamDeg);
+                Num(w, "error_deg", row.ErrorDeg);
+                w.WriteBoolean("from_sweep", row.FromSweep);
+                w.WriteEndObject();
+            }
+            w.WriteEndArray();
+            w.WriteEndObject();
+        }
+    }
+
+    /// <summary>The antenna's add-ons in front of the slots: the flare and the polarisation filter.</summary>
+    private static void WriteFlareAndFilter(Utf8JsonWriter w, DesignReport r)
+    {
+        if (r.Flare is { } fl)
+        {
+            w.WriteStartObject("flare");
+            Num(w, "throat_m", fl.ThroatM);
+            Num(w, "aperture_m", fl.ApertureM);
+            Num(w, "length_m", fl.LengthM);
+            Strings(w, "chosen", fl.Chosen);
+            Num(w, "vertical_hpbw_deg", fl.VerticalHpbwDeg);
+            if (fl.RequiredVerticalHpbwDeg is { } rv) Num(w, "required_vertical_hpbw_deg", rv);
+            Num(w, "first_sidelobe_db", fl.FirstSidelobeDb);
+            Num(w, "phase_error_deg", fl.PhaseErrorDeg);
+            Num(w, "phase_error_loss_db", fl.PhaseErrorLossDb);
+            Num(w, "throat_loss_db", fl.ThroatLossDb);
+            Num(w, "cutoff_plane_m", fl.CutoffPlaneM);
+            Num(w, "total_directivity_dbi", fl.TotalDirectivityDbi);
+            Num(w, "total_gain_dbi", fl.TotalGainDbi);
+            NumArray(w, "cut_elevation_deg", fl.CutElevationDeg);
+            NumArray(w, "cut_level_db", fl.CutLevelDb);
+            w.WriteEndObject();
+        }
+        if (r.Filter is { } flt)
+        {
+            w.WriteStartObject("filter");
+            Num(w, "spacing_m", flt.SpacingM);
+            Num(w, "depth_m", flt.DepthM);
+            Num(w, "thickness_m", flt.ThicknessM);
+            Strings(w, "chosen", flt.Chosen);
+            Num(w, "cutoff_te1_hz", flt.CutoffTe1Hz);
+            Num(w, "attenuation_db_per_mm_at_design", flt.AttenuationDbPerMmAtDesign);
+            Num(w, "attenuation_at_design_db", flt.AttenuationAtDesignDb);
+            Num(w, "smallest_attenuation_db", flt.SmallestAttenuationDb);
+            Num(w, "wanted_loss_db", flt.WantedLossDb);
+            Num(w, "margin_db", flt.MarginDb);
+            Num(w, "bare_worst_db", flt.BareWorstDb);
+            Num(w, "bare_worst_frequency_hz", flt.BareWorstFrequencyHz);
+            Num(w, "filtered_worst_db", flt.FilteredWorstDb);
+            Num(w, "filtered_worst_frequency_hz", flt.FilteredWorstFrequencyHz);
+            if (flt.RequirementDb is { } fr) Num(w, "requirement_db", fr);
+            NumArray(w, "bare_cross_level_db", flt.BareCrossCutLevelDb);
             w.WriteEndObject();
         }
     }
@@ -407,6 +492,9 @@ internal static class DesignJson
             Warnings = StringList(root, "warnings"),
             Cautions = StringList(root, "cautions"),
             Tolerance = StringList(root, "tolerance"),
+            Pointing = root.TryGetProperty("pointing", out var pt) ? ReadPointing(pt) : null,
+            Flare = root.TryGetProperty("flare", out var fl) ? ReadFlare(fl) : null,
+            Filter = root.TryGetProperty("filter", out var flt) ? ReadFilter(flt) : null,
             Load = root.TryGetProperty("load", out var ld)
                 ? new LoadReport { Fraction = D(ld, "fraction"), PowerWPerWIn = D(ld, "power_w_per_w_in") } : null,
             TravellingWave = ReadTravellingWave(root),
@@ -481,6 +569,11 @@ internal static class DesignJson
                 RefinementIterations = tw.GetProperty("refinement_iterations").GetInt32(),
                 RefinementResidualDb = D(tw, "refinement_residual_db"),
                 PhaseErrorDeg = D(tw, "phase_error_deg"),
+                BeamAskedDeg = tw.TryGetProperty("beam_asked_deg", out _) ? D(tw, "beam_asked_deg") : double.NaN,
+                BeamResidualDeg = tw.TryGetProperty("beam_residual_deg", out _) ? D(tw, "beam_residual_deg") : double.NaN,
+                PointingCorrection = tw.TryGetProperty("pointing_correction", out var pc) ? pc.GetString() ?? "none" : "none",
+                SpacingM = tw.TryGetProperty("spacing_m", out _) ? D(tw, "spacing_m") : double.NaN,
+                LoadAuto = tw.TryGetProperty("load_auto", out var la) && la.GetBoolean(),
             }
             : null;
     }
@@ -493,6 +586,67 @@ internal static class DesignJson
     private static double Value(JsonElement v) => v.ValueKind == JsonValueKind.Null ? double.NaN : v.GetDouble();
 
     private static double? OptD(JsonElement e, string key) => e.TryGetProperty(key, out var v) ? Value(v) : null;
+
+    private static PointingReport ReadPointing(JsonElement e) => new()
+    {
+        LowC = D(e, "low_temperature_c"),
+        HighC = D(e, "high_temperature_c"),
+        FrequencyToleranceHz = D(e, "frequency_tolerance_hz"),
+        ExpansionPerKelvin = D(e, "expansion_per_k"),
+        ExpansionSource = Str(e, "expansion_source"),
+        NominalBeamDeg = D(e, "nominal_beam_deg"),
+        DegPerKelvin = D(e, "deg_per_k"),
+        DegPerMhz = D(e, "deg_per_mhz"),
+        WorstErrorDeg = D(e, "worst_error_deg"),
+        Rows = [.. e.GetProperty("cases").EnumerateArray().Select(c => new PointingRow
+        {
+            TemperatureC = D(c, "temperature_c"),
+            FrequencyHz = D(c, "frequency_hz"),
+            EquivalentFrequencyHz = D(c, "equivalent_frequency_hz"),
+            BeamDeg = D(c, "beam_deg"),
+            ErrorDeg = D(c, "error_deg"),
+            FromSweep = c.GetProperty("from_sweep").GetBoolean(),
+        })],
+    };
+
+    private static FlareReport ReadFlare(JsonElement e) => new()
+    {
+        ThroatM = D(e, "throat_m"),
+        ApertureM = D(e, "aperture_m"),
+        LengthM = D(e, "length_m"),
+        Chosen = StringList(e, "chosen"),
+        VerticalHpbwDeg = D(e, "vertical_hpbw_deg"),
+        RequiredVerticalHpbwDeg = OptD(e, "required_vertical_hpbw_deg"),
+        FirstSidelobeDb = D(e, "first_sidelobe_db"),
+        PhaseErrorDeg = D(e, "phase_error_deg"),
+        PhaseErrorLossDb = D(e, "phase_error_loss_db"),
+        ThroatLossDb = D(e, "throat_loss_db"),
+        CutoffPlaneM = D(e, "cutoff_plane_m"),
+        TotalDirectivityDbi = D(e, "total_directivity_dbi"),
+        TotalGainDbi = D(e, "total_gain_dbi"),
+        CutElevationDeg = Doubles(e.GetProperty("cut_elevation_deg")),
+        CutLevelDb = Doubles(e.GetProperty("cut_level_db")),
+    };
+
+    private static FilterReport ReadFilter(JsonElement e) => new()
+    {
+        SpacingM = D(e, "spacing_m"),
+        DepthM = D(e, "depth_m"),
+        ThicknessM = D(e, "thickness_m"),
+        Chosen = StringList(e, "chosen"),
+        CutoffTe1Hz = D(e, "cutoff_te1_hz"),
+        AttenuationDbPerMmAtDesign = D(e, "attenuation_db_per_mm_at_design"),
+        AttenuationAtDesignDb = D(e, "attenuation_at_design_db"),
+        SmallestAttenuationDb = D(e, "smallest_attenuation_db"),
+        WantedLossDb = D(e, "wanted_loss_db"),
+        MarginDb = D(e, "margin_db"),
+        BareWorstDb = D(e, "bare_worst_db"),
+        BareWorstFrequencyHz = D(e, "bare_worst_frequency_hz"),
+        FilteredWorstDb = D(e, "filtered_worst_db"),
+        FilteredWorstFrequencyHz = D(e, "filtered_worst_frequency_hz"),
+        RequirementDb = OptD(e, "requirement_db"),
+        BareCrossCutLevelDb = Doubles(e.GetProperty("bare_cross_level_db")),
+    };
 
     private static double[] Doubles(JsonElement array) => [.. array.EnumerateArray().Select(Value)];
 

@@ -44,6 +44,9 @@ internal static class DesignJsonSchema
             ("load", Obj("travelling-wave: the matched load", ("fraction", N("fraction of the input power asked for the load"), true),
                 ("power_w_per_w_in", N("power reaching the load per watt in"), true)), false),
             ("travelling_wave", TravellingWaveSchema(), false),
+            ("pointing", PointingSchema(), false),
+            ("flare", FlareSchema(), false),
+            ("filter", FilterSchema(), false),
             ("mutual_coupling", MutualCouplingSchema(), false),
             ("pattern", PatternSchema(), true),
             ("match", Obj("input match", ("s11_db_at_design", N("|S11| at the design frequency, dB"), true),
@@ -97,7 +100,46 @@ internal static class DesignJsonSchema
         ("scan_from_sweep_deg_per_100mhz", N("scan rate from the sweep, deg per 100 MHz"), true),
         ("efficiency", N("radiated fraction of the input power"), true), ("wall_loss_w_per_w_in", N("wall loss per watt in"), true),
         ("refinement_iterations", I("refinement iterations"), true), ("refinement_residual_db", N("refinement residual, dB"), true),
-        ("phase_error_deg", N("largest phase error off the progression, deg"), true));
+        ("phase_error_deg", N("largest phase error off the progression, deg"), true),
+        ("beam_asked_deg", N("direction asked for (feed.beam, else the phase condition at the spacing), deg"), true),
+        ("beam_residual_deg", N("achieved beam minus the asked direction, deg"), true),
+        ("pointing_correction", S("length-detuning, spacing or none"), true), ("spacing_m", N("slot spacing of the design, m"), true),
+        ("load_auto", B("load chosen by feed.load: auto"), true));
+
+    /// <summary>The beam over the operating range.</summary>
+    private static JsonObject PointingSchema() => Obj("the beam over the operating range (temperature, transmitter frequency tolerance)",
+        ("low_temperature_c", N("lowest operating temperature, degC"), true), ("high_temperature_c", N("highest operating temperature, degC"), true),
+        ("frequency_tolerance_hz", N("transmitter frequency tolerance, Hz"), true), ("expansion_per_k", N("metal expansion coefficient, 1/K"), true),
+        ("expansion_source", S("source of the coefficient"), true), ("nominal_beam_deg", N("beam at f0 and 20 degC, deg"), true),
+        ("deg_per_k", N("beam drift per kelvin, deg"), true), ("deg_per_mhz", N("beam drift per MHz, deg"), true),
+        ("worst_error_deg", N("worst bearing error over the range, deg"), true),
+        ("cases", Arr("temperatures x frequencies", Obj("one case", ("temperature_c", N("degC"), true), ("frequency_hz", N("transmitter frequency, Hz"), true),
+            ("equivalent_frequency_hz", N("equivalent frequency of the antenna as built, Hz"), true), ("beam_deg", N("beam, deg"), true),
+            ("error_deg", N("beam minus nominal, deg"), true), ("from_sweep", B("read off the analysed sweep"), true))), true));
+
+    /// <summary>The flare: the vertical beam and the antenna's total gain.</summary>
+    private static JsonObject FlareSchema() => Obj("the flare (H-plane sectoral horn) in front of edge slots: the vertical beam and the antenna's total gain",
+        ("throat_m", N("throat height, m"), true), ("aperture_m", N("aperture height, m"), true), ("length_m", N("depth from the slotted face, m"), true),
+        ("chosen", StrArr("dimensions chosen by the tool"), true), ("vertical_hpbw_deg", N("vertical half-power beamwidth, deg"), true),
+        ("required_vertical_hpbw_deg", N("requirements.vertical_beamwidth, deg"), false), ("first_sidelobe_db", N("first vertical sidelobe, dB"), true),
+        ("phase_error_deg", N("largest phase error at the aperture edge, deg"), true), ("phase_error_loss_db", N("gain lost to the phase error, dB"), true),
+        ("throat_loss_db", N("attenuation of the evanescent throat, dB"), true), ("cutoff_plane_m", N("where the plates reach half a wavelength apart, m"), true),
+        ("total_directivity_dbi", N("antenna directivity, array x flare, dBi"), true), ("total_gain_dbi", N("antenna gain, dBi"), true),
+        ("cut_elevation_deg", NumArr("vertical cut elevations, deg"), true), ("cut_level_db", NumArr("vertical cut, dB"), true));
+
+    /// <summary>The polarisation filter and the cross-polar level before and after it.</summary>
+    private static JsonObject FilterSchema() => Obj("the polarisation filter in front of edge slots and the cross-polar level before and after it",
+        ("spacing_m", N("plate pitch, centre to centre, m"), true), ("depth_m", N("plate depth, m"), true), ("thickness_m", N("plate thickness, m"), true),
+        ("chosen", StrArr("dimensions chosen by the tool"), true), ("cutoff_te1_hz", N("TE1 cutoff of the clear gap, Hz"), true),
+        ("attenuation_db_per_mm_at_design", N("TE1 attenuation per mm at the design frequency, dB"), true),
+        ("attenuation_at_design_db", N("cross-polar attenuation at the design frequency, dB"), true),
+        ("smallest_attenuation_db", N("smallest cross-polar attenuation over the band, dB"), true),
+        ("wanted_loss_db", N("largest loss of the wanted polarisation over the band, dB"), true),
+        ("margin_db", N("margin of the automatic depth below the requirement, dB"), true),
+        ("bare_worst_db", N("worst cross-polar peak before the filter, dB"), true), ("bare_worst_frequency_hz", N("its frequency, Hz"), true),
+        ("filtered_worst_db", N("worst cross-polar peak after the filter, dB"), true), ("filtered_worst_frequency_hz", N("its frequency, Hz"), true),
+        ("requirement_db", N("requirements.cross_polar, dB"), false),
+        ("bare_cross_level_db", NumArr("bare cross-polar cut at the design frequency, dB"), true));
 
     /// <summary>coupling: mutual: the coupled and isolated-slot designs and the iterations.</summary>
     private static JsonObject MutualCouplingSchema() => Obj("coupling: mutual: Elliott's design against the isolated-slot design",

@@ -51,6 +51,16 @@ internal static class OutputFolder
         new("slots.png", (r, s) => PlotExport.Write(DesignPlots.Slots(r), s, "png")),
         new("sweep.png", (r, s) => PlotExport.Write(DesignPlots.Sweep(r), s, "png", 900, DesignPlots.SweepHeight)),
         new("scan.png", (r, s) => PlotExport.Write(ScanPlot.Build(r), s, "png", 900, ScanPlot.Height(r))),
+        new("vertical.png", (r, s) => PlotExport.Write(DesignPlots.Vertical(r), s, "png"))
+        {
+            Many = r => r.Flare is null ? [] : [("vertical.png", PlotBytes(DesignPlots.Vertical(r)))],
+            Owns = n => n == "vertical.png",
+        },
+        new("parts.csv", (r, s) => s.Write(Utf8(PartsCsv.ToText(r))))
+        {
+            Many = r => r.Parts.Count == 0 ? [] : [("parts.csv", Utf8(PartsCsv.ToText(r)))],
+            Owns = n => n == "parts.csv",
+        },
         new("input.s1p", Text(TouchstoneWriter.Write)),
         new("summary.md", Text(SummaryMarkdown.Write)),
         new("spec.yaml", (r, s) => s.Write(new UTF8Encoding(false).GetBytes(r.SpecText ?? "# the spec's text was not given to this writer\n"))),
@@ -63,16 +73,7 @@ internal static class OutputFolder
 
     /// <summary>Writes the given files atomically at folder level (see the class remarks); the seam for failure tests.</summary>
     internal static void WriteAll(DesignReport report, string directory, IReadOnlyList<OutputFile> files)
-    {
-        string target = OutputFolderCheck.Prepare(directory, replacesWhole: true, files.Select(f => f.Name));
-        string parent = Path.GetDirectoryName(target)!;
-        string leaf = Path.GetFileName(target);
-        Directory.CreateDirectory(parent);
-        string stamp = OutputFolderCheck.NewStamp();
-        string temp = OutputFolderCheck.Sibling(parent, leaf, "tmp", stamp);
-        string old = OutputFolderCheck.Sibling(parent, leaf, "old", stamp);
-        Directory.CreateDirectory(temp);
-        try
+        => WriteRendered(directory, files.Select(f => f.Name), () =>
         {
             // Render every file in memory in parallel (the plots dominate), then write them in the fixed order.
             var rendered = new IReadOnlyList<(string Name, byte[] Bytes)>[files.Count];
@@ -95,7 +96,28 @@ internal static class OutputFolder
                 // a writer's own exception (not the AggregateException wrapper), as a sequential run throws it
                 System.Runtime.ExceptionServices.ExceptionDispatchInfo.Capture(e.InnerExceptions[0]).Throw();
             }
-            foreach (var (name, data) in rendered.SelectMany(r => r))
+            return [.. rendered.SelectMany(r => r)];
+        });
+
+    /// <summary>
+    /// Writes the files <paramref name="render"/> returns into <paramref name="directory"/>, atomically at folder level: a
+    /// sibling temporary folder is filled and then swapped in whole (see the class remarks); <paramref name="names"/> are
+    /// the names the run owns (for the folder check).
+    /// </summary>
+    internal static void WriteRendered(string directory, IEnumerable<string> names, Func<IReadOnlyList<(string Name, byte[] Bytes)>> render)
+    {
+        string target = OutputFolderCheck.Prepare(directory, replacesWhole: true, names);
+        string parent = Path.GetDirectoryName(target)!;
+        string leaf = Path.GetFileName(target);
+        Directory.CreateDirectory(parent);
+        string stamp = OutputFolderCheck.NewStamp();
+        string temp = OutputFolderCheck.Sibling(parent, leaf, "tmp", stamp);
+        string old = OutputFolderCheck.Sibling(parent, leaf, "old", stamp);
+        Directory.CreateDirectory(temp);
+        try
+        {
+            var rendered = render();
+            foreach (var (name, data) in rendered)
             {
                 using var fs = new FileStream(Path.Combine(temp, name), FileMode.CreateNew, FileAccess.Write, FileShare.None);
                 fs.Write(data);
@@ -103,7 +125,7 @@ internal static class OutputFolder
             if (Directory.Exists(target))
             {
                 // Another command's files (a tolerance run's) are not this run's to delete: they move with the new output.
-                foreach (string name in OutputFolderCheck.ToleranceFiles.Where(n => files.All(f => f.Name != n)))
+                foreach (string name in OutputFolderCheck.ToleranceFiles.Where(n => rendered.All(f => f.Name != n)))
                     if (File.Exists(Path.Combine(target, name))) File.Copy(Path.Combine(target, name), Path.Combine(temp, name));
                 Directory.Move(target, old);
                 try { Directory.Move(temp, target); }
@@ -130,6 +152,13 @@ internal static class OutputFolder
         [.. Files.SelectMany(f => f.Many is { } many ? many(report).Select(p => p.Name) : [f.Name])];
 
     private static byte[] Utf8(string text) => new UTF8Encoding(false).GetBytes(text);
+
+    private static byte[] PlotBytes(OxyPlot.PlotModel model)
+    {
+        using var stream = new MemoryStream();
+        PlotExport.Write(model, stream, "png");
+        return stream.ToArray();
+    }
 
     /// <summary>Adapts a text writer to a stream: UTF-8 without byte-order mark, invariant culture.</summary>
     private static Action<DesignReport, Stream> Text(Action<DesignReport, TextWriter> write) => (r, s) =>

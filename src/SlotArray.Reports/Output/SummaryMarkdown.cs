@@ -29,6 +29,10 @@ internal static class SummaryMarkdown
         WriteSlotData(report, L);
         WriteKeyFigures(report, L);
         L();
+        if (report.Flare is { } flare) MarineSummary.WriteFlare(flare, report, s => L(s));
+        if (report.Pointing is { } pointing) MarineSummary.WritePointing(pointing, s => L(s));
+        MarineSummary.WriteParts(report.Parts, s => L(s));
+        if (report.Filter is { } flt) MarineSummary.WriteFilter(flt, report.FrequencyHz, s => L(s));
         WriteScan(report, L);
         L();
         if (report.Coupling is { } coupling) CouplingSummary.Write(coupling, s => L(s));
@@ -128,7 +132,7 @@ internal static class SummaryMarkdown
             if (eirp.AverageW is { } av) L($"| EIRP on the beam axis at the average transmitter power (P G) | {Invariant.Fixed(Dbw(av), 2)} | dBW ({Watts(av)}) |");
         }
         if (p.CrossPolarDb is { } xpol)
-            L($"| peak cross-polar level (edge-slot tilts, no polarisation filter) at {Invariant.Fixed(p.CrossPolarDirectionDeg ?? double.NaN, 1)} deg | {Invariant.Fixed(xpol, 2)} | dB |");
+            L($"| peak cross-polar level (edge-slot tilts, {(report.Filter is null ? "no polarisation filter" : "behind the polarisation filter")}) at {Invariant.Fixed(p.CrossPolarDirectionDeg ?? double.NaN, 1)} deg | {Invariant.Fixed(xpol, 2)} | dB |");
         if (report.Load is { } load)
         {
             L($"| power into the matched load (asked {Invariant.Fixed(load.Fraction * 100, 2)} %) | {Invariant.Fixed(load.PowerWPerWIn * 100, 3)} | % of input |");
@@ -141,6 +145,8 @@ internal static class SummaryMarkdown
             L($"| scan rate, phase condition / network sweep | {Invariant.Fixed(tw.ScanDegPer100MHz, 3)} / {Invariant.Fixed(tw.ScanFromSweepDegPer100MHz, 3)} | deg per 100 MHz |");
             L($"| designer: network refinement iterations, final residual | {Invariant.Int(tw.RefinementIterations)}, {Invariant.Fixed(tw.RefinementResidualDb, 6)} | –, dB |");
             L($"| largest slot phase departure from the travelling-wave progression | {Invariant.Fixed(tw.PhaseErrorDeg, 2)} | deg |");
+            L($"| beam asked / achieved residual (pointing correction: {tw.PointingCorrection}) | {Invariant.Fixed(tw.BeamAskedDeg, 3)} / {Invariant.Fixed(tw.BeamResidualDeg, 3)} | deg |");
+            L($"| slot spacing of the design{(tw.LoadAuto ? "; load chosen by load: auto" : "")} | {Invariant.Fixed(tw.SpacingM * 1e3, 3)} | mm |");
         }
         if (!double.IsNaN(p.TransverseFaceWidth))
         {

@@ -34,9 +34,22 @@ internal static class DesignPlots
             // Edge slots: the cross-polarised cut on the same scale (relative to the co-polar peak).
             m.Legends.Add(new Legend { LegendPosition = LegendPosition.TopRight });
             s.Title = "co-polar";
-            var x = new LineSeries { Title = "cross-polar", Color = OxyColors.DarkOrange, StrokeThickness = 1.2 };
+            bool filtered = report.Filter is { } f && f.BareCrossCutLevelDb.Count == angles.Count;
+            if (filtered)
+            {
+                var bare = new LineSeries { Title = "cross-polar, bare slots", Color = OxyColors.DarkOrange, LineStyle = LineStyle.Dot, StrokeThickness = 1.0 };
+                for (int i = 0; i < angles.Count; i++) bare.Points.Add(new DataPoint(angles[i], Math.Max(report.Filter!.BareCrossCutLevelDb[i], -200)));
+                m.Series.Add(bare);
+            }
+            var x = new LineSeries { Title = filtered ? "cross-polar, behind the filter" : "cross-polar", Color = OxyColors.DarkOrange, StrokeThickness = 1.2 };
             for (int i = 0; i < angles.Count; i++) x.Points.Add(new DataPoint(angles[i], Math.Max(report.Pattern.CrossCutLevelDb[i], -200)));
             m.Series.Add(x);
+            if (report.Filter?.RequirementDb is { } xreq)
+                m.Annotations.Add(new LineAnnotation
+                {
+                    Type = LineAnnotationType.Horizontal, Y = xreq, LineStyle = LineStyle.DashDot, Color = OxyColors.DarkOrange, StrokeThickness = 1.0,
+                    Text = $"cross-polar requirement {Invariant.Fixed(xreq, 1)} dB", TextColor = OxyColors.DarkOrange, TextHorizontalAlignment = HorizontalAlignment.Left, TextLinePosition = 0,
+                });
         }
         m.Annotations.Add(new LineAnnotation
         {
@@ -46,6 +59,25 @@ internal static class DesignPlots
             Color = OxyColors.Firebrick,
             StrokeThickness = 1.2,
             Text = $"design sidelobe level {Invariant.Fixed(report.Pattern.DesignSidelobeDb, 1)} dB",
+            TextColor = OxyColors.Firebrick,
+        });
+        return m;
+    }
+
+    /// <summary>The flare's vertical pattern cut (dB, −40…0) against elevation, with the required beamwidth's half-power points marked.</summary>
+    public static PlotModel Vertical(DesignReport report)
+    {
+        var m = PlotExport.NewModel($"{report.Name}: vertical pattern of the flare at {Invariant.Ghz(report.FrequencyHz)} GHz");
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Bottom, Title = "Elevation from boresight (deg)", Minimum = -90, Maximum = 90, MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = OxyColor.FromRgb(225, 225, 225) });
+        m.Axes.Add(new LinearAxis { Position = AxisPosition.Left, Title = "Relative level (dB)", Minimum = -40, Maximum = 0, MajorStep = 10, MajorGridlineStyle = LineStyle.Solid, MajorGridlineColor = OxyColor.FromRgb(225, 225, 225) });
+        if (report.Flare is not { } f) return m;
+        var s = new LineSeries { Title = "vertical cut (H-plane sectoral horn)", Color = OxyColors.Navy, StrokeThickness = 1.5 };
+        for (int i = 0; i < f.CutElevationDeg.Count; i++) s.Points.Add(new DataPoint(f.CutElevationDeg[i], Math.Max(f.CutLevelDb[i], -200)));
+        m.Series.Add(s);
+        m.Annotations.Add(new LineAnnotation
+        {
+            Type = LineAnnotationType.Horizontal, Y = -3.0103, LineStyle = LineStyle.Dash, Color = OxyColors.Firebrick, StrokeThickness = 1.0,
+            Text = $"HPBW {Invariant.Fixed(f.VerticalHpbwDeg, 2)} deg" + (f.RequiredVerticalHpbwDeg is { } q ? $" (required {Invariant.Fixed(q, 2)} deg)" : ""),
             TextColor = OxyColors.Firebrick,
         });
         return m;

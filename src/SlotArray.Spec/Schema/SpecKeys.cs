@@ -96,24 +96,37 @@ internal static class SpecKeys
     [
         new("type", Words(SpecNames.FeedTypes), "standing-wave (ends in a short) or travelling-wave (ends in a load)") { Required = true, Example = "standing-wave" },
         new("spacing", GuideDistance("between 0 and 1 guide-wavelength"), "slot spacing along the guide, in guide wavelengths or a length")
-            { Default = "0.5 guide-wavelength", DefaultText = "0.5 guide-wavelength (standing-wave); required for travelling-wave", RequiredFor = TravellingWave },
+            { Default = "0.5 guide-wavelength", DefaultText = "0.5 guide-wavelength (standing-wave); travelling-wave: give spacing or beam" },
+        new("beam", Q(QuantityKind.Angle, "-80 deg to +80 deg, + toward the load end"),
+            "travelling-wave: main-beam direction asked for, instead of spacing; the spacing is solved from sin θ = λ/λg − λ/(2d) and reported")
+            { DefaultText = "none: the spacing sets the beam", AppliesTo = TravellingWave, Example = "-4.5 deg" },
         new("position", Words(SpecNames.FeedPositions), "where a standing-wave array is fed") { Default = "end", AppliesTo = StandingWave },
-        new("load", Q(QuantityKind.Percent, "between 0 % and 100 % (exclusive)"), "fraction of the input power left for the load")
+        new("load", new AnyOfValue([Q(QuantityKind.Percent, "between 0 % and 100 % (exclusive)"), new ChoiceValue(["auto"], [], WordFolding.Words)]),
+            "fraction of the input power left for the load; auto: the smallest the slots can deliver for the count and taper")
             { Default = "5 %", DefaultText = "5 % (warning)", AppliesTo = TravellingWave },
         new("short", GuideDistance("between 0 and 1 guide-wavelength"), "last slot centre to the end short")
             { Default = "0.25 guide-wavelength", AppliesTo = StandingWave },
-    ]);
+        new("guide", new BlockValue(Guide), "planar arrays: the feed guide behind the branches (its λg/2 sets the pitch)")
+            { DefaultText = "the branch guide's section, broad wall solved for the pitch", AppliesTo = StandingWave },
+    ])
+    {
+        Exclusive = [("spacing", "beam")],
+    };
 
-    private static readonly string[] SidelobeTapers = TaperWords(Core.Tapers.TaperType.Chebyshev, Core.Tapers.TaperType.Taylor,
-        Core.Tapers.TaperType.Villeneuve, Core.Tapers.TaperType.TaylorOneParameter, Core.Tapers.TaperType.Bayliss);
-    private static readonly string[] NbarTapers = TaperWords(Core.Tapers.TaperType.Taylor, Core.Tapers.TaperType.Villeneuve, Core.Tapers.TaperType.Bayliss);
+    /// <summary>The taper word of Hansen's circular Taylor distribution (planar arrays with a circle or ellipse outline).</summary>
+    public const string CircularTaylor = "circular-taylor";
+
+    private static readonly string[] SidelobeTapers = [.. TaperWords(Core.Tapers.TaperType.Chebyshev, Core.Tapers.TaperType.Taylor,
+        Core.Tapers.TaperType.Villeneuve, Core.Tapers.TaperType.TaylorOneParameter, Core.Tapers.TaperType.Bayliss), CircularTaylor];
+    private static readonly string[] NbarTapers = [.. TaperWords(Core.Tapers.TaperType.Taylor, Core.Tapers.TaperType.Villeneuve, Core.Tapers.TaperType.Bayliss), CircularTaylor];
     private static readonly string[] PedestalTaper = TaperWords(Core.Tapers.TaperType.CosinePedestal);
     private static readonly string[] GivenTaper = TaperWords(Core.Tapers.TaperType.Given);
 
     /// <summary><c>taper</c>: the aperture amplitude distribution.</summary>
     public static readonly SpecSection Taper = new("taper", "the aperture amplitude distribution (sum or difference pattern)",
     [
-        new("type", Words(SpecNames.TaperTypes), "taper family") { Required = true, Example = "taylor" },
+        new("type", new ChoiceValue([.. SpecNames.TaperTypes.Select(p => p.Key), CircularTaylor], [], WordFolding.Words),
+            "taper family (circular-taylor: the whole aperture of a planar array with a circle or ellipse outline)") { Required = true, Example = "taylor" },
         new("sidelobes", Q(QuantityKind.Decibels, "-100 dB up to -13.3 dB (chebyshev: up to -1 dB; bayliss: -60 dB to -15 dB)"), "design sidelobe level")
             { AppliesTo = SidelobeTapers, RequiredFor = SidelobeTapers, Example = "-26 dB" },
         new("nbar", new IntegerValue(MinNbar, MaxNbar), "number of nearly equal sidelobes next to the main beam") { Default = 4L, AppliesTo = NbarTapers },
@@ -158,6 +171,8 @@ internal static class SpecKeys
         new("cross_polar", Q(QuantityKind.Decibels, "-100 dB to 0 dB (negative)"), "highest cross-polar level allowed") { DefaultText = "not checked", Example = "-25 dB" },
         new("vswr", new AnyOfValue([new NumberValue(1, 100, ExclusiveMinimum: true), new TextValue(VswrPattern)]),
             "highest VSWR over the whole band, e.g. 1.5 or '1.5:1'") { DefaultText = "not checked", Example = "1.5" },
+        new("vertical_beamwidth", Q(QuantityKind.Angle, "above 0 deg, below 180 deg"), "vertical half-power beamwidth of the flare, met within ±1 deg; flare: auto chooses the aperture for it")
+            { DefaultText = "not checked", Example = "22 deg" },
     ]);
 
     /// <summary><c>transmitter</c>: powers for the exposure and power-handling screening.</summary>
@@ -165,6 +180,42 @@ internal static class SpecKeys
     [
         new("peak_power", Q(QuantityKind.Power, "above 0, up to 1000 MW"), "peak transmitter power") { DefaultText = "no estimate", Example = "25 kW" },
         new("average_power", Q(QuantityKind.Power, "above 0, up to the peak power"), "average transmitter power") { DefaultText = "no estimate", Example = "20 W" },
+        new("frequency_tolerance", Q(QuantityKind.Frequency, "0 Hz or more, below the design frequency"), "± tolerance of the transmitter frequency, for the pointing budget")
+            { DefaultText = "0 Hz", Example = "30 MHz" },
+    ]);
+
+    private static readonly ChoiceValue AutoWord = new(["auto"], [], WordFolding.Words);
+
+    /// <summary><c>filter</c>: the polarisation filter of plates in front of edge slots.</summary>
+    public static readonly SpecSection Filter = new("filter", "polarisation filter: thin metal plates across the aperture, normal to the guide axis (edge slots)",
+    [
+        new("spacing", new AnyOfValue([Q(QuantityKind.Length, "above the thickness, below half a wavelength plus the thickness"), AutoWord]),
+            "plate pitch along the guide axis, centre to centre; auto: the slot spacing over the smallest whole number that leaves a clear gap of at most 0.35 wavelength at the top of the band")
+            { DefaultText = "auto", Example = "12 mm" },
+        new("depth", new AnyOfValue([Q(QuantityKind.Length, "above 0, up to 1 m"), AutoWord]),
+            "plate depth out from the slotted face; auto: the depth that meets requirements.cross_polar with a 3 dB margin")
+            { DefaultText = "auto", Example = "15 mm" },
+        new("thickness", Q(QuantityKind.Length, "0 or more, below the spacing"), "plate thickness") { Default = "0.5 mm" },
+    ]);
+
+    /// <summary><c>flare</c>: two plates diverging from the slotted face (edge slots), setting the vertical beam.</summary>
+    public static readonly SpecSection Flare = new("flare", "two plates diverging from the slotted narrow-wall face that set the vertical beam (edge slots)",
+    [
+        new("length", new AnyOfValue([Q(QuantityKind.Length, "above 0, up to 10 m"), AutoWord]),
+            "depth from the slotted face to the aperture; auto: from the aperture and the phase error")
+            { DefaultText = "auto", Example = "150 mm" },
+        new("aperture", new AnyOfValue([Q(QuantityKind.Length, "above half a wavelength, up to 10 m"), AutoWord]),
+            "aperture height between the plates' outer edges; auto: the height that gives requirements.vertical_beamwidth")
+            { DefaultText = "auto", Example = "100 mm" },
+        new("phase_error", Q(QuantityKind.Angle, "above 0 deg, up to 360 deg"), "largest phase error at the aperture edge an automatic flare may have")
+            { Default = "90 deg" },
+    ]);
+
+    /// <summary><c>environment</c>: the operating conditions of the pointing budget.</summary>
+    public static readonly SpecSection Environment = new("environment", "operating conditions: the guide's temperature range for the pointing budget",
+    [
+        new("temperature", new ListValue(Q(QuantityKind.Temperature, "-100 degC to 200 degC, low ≤ high"), 2, 2), "operating temperature range of the guide [low, high]")
+            { DefaultText = "20 degC only", Example = "[-25 degC, 55 degC]" },
     ]);
 
     /// <summary><c>fabrication</c>: how the plate is to be cut.</summary>
@@ -173,6 +224,24 @@ internal static class SpecKeys
         new("prototype_margin", Q(QuantityKind.Percent, "-5 % to +5 %"),
             "every slot cut this much longer (+) or shorter (-) than designed; a first plate cut short (e.g. -0.5 %) can be trimmed up after 'slotarray compare' (common practice, no source)")
             { DefaultText = "0 %: the designed lengths" },
+    ]);
+
+    private static readonly string[] Planar = ["planar"];
+
+    /// <summary><c>array</c>: one stick (linear) or a planar array of branch guides fed by a feed guide.</summary>
+    public static readonly SpecSection ArrayLayout = new("array", "linear (one guide) or planar (branch guides side by side, fed by a feed guide behind them)",
+    [
+        new("type", new ChoiceValue(["linear", "planar"], [], WordFolding.Words), "linear: one guide; planar: branches fed through coupling slots")
+            { Default = "linear" },
+        new("branches", new IntegerValue(1, 200), "planar: number of branch guides of the bounding rectangle (slots.count is the slots per branch)")
+            { AppliesTo = Planar, RequiredFor = Planar, Example = "12" },
+        new("pitch", new AnyOfValue([Q(QuantityKind.Length, "at least the branch guide's a plus the common wall"), AutoWord]),
+            "planar: branch centre-line spacing; auto: a + common wall (or λg/2 of a given feed guide), the feed guide's a solved to match")
+            { Default = "auto", AppliesTo = Planar },
+        new("common_wall", Q(QuantityKind.Length, "0 or more, up to 20 mm"), "planar: thickness of the wall two neighbouring branch guides share")
+            { Default = "1 mm", AppliesTo = Planar },
+        new("outline", new ChoiceValue(["rectangle", "circle", "ellipse"], [], WordFolding.Words),
+            "planar: aperture outline; slots whose centres fall outside are left out") { Default = "rectangle", AppliesTo = Planar },
     ]);
 
     /// <summary>The top level of the spec.</summary>
@@ -188,13 +257,19 @@ internal static class SpecKeys
         new("slots", new BlockValue(Slots), Slots.Description) { Required = true },
         new("feed", new BlockValue(Feed), Feed.Description) { Required = true },
         new("taper", new BlockValue(Taper), Taper.Description) { DefaultText = "uniform (warning)" },
+        new("array", new BlockValue(ArrayLayout), ArrayLayout.Description) { DefaultText = "linear" },
+        new("taper_across", new BlockValue(Taper), "planar arrays: the taper across the branches (separable with taper along them)")
+            { DefaultText = "planar: the same as taper (warning)" },
         new("coupling", Words(SpecNames.CouplingModes), "mutual: Elliott's design with mutual coupling between slots") { Default = "none" },
         new("tolerance", new BlockValue(ToleranceBlock), "machining tolerances for the Monte Carlo analysis") { DefaultText = "no tolerance analysis" },
         new("requirements", new BlockValue(Requirements), Requirements.Description) { DefaultText = "none" },
         new("transmitter", new BlockValue(Transmitter), Transmitter.Description) { DefaultText = "no exposure estimate" },
         new("fabrication", new BlockValue(Fabrication), Fabrication.Description) { DefaultText = "the designed lengths" },
+        new("filter", new AnyOfValue([new BlockValue(Filter), AutoWord]), Filter.Description + "; auto: every dimension chosen") { DefaultText = "none" },
+        new("environment", new BlockValue(Environment), Environment.Description) { DefaultText = "20 degC only" },
+        new("flare", new AnyOfValue([new BlockValue(Flare), AutoWord]), Flare.Description + "; auto: length and aperture chosen") { DefaultText = "none" },
     ]);
 
     /// <summary>Every block, the top level first.</summary>
-    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ToleranceBlock, Systematic, Sigma, SigmaAngle, Requirements, Transmitter, Fabrication];
+    public static IReadOnlyList<SpecSection> All { get; } = [Root, Guide, Slots, Feed, Taper, ArrayLayout, ToleranceBlock, Systematic, Sigma, SigmaAngle, Requirements, Transmitter, Fabrication, Filter, Flare, Environment];
 }

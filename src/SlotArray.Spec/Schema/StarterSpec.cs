@@ -46,7 +46,9 @@ internal static class StarterSpec
         {
             string path = prefix + key.Name;
             bool active = blockActive && (values.ContainsKey(path) || values.Keys.Any(k => k.StartsWith(path + ".", StringComparison.Ordinal)));
-            if (key.Value is BlockValue block && !values.ContainsKey(path))
+            // A block, or a block-or-word key (filter, flare: a block or 'auto'): written as the block with its keys.
+            var block = key.Value as BlockValue ?? (key.Value as AnyOfValue)?.Forms.OfType<BlockValue>().FirstOrDefault();
+            if (block is not null && !values.ContainsKey(path))
             {
                 Line(sb, indent, active, $"{key.Name}:", Comment(key));
                 Write(sb, block.Section, path + ".", indent + 2, active, values);
@@ -85,7 +87,8 @@ internal static class StarterSpec
                 parts.Add($"{i.Minimum} to {i.Maximum}");
                 break;
             case AnyOfValue a when a.Forms.OfType<QuantityValue>().FirstOrDefault() is { } q2:
-                parts.Add(string.Join(" ", QuantityParser.SymbolsOf(q2.Kinds).Where(u => u is not ("μm" or "inch"))) + ", or {sigma: …}");
+                string other = a.Forms.OfType<ChoiceValue>().FirstOrDefault() is { } word ? string.Join(" | ", word.Words) : "{sigma: …}";
+                parts.Add(string.Join(" ", QuantityParser.SymbolsOf(q2.Kinds).Where(u => u is not ("μm" or "inch"))) + ", or " + other);
                 break;
         }
         if (key.AppliesTo is not null) parts.Add($"{string.Join(", ", key.AppliesTo)} only");

@@ -86,14 +86,26 @@ internal sealed partial class SpecBuilder
     {
         var s = Sub(root, "feed", FeedKeys, true);
         if (s is null) return null;
+        if (s.Has("guide"))
+        {
+            feedGuideNode = s.KeyNode("guide");
+            feedGuide = Guide(s, f, null);
+        }
         FeedType? type = Choice(s, "type", SpecNames.FeedTypes, true);
         bool ok = type is not null;
         bool standing = type == FeedType.StandingWave, travelling = type == FeedType.TravellingWave;
 
         GuideDistance? spacing = null;
-        if (s.Has("spacing")) spacing = Distance(s, "spacing", lambdaG, "0.5 guide-wavelength");
-        else if (travelling) Missing(s, "spacing", "'spacing: 0.7 guide-wavelength' (a travelling-wave array needs a spacing other than 0.5 guide-wavelength)");
-        else spacing = GuideDistance.InGuideWavelengths(0.5);
+        Angle? beam = null;
+        if (s.Has("beam"))
+        {
+            if (!travelling) ok &= Require(s, "beam", false, "'beam' applies to travelling-wave feeds only (a standing-wave array's beam is set by its spacing); remove it");
+            else if (s.Has("spacing")) ok &= Require(s, "beam", false, "give 'spacing' or 'beam', not both: the beam direction sets the spacing");
+            else (spacing, beam) = SpacingForBeam(s, guide, f);
+        }
+        else if (s.Has("spacing")) spacing = Distance(s, "spacing", lambdaG, "0.5 guide-wavelength");
+        else if (travelling) Missing(s, "spacing", "'spacing: 0.7 guide-wavelength' or 'beam: -4.5 deg' (a travelling-wave array needs a spacing other than 0.5 guide-wavelength)");
+        if (spacing is null && !s.Has("spacing") && !s.Has("beam") && !travelling) spacing = GuideDistance.InGuideWavelengths(0.5);
         ok &= spacing is not null;
         if (spacing is not null && lambdaG is { } lg && type is not null)
         {
@@ -101,7 +113,7 @@ internal sealed partial class SpecBuilder
             if (standing && Math.Abs(n - 0.5) > 0.005 && s.Has("spacing"))
                 D.Warn(s["spacing"]!, $"a standing-wave array is normally spaced 0.5 guide-wavelength; {Num(n)} guide-wavelength tilts the beam off broadside");
             if (travelling && Math.Abs(n - 0.5) <= 0.005)
-                D.Warn(s["spacing"]!, "a travelling-wave array spaced 0.5 guide-wavelength adds its reflections in phase: expect a poor match at the design frequency");
+                D.Warn((SpecNode?)s["spacing"] ?? s["beam"] ?? s.Anchor, "a travelling-wave array spaced 0.5 guide-wavelength adds its reflections in phase: expect a poor match at the design frequency");
             if (slots is not null && guide is not null && f is { } fd)
                 ok &= SpacingFits(s, spacing.Resolve(lg), slots, guide, fd, travelling);
         }
@@ -115,7 +127,13 @@ internal sealed partial class SpecBuilder
         ok &= position is not null;
 
         double? load = standing ? 0 : DefaultLoadFraction;
-        if (s.Has("load"))
+        bool autoLoad = false;
+        if (s.Has("load") && s["load"] is ScalarNode { IsNull: false } word && word.Value.Trim().Equals("auto", StringComparison.OrdinalIgnoreCase))
+        {
+            autoLoad = true;
+            if (standing) ok &= Require(s, "load", false, "'load' applies to travelling-wave feeds only (a standing-wave array ends in a short); remove it");
+        }
+        else if (s.Has("load"))
         {
             load = Quantity(s, "load", QuantityKind.Percent, false, "5 %");
             if (standing) ok &= Require(s, "load", false, "'load' applies to travelling-wave feeds only (a standing-wave array ends in a short); remove it");
@@ -133,7 +151,29 @@ internal sealed partial class SpecBuilder
         }
         ok &= shortDistance is not null;
 
-        return ok ? new FeedRequest(type!.Value, spacing!, position!.Value, standing ? 0 : load!.Value, shortDistance!) : null;
+        return ok ? new FeedRequest(type!.Value, spacing!, position!.Value, standing ? 0 : load!.Value, shortDistance!) { AutoLoad = autoLoad, Beam = beam } : null;
+    }
+
+    /// <summary>
+    /// <c>feed.beam</c>: the asked direction and the spacing that gives it by the phase condition
+    /// (<see cref="TravellingWaveBeam.SpacingFor"/>); errors at the key when the angle is out of range or unreachable.
+    /// </summary>
+    private (GuideDistance? Spacing, Angle? Beam) SpacingForBeam(Section s, RectangularWaveguide? guide, Frequency? f)
+    {
+        var radians = Quantity(s, "beam", QuantityKind.Angle, false, "-4.5 deg");
+        if (radians is not { } r) return (null, null);
+        var beam = Angle.FromRadians(r);
+        if (!Require(s, "beam", Math.Abs(beam.Degrees) <= 80, $"'beam' must lie between -80 deg and +80 deg from broadside, got {Num(beam.Degrees)} deg")) return (null, null);
+        if (guide is null || f is not { } fd) return (null, null);
+        try
+        {
+            return (GuideDistance.OfLength(TravellingWaveBeam.SpacingFor(guide, beam, fd)), beam);
+        }
+        catch (ArgumentOutOfRangeException e)
+        {
+            Require(s, "beam", false, $"'beam': {e.Message.Split(" (Parameter")[0]}; ask for a direction nearer the load end (positive) or broadside");
+            return (null, null);
+        }
     }
 
     /// <summary>
@@ -147,7 +187,7 @@ internal sealed partial class SpecBuilder
     /// </summary>
     private bool SpacingFits(Section s, Length spacing, SlotRequest slots, RectangularWaveguide guide, Frequency f, bool travelling)
     {
-        var at = (SpecNode?)s["spacing"] ?? s.Anchor;
+        var at = (SpecNode?)s["spacing"] ?? s["beam"] ?? s.Anchor;
         double d = spacing.Meters, w = slots.Width.Meters;
         if (slots.Type == SlotType.Longitudinal)
         {
@@ -203,15 +243,18 @@ internal sealed partial class SpecBuilder
     /// level); nbar (default 4); cosine-pedestal edge (required) and exponent (default 2); given weights (one per slot).
     /// A key the chosen family does not use is an error.
     /// </summary>
-    private TaperRequest? Taper(Section root, int? slotCount)
+    private TaperRequest? Taper(Section root, int? slotCount, string key = "taper")
     {
-        if (!root.Has("taper"))
+        if (!root.Has(key))
         {
-            D.Warn(root.Anchor, "no 'taper' given: using a uniform taper (first sidelobe about -13 dB); write e.g. 'taper: {type: taylor, sidelobes: -26 dB}'");
+            if (key == "taper")
+                D.Warn(root.Anchor, "no 'taper' given: using a uniform taper (first sidelobe about -13 dB); write e.g. 'taper: {type: taylor, sidelobes: -26 dB}'");
             return TaperRequest.Uniform;
         }
-        var s = Sub(root, "taper", TaperKeys, true);
+        var s = Sub(root, key, TaperKeys, true);
         if (s is null) return null;
+        if (s["type"] is ScalarNode { IsNull: false } typeNode && typeNode.Value.Trim().ToLowerInvariant().Replace('_', '-') == SpecKeys.CircularTaylor)
+            return CircularTaper(s, key);
         TaperType? type = Choice(s, "type", SpecNames.TaperTypes, true);
         if (type is null) return null;
         var t = type.Value;
@@ -219,8 +262,8 @@ internal sealed partial class SpecBuilder
         bool usesSll = SpecKeys.Taper["sidelobes"].Applies(family);
         bool usesNbar = SpecKeys.Taper["nbar"].Applies(family);
         bool ok = true;
-        foreach (var key in SpecKeys.Taper.Keys.Where(k => !k.Applies(family)).Select(k => k.Name))
-            if (s.Has(key)) ok &= Require(s, key, false, $"'{key}' does not apply to a {family} taper; remove it");
+        foreach (var name in SpecKeys.Taper.Keys.Where(k => !k.Applies(family)).Select(k => k.Name))
+            if (s.Has(name)) ok &= Require(s, name, false, $"'{name}' does not apply to a {family} taper; remove it");
 
         double? sll = UniformSidelobeDb;
         if (usesSll)

@@ -158,7 +158,15 @@ internal sealed partial class SpecBuilder
                 ok = false;
             }
         }
-        return ok ? new Requirements(sll, xpol, vswr) : null;
+        Angle? vertical = null;
+        if (s.Has("vertical_beamwidth"))
+        {
+            var v = Quantity(s, "vertical_beamwidth", QuantityKind.Angle, false, "22 deg");
+            if (v is not null && Require(s, "vertical_beamwidth", v > 0 && v < Math.PI, $"'vertical_beamwidth' must lie between 0 deg and 180 deg, got {Num(v.Value * 180 / Math.PI)} deg"))
+                vertical = Angle.FromRadians(v.Value);
+            else ok = false;
+        }
+        return ok ? new Requirements(sll, xpol, vswr) { VerticalBeamwidth = vertical } : null;
     }
 
     /// <summary>Transmitter (optional): peak_power and average_power (W, kW, MW), positive, average ≤ peak.</summary>
@@ -181,6 +189,13 @@ internal sealed partial class SpecBuilder
         }
         if (ok && peak is not null && average is not null)
             ok &= Require(s, "average_power", average <= peak, $"'average_power' {Num(average.Value)} W cannot exceed 'peak_power' {Num(peak.Value)} W");
+        if (s.Has("frequency_tolerance"))
+        {
+            var tol = Quantity(s, "frequency_tolerance", QuantityKind.Frequency, false, "30 MHz");
+            if (tol is not null && Require(s, "frequency_tolerance", tol >= 0 && tol < 1e12, $"'frequency_tolerance' must be 0 Hz or more, got {Num(tol.Value)} Hz"))
+                _frequencyTolerance = Frequency.FromHertz(tol.Value);
+            else ok = false;
+        }
         return ok ? new TransmitterRequest(peak, average) : null;
     }
 

@@ -59,12 +59,18 @@ internal sealed partial class SpecBuilder
         var requirements = Requirements(s);
         var transmitter = Transmitter(s, out bool transmitterOk);
         double margin = Fabrication(s, out bool fabricationOk);
+        var filter = Filter(s, slots, out bool filterOk);
+        var flare = Flare(s, slots, out bool flareOk);
+        var operating = Operating(s, out bool operatingOk);
+        fabricationOk &= filterOk && flareOk && operatingOk;
+        var planar = Planar(s, slots, feed, guide, out bool planarOk);
+        fabricationOk &= planarOk;
 
         if (D.ErrorCount > 0 || name is null || f is null || band is null || guide is null || slots is null || feed is null
             || taper is null || coupling is null || !toleranceOk || requirements is null || !transmitterOk || !fabricationOk)
             return null;
         return new ArrayRequest(name, f.Value, band.Value.Low, band.Value.High, guide, slots, feed, taper, coupling.Value,
-            tolerance, requirements, transmitter) { PrototypeMargin = margin };
+            tolerance, requirements, transmitter) { PrototypeMargin = margin, Filter = filter, Flare = flare, Operating = operating, Planar = planar };
     }
 
     private string? Name(Section s)

@@ -1,0 +1,239 @@
+using System.Numerics;
+using SlotArray.Core.Coupling;
+using SlotArray.Core.Design;
+using SlotArray.Core.Network;
+using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
+
+namespace SlotArray.Core.Planar;
+
+/// <summary>
+/// Elliott's design of a planar array of longitudinal shunt slots: centre-fed standing-wave branches, each a stick of
+/// <see cref="StandingWaveDesigner"/>, whose slots are then re-sized together so that, with the external mutual
+/// coupling of every slot of the aperture included, each slot's active admittance is the one its share of the 2-D
+/// taper needs; then the coupling slots that feed each branch its power from a standing-wave feed guide.
+/// </summary>
+/// <remarks>
+/// <para>Method: R. S. Elliott and L. A. Kurtz, "The design of small slot arrays", IEEE Trans. AP-26, 214–219, 1978;
+/// R. S. Elliott, "An improved design procedure for small arrays of shunt slots", IEEE Trans. AP-31, 48–53, 1983
+/// (planar arrays fed by series-series coupling slots); structure from memory [M], in the form of
+/// <see cref="ElliottDesigner"/> [D]. Every branch is fed at its centre by a series coupling slot, so (as for the centre-fed
+/// stick) the mode voltage has one magnitude along a branch and (E1) gives the targets
+/// T_n = 2 f_n|A_n| / Σ_{m in the branch} f_m|A_m| (Σ y^a = 2 per branch: each half matched to the junction). (E2)
+/// for slot n: 1/y(x_n, L_n) + C_n/f_n² = 1/T_n with C_n = Σ_{m ≠ n, whole aperture} (A_m/A_n) Z_nm/(Γ0 R_d): the
+/// coupling sum runs over the collinear neighbours in the branch and the parallel slots of every other branch (the
+/// aperture voltages of other branches are those the design asks for, all branches being driven in phase). Each
+/// slot's two real equations are solved by the damped Newton of <see cref="ElliottDesigner.SolveSlot"/> with f and
+/// Z from the previous sweep (Elliott's iteration), started from the isolated-slot sticks; the sweep is repeated
+/// until no offset or length moves by more than <see cref="PlanarRequest.Tolerance"/>, and the history is reported.
+/// This is the fixed-point (Gauss–Jacobi) form of Elliott's iteration, not a joint Newton on all 2N unknowns.</para>
+/// <para>Feed: with every branch matched (z_branch = 2), the power a branch takes is P_k ∝ S_k², S_k = Σ f_m|A_m| over
+/// its slots (its slots' aperture voltages are then c·A_n with one c for the whole aperture). The feed guide is a
+/// standing-wave line with the coupling slots at λg/2 (= pitch) where the current is largest, shorts λg/2 beyond
+/// the outermost; a series element there takes P ∝ r. End feed: r_k = P_k/ΣP (Σ r = 1, matched). Centre feed (an
+/// ideal series tee a quarter guide wavelength from the middle two slots, each half's Σ r inverted by that quarter
+/// wave): r_k = P·P_k/P_half², which matches the tee, 1/Σr_left + 1/Σr_right = 1, and splits P_left : P_right as asked
+/// (derived here [D]). Each coupling slot's rotation then gives r_k from its branch's 2 (<see cref="CouplingSlot"/>);
+/// its sign alternates so that the branches are driven in phase (set from the network at f0).</para>
+/// <para>Neglected (as in Elliott's procedure): internal coupling through higher-order modes (between the slots of
+/// one guide and, through the common wall, of neighbouring branches), the coupling slots' own radiation into the
+/// branch (they sit in the back wall) and their reactance off resonance.</para>
+/// </remarks>
+internal static class PlanarDesigner
+{
+    /// <summary>
+    /// Designs the array. Throws <see cref="InfeasibleDesignException"/> naming the branch and slot when a slot or a
+    /// coupling slot cannot be realised, <see cref="ConvergenceException"/> when the coupled iteration does not settle.
+    /// </summary>
+    public static PlanarDesign Design(PlanarRequest request)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        var layout = request.Layout;
+        var f0 = request.DesignFrequency;
+        var (amp, method, warnings) = request.Taper.Weights(layout);
+        var lambdaG = request.BranchGuide.GuideWavelength(f0);
+        if (Math.Abs(layout.Spacing.Meters - 0.5 * lambdaG.Meters) > 1e-9 * lambdaG.Meters)
+            throw new ArgumentException($"the layout's slot spacing {layout.Spacing} is not λg/2 = {0.5 * lambdaG} of the branch guide at {f0}", nameof(request));
+        var sticks = UncoupledSticks(request, amp);
+        var history = new List<ElliottIteration>();
+        if (request.Coupled) Iterate(request, amp, sticks, history);
+        var list = warnings.ToList();
+        foreach (var s in sticks)
+            foreach (var w in s.Design.Warnings)
+                if (!list.Contains(w)) list.Add(w);
+        var design = new PlanarDesign(request.Name, f0, layout, Array.AsReadOnly(amp), method,
+            sticks.Select(s => new PlanarBranch(s.Number, s.Y, s.Design, s.Indices, Placeholder(s.Number, s.Y))).ToArray(),
+            request.FeedGuide, request.FeedPosition, 0.5 * request.FeedGuide.GuideWavelength(f0),
+            request.FeedPosition == FeedPosition.Centre ? 0.5 * layout.Pitch : 0.5 * request.FeedGuide.GuideWavelength(f0),
+            request.Coupled, history.AsReadOnly(), list.AsReadOnly());
+        return FeedDesign.Apply(design, request, list);
+    }
+
+    private static CouplingSlotDesign Placeholder(int branch, double y) => new(branch, y, Angle.FromRadians(0), Length.Zero, Length.Zero, 0, 0);
+
+    /// <summary>A branch under design: its stick, number, centre line and slot indices.</summary>
+    private sealed class BranchWork(int number, double y, int[] indices, ArrayDesign design)
+    {
+        public int Number { get; } = number;
+        public double Y { get; } = y;
+        public int[] Indices { get; } = indices;
+        public ArrayDesign Design { get; set; } = design;
+    }
+
+    private static List<BranchWork> UncoupledSticks(PlanarRequest request, double[] amp)
+    {
+        var layout = request.Layout;
+        var feed = new FeedRequest(FeedType.StandingWave, GuideDistance.InGuideWavelengths(0.5), FeedPosition.Centre, 0, GuideDistance.InGuideWavelengths(0.25));
+        var list = new List<BranchWork>();
+        foreach (int b in layout.FedBranches)
+        {
+            var idx = Enumerable.Range(0, layout.Count).Where(i => layout.Slots[i].Branch == b).ToArray();
+            var stick = new StickRequest($"{request.Name} branch {b}", request.BranchGuide, request.DesignFrequency, idx.Length, feed,
+                idx.Select(i => amp[i]).ToArray(), request.Slot) { Cutter = request.Cutter };
+            ArrayDesign d;
+            try { d = StandingWaveDesigner.Design(stick).Design; }
+            catch (InfeasibleDesignException e) { throw new InfeasibleDesignException($"branch {b}: {e.Message}"); }
+            list.Add(new BranchWork(b, layout.Slots[idx[0]].Y, idx, d));
+        }
+        return list;
+    }
+
+    private static void Iterate(PlanarRequest request, double[] amp, List<BranchWork> branches, List<ElliottIteration> history)
+    {
+        var f0 = request.DesignFrequency;
+        var guide = request.BranchGuide;
+        var surrogate = ElliottDesigner.SurrogateFor(request.Slot, f0);
+        double scale = 1 / (ElliottDesignEquations.Gamma0(guide, f0) * PhysicalConstants.HalfWaveDipoleResistance);
+        int n = request.Layout.Count;
+        var coupling = CoupledSlotImpedances.HalfCosineCentreReferred;
+        // The coupling sums C_n depend on the geometry only through Z (the amplitudes are fixed), and Z barely moves once
+        // the geometry has settled: Z and C are refilled whenever any offset or length has moved by more than
+        // RefillDistance since the last fill (a stale Z then changes C by ~1e-4 relative, far below the tolerance's effect).
+        Complex[] c = Array.Empty<Complex>();
+        double[]? filledAt = null;
+        for (int it = 1; it <= request.MaximumIterations; it++)
+        {
+            var geometry = Geometry(branches, n);
+            if (filledAt is null || MaxDifference(filledAt, geometry) > RefillDistance)
+            {
+                var z = coupling(Placements(branches, n), branches[0].Design.Slots[0].Width, f0);
+                c = CouplingSums(z, amp, scale);
+                filledAt = geometry;
+            }
+            double dMax = 0, dxMax = 0, dlMax = 0, match = 0;
+            int worst = 0;
+            foreach (var b in branches)
+            {
+                var slots = b.Design.Slots;
+                var fn = slots.Select(s => ElliottDesigner.F(guide, f0, Math.Abs(s.Coupling), s.Length.Meters)).ToArray();
+                double sum = 0;
+                for (int k = 0; k < slots.Count; k++) sum += fn[k] * Math.Abs(amp[b.Indices[k]]);
+                var updated = new SlotDesign[slots.Count];
+                Complex total = 0;
+                for (int k = 0; k < slots.Count; k++)
+                {
+                    int i = b.Indices[k];
+                    double target = StandingWaveDesigner.CentreJunctionRatio * fn[k] * Math.Abs(amp[i]) / sum;
+                    double x = Math.Abs(slots[k].Coupling), l = slots[k].Length.Meters;
+                    var y = surrogate.Admittance(x, l);
+                    total += y / (1 + y * c[i] / (fn[k] * fn[k]));
+                    (double X, double L) r;
+                    try { r = ElliottDesigner.SolveSlot(surrogate, guide, f0, k, x, l, c[i], target, 60); }
+                    catch (InfeasibleDesignException e) { throw new InfeasibleDesignException($"branch {b.Number}, {e.Message}"); }
+                    catch (ConvergenceException e) { throw new ConvergenceException($"branch {b.Number}, {e.Message}", e.Iterations, e.Residual); }
+                    double dx = Math.Abs(r.X - x), dl = Math.Abs(r.L - l);
+                    if (Math.Max(dx, dl) > dMax) { dMax = Math.Max(dx, dl); worst = i; }
+                    dxMax = Math.Max(dxMax, dx);
+                    dlMax = Math.Max(dlMax, dl);
+                    updated[k] = slots[k] with { Coupling = Math.Sign(slots[k].Coupling) * r.X, Length = Length.FromMeters(r.L), Conductance = target };
+                }
+                match = Math.Max(match, (total - StandingWaveDesigner.CentreJunctionRatio).Magnitude);
+                b.Design = b.Design with { Slots = Array.AsReadOnly(updated) };
+            }
+            history.Add(new ElliottIteration(it, dxMax, dlMax, worst + 1, match));
+            if (dMax < request.Tolerance)
+            {
+                foreach (var b in branches) Fabrication.SlotClearance.Require(b.Design, request.Cutter);
+                return;
+            }
+        }
+        var last = history[^1];
+        var (wb, ws) = Locate(branches, last.WorstSlot - 1);
+        throw new ConvergenceException(FormattableString.Invariant(
+            $"Elliott's planar iteration did not converge in {request.MaximumIterations} sweeps: branch {wb} slot {ws} still moved by {Math.Max(last.MaximumOffsetChange, last.MaximumLengthChange) * 1e3:G3} mm in the last one; the coupling is too strong: use a gentler taper, more slots or coupling: none"),
+            request.MaximumIterations, Math.Max(last.MaximumOffsetChange, last.MaximumLengthChange));
+    }
+
+    /// <summary>Geometry change (m) after which the coupling matrix is refilled during the iteration: 1 µm.</summary>
+    private const double RefillDistance = 1e-6;
+
+    /// <summary>C_n = Σ_{m≠n} (A_m/A_n) Z_nm/(Γ0 R_d) for every slot (the whole aperture).</summary>
+    private static Complex[] CouplingSums(CouplingMatrix z, double[] amp, double scale)
+    {
+        int n = amp.Length;
+        var c = new Complex[n];
+        Parallel.For(0, n, new ParallelOptions { MaxDegreeOfParallelism = 2 }, i =>
+        {
+            Complex sum = 0;
+            for (int m = 0; m < n; m++) if (m != i) sum += amp[m] * z[i, m];
+            c[i] = sum * (scale / amp[i]);
+        });
+        return c;
+    }
+
+    /// <summary>|offset| and length of every slot, layout order (2 values a slot).</summary>
+    private static double[] Geometry(List<BranchWork> branches, int n)
+    {
+        var g = new double[2 * n];
+        foreach (var b in branches)
+            for (int k = 0; k < b.Indices.Length; k++)
+            {
+                g[2 * b.Indices[k]] = Math.Abs(b.Design.Slots[k].Coupling);
+                g[2 * b.Indices[k] + 1] = b.Design.Slots[k].Length.Meters;
+            }
+        return g;
+    }
+
+    private static double MaxDifference(double[] a, double[] b)
+    {
+        double m = 0;
+        for (int i = 0; i < a.Length; i++) m = Math.Max(m, Math.Abs(a[i] - b[i]));
+        return m;
+    }
+
+    private static (int Branch, int Slot) Locate(List<BranchWork> branches, int index)
+    {
+        foreach (var b in branches)
+            for (int k = 0; k < b.Indices.Length; k++)
+                if (b.Indices[k] == index) return (b.Number, k + 1);
+        return (0, 0);
+    }
+
+    /// <summary>Every slot's placement on the aperture (Position = x, Offset = y of its centre), layout order.</summary>
+    private static LongitudinalSlotPlacement[] Placements(List<BranchWork> branches, int n)
+    {
+        var p = new LongitudinalSlotPlacement[n];
+        foreach (var b in branches)
+            for (int k = 0; k < b.Indices.Length; k++)
+            {
+                var s = b.Design.Slots[k];
+                p[b.Indices[k]] = new LongitudinalSlotPlacement(Length.FromMeters(s.Position.Meters - b.Design.FeedPlane.Meters),
+                    Length.FromMeters(b.Y + s.Coupling), 0.5 * s.Length);
+            }
+        return p;
+    }
+
+    /// <summary>The aperture placements of a finished design (layout order), as the coupled network and pattern use them.</summary>
+    public static LongitudinalSlotPlacement[] Placements(PlanarDesign design)
+    {
+        ArgumentNullException.ThrowIfNull(design);
+        var p = new LongitudinalSlotPlacement[design.Layout.Count];
+        foreach (var b in design.Branches)
+            for (int k = 0; k < b.SlotIndices.Count; k++)
+            {
+                var s = b.Stick.Slots[k];
+                p[b.SlotIndices[k]] = new LongitudinalSlotPlacement(Length.FromMeters(b.ApertureX(s.Position)), Length.FromMeters(b.Y + s.Coupling), 0.5 * s.Length);
+            }
+        return p;
+    }
+}

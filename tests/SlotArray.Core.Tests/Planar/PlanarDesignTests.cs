@@ -1,0 +1,182 @@
+using System.Numerics;
+using SlotArray.Core.Coupling;
+using SlotArray.Core.Design;
+using SlotArray.Core.Patterns;
+using SlotArray.Core.Planar;
+using SlotArray.Core.Quantities;
+using SlotArray.Core.Stick;
+using SlotArray.Core.Tapers;
+using SlotArray.Core.Tests.DesignTests;
+using SlotArray.Core.Waveguides;
+using SlotArray.Tests.Shared;
+using static SlotArray.Core.Tests.DesignTests.TestArrays;
+
+namespace SlotArray.Core.Tests.PlanarTests;
+
+/// <summary>Elliott's planar design, its coupling slots and the planar network.</summary>
+public class PlanarDesignTests
+{
+    private static readonly Length Pitch = Length.FromMillimeters(22.86 + 1.0);
+
+    private static PlanarRequest Request(int branches, int columns, ApertureTaper taper, FeedPosition feed, bool coupled,
+        PlanarOutline outline = PlanarOutline.Rectangle, RectangularWaveguide? guide = null)
+    {
+        var g = guide ?? Wr90Lossless;
+        var feedGuide = g with { BroadWall = FeedGuideSizing.FeedWidthForPitch(Pitch, F0) };
+        var layout = PlanarLayout.Create(branches, columns, 0.5 * g.GuideWavelength(F0), Pitch, outline);
+        return new PlanarRequest("test", g, feedGuide, F0, layout, taper, new StevensonTestSlot(g, Width, maximumCoupling: 10e-3), feed, coupled);
+    }
+
+    private static ApertureTaper Taylor(double along, double across) =>
+        new(new TaperRequest(TaperType.Taylor, along, 4, -20, 2, null), new TaperRequest(TaperType.Taylor, across, 4, -20, 2, null));
+
+    /// <summary>Stevenson's centred inclined series slot r(θ), written out here from the paper's form (Stevenson 1948, as
+    /// tabulated in Silver 1949 pp. 291–295 [M]) independently of <c>InclinedSeriesSlot</c>.</summary>
+    private static double Stevenson(double a, double b, double lam, double th)
+    {
+        double lg = lam / Math.Sqrt(1 - Math.Pow(lam / (2 * a), 2));
+        static double C(double u) => Math.Abs(1 - Math.Abs(u)) < 1e-9 ? Math.PI / 4 : Math.Cos(Math.PI * u / 2) / (1 - u * u);
+        double xi = lam / lg * Math.Cos(th) + lam / (2 * a) * Math.Sin(th), zeta = lam / lg * Math.Cos(th) - lam / (2 * a) * Math.Sin(th);
+        double br = (C(zeta) + C(xi)) * Math.Sin(th) + lg / (2 * a) * (C(zeta) - C(xi)) * Math.Cos(th);
+        return 30 / (Math.PI * 73) * lam * lam * lam / (a * b * lg) * br * br;
+    }
+
+    /// <summary>
+    /// The coupling slot's ratio is Stevenson's series resistance in the feed over that in the branch at the complementary
+    /// rotation (series-series coupler, Elliott 1981 Ch. 8 [M]); 1 at 45° between identical guides; the inverse returns the rotation.
+    /// </summary>
+    [Theory]
+    [InlineData(10)]
+    [InlineData(25)]
+    [InlineData(45)]
+    [InlineData(60)]
+    public void Coupling_slot_follows_Stevensons_formula(double degrees)
+    {
+        var feed = Wr90 with { BroadWall = Length.FromMillimeters(21.54) };
+        double lam = F0.FreeSpaceWavelength.Meters, th = degrees * Math.PI / 180;
+        double expected = Stevenson(0.02154, 0.01016, lam, th) / Stevenson(0.02286, 0.01016, lam, Math.PI / 2 - th);
+        double actual = CouplingSlot.ImpedanceRatio(feed, Wr90, Angle.FromDegrees(degrees), F0);
+        Check.Relative(expected, actual, 1e-12, "Stevenson 1948 centred inclined series slot, feed over branch");
+        Check.Relative(1, CouplingSlot.ImpedanceRatio(Wr90, Wr90, Angle.FromDegrees(45), F0), 1e-12, "symmetry of the crossing at 45°");
+        Check.Absolute(degrees, CouplingSlot.TiltForRatio(feed, Wr90, actual, F0, 1).Degrees, 1e-9, "round trip");
+    }
+
+    /// <summary>The auto feed width: λg/2 of the solved guide is the pitch (λg = λ/√(1 − (λ/2a)²), Pozar 2012 Sec. 3.3 [M]); below λ/√3 it is refused.</summary>
+    [Fact]
+    public void Feed_width_for_a_pitch_gives_that_pitch()
+    {
+        var a = FeedGuideSizing.FeedWidthForPitch(Pitch, F0);
+        Check.Relative(Pitch.Meters, FeedGuideSizing.RequiredPitch(Wr90 with { BroadWall = a }, F0).Meters, 1e-12, "λg/2 of TE10");
+        var e = Assert.Throws<InfeasibleDesignException>(() => FeedGuideSizing.FeedWidthForPitch(Length.FromMillimeters(18), F0));
+        Assert.Contains("pitch", e.Message);
+    }
+
+    /// <summary>
+    /// Power conservation of the planar network with lossless guides: the power accepted at the input equals the sum of the
+    /// slots' powers (each Re(V i*)) to 1e-9, at f0 and well off it, coupled and not (Tellegen's theorem for a lossless
+    /// reciprocal network: the only sink is radiation).
+    /// </summary>
+    [Theory]
+    [InlineData(true, FeedPosition.Centre, 9.375)]
+    [InlineData(true, FeedPosition.End, 9.2)]
+    [InlineData(false, FeedPosition.End, 9.55)]
+    public void Planar_network_conserves_power(bool coupled, FeedPosition feed, double ghz)
+    {
+        var req = Request(4, 6, Taylor(-25, -20), feed, coupled);
+        var d = PlanarDesigner.Design(req);
+        var sol = PlanarNetwork.Solve(d, req.Slot, Frequency.FromGigahertz(ghz), coupled);
+        Check.Absolute(sol.InputPower, sol.SlotPowers.Sum(), 1e-9, "Tellegen: input power = radiated power (lossless)");
+        Check.Absolute(sol.InputPower, sol.BranchPowers.Sum(), 1e-9, "Tellegen: input power = power into the branches");
+        if (ghz != 9.375) Assert.True(sol.S11.Magnitude > 0.05, "off f0 the check must see a real mismatch");
+    }
+
+    /// <summary>
+    /// A 2 × 2 array (two centre-fed branches of one slot per half, a centre-fed feed guide) with all couplings, checked by
+    /// hand: at the design's offsets and lengths, each slot's isolated admittance y (the slot model, directly), Elliott's f,
+    /// and the mutual impedances of the other three slots (half-cosine currents, Carter's induced EMF, computed here from the
+    /// aperture coordinates) satisfy (E2): T (1/y + C/f²) = 1 with T = 2 f|A|/Σ_branch f|A| and C = Σ Z_nm/(Γ0 R_d)
+    /// (Elliott &amp; Kurtz 1978; Elliott 1983 [M]). Then the network is matched at f0 and the slot voltages are equal.
+    /// </summary>
+    [Fact]
+    public void Two_by_two_design_solves_Elliotts_equations()
+    {
+        var req = Request(2, 2, new ApertureTaper(TaperRequest.Uniform, TaperRequest.Uniform), FeedPosition.Centre, true);
+        var d = PlanarDesigner.Design(req);
+        var guide = req.BranchGuide;
+        double k = F0.FreeSpaceWavenumber, scale = 1 / (ElliottDesignEquations.Gamma0(guide, F0) * 73.0);
+        var slots = Enumerable.Range(0, 4).Select(i => d.SlotAt(i)).ToArray();
+        var x = slots.Select(t => t.Branch.ApertureX(t.Slot.Position)).ToArray();
+        var y = slots.Select(t => t.Branch.Y + t.Slot.Coupling).ToArray();
+        var h = slots.Select(t => 0.5 * t.Slot.Length.Meters).ToArray();
+        Assert.Equal(new[] { -1.0, 1, -1, 1 }.Select(v => v * 0.25 * guide.GuideWavelength(F0).Meters), x, new ToleranceComparer(1e-12));
+        var f = slots.Select(t => ElliottDesignEquations.CouplingFunction(guide, F0, Length.FromMeters(Math.Abs(t.Slot.Coupling)), 0.5 * t.Slot.Length)).ToArray();
+        for (int n = 0; n < 4; n++)
+        {
+            var s = slots[n].Slot;
+            var yn = req.Slot.Admittance(s.Coupling, s.Length, F0);
+            double fn = f[n];
+            // Uniform taper: T = 2 f_n / (f of the two slots of its branch). The two slots of a branch see different
+            // neighbours (their offsets go opposite ways), so their f differ slightly.
+            int first = slots[n].Branch.SlotIndices[0], second = slots[n].Branch.SlotIndices[1];
+            double t = 2 * fn / (f[first] + f[second]);
+            Complex c = 0;
+            for (int m = 0; m < 4; m++)
+                if (m != n) c += CosineCurrentMutualImpedance.MutualElectrical(k * Math.Abs(y[n] - y[m]), k * (x[m] - x[n]), k * h[n], k * h[m]);
+            c *= scale;
+            // The designer solves on a spline surrogate of the slot model (ElliottSlotSurrogate), whose interpolation error
+            // (a few 1e-4 near the largest offsets) bounds the residual against the direct model.
+            var residual = t * (1 / yn + c / (fn * fn)) - 1;
+            Assert.True(residual.Magnitude < 1e-3, $"slot {n + 1}: (E2) residual {residual.Magnitude:G3}");
+            var uncoupled = t / yn - 1;
+            Assert.True(uncoupled.Magnitude > 0.02, $"slot {n + 1}: without the coupling terms the residual is only {uncoupled.Magnitude:G3}; the check would not see them");
+        }
+        Assert.True(d.Iterations.Count > 1, "the coupling must have moved the design");
+        var sol = PlanarNetwork.Solve(d, req.Slot, F0, true);
+        Assert.True(sol.S11.Magnitude < 0.01, $"|S11| at f0 = {sol.S11.Magnitude:G3}");
+        foreach (var e in sol.Excitations) Check.Relative(sol.Excitations[0].Magnitude, e.Magnitude, 1e-4, "uniform taper: equal slot voltages");
+    }
+
+    private sealed class ToleranceComparer(double tol) : IEqualityComparer<double>
+    {
+        public bool Equals(double a, double b) => Math.Abs(a - b) <= tol;
+        public int GetHashCode(double v) => 0;
+    }
+
+    /// <summary>
+    /// 8 branches × 10 slots, separable Taylor −25/−25 dB, coupled: matched at f0 (the design's own equations, so far below
+    /// the −20 dB the issue asks), the slot voltages follow the taper, and the H-plane peak sidelobe (x-z, along the branches)
+    /// is within 0.2 dB of the sampled 10-element Taylor's own. The E-plane is left to the report: the alternating offsets put
+    /// the slots of each branch at y ± δ with δ differing by branch once coupling is designed in, which raises the far
+    /// E-plane lobes by about 1 dB over the 8-element Taylor's −24.1 dB.
+    /// </summary>
+    [Fact]
+    public void Separable_Taylor_8_by_10_is_matched_and_keeps_its_H_plane_sidelobes()
+    {
+        var req = Request(8, 10, Taylor(-25, -25), FeedPosition.Centre, true);
+        var d = PlanarDesigner.Design(req);
+        var sol = PlanarNetwork.Solve(d, req.Slot, F0, true);
+        Assert.True(20 * Math.Log10(sol.S11.Magnitude) < -40, $"S11 at f0 = {20 * Math.Log10(sol.S11.Magnitude):0.0} dB");
+        var ratio = Enumerable.Range(0, d.Layout.Count).Select(i => sol.Excitations[i] / d.Amplitudes[i]).ToArray();
+        foreach (var r in ratio)
+        {
+            Check.Absolute(0, 20 * Math.Log10(r.Magnitude / ratio[0].Magnitude), 0.01, "the taper, dB");
+            Check.Absolute(0, (r / ratio[0]).Phase * 180 / Math.PI, 0.1, "in phase, deg");
+        }
+        var p = PlanarDesigner.Placements(d);
+        var af = new PlanarArrayFactor(p.Select(q => q.Position.Meters).ToArray(), p.Select(q => q.Offset.Meters).ToArray(), sol.Excitations, F0.FreeSpaceWavenumber);
+        var grid = AngleGrid.UniformInTheta(-Math.PI / 2, Math.PI / 2, 3601);
+        var w = TaperSynthesis.Synthesize(new TaperRequest(TaperType.Taylor, -25, 4, -20, 2, null), 10).Weights.ToArray();
+        var xs = Enumerable.Range(0, 10).Select(i => (i - 4.5) * d.Layout.Spacing.Meters).ToArray();
+        var linear = PatternMetrics.Measure(ArrayFactor.ComputeDirect(xs, ArrayFactor.ToComplex(w), F0.FreeSpaceWavenumber, grid, ElementPatterns.HalfWaveSlotHPlane));
+        Check.Absolute(linear.PeakSidelobeDb!.Value, PatternMetrics.Measure(af.Cut(0, grid)).PeakSidelobeDb!.Value, 0.2, "the 10-slot Taylor line's own sidelobes");
+    }
+
+    /// <summary>A request a slot cannot meet is refused naming the branch (the issue's "infeasible requests exit 1 naming the branch/slot").</summary>
+    [Fact]
+    public void Infeasible_request_names_the_branch()
+    {
+        var req = Request(4, 4, Taylor(-25, -25), FeedPosition.Centre, false) with { Slot = new StevensonTestSlot(Wr90Lossless, Width, maximumCoupling: 1e-3) };
+        var e = Assert.Throws<InfeasibleDesignException>(() => PlanarDesigner.Design(req));
+        Assert.Contains("branch 1", e.Message);
+    }
+}
