@@ -38,6 +38,8 @@ internal static class CommandLine
             SchemaCommand.Build(output, error),
             InitCommand.Build(output, error),
             CharacteriseCommand.Build(output, error),
+            CalibrateEdgeCommand.Build(output, error),
+            VerifyEdgeCommand.Build(output, error),
             VerifyCommand.Build(output, error),
             CompareCommand.Build(output, error),
             SynthesiseCommand.Build(output, error),

@@ -16,6 +16,10 @@ internal static class SpecNames
     public static IReadOnlyList<KeyValuePair<string, SlotModelKind>> SlotModels { get; } =
         [new("moment-method", SlotModelKind.MomentMethod), new("stevenson", SlotModelKind.Stevenson)];
 
+    /// <summary>Edge-slot surroundings: tube | ground-plane | flare.</summary>
+    public static IReadOnlyList<KeyValuePair<string, EdgeSlotSurround>> Surrounds { get; } =
+        [new("tube", EdgeSlotSurround.Tube), new("ground-plane", EdgeSlotSurround.GroundPlane), new("flare", EdgeSlotSurround.Flare)];
+
     /// <summary>Feed types: standing-wave | travelling-wave.</summary>
     public static IReadOnlyList<KeyValuePair<string, FeedType>> FeedTypes { get; } =
         [new("standing-wave", FeedType.StandingWave), new("travelling-wave", FeedType.TravellingWave)];

@@ -79,15 +79,26 @@ public class SlotCommandTests
         => Check.Relative(meters, SlotCommand.ParseLength(text, "--wall").Meters, 1e-12, "unit definitions");
 
     [Fact]
-    public void Tilt_gives_the_edge_slot_conductance_of_the_closed_form()
+    public void Tilt_gives_the_edge_slot_from_its_full_wave_calibration()
     {
-        var (code, output, _) = Run("slot", "--guide", "WR-90", "--frequency", "9.375GHz", "--tilt", "15deg", "--wall", "1.27mm", "--json");
+        var (code, output, _) = Run("slot", "--guide", "WR-90", "--frequency", "9.375GHz", "--tilt", "20deg", "--wall", "1.27mm", "--width", "1.6mm", "--json");
         Assert.Equal(ExitCodes.Ok, code);
         var r = JsonDocument.Parse(output).RootElement;
-        // edge-slot formula (Stevenson 1948; Silver 1949) [N]: g(15°) = 0.10395 in WR-90 at 9.375 GHz.
-        Check.Relative(0.10395, r.GetProperty("resonant_conductance").GetDouble(), 1e-4, "edge-slot formula (Stevenson 1948; Silver 1949)");
-        Check.Relative(15, r.GetProperty("tilt_deg").GetDouble(), 1e-12, "the input");
-        Assert.True(r.GetProperty("cut_depth_mm").GetDouble() > 1.27, "the cut must go deeper than the wall to open the guide");
+        // Independent FDTD figures quoted in issue 20 (bare WR-90 tube, 1.27 mm wall, 1.6 mm saw, 9.375 GHz): 20 deg
+        // resonant at D = 3.29 mm with g = 0.067. Our runs give the level within 10 %; their depth is shallower (README).
+        Assert.True(r.GetProperty("resonant").GetBoolean());
+        Check.Relative(0.067, r.GetProperty("resonant_conductance").GetDouble(), 0.10, "independent FDTD figures quoted in issue 20");
+        Check.Absolute(3.29, r.GetProperty("resonant_depth_mm").GetDouble(), 0.3, "independent FDTD figures quoted in issue 20 (depth: see README limits)");
+        Check.Relative(20, r.GetProperty("tilt_deg").GetDouble(), 1e-12, "the input");
+        Assert.Equal(13, r.GetProperty("frequency_response").GetArrayLength());
+        // 5 deg: no depth is purely conductive (capacitive background), so the peak is given instead.
+        var (c5, o5, _) = Run("slot", "--guide", "WR-90", "--frequency", "9.375GHz", "--tilt", "5deg", "--wall", "1.27mm", "--width", "1.6mm", "--json");
+        Assert.Equal(ExitCodes.Ok, c5);
+        var r5 = JsonDocument.Parse(o5).RootElement;
+        Assert.False(r5.GetProperty("resonant").GetBoolean());
+        Assert.Equal(JsonValueKind.Null, r5.GetProperty("resonant_depth_mm").ValueKind);
+        Assert.True(r5.GetProperty("peak_conductance").GetDouble() > 0);
+        Assert.True(r5.GetProperty("peak_conductance_depth_mm").GetDouble() > 1.27, "the cut must go deeper than the wall to open the guide");
     }
 
     [Fact]

@@ -73,7 +73,8 @@ public class SlotTableDesignTests
         var (c1, _, e1) = DesignRuns.Run("design", spec, "-o", Path.Combine(dir, "out1"), "--no-cache");
         Assert.Equal(1, c1);
         Assert.Contains("needs a slot outside the slot table edge.csv", e1);
-        Assert.Contains("outside the table's 12 deg to 30 deg", e1);
+        // The built-in edge-slot table (full-wave calibration) runs in steps of 2 deg to 25 deg: 13 deg to 25 deg remain.
+        Assert.Contains("outside the table's 13 deg to 25 deg", e1);
 
         File.WriteAllText(spec, withData.Replace("  data: edge.csv", "  data: edge.csv\n  extrapolate: true"));
         var (c2, _, e2) = DesignRuns.Run("design", spec, "-o", Path.Combine(dir, "out2"), "--no-cache");
@@ -82,7 +83,7 @@ public class SlotTableDesignTests
         var rows = DesignRuns.CsvRecords(Path.Combine(dir, "out2", "cutlist.csv"));
         int tilt = Array.IndexOf(rows[0], "tilt_deg");
         foreach (var r in rows.Skip(1))
-            Assert.Equal(Math.Abs(double.Parse(r[tilt], System.Globalization.CultureInfo.InvariantCulture)) < 12 - 1e-9 ? "outside" : "in table", r[^2]);   // before the revision flag
+            Assert.Equal(Math.Abs(double.Parse(r[tilt], System.Globalization.CultureInfo.InvariantCulture)) < 13 - 1e-9 ? "outside" : "in table", r[^2]);   // before the revision flag
         Assert.Contains(rows.Skip(1), r => r[^2] == "outside");
         Assert.Contains("(outside table)", File.ReadAllText(Path.Combine(dir, "out2", "summary.md")));
     }

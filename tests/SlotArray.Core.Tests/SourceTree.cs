@@ -34,6 +34,9 @@ internal static class SourceTree
     {
         var options = new CSharpParseOptions(LanguageVersion.Preview);
         var trees = Files("src/SlotArray.Core").Select(Parse).ToList();
+        // Sources the build generates into obj/ and compiles in (the edge-slot calibration table as a string constant).
+        trees.AddRange(Directory.EnumerateFiles(Path.Combine(RepositoryRoot, "src/SlotArray.Core/obj"), "*.g.cs", SearchOption.TopDirectoryOnly)
+            .Order(StringComparer.Ordinal).Select(Parse));
         trees.Add(CSharpSyntaxTree.ParseText("""
             global using System;
             global using System.Collections.Generic;

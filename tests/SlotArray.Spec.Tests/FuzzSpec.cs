@@ -40,6 +40,7 @@ internal sealed class FuzzSpec
         ["slots.width"] = ["1.6 mm", "0.01 mm", "0.1 mm", "0.5 mm", "1 mm", "3 mm", "5 mm", "8 mm", "9.9 mm", "10.2 mm", "11 mm", "0.06 in"],
         ["slots.cutter"] = ["{width}", "1 mm", "0.2 mm", "1.6 mm", "3 mm", "20 mm"],
         ["slots.model"] = ["stevenson", "moment-method", "moment-method"],
+        ["slots.surround"] = ["tube", "flare", "ground-plane", "horn"],
         ["feed.type"] = ["standing-wave", "travelling-wave"],
         ["feed.spacing"] = ["0.5 guide-wavelength", "0.1 guide-wavelength", "0.07 guide-wavelength", "0.25 guide-wavelength", "0.3 guide-wavelength",
             "0.45 guide-wavelength", "0.7 guide-wavelength", "0.9 guide-wavelength", "0.99 guide-wavelength", "20 mm", "5 mm", "3 mm", "30 mm"],

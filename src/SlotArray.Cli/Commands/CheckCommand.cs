@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using System.Text.Json;
 using SlotArray.Core.Design;
+using SlotArray.Core.Slots;
 using SlotArray.Core.Stick;
 using SlotArray.Core.Tapers;
 using SlotArray.Spec;
@@ -52,6 +53,7 @@ internal static class CheckCommand
         o.WriteLine(string.Format(Inv, "  slots            {0} {1}, width {2:F3} mm, {3}, model {4}", s.Count, SpecNames.Of(s.Type), s.Width.Millimeters,
             s.Cutter is { } c ? string.Format(Inv, "cutter {0:F3} mm (round ends)", c.Millimeters) : "square ends",
             s.Data is { } table ? string.Format(Inv, "slot table {0} ({1} rows, SHA-256 {2}){3}", table.Source, table.Rows.Count, table.Sha256, s.Extrapolate ? ", extrapolate" : "") : SpecNames.Of(s.Model)));
+        if (EdgeConductanceRange(r) is { } range) o.WriteLine(range);
         var f = r.Feed;
         string fed = f.Type == FeedType.StandingWave
             ? string.Format(Inv, "{0}-fed, short {1}", SpecNames.Of(f.Position), Distance(f.ShortDistance, lg))
@@ -62,6 +64,21 @@ internal static class CheckCommand
         o.WriteLine($"  coupling         {SpecNames.Of(r.Coupling)}");
         if (r.Tolerance is { } t) o.WriteLine(string.Format(Inv, "  tolerance        Monte Carlo, {0} trials, seed {1}", t.Trials, t.Seed));
         foreach (string line in PlanarCheck.Of(r).Lines) o.WriteLine(line);
+    }
+
+    /// <summary>
+    /// Edge slots with the built-in model: the smallest and largest conductance the cut and its surroundings can give at
+    /// the design frequency (the design cut at the smallest calibrated tilt and at the largest tilt), or null.
+    /// </summary>
+    private static string? EdgeConductanceRange(ArrayRequest r)
+    {
+        if (r.Slots.Type != SlotType.Edge || r.Slots.Data is not null) return null;
+        var model = CalibratedEdgeSlot.Create(r.Guide, r.Slots.Width, r.Slots.Surround);
+        var f0 = r.DesignFrequency;
+        double lowTilt = model.Surface.Family.TiltsDeg[0];
+        return string.Format(Inv, "  edge slots       {0}: g = {1:0.#####} at {2:0.#} deg to {3:0.#####} at {4:0} deg ({5} calibration, {6:F4} GHz)",
+            CalibratedEdgeSlot.Word(r.Slots.Surround), model.MinimumCalibratedConductance(f0), lowTilt, model.MaximumConductance(f0),
+            CalibratedEdgeSlot.MaximumTilt.Degrees, model.Surface.Family.Guide, f0.Gigahertz);
     }
 
     private static string Distance(GuideDistance d, Core.Quantities.Length lg) => d.GuideWavelengths is { } n

@@ -42,10 +42,12 @@ internal static class SlotCommand
             Description = "Also tabulate g_r and L_r over the usable offsets (0 < x <= a/4); --table FILE writes the built-in model's slot table (the slots.data CSV format) to FILE",
             Arity = ArgumentArity.ZeroOrOne,
         };
+        var surround = new Option<string>("--surround") { Description = "--tilt: what the edge slot radiates into (picks its full-wave calibration)", DefaultValueFactory = _ => "tube" }
+            .AcceptOnlyFromAmong("tube", "ground-plane", "flare");
         var json = new Option<bool>("--json") { Description = "Print one JSON document on stdout" };
         var cmd = new Command("slot", "One slot: resonant length and conductance (moment method beside Stevenson) and y = Y/G0 against length")
         {
-            guide, a, b, freq, offset, tilt, plane, length, target, wall, width, table, json,
+            guide, a, b, freq, offset, tilt, surround, plane, length, target, wall, width, table, json,
         };
         cmd.SetAction(pr =>
         {
@@ -71,9 +73,10 @@ internal static class SlotCommand
             }
             if (pr.GetValue(tilt) is { } th)
             {
-                int code = SlotEdgeReport.Run(g, f, ParseAngle(th, "--tilt"), null, w, pr.GetValue(json), output, error);
+                var where = pr.GetValue(surround) switch { "flare" => EdgeSlotSurround.Flare, "ground-plane" => EdgeSlotSurround.GroundPlane, _ => EdgeSlotSurround.Tube };
+                int code = SlotEdgeReport.Run(g, f, ParseAngle(th, "--tilt"), where, w, pr.GetValue(json), output, error);
                 if (tableFile is not null)
-                    error.WriteLine($"wrote {SlotTableExport.Edge(EdgeSlot.Create(g, w), f, tableFile)} rows of the edge-slot table to {tableFile}");
+                    error.WriteLine($"wrote {SlotTableExport.Edge(CalibratedEdgeSlot.Create(g, w, where), f, tableFile)} rows of the edge-slot table to {tableFile}");
                 return code;
             }
             throw new UserInputException("slot: give the coupling of the slot: --offset X (longitudinal broad-wall slot), --tilt A (edge slot) or --plane");
@@ -81,7 +84,7 @@ internal static class SlotCommand
         return cmd;
     }
 
-    private static RectangularWaveguide ResolveGuide(string? name, string? a, string? b, Length wall)
+    internal static RectangularWaveguide ResolveGuide(string? name, string? a, string? b, Length wall)
     {
         if (!(wall.Meters >= 0)) throw new UserInputException($"--wall must be zero or positive, got {wall}");
         if (name is not null)

@@ -40,17 +40,18 @@ internal static class SlotTableExport
         return rows.Length;
     }
 
-    /// <summary>Writes the edge-slot model's table to <paramref name="file"/> (atomically); returns the row count.</summary>
-    public static int Edge(EdgeSlot model, Frequency f, string file)
+    /// <summary>Writes the calibrated edge-slot model's table to <paramref name="file"/> (atomically); returns the row count.</summary>
+    public static int Edge(CalibratedEdgeSlot model, Frequency f, string file)
     {
         var rows = new List<(double, double, double, double, Complex)>();
-        for (int deg = 2; deg <= 30; deg += 2)
+        for (int deg = 5; deg <= 25; deg += 2)
         {
-            var tilt = Angle.FromDegrees(deg);
+            double tilt = Angle.FromDegrees(deg).Radians;
+            var design = model.Resonance(tilt, f).ResonantLength;
             foreach (double nu in Ratios)
             {
-                var len = nu * model.ResonantLength(f);
-                rows.Add((tilt.Radians, model.CutDepth(tilt, len).Meters, len.Meters, f.Hertz, model.Admittance(tilt.Radians, len, f)));
+                var len = nu * design;
+                rows.Add((tilt, model.DepthMm(tilt, len) * 1e-3, len.Meters, f.Hertz, model.Admittance(tilt, len, f)));
             }
         }
         AtomicFile.WriteText(file, SlotTableCsv.Format(SlotTableGeometry.Edge, Provenance(model.Guide, model.Width, model.Name, f), rows));

@@ -73,6 +73,9 @@ public sealed record SlotRequest(SlotType Type, int Count, Length Width, Length?
 
     /// <summary><c>slots.extrapolate</c>: allow (and flag) slots outside the table instead of refusing the design.</summary>
     public bool Extrapolate { get; init; }
+
+    /// <summary><c>slots.surround</c>: what edge slots radiate into (picks the edge-slot model's full-wave calibration).</summary>
+    public EdgeSlotSurround Surround { get; init; } = EdgeSlotSurround.Tube;
 }
 
 /// <summary>Whether external mutual coupling between slots is designed for.</summary>

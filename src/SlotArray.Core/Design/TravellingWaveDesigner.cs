@@ -164,7 +164,7 @@ internal static class TravellingWaveDesigner
         var history = new List<double>();
         if (options.Refine)
             targets = Refine(new LineNetwork(guide, positions, Termination.MatchedLoadAt(end), null, feedPlane), f0, signs, shape,
-                loadFraction, g, history, options);
+                loadFraction, g, history, options, DesignAdmittance(slot, f0));
 
         CheckConductances(g, slot, f0, loadFraction);
         var warnings = new List<DesignWarning>();
@@ -182,6 +182,8 @@ internal static class TravellingWaveDesigner
 
         var design = new ArrayDesign(stick.Name, f0, guide, lambdaG, spacing, FeedPosition.End, slot.CouplingKind, slot.Name,
             Array.AsReadOnly(slots), Termination.MatchedLoadAt(end), null, Length.FromMeters(feedPlane), 1, warnings.AsReadOnly());
+        if (slot.DesignsOffResonance && options.Refine)
+            (design, targets) = CompensatePhases(design, slot, signs, shape, loadFraction, g, history, options);
         Fabrication.SlotClearance.Require(design, stick.Cutter);
 
         var check = ArrayNetwork.Solve(design, slot, f0);
@@ -207,13 +209,13 @@ internal static class TravellingWaveDesigner
     /// isolated-slot line, one residual per network solution appended to <paramref name="history"/>; returns the last targets T_n.
     /// </summary>
     private static double[] Refine(LineNetwork line, Frequency f0, double[] signs, double[] shape, double loadFraction, double[] g,
-        List<double> history, TravellingWaveOptions options)
+        List<double> history, TravellingWaveOptions options, Func<double, Complex> admittanceOf)
     {
         int n = g.Length;
         var y = new Complex[n];
         while (true)
         {
-            for (int i = 0; i < n; i++) y[i] = g[i];
+            for (int i = 0; i < n; i++) y[i] = admittanceOf(g[i]);
             var sol = line.Solve(f0, y, signs);
             int iterations = history.Count + 1;
             double budget = 1 - loadFraction - sol.WallLoss - sol.ReflectedPower;
@@ -240,6 +242,82 @@ internal static class TravellingWaveDesigner
                 g[i] = TravellingWaveConductances.SingleShuntConductance(p);
             }
         }
+    }
+
+    /// <summary>
+    /// Phase compensation for slots whose design cut carries a susceptance (<see cref="IShuntSlotModel.DesignsOffResonance"/>):
+    /// such a slot's excitation leads or lags by the phase of its admittance, which a resonant design does not have, and
+    /// the far field adds the slots in phase only where arg E_n + k z_n sin θ_b is the same for all (the array factor's
+    /// sign, <see cref="Patterns.ArrayFactor"/>). Each slot is moved along the guide by δ_n = −φ_n/(β + k sin θ_b), φ_n its
+    /// departure from the circular mean, which changes both the wave's phase at the slot (β) and its path to the far field
+    /// (k sin θ_b) ([D]; moving slots to set their phases is the travelling-wave designer's usual lever, R. S. Elliott,
+    /// <i>Antenna Theory and Design</i>, 1981, Ch. 8, from memory). The conductances are refined again on the moved
+    /// positions (the powers), up to five passes or until every departure is below 0.5°.
+    /// </summary>
+    private static (ArrayDesign Design, double[] Targets) CompensatePhases(ArrayDesign design, IShuntSlotModel slot, double[] signs, double[] shape,
+        double loadFraction, double[] g, List<double> history, TravellingWaveOptions options)
+    {
+        var f0 = design.DesignFrequency;
+        var guide = design.Guide;
+        double beta = guide.PhaseConstant(f0), k = f0.FreeSpaceWavenumber;
+        double sin = TravellingWaveBeam.Direction(guide, design.Spacing, f0) is { } b ? Math.Sin(b.Radians) : 0;
+        int n = design.Count;
+        double[] targets = [];
+        double? kappa = null;
+        for (int pass = 0; pass < 5; pass++)
+        {
+            var sol = ArrayNetwork.Solve(design, slot, f0);
+            var z = design.Slots.Select(s => s.Position.Meters).ToArray();
+            // The beam's sign convention: the one under which the slots' far-field phases cluster (a resonant design: all equal).
+            kappa ??= new[] { beta + k * sin, beta - k * sin }.MinBy(kk => Spread(Departures(sol, z, kk - beta)));
+            var phi = Departures(sol, z, kappa.Value - beta);
+            if (Spread(phi) < 0.5 * Math.PI / 180) break;
+            var moved = z.Select((zz, i) => zz - phi[i] / kappa.Value).ToArray();
+            var line = new LineNetwork(guide, moved, design.NearTermination, null, design.FeedPlane.Meters);
+            targets = Refine(line, f0, signs, shape, loadFraction, g, history, options, DesignAdmittance(slot, f0));
+            var slots = design.Slots.Select((s, i) =>
+            {
+                var r = slot.ForConductance(g[i], f0);
+                return s with { Position = Length.FromMeters(moved[i]), Coupling = signs[i] * Math.Abs(r.Coupling), Length = r.ResonantLength, Conductance = g[i] };
+            }).ToArray();
+            design = design with { Slots = Array.AsReadOnly(slots) };
+        }
+        return (design, targets.Length == n ? targets : TargetsOf(design, slot, shape, loadFraction));
+    }
+
+    /// <summary>Departure of each slot's far-field phase arg E_n + k sin θ_b z_n from their circular mean, radians.</summary>
+    private static double[] Departures(NetworkSolution sol, double[] z, double kSin)
+    {
+        var u = z.Select((zz, i) => Complex.FromPolarCoordinates(1, sol.Excitations[i].Phase + kSin * zz)).ToArray();
+        var mean = u.Aggregate(Complex.Zero, (a, b) => a + b);
+        return u.Select(x => (x / mean).Phase).ToArray();
+    }
+
+    private static double Spread(double[] phi) => phi.Max(Math.Abs);
+
+    /// <summary>The targets T_n of the current design: its radiated total shared by the taper's shape.</summary>
+    private static double[] TargetsOf(ArrayDesign design, IShuntSlotModel slot, double[] shape, double loadFraction)
+    {
+        var sol = ArrayNetwork.Solve(design, slot, design.DesignFrequency);
+        double budget = 1 - loadFraction - sol.WallLoss - sol.ReflectedPower;
+        return shape.Select(s => s * budget).ToArray();
+    }
+
+    /// <summary>
+    /// The admittance a slot designed for conductance g presents at f0: g itself for a model whose design cut is resonant;
+    /// the complex y of the cut <see cref="IShuntSlotModel.ForConductance"/> gives when the model says the cut may carry a
+    /// susceptance (<see cref="IShuntSlotModel.DesignsOffResonance"/>), so the refinement balances the powers the slots
+    /// really take.
+    /// </summary>
+    internal static Func<double, Complex> DesignAdmittance(IShuntSlotModel slot, Frequency f0)
+    {
+        if (!slot.DesignsOffResonance) return g => g;
+        return g =>
+        {
+            if (g > slot.MaximumConductance(f0)) return g;
+            var r = slot.ForConductance(g, f0);
+            return slot.Admittance(r.Coupling, r.ResonantLength, f0);
+        };
     }
 
     /// <summary>

@@ -29,4 +29,11 @@ internal interface IShuntSlotModel : ISlotAdmittance
 
     /// <summary>The largest resonant conductance the model can give at frequency f (at <see cref="MaximumCoupling"/>).</summary>
     double MaximumConductance(Frequency f);
+
+    /// <summary>
+    /// Whether the cut <see cref="ForConductance"/> returns may present a susceptance as well (an edge slot whose
+    /// background susceptance leaves no purely conductive depth at small tilts): designers then work with the complex
+    /// admittance of that cut instead of its conductance alone. False for models whose design cut is resonant.
+    /// </summary>
+    bool DesignsOffResonance => false;
 }

@@ -9,7 +9,8 @@ namespace SlotArray.FullWave.Model;
 internal sealed record PlacedSlot(SlotCut Cut, double CentreZMm);
 
 /// <summary>
-/// What to build: a rectangular tube along z (inside a × b, wall t, PEC) in free space, its slots, an optional end
+/// What to build: a rectangular tube along z (inside a × b, wall t, PEC) in free space (or with a ground plane or a
+/// flare at its +x narrow wall, <see cref="TubeLayout.Surround"/>), its slots, an optional end
 /// short (metal filling the guide for z below <see cref="ShortZMm"/>) and TE10 ports. Port 1 is excited and
 /// measured at <see cref="Port1ZMm"/>, looking toward +z when it is below the slots, −z when above. Port 2 (when
 /// given) is passive and measured at <see cref="Port2ZMm"/>. Every guide end without a short runs into the PML
@@ -26,7 +27,17 @@ internal sealed record PlacedSlot(SlotCut Cut, double CentreZMm);
 /// <param name="Density">Mesh density.</param>
 /// <param name="SlotVoltageProbes">Whether to probe every slot's voltage across its centre on the outer face.</param>
 internal sealed record TubeLayout(GuideSection Guide, IReadOnlyList<PlacedSlot> Slots, bool CutSlots, double? ShortZMm, double Port1ZMm,
-    double? Port2ZMm, double CentreFrequencyHz, double HalfBandwidthHz, MeshDensity Density, bool SlotVoltageProbes);
+    double? Port2ZMm, double CentreFrequencyHz, double HalfBandwidthHz, MeshDensity Density, bool SlotVoltageProbes)
+{
+    /// <summary>What the slotted narrow wall (+x face) looks into; a bare tube unless set.</summary>
+    public SlotSurround Surround { get; init; } = SlotSurround.Tube;
+
+    /// <summary>Extra x mesh lines (position, cell size there), mm: the depths of a family of cuts, so that every run of the family (and its plain-tube calibration) shares one mesh.</summary>
+    public IReadOnlyList<(double AtMm, double CellMm)> ExtraXAnchors { get; init; } = [];
+
+    /// <summary>x edges closer than this share one mesh line, mm (default 0.001): an array of edge slots whose depths differ by hundredths of a millimetre would otherwise set a tiny time step.</summary>
+    public double XMergeMm { get; init; } = 1e-3;
+}
 
 /// <summary>Builds the <see cref="FdtdModel"/> of a <see cref="TubeLayout"/>: geometry, graded mesh, ports and probes.</summary>
 internal static class TubeModel
@@ -63,8 +74,11 @@ internal static class TubeModel
         double xo = g.AMm / 2 + g.WallMm, yo = g.BMm / 2 + g.WallMm;
         double portGap = hMax;
 
-        var xs = new List<(double, double)> { (-xo - margin - pml, hMax), (xo + margin + pml, hMax), (-xo, hWall), (-g.AMm / 2, hWall), (g.AMm / 2, hWall), (xo, hWall) };
-        var ys = new List<(double, double)> { (-yo - margin - pml, hMax), (yo + margin + pml, hMax), (-yo, hWall), (-g.BMm / 2, hWall), (g.BMm / 2, hWall), (yo, hWall) };
+        var (xReach, yReach) = SurroundModel.Extent(l.Surround, yo, margin);
+        var xs = new List<(double, double)> { (-xo - margin - pml, hMax), (xo + xReach + pml, hMax), (-xo, hWall), (-g.AMm / 2, hWall), (g.AMm / 2, hWall), (xo, hWall) };
+        var ys = new List<(double, double)> { (-yReach - pml, hMax), (yReach + pml, hMax), (-yo, hWall), (-g.BMm / 2, hWall), (g.BMm / 2, hWall), (yo, hWall) };
+        SurroundModel.AddAnchors(l.Surround, xo, yo, hMax, xs, ys);
+        xs.AddRange(l.ExtraXAnchors);
         var zs = new List<(double, double)>();
         double zLo = l.Port1ZMm, zHi = l.Port1ZMm;
         foreach (var p in l.Slots)
@@ -97,7 +111,7 @@ internal static class TubeModel
         zs.Add((zEnd, hMax));
         // Every edge keeps its own line, so each aperture is exactly where the cut list puts it (near-coincident edges of
         // neighbouring slots then cost small cells and a short time step).
-        var mesh = new MeshLines(MeshBuilder.Lines(xs, hMax), MeshBuilder.Lines(ys, hMax), MeshBuilder.Lines(zs, hMax));
+        var mesh = new MeshLines(MeshBuilder.Lines(xs, hMax, mergeMm: l.XMergeMm), MeshBuilder.Lines(ys, hMax), MeshBuilder.Lines(zs, hMax));
 
         // The tube: four metal walls (a metal box owns its faces, so the inner faces at x = ±a/2, y = ±b/2 are PEC
         // exactly); free space (the background) inside and around; guide ends without a short run through the PML.
@@ -119,6 +133,7 @@ internal static class TubeModel
             walls.Add(new BoxPrimitive(new Point3(-xo, -yo, zShort - g.WallMm), new Point3(xo, yo, zShort), WallPriority));
         }
         var solids = new List<Solid> { new("tube", FillKind.Metal, 1, 0, walls) };
+        if (SurroundModel.Solid(l.Surround, xo, yo, xo + xReach + pml, yReach + pml, zStart, zEnd) is { } surround) solids.Add(surround);
         if (l.CutSlots && l.Slots.Count > 0) solids.Add(new Solid("slots", FillKind.Air, 1, 0, l.Slots.SelectMany(p => SlotPrimitives(p, g)).ToList()));
 
         var probes = new List<VoltageProbe>();
@@ -157,13 +172,19 @@ internal static class TubeModel
             }
             case EdgeCut e:
             {
+                // The tilted kerf cannot lie on a rectilinear grid: it is staircased on cells of at most w/(n + 1)
+                // (n = cells across the slot) over the whole face it crosses (y through both walls, z over its run),
+                // spread evenly between the walls' faces so that no sliver cell sets the time step; its depth D and an
+                // end mill's half-round centre lie on x lines.
                 double xo = g.AMm / 2 + g.WallMm, yo = g.BMm / 2 + g.WallMm;
-                xs.Add((xo - e.CutDepthMm, h));
+                double hs = e.Width / (s.CellsAcrossSlot + 1);
+                xs.Add((xo - e.CutDepthMm, hs));
+                if (e.Form == EdgeCutterForm.EndMill) xs.Add((xo - e.CutDepthMm + e.Width / 2, hs));
                 double th = e.TiltDeg * Math.PI / 180;
                 double zExt = Math.Abs(yo * Math.Tan(th)) + e.Width / (2 * Math.Cos(th));
-                zs.Add((p.CentreZMm - zExt, h));
-                zs.Add((p.CentreZMm + zExt, h));
-                ys.Add((0, h));
+                foreach (var (from, to) in new[] { (-yo, -g.BMm / 2), (-g.BMm / 2, g.BMm / 2), (g.BMm / 2, yo) })
+                    ys.AddRange(EvenLines(from, to, hs));
+                zs.AddRange(EvenLines(p.CentreZMm - zExt, p.CentreZMm + zExt, hs));
                 return (p.CentreZMm - zExt, p.CentreZMm + zExt);
             }
             default:
@@ -205,9 +226,30 @@ internal static class TubeModel
                 foreach (var (sa, sb) in new[] { (-1, -1), (1, -1), (1, 1), (-1, 1) })
                     v.Add((sa * reach * along.Y + sb * (e.Width / 2 - e0) * across.Y, p.CentreZMm + sa * reach * along.Z + sb * (e.Width / 2 - e0) * across.Z));
                 // Flat bottom D in from the outer narrow-wall face; the kerf continues beyond the face into free space.
-                yield return new ExtrudedPolygon(0, xo - e.CutDepthMm + e0, e.CutDepthMm + g.WallMm, v, SlotPriority);
+                if (e.Form == EdgeCutterForm.FlatSaw)
+                {
+                    yield return new ExtrudedPolygon(0, xo - e.CutDepthMm + e0, e.CutDepthMm + g.WallMm, v, SlotPriority);
+                    yield break;
+                }
+                // End mill (axis along y through each broad wall): the straight kerf stops at the half-round's centre,
+                // x = xo − D + w/2, and a cylinder of radius w/2 through each broad wall (at the kerf's z mid-wall) rounds it.
+                double r = e.Width / 2 - e0, xc = xo - e.CutDepthMm + e.Width / 2;
+                yield return new ExtrudedPolygon(0, xc, xo + g.WallMm - xc, v, SlotPriority);
+                foreach (int side in new[] { -1, 1 })
+                {
+                    double zc = p.CentreZMm + side * (g.BMm / 2 + g.WallMm / 2) * Math.Tan(th);
+                    yield return new CylinderPrimitive(new Point3(xc, side * yIn, zc), new Point3(xc, side * yOut, zc), r, SlotPriority);
+                }
                 yield break;
             }
         }
+    }
+
+    /// <summary>Anchors dividing [from, to] into equal cells of at most h (both ends included).</summary>
+    private static IEnumerable<(double, double)> EvenLines(double from, double to, double h)
+    {
+        int n = Math.Max(1, (int)Math.Ceiling((to - from) / h - 1e-9));
+        double step = (to - from) / n;
+        return Enumerable.Range(0, n + 1).Select(i => (from + i * step, step));
     }
 }

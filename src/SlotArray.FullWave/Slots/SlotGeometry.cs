@@ -28,15 +28,27 @@ internal sealed record LongitudinalCut(double OffsetMm, double OverallLengthMm, 
     public override double WidthMm => Width;
 }
 
+/// <summary>How an edge slot's wraps into the broad walls end.</summary>
+internal enum EdgeCutterForm
+{
+    /// <summary>A slitting saw (kerf = slot width) plunged square to the narrow wall: the wraps end in a flat bottom at depth D.</summary>
+    FlatSaw,
+
+    /// <summary>An end mill of diameter = slot width, its axis normal to the broad walls: each wrap ends in a half-round of radius w/2 whose deepest point is at D.</summary>
+    EndMill,
+}
+
 /// <summary>
-/// An inclined slot in the +x narrow wall, cut by a flat-bottomed saw of kerf <paramref name="Width"/>: tilted by
-/// <paramref name="TiltDeg"/> from the perpendicular to the guide axis, its flat bottom
-/// <paramref name="CutDepthMm"/> in from the outer narrow-wall face, so it wraps D − t into each broad wall.
+/// An inclined slot in the +x narrow wall: tilted by <paramref name="TiltDeg"/> from the perpendicular to the guide
+/// axis, through the whole narrow wall and wrapping into both broad walls to <paramref name="CutDepthMm"/> in from the
+/// outer narrow-wall face (so D − t beyond the inner face), kerf <paramref name="Width"/>; the wraps end as the
+/// cutter leaves them (<paramref name="Form"/>).
 /// </summary>
 /// <param name="TiltDeg">Tilt from the perpendicular to the guide axis, degrees (signed).</param>
 /// <param name="CutDepthMm">Depth D from the outer narrow-wall face, mm (&gt; t, or the cut does not open the guide).</param>
-/// <param name="Width">Saw kerf, mm.</param>
-internal sealed record EdgeCut(double TiltDeg, double CutDepthMm, double Width) : SlotCut
+/// <param name="Width">Saw kerf or end-mill diameter, mm.</param>
+/// <param name="Form">Flat-bottomed saw (default) or end mill.</param>
+internal sealed record EdgeCut(double TiltDeg, double CutDepthMm, double Width, EdgeCutterForm Form = EdgeCutterForm.FlatSaw) : SlotCut
 {
     /// <inheritdoc/>
     public override double WidthMm => Width;

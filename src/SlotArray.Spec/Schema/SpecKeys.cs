@@ -79,6 +79,7 @@ internal static class SpecKeys
         new("cutter", Q(QuantityKind.Length, "above 0, no larger than the width"), "end-mill diameter: round-ended slots")
             { DefaultText = "omitted: square ends", Example = "1.6 mm" },
         new("model", Words(SpecNames.SlotModels), "slot admittance model") { Default = "moment-method" },
+        new("surround", Words(SpecNames.Surrounds), "edge slots: what they radiate into (bare tube, flush in a ground plane, into a flare); picks the full-wave calibration") { DefaultText = "tube; flare when the spec has a flare" },
         new("data", new TextValue(MaxLength: 4096), "your own slot table (CSV, README 'Your own slot table'), path relative to the spec; replaces the model")
             { DefaultText = "none: the model" },
         new("extrapolate", new BooleanValue(), "with data: design slots outside the table (flagged in the cut list and summary) instead of refusing")

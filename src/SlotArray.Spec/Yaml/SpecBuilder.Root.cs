@@ -61,6 +61,9 @@ internal sealed partial class SpecBuilder
         double margin = Fabrication(s, out bool fabricationOk);
         var filter = Filter(s, slots, out bool filterOk);
         var flare = Flare(s, slots, out bool flareOk);
+        // Edge slots in front of a flare radiate into it: their calibration follows unless slots.surround says otherwise.
+        if (flare is not null && slots is not null && !surroundGiven)
+            slots = slots with { Surround = EdgeSlotSurround.Flare };
         var operating = Operating(s, out bool operatingOk);
         fabricationOk &= filterOk && flareOk && operatingOk;
         var planar = Planar(s, slots, feed, guide, out bool planarOk);
