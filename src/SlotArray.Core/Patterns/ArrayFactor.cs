@@ -152,12 +152,22 @@ internal static class ArrayFactor
         return f;
     }
 
+    /// <summary>Angles × elements above which the direct sum spreads its angles over the cores (about 1 ms of work).</summary>
+    internal const int ParallelDirectSumWork = 1 << 20;
+
     /// <summary>
-    /// Σ a_n exp(j k z_n u) directly: four elements per 256-bit vector, two vectors per pass, with the vector
-    /// sine/cosine of <see cref="VectorTrig"/>. Where the grid holds −u as well as u (symmetric grids), both come
-    /// from the same sines and cosines: exp(−jx) = cos x − j sin x.
+    /// Σ a_n exp(j k z_n u) directly: eight elements per pass (two 256-bit vectors, or one 512-bit vector where the
+    /// processor has it: the same lanes, products and partial sums, so the same bits), with the vector sine/cosine of
+    /// <see cref="VectorTrig"/>. Where the grid holds −u as well as u (symmetric grids), both come from the same sines and
+    /// cosines: exp(−jx) = cos x − j sin x. Each angle is summed on its own, so spreading the angles over the cores (large
+    /// sums) changes no bit.
     /// </summary>
-    private static Complex[] DirectSum(IReadOnlyList<double> z, IReadOnlyList<Complex> a, double k, ReadOnlySpan<double> u)
+    /// <param name="z">Element positions.</param>
+    /// <param name="a">Excitations.</param>
+    /// <param name="k">Wavenumber.</param>
+    /// <param name="u">Values of sin θ.</param>
+    /// <param name="wide">Use 512-bit vectors where accelerated (false: the 256-bit kernel; for the test that they agree).</param>
+    internal static Complex[] DirectSum(IReadOnlyList<double> z, IReadOnlyList<Complex> a, double k, ReadOnlySpan<double> u, bool wide = true)
     {
         int n = a.Count, m = u.Length;
         var zr = new double[n];
@@ -168,33 +178,79 @@ internal static class ArrayFactor
         // Symmetric: u[j] = −u[m−1−j] for every j, including a middle point u = 0 when m is odd (a lone u ≠ 0 is not).
         bool symmetric = m % 2 == 0 || u[m / 2] == 0;
         for (int j = 0; j < m / 2 && symmetric; j++) symmetric = u[j] == -u[m - 1 - j];
-        int upper = symmetric ? (m + 1) / 2 : m;
-        int lanes = Vector256<double>.Count, step = 2 * lanes;
-        int nv = Vector256.IsHardwareAccelerated ? n - n % step : 0;
-        for (int j = m - upper; j < m; j++)
+        int upper = symmetric ? (m + 1) / 2 : m, first = m - upper;
+        var us = u.ToArray();
+        bool use512 = wide && Vector512.IsHardwareAccelerated;
+        void Angle(int j)
         {
-            // Accumulate Σ a·cos and Σ a·sin separately (complex a): AF(±u) = C ± jS with C = Σ a cos, S = Σ a sin.
-            var kv = Vector256.Create(k * u[j]);
-            Vector256<double> cr0 = Vector256<double>.Zero, ci0 = cr0, sr0 = cr0, si0 = cr0, cr1 = cr0, ci1 = cr0, sr1 = cr0, si1 = cr0;
-            for (int e = 0; e < nv; e += step)
-            {
-                var (s0, c0) = VectorTrig.SinCos(Vector256.Create(zr, e) * kv);
-                var (s1, c1) = VectorTrig.SinCos(Vector256.Create(zr, e + lanes) * kv);
-                var br0 = Vector256.Create(ar, e); var bi0 = Vector256.Create(ai, e);
-                var br1 = Vector256.Create(ar, e + lanes); var bi1 = Vector256.Create(ai, e + lanes);
-                cr0 += br0 * c0; ci0 += bi0 * c0; sr0 += br0 * s0; si0 += bi0 * s0;
-                cr1 += br1 * c1; ci1 += bi1 * c1; sr1 += br1 * s1; si1 += bi1 * s1;
-            }
-            double cRe = Vector256.Sum(cr0 + cr1), cIm = Vector256.Sum(ci0 + ci1), sRe = Vector256.Sum(sr0 + sr1), sIm = Vector256.Sum(si0 + si1);
-            for (int e = nv; e < n; e++)
-            {
-                var (s, c) = Math.SinCos(zr[e] * k * u[j]);
-                cRe += ar[e] * c; cIm += ai[e] * c; sRe += ar[e] * s; sIm += ai[e] * s;
-            }
+            var (cRe, cIm, sRe, sIm) = use512 ? Sums512(zr, ar, ai, k, us[j]) : Sums256(zr, ar, ai, k, us[j]);
             // C + jS with C = cRe + j cIm, S = sRe + j sIm
             f[j] = new Complex(cRe - sIm, cIm + sRe);
             if (symmetric) f[m - 1 - j] = new Complex(cRe + sIm, cIm - sRe);
         }
+        if ((long)upper * n >= ParallelDirectSumWork)
+        {
+            const int Chunk = 64;
+            Parallel.For(0, (upper + Chunk - 1) / Chunk, c =>
+            {
+                for (int j = first + c * Chunk, end = Math.Min(m, j + Chunk); j < end; j++) Angle(j);
+            });
+        }
+        else
+        {
+            for (int j = first; j < m; j++) Angle(j);
+        }
         return f;
+    }
+
+    /// <summary>
+    /// Σ a cos(k u z) and Σ a sin(k u z) for complex a (real and imaginary parts apart), eight elements per pass in two
+    /// 256-bit vectors, the remainder scalar.
+    /// </summary>
+    private static (double CRe, double CIm, double SRe, double SIm) Sums256(double[] zr, double[] ar, double[] ai, double k, double u)
+    {
+        int n = zr.Length, lanes = Vector256<double>.Count, step = 2 * lanes;
+        int nv = Vector256.IsHardwareAccelerated ? n - n % step : 0;
+        var kv = Vector256.Create(k * u);
+        Vector256<double> cr0 = Vector256<double>.Zero, ci0 = cr0, sr0 = cr0, si0 = cr0, cr1 = cr0, ci1 = cr0, sr1 = cr0, si1 = cr0;
+        for (int e = 0; e < nv; e += step)
+        {
+            var (s0, c0) = VectorTrig.SinCos(Vector256.Create(zr, e) * kv);
+            var (s1, c1) = VectorTrig.SinCos(Vector256.Create(zr, e + lanes) * kv);
+            var br0 = Vector256.Create(ar, e); var bi0 = Vector256.Create(ai, e);
+            var br1 = Vector256.Create(ar, e + lanes); var bi1 = Vector256.Create(ai, e + lanes);
+            cr0 += br0 * c0; ci0 += bi0 * c0; sr0 += br0 * s0; si0 += bi0 * s0;
+            cr1 += br1 * c1; ci1 += bi1 * c1; sr1 += br1 * s1; si1 += bi1 * s1;
+        }
+        return Tail(zr, ar, ai, k, u, nv, Vector256.Sum(cr0 + cr1), Vector256.Sum(ci0 + ci1), Vector256.Sum(sr0 + sr1), Vector256.Sum(si0 + si1));
+    }
+
+    /// <summary>As <see cref="Sums256"/> with one 512-bit vector per pass: lanes 0–3 and 4–7 are the two 256-bit vectors.</summary>
+    private static (double CRe, double CIm, double SRe, double SIm) Sums512(double[] zr, double[] ar, double[] ai, double k, double u)
+    {
+        int n = zr.Length, step = Vector512<double>.Count;
+        int nv = n - n % step;
+        var kv = Vector512.Create(k * u);
+        Vector512<double> cr = Vector512<double>.Zero, ci = cr, sr = cr, si = cr;
+        for (int e = 0; e < nv; e += step)
+        {
+            var (s, c) = VectorTrig.SinCos(Vector512.Create(zr, e) * kv);
+            var br = Vector512.Create(ar, e); var bi = Vector512.Create(ai, e);
+            cr += br * c; ci += bi * c; sr += br * s; si += bi * s;
+        }
+        return Tail(zr, ar, ai, k, u, nv, Vector256.Sum(cr.GetLower() + cr.GetUpper()), Vector256.Sum(ci.GetLower() + ci.GetUpper()),
+            Vector256.Sum(sr.GetLower() + sr.GetUpper()), Vector256.Sum(si.GetLower() + si.GetUpper()));
+    }
+
+    /// <summary>The elements from <paramref name="from"/> on, one by one with Math.SinCos of (z k) u, added to the vector sums.</summary>
+    private static (double, double, double, double) Tail(double[] zr, double[] ar, double[] ai, double k, double u, int from,
+        double cRe, double cIm, double sRe, double sIm)
+    {
+        for (int e = from; e < zr.Length; e++)
+        {
+            var (s, c) = Math.SinCos(zr[e] * k * u);
+            cRe += ar[e] * c; cIm += ai[e] * c; sRe += ar[e] * s; sIm += ai[e] * s;
+        }
+        return (cRe, cIm, sRe, sIm);
     }
 }

@@ -128,5 +128,8 @@ public class PlanarPatternTests
         Assert.Equal(inside, layout.Count);
         Assert.All(layout.Slots, s => Assert.True(s.X * s.X + s.Y * s.Y <= r * r * (1 + 1e-12)));
         Assert.All(layout.FedBranches, b => Assert.Equal(0, layout.BranchSlots(b).Count % 2));
+        var ellipse = PlanarLayout.Create(16, 20, Length.FromMeters(0.7), Length.FromMeters(0.75), PlanarOutline.Ellipse);
+        Assert.All(ellipse.Slots, s => Assert.True(Math.Pow(s.X / 7.0, 2) + Math.Pow(s.Y / 6.0, 2) <= 1 + 1e-12));
+        Assert.True(ellipse.Count > layout.Count, "the ellipse reaches further along x than the circle");
     }
 }
