@@ -253,7 +253,8 @@ internal static class TravellingWaveDesigner
     /// departure from the circular mean, which changes both the wave's phase at the slot (β) and its path to the far field
     /// (k sin θ_b) ([D]; moving slots to set their phases is the travelling-wave designer's usual lever, R. S. Elliott,
     /// <i>Antenna Theory and Design</i>, 1981, Ch. 8, from memory). The conductances are refined again on the moved
-    /// positions (the powers), up to five passes or until every departure is below 0.5°.
+    /// positions (the powers), up to five passes or until every departure is below 0.5°; a shift is held within a quarter
+    /// of the spacing and the passes stop where the slots would change order or leave the stick.
     /// </summary>
     private static (ArrayDesign Design, double[] Targets) CompensatePhases(ArrayDesign design, IShuntSlotModel slot, double[] signs, double[] shape,
         double loadFraction, double[] g, List<double> history, TravellingWaveOptions options)
@@ -273,7 +274,10 @@ internal static class TravellingWaveDesigner
             kappa ??= new[] { beta + k * sin, beta - k * sin }.MinBy(kk => Spread(Departures(sol, z, kk - beta)));
             var phi = Departures(sol, z, kappa.Value - beta);
             if (Spread(phi) < 0.5 * Math.PI / 180) break;
-            var moved = z.Select((zz, i) => zz - phi[i] / kappa.Value).ToArray();
+            // A shift is held within a quarter of the spacing, and the compensation stops where it would reorder the slots.
+            double reach = 0.25 * design.Spacing.Meters;
+            var moved = z.Select((zz, i) => zz - Math.Clamp(phi[i] / kappa.Value, -reach, reach)).ToArray();
+            if (moved.Zip(moved.Skip(1), (a, b) => b - a).Any(d => !(d > 0)) || moved[0] <= 0 || moved[^1] >= design.FeedPlane.Meters) break;
             var line = new LineNetwork(guide, moved, design.NearTermination, null, design.FeedPlane.Meters);
             targets = Refine(line, f0, signs, shape, loadFraction, g, history, options, DesignAdmittance(slot, f0));
             var slots = design.Slots.Select((s, i) =>
