@@ -131,22 +131,59 @@ internal sealed class WaveguideSlotModalSums
         }
 
         // (ii) T^B: extracted asymptote α_q α_p S3 plus the directly summed remainder.
-        var rem = new Complex[nb, nb];
+        var (remRe, remIm) = Remainder(alpha, l);
+        var pre = 1 / new Complex(0, omegaMu0);
+        var y = new Complex[nb, nb];
+        for (int p = 0; p < nb; p++)
+            for (int q = p % 2; q <= p; q += 2)
+            {
+                var rem = new Complex(remRe[q * nb + p], remIm[q * nb + p]);
+                Complex v = rem + alpha[q] * alpha[p] * _s3 + (q == p ? t[p, p] : Complex.Zero);
+                y[q, p] = y[p, q] = pre * v;
+            }
+        return y;
+    }
+
+    /// <summary>
+    /// Σ over the remainder modes of W_mn (T^B_qp − α_q α_p/γ³) for same-parity q ≤ p, real and imaginary parts apart
+    /// (index q·P + p). The factors that depend on one index only (α_q α_p, 1/(α_q² + γ²), k_c²(1 − s e^(−2γl))) are formed
+    /// once per mode instead of once per pair, and for each p the pairs (q = p mod 2, p mod 2 + 2, …) run in the lanes of a
+    /// vector: the same operations in the same order on each pair, and the modes added one after another as before, so
+    /// the sum has the same bits as the pairwise scalar form.
+    /// </summary>
+    private (double[] Re, double[] Im) Remainder(double[] alpha, double l)
+    {
+        int nb = alpha.Length, width = Vector<double>.Count;
+        int lanes = ((nb + 1) / 2 + width - 1) / width * width;   // q = parity + 2j, j < lanes (padded to whole vectors)
+        double k2 = _k * _k;
+        var aa = new double[nb * lanes];   // [p, j]: α_q α_p
+        var dq = new double[2 * lanes];    // [parity, j]: 1/(α_q² + γ²), 0 where q ≥ P
+        var re = new double[nb * lanes];
+        var im = new double[nb * lanes];
+        for (int p = 0; p < nb; p++)
+            for (int q = p % 2; q <= p; q += 2) aa[p * lanes + q / 2] = alpha[q] * alpha[p];
+        var ke = new double[nb];
         for (int i = 0; i < _weight.Length; i++)
         {
             double g2 = _gamma2[i], kc2 = g2 + k2, wgt = _weight[i];
+            for (int q = 0; q < nb; q++) dq[(q % 2) * lanes + q / 2] = 1 / (alpha[q] * alpha[q] + g2);
             if (g2 > 0)
             {
                 double g = Math.Sqrt(g2), e = 2 * g * l > 700 ? 0 : Math.Exp(-2 * g * l), inv3 = 1 / (g2 * g);
+                for (int p = 0; p < nb; p++) ke[p] = kc2 * (1 - ((p % 2 == 0) ? -1.0 : 1.0) * e); // s = (−1)^(p+1) with 0-based p
+                var gv = new Vector<double>(g);
+                var inv3v = new Vector<double>(inv3);
+                var wv = new Vector<double>(wgt);
                 for (int p = 0; p < nb; p++)
                 {
-                    double s = (p % 2 == 0) ? -1 : 1; // (−1)^(p+1) with 0-based p
-                    double dp = 1 / (alpha[p] * alpha[p] + g2);
-                    for (int q = p % 2; q <= p; q += 2)
+                    var kp = new Vector<double>(ke[p]);
+                    var dp = new Vector<double>(dq[(p % 2) * lanes + p / 2]);
+                    int used = p / 2 + 1;
+                    for (int j = 0; j < used; j += width)
                     {
-                        double dq = 1 / (alpha[q] * alpha[q] + g2), aa = alpha[q] * alpha[p];
-                        double tb = kc2 * (1 - s * e) * aa * dq * dp / g - aa * inv3;
-                        rem[q, p] += wgt * tb;
+                        var av = new Vector<double>(aa, p * lanes + j);
+                        var tb = kp * av * new Vector<double>(dq, (p % 2) * lanes + j) * dp / gv - av * inv3v;
+                        (new Vector<double>(re, p * lanes + j) + wv * tb).CopyTo(re, p * lanes + j);
                     }
                 }
             }
@@ -156,25 +193,23 @@ internal sealed class WaveguideSlotModalSums
                 for (int p = 0; p < nb; p++)
                 {
                     double s = (p % 2 == 0) ? -1 : 1;
-                    double dp = 1 / (alpha[p] * alpha[p] + g2);
+                    double dp = dq[(p % 2) * lanes + p / 2];
                     for (int q = p % 2; q <= p; q += 2)
                     {
-                        double dq = 1 / (alpha[q] * alpha[q] + g2), aa = alpha[q] * alpha[p];
-                        Complex tb = kc2 == 0 ? Complex.Zero : kc2 * (1 - s * e) * aa * dq * dp / g;
-                        rem[q, p] += wgt * (tb - aa * inv3);
+                        double a = aa[p * lanes + q / 2], d = dq[(q % 2) * lanes + q / 2];
+                        Complex tb = kc2 == 0 ? Complex.Zero : kc2 * (1 - s * e) * a * d * dp / g;
+                        var term = wgt * (tb - a * inv3);
+                        re[p * lanes + q / 2] += term.Real;
+                        im[p * lanes + q / 2] += term.Imaginary;
                     }
                 }
             }
         }
-        var pre = 1 / new Complex(0, omegaMu0);
-        var y = new Complex[nb, nb];
+        var outRe = new double[nb * nb];
+        var outIm = new double[nb * nb];
         for (int p = 0; p < nb; p++)
-            for (int q = p % 2; q <= p; q += 2)
-            {
-                Complex v = rem[q, p] + alpha[q] * alpha[p] * _s3 + (q == p ? t[p, p] : Complex.Zero);
-                y[q, p] = y[p, q] = pre * v;
-            }
-        return y;
+            for (int q = p % 2; q <= p; q += 2) { outRe[q * nb + p] = re[p * lanes + q / 2]; outIm[q * nb + p] = im[p * lanes + q / 2]; }
+        return (outRe, outIm);
     }
 
     /// <summary>
