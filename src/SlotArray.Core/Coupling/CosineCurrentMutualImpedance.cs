@@ -61,6 +61,16 @@ internal static class CosineCurrentMutualImpedance
     private static Complex Block(double d, double s, double h1, double h2, int side1, int side2)
     {
         double a1 = Math.PI / (2 * h1), a2 = Math.PI / (2 * h2), d2 = d * d;
+        // The second dipole's abscissae, weights and current shapes do not depend on the first's point: computed once.
+        Span<double> zeta = stackalloc double[Order], w2 = stackalloc double[Order], cos2 = stackalloc double[Order], dsin2 = stackalloc double[Order];
+        for (int j = 0; j < Order; j++)
+        {
+            zeta[j] = side2 * h2 * Rule.GetAbscissa(j);
+            w2[j] = h2 * Rule.GetWeight(j);
+            var (sin2, c2) = Math.SinCos(a2 * zeta[j]);
+            cos2[j] = c2;
+            dsin2[j] = -a2 * sin2;
+        }
         var sum = Complex.Zero;
         for (int i = 0; i < Order; i++)
         {
@@ -70,12 +80,10 @@ internal static class CosineCurrentMutualImpedance
             var inner = Complex.Zero;
             for (int j = 0; j < Order; j++)
             {
-                double zeta = side2 * h2 * Rule.GetAbscissa(j), w2 = h2 * Rule.GetWeight(j);
-                var (sin2, cos2) = Math.SinCos(a2 * zeta);
-                double dz = z - (s + zeta), r = Math.Sqrt(d2 + dz * dz);
+                double dz = z - (s + zeta[j]), r = Math.Sqrt(d2 + dz * dz);
                 var (sr, cr) = Math.SinCos(r);
-                double shape = i1 * cos2 - di1 * (-a2 * sin2);
-                inner += w2 * shape / r * new Complex(cr, -sr);
+                double shape = i1 * cos2[j] - di1 * dsin2[j];
+                inner += w2[j] * shape / r * new Complex(cr, -sr);
             }
             sum += w1 * inner;
         }

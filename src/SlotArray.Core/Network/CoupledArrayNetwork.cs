@@ -34,6 +34,11 @@ namespace SlotArray.Core.Network;
 /// V_feed + I_feed = 2. Centre feed: the series junction of <c>StandingWaveDesigner</c> (Core/Design): equal currents out of
 /// both halves and (V_left + V_right)/n + n I = 2 (ideal transformer n² to the feed); the far half is written in its
 /// own polarity (the junction reverses E_y), so its slots enter with a minus sign.</para>
+/// <para>Solution: the line rows are linear in the arm amplitudes and the shunt currents, so they are eliminated in
+/// closed form (each arm's cascade from its termination plus the particular solution of each injected current, the arm
+/// amplitudes from the feed conditions): V = V_s + G i, leaving the N × N system (D + M − P G P) w = P V_s in the slot
+/// voltages, P = diag(pol_n f_n): the same equations as the 3N-unknown transfer-form assembly (which gave the same S11,
+/// mode and slot voltages to 1e-15 on end- and centre-fed arrays, short and load), for a 27th of the LU's work.</para>
 /// <para>The solution is reported as a <see cref="NetworkSolution"/>: each slot's admittance is its active admittance
 /// y^a_n = i_n/V_n, and the line is re-solved with these (<see cref="ArrayNetwork"/>'s cascade, which then reproduces
 /// the same V and S11) to get wall loss, powers and the peak field; the power into slot n, Re(i_n V_n*), may be
@@ -164,25 +169,32 @@ internal static class CoupledArrayNetwork
             leftCount = centre ? design.Slots.Count(s => s.Position < design.FeedPlane) : design.Count;
         }
 
-        /// <summary>f_n, D + M and Γ0 at frequency f.</summary>
         /// <summary>The mutual impedances of the slots at f.</summary>
         public CouplingMatrix Mutual(Frequency f) => coupling(placements, design.Slots[0].Width, f);
 
+        /// <summary>f_n, D + M and Γ0 at frequency f.</summary>
         public (double[] F, Matrix<Complex> DM, double Gamma0) SlotBlocks(Frequency f)
+        {
+            var (fn, dm, gamma0) = SlotArrays(f);
+            return (fn, Matrix<Complex>.Build.Dense(fn.Length, fn.Length, dm), gamma0);
+        }
+
+        /// <summary>f_n, D + M (column-major) and Γ0 at frequency f.</summary>
+        private (double[] F, Complex[] DM, double Gamma0) SlotArrays(Frequency f)
         {
             int n = design.Count;
             double gamma0 = ElliottDesignEquations.Gamma0(design.Guide, f);
             var z = Mutual(f);
             double scale = 1 / (gamma0 * PhysicalConstants.HalfWaveDipoleResistance);
             var fn = new double[n];
-            var dm = Matrix<Complex>.Build.Dense(n, n);
+            var dm = new Complex[n * n];
             for (int i = 0; i < n; i++)
             {
                 var s = design.Slots[i];
                 fn[i] = ElliottDesignEquations.CouplingFunction(design.Guide, f, Length.FromMeters(s.Coupling), 0.5 * s.Length);
                 var y = admittances is null ? slot!.Admittance(s.Coupling, s.Length, f) : admittances[i];
                 for (int j = 0; j < n; j++)
-                    dm[i, j] = i == j ? fn[i] * fn[i] / y : scale * z[i, j];
+                    dm[j * n + i] = i == j ? fn[i] * fn[i] / y : scale * z[i, j];
             }
             return (fn, dm, gamma0);
         }
@@ -190,103 +202,118 @@ internal static class CoupledArrayNetwork
         public NetworkSolution Solve(Frequency f)
         {
             int n = design.Count;
-            var (fn, dm, gamma0) = SlotBlocks(f);
-            var gamma = design.Guide.PropagationConstant(f);
-            bool centre = design.Feed == FeedPosition.Centre;
-            // Unknowns: V_k (mode voltage at slot k, its arm's polarity), J_k (line current arriving at slot k from its
-            // arm's termination side), w_k (scaled slot voltage, global polarity).
-            int size = 3 * n;
-            var a = Matrix<Complex>.Build.Dense(size, size);
-            var b = MathNet.Numerics.LinearAlgebra.Vector<Complex>.Build.Dense(size);
-            var pol = new double[n];
-            for (int i = 0; i < n; i++) pol[i] = i < leftCount ? 1 : -1;
-            int row = 0;
-            double[] z = design.Slots.Select(s => s.Position.Meters).ToArray();
-
-            Termination(a, row++, 0, design.NearTermination, gamma);
-            for (int k = 0; k + 1 < leftCount; k++) { Section(a, row, k, k + 1, gamma, z[k + 1] - z[k], pol, fn); row += 2; }
-            if (!centre)
+            var (fn, k, gamma0) = SlotArrays(f);
+            var (source, response) = LineResponse(design.Guide.PropagationConstant(f));
+            // Shunt current of slot j in its arm's polarity: i_j = p_j w_j, p_j = pol_j f_j. The slot rows
+            // p_i V_i − Σ_j (D + M)_ij w_j = 0 with V = V_s + G i become (D + M − P G P) w = P V_s.
+            var p = new double[n];
+            for (int i = 0; i < n; i++) p[i] = (i < leftCount ? 1 : -1) * fn[i];
+            var b = MathNet.Numerics.LinearAlgebra.Vector<Complex>.Build.Dense(n);
+            for (int i = 0; i < n; i++)
             {
-                // Feed state (V_f, I_f) = T(d)(V, J + i) of the last slot; matched source of unit incident wave: V_f + I_f = 2.
-                var (c, s) = Hyperbolic(gamma, design.FeedPlane.Meters - z[n - 1]);
-                AddState(a, row, n - 1, 1, c + s, c + s, pol, fn);
-                b[row++] = 2;
+                b[i] = p[i] * source[i];
+                for (int j = 0; j < n; j++) k[j * n + i] -= p[i] * response[i * n + j] * p[j];
             }
-            else
-            {
-                Termination(a, row++, n - 1, design.FarTermination!, gamma);
-                for (int k = n - 1; k > leftCount; k--) { Section(a, row, k, k - 1, gamma, z[k] - z[k - 1], pol, fn); row += 2; }
-                double fp = design.FeedPlane.Meters, nr = Math.Sqrt(design.JunctionRatio);
-                var (cl, sl) = Hyperbolic(gamma, fp - z[leftCount - 1]);
-                var (cr, sr) = Hyperbolic(gamma, z[leftCount] - fp);
-                // Same current through both halves: I_left − I_right = 0.
-                AddState(a, row, leftCount - 1, 1, sl, cl, pol, fn);
-                AddState(a, row, leftCount, -1, sr, cr, pol, fn);
-                row++;
-                // Transformer n² to the feed: V_feed = (V_left + V_right)/n, I_feed = n I; V_feed + I_feed = 2.
-                AddState(a, row, leftCount - 1, 1, cl / nr + nr * sl, sl / nr + nr * cl, pol, fn);
-                AddState(a, row, leftCount, 1, cr / nr, sr / nr, pol, fn);
-                b[row++] = 2;
-            }
-            for (int i = 0; i < n; i++, row++)
-            {
-                a[row, i] = pol[i] * fn[i];
-                for (int j = 0; j < n; j++) a[row, 2 * n + j] = -dm[i, j];
-            }
-            var x = a.LU().Solve(b);
+            var w = Matrix<Complex>.Build.Dense(n, n, k).LU().Solve(b);
 
             var ya = new Complex[n];
             var e = new Complex[n];
             double root = Math.Sqrt(gamma0);
             for (int i = 0; i < n; i++)
             {
-                Complex v = pol[i] * x[i], w = x[2 * n + i];
-                ya[i] = fn[i] * w / v;
-                e[i] = w / root;
+                var vi = source[i];
+                for (int j = 0; j < n; j++) vi += response[i * n + j] * p[j] * w[j];
+                ya[i] = fn[i] * w[i] / ((i < leftCount ? 1 : -1) * vi);
+                e[i] = w[i] / root;
             }
             var sol = line.Solve(f, ya, signs);
             return sol with { Excitations = Array.AsReadOnly(e) };
         }
 
-        private static (Complex Cosh, Complex Sinh) Hyperbolic(Complex gamma, double d) => (Complex.Cosh(gamma * d), Complex.Sinh(gamma * d));
-
         /// <summary>
-        /// Adds sign × (p V_k + q (J_k + i_k)) to one row, i_k = pol_k f_k w_k the slot's shunt current in its arm's polarity:
-        /// one component of the line state T(d)(V, J + i) just beyond slot k (p, q the row of T).
+        /// The unloaded line's response: the mode voltage V_j at each slot (in its arm's polarity) is V_s,j + Σ_k G_jk i_k for
+        /// shunt currents i_k injected at the slots. Each arm is the cascade from its termination: the state (V, J) at
+        /// distance ℓ from it is a T(ℓ)(V_t, I_t) + Σ_k i_k T(ℓ − ℓ_k)(0, 1) over the slots k nearer the termination,
+        /// T(d) = [cosh γd, sinh γd; sinh γd, cosh γd] (the cascade of <see cref="ArrayNetwork"/>; Pozar 2012, Secs. 2.1, 4.4,
+        /// from memory), with (V_t, I_t) = (0, 1) for a short, (1, y_L) for a load; the arm amplitudes a follow from the feed
+        /// conditions (end feed: V_f + I_f = 2; centre feed: equal currents out of both halves and (V_L + V_R)/n + n I_L = 2),
+        /// which are linear in a and i. The same equations as the transfer-form assembly, reduced to the N slot unknowns.
         /// </summary>
-        private static void AddState(Matrix<Complex> a, int row, int k, double sign, Complex p, Complex q, double[] pol, double[] fn)
+        private (Complex[] Source, Complex[] Response) LineResponse(Complex gamma)
         {
-            int n = pol.Length;
-            a[row, k] += sign * p;
-            a[row, n + k] += sign * q;
-            a[row, 2 * n + k] += sign * q * pol[k] * fn[k];
+            int n = design.Count;
+            bool centre = design.Feed == FeedPosition.Centre;
+            double zNear = design.Slots[0].Position.Meters - design.NearTermination.Distance.Meters;
+            double zFar = centre ? design.Slots[n - 1].Position.Meters + design.FarTermination!.Distance.Meters : 0;
+            var ell = new double[n];
+            for (int i = 0; i < n; i++) ell[i] = i < leftCount ? design.Slots[i].Position.Meters - zNear : zFar - design.Slots[i].Position.Meters;
+            var ex = ell.Select(l => Complex.Exp(gamma * l)).ToArray();
+            var terms = centre ? new[] { design.NearTermination, design.FarTermination! } : new[] { design.NearTermination };
+            var phi = new Complex[n];
+            for (int i = 0; i < n; i++) phi[i] = ArmState(terms[i < leftCount ? 0 : 1], ex[i]).V;
+
+            // Feed conditions: A a = r − C i (rows × arms, rows × slots).
+            var a = new Complex[2, 2];
+            var c = new Complex[2, n];
+            var r = new Complex[2];
+            double fp = design.FeedPlane.Meters;
+            if (!centre)
+            {
+                var ein = Complex.Exp(gamma * (fp - zNear));
+                var s = ArmState(terms[0], ein);
+                a[0, 0] = s.V + s.I;
+                for (int k = 0; k < n; k++) c[0, k] = ein / ex[k];      // V + I of T(d)(0, 1) = e^{γd}
+                r[0] = 2;
+                a[1, 1] = 1;                                             // no second arm
+            }
+            else
+            {
+                double nr = Math.Sqrt(design.JunctionRatio);
+                Complex el = Complex.Exp(gamma * (fp - zNear)), er = Complex.Exp(gamma * (zFar - fp));
+                var sl = ArmState(terms[0], el);
+                var sr = ArmState(terms[1], er);
+                a[0, 0] = sl.I; a[0, 1] = -sr.I;                          // I_L − I_R = 0
+                a[1, 0] = sl.V / nr + nr * sl.I; a[1, 1] = sr.V / nr;    // (V_L + V_R)/n + n I_L = 2
+                r[1] = 2;
+                for (int k = 0; k < n; k++)
+                {
+                    bool left = k < leftCount;
+                    var q = (left ? el : er) / ex[k];
+                    Complex sh = 0.5 * (q - 1 / q), ch = 0.5 * (q + 1 / q);
+                    c[0, k] = left ? ch : -ch;
+                    c[1, k] = left ? sh / nr + nr * ch : sh / nr;
+                }
+            }
+            var det = a[0, 0] * a[1, 1] - a[0, 1] * a[1, 0];
+            Complex[,] inv = { { a[1, 1] / det, -a[0, 1] / det }, { -a[1, 0] / det, a[0, 0] / det } };
+
+            var source = new Complex[n];
+            var g = new Complex[n * n];
+            var u = new Complex[2, n];       // row of A⁻¹C for each arm
+            for (int arm = 0; arm < 2; arm++)
+                for (int k = 0; k < n; k++) u[arm, k] = inv[arm, 0] * c[0, k] + inv[arm, 1] * c[1, k];
+            var back = ex.Select(x => 1 / x).ToArray();
+            for (int j = 0; j < n; j++)
+            {
+                int arm = j < leftCount ? 0 : 1;
+                source[j] = phi[j] * (inv[arm, 0] * r[0] + inv[arm, 1] * r[1]);
+                for (int k = 0; k < n; k++)
+                {
+                    var v = -phi[j] * u[arm, k];
+                    if ((k < leftCount) == (j < leftCount) && ell[k] < ell[j]) v += 0.5 * (ex[j] * back[k] - ex[k] * back[j]);
+                    g[j * n + k] = v;
+                }
+            }
+            return (source, g);
         }
 
-        /// <summary>Two rows: (V, J) at slot <paramref name="to"/> = T(d) (V, J + i) at slot <paramref name="from"/>, T = [cosh sinh; sinh cosh].</summary>
-        private static void Section(Matrix<Complex> a, int row, int from, int to, Complex gamma, double d, double[] pol, double[] fn)
+        /// <summary>(V, I) = T(ℓ)(V_t, I_t) of a termination, from e^{γℓ}.</summary>
+        private static (Complex V, Complex I) ArmState(Termination t, Complex exp)
         {
-            if (!(d > 0)) throw new ArgumentException($"slots {from + 1} and {to + 1} coincide; the coupled analysis needs distinct positions");
-            int n = pol.Length;
-            var (c, s) = Hyperbolic(gamma, d);
-            AddState(a, row, from, 1, c, s, pol, fn);
-            a[row, to] -= 1;
-            AddState(a, row + 1, from, 1, s, c, pol, fn);
-            a[row + 1, n + to] -= 1;
-        }
-
-        /// <summary>
-        /// The termination seen at slot k through distance d: (V, J) = T(d)(V_t, I_t) with (V_t, I_t) ∝ (0, 1) for a short
-        /// and (1, y_L) for a load (1 for a matched load), i.e. V e − J c = 0 with (c, e) = T(d)(V_t, I_t).
-        /// </summary>
-        private static void Termination(Matrix<Complex> a, int row, int k, Termination t, Complex gamma)
-        {
-            int n = a.RowCount / 3;
-            var (ch, sh) = Hyperbolic(gamma, t.Distance.Meters);
+            Complex ch = 0.5 * (exp + 1 / exp), sh = 0.5 * (exp - 1 / exp);
             Complex vt = t.Kind == TerminationKind.Short ? 0 : 1;
             Complex it = t.Kind switch { TerminationKind.Short => 1, TerminationKind.MatchedLoad => 1, _ => t.LoadAdmittance };
-            Complex c = ch * vt + sh * it, e = sh * vt + ch * it;
-            a[row, k] = e;
-            a[row, n + k] = -c;
+            return (vt * ch + it * sh, vt * sh + it * ch);
         }
     }
 }

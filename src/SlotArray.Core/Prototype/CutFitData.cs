@@ -84,6 +84,47 @@ internal sealed class CutFitData
         return d;
     }
 
+    /// <summary>
+    /// The derivative of <see cref="Data"/> along a change dF of the model field, the nuisance held: with phase the
+    /// field's transform applied to dF; without, (20/ln 10) Re(F* dF)/|F|² (dB).
+    /// </summary>
+    public void DataDerivative(IReadOnlyList<Complex> field, IReadOnlyList<Complex> change, ReadOnlySpan<double> nuisance, Span<double> into)
+    {
+        double k = Cut.Frequency.FreeSpaceWavenumber;
+        for (int a = 0; a < field.Count; a++)
+        {
+            if (Cut.HasPhase)
+            {
+                var z = Complex.Exp(new Complex(nuisance[0], nuisance[1] + k * nuisance[2] * Math.Sin(Angles[a]))) * change[a];
+                into[2 * a] = z.Real;
+                into[2 * a + 1] = z.Imaginary;
+            }
+            else
+            {
+                double m2 = field[a].Real * field[a].Real + field[a].Imaginary * field[a].Imaginary;
+                into[a] = field[a].Magnitude > 1e-12 ? 20 / Math.Log(10) * (Complex.Conjugate(field[a]) * change[a]).Real / m2 : 0;
+            }
+        }
+    }
+
+    /// <summary>Central-difference derivatives of <see cref="Data"/> with respect to each nuisance parameter, as columns
+    /// <paramref name="column"/>… of <paramref name="into"/> from row <paramref name="row"/>.</summary>
+    public void NuisanceDerivatives(IReadOnlyList<Complex> field, ReadOnlySpan<double> nuisance, double[,] into, int row, int column)
+    {
+        var steps = NuisanceSteps;
+        var v = nuisance.ToArray();
+        for (int q = 0; q < NuisanceCount; q++)
+        {
+            double keep = v[q];
+            v[q] = keep + steps[q];
+            var plus = Data(field, v);
+            v[q] = keep - steps[q];
+            var minus = Data(field, v);
+            v[q] = keep;
+            for (int i = 0; i < plus.Length; i++) into[row + i, column + q] = (plus[i] - minus[i]) / (2 * steps[q]);
+        }
+    }
+
     /// <summary>Starting nuisance parameters that line a model field up with the measurement at the measured peak.</summary>
     public double[] StartNuisance(IReadOnlyList<Complex> field)
     {

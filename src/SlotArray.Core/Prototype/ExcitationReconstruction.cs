@@ -68,7 +68,27 @@ internal static class ExcitationReconstruction
             .Concat(new[] { "scale", "phase", "rotation-centre offset" }.Take(q)).ToArray();
         var steps = Enumerable.Repeat(1e-4, 2 * n).Concat(data.NuisanceSteps).ToArray();
         var reg = Enumerable.Repeat(1 / PriorSigma, 2 * n).Concat(new double[q]).ToArray();
-        var fit = WeightedFit.Fit(names, p => data.Data(FieldOf(p), p.AsSpan(2 * n)), data.Observed, data.Sigma, start, steps, reg);
+        // The field is linear in δ: its Jacobian columns are B_an e0_n (Re δ_n) and j B_an e0_n (Im δ_n), each O(angles).
+        double[,] Jacobian(double[] p)
+        {
+            var field = FieldOf(p);
+            var rows = data.Observed.Length;
+            var jac = new double[rows, 2 * n + q];
+            var column = new Complex[a];
+            var d = new double[rows];
+            for (int j = 0; j < 2 * n; j++)
+            {
+                int slot = j % n;
+                var unit = j < n ? e0[slot] : Complex.ImaginaryOne * e0[slot];
+                for (int i = 0; i < a; i++) column[i] = basis[i, slot] * unit;
+                data.DataDerivative(field, column, p.AsSpan(2 * n), d);
+                for (int i = 0; i < rows; i++) jac[i, j] = d[i];
+            }
+            data.NuisanceDerivatives(field, p.AsSpan(2 * n), jac, 0, 2 * n);
+            return jac;
+        }
+        var fit = WeightedFit.Fit(names, p => data.Data(FieldOf(p), p.AsSpan(2 * n)), data.Observed, data.Sigma, start, steps, reg,
+            jacobian: Jacobian);
 
         // Resolution and condition number of the δ block.
         var jd = fit.Jacobian.SubMatrix(0, fit.Jacobian.RowCount, 0, 2 * n);

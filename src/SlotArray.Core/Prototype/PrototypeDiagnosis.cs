@@ -1,4 +1,5 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
 using SlotArray.Core.Stick;
 
@@ -55,7 +56,7 @@ internal static class PrototypeFit
         ArgumentNullException.ThrowIfNull(asCut);
         var inner = slot is FrequencyInterpolatedSlotModel fi ? fi.Inner : slot;
         var surfaces = new SlotSurfaceModel(inner, [.. asCut.Slots.Select(s => (s.Coupling, s.Length))], 0.025, 0.1);
-        return new FrequencyInterpolatedSlotModel(surfaces, asCut.DesignFrequency);
+        return new FrequencyInterpolatedSlotModel(surfaces, asCut.DesignFrequency, memoise: false);
     }
 
     /// <summary>
@@ -76,28 +77,39 @@ internal static class PrototypeFit
 
     /// <summary>
     /// Per-slot errors are deviations from the uniform scales, which the S-parameters fix: the uncertainty of those scales
-    /// enters each slot's error as L_n σ(s_L) for the length and, for the coupling, the change of |c| that moves the
-    /// conductance by σ(k_G)/k_G: Stevenson's g ∝ sin²(π x/a) gives δx = (a/2π) tan(π|x|/a) δk/k (A. F. Stevenson, J. Appl.
-    /// Phys. 19, 1948), and an edge slot's g ∝ sin²θ gives δθ = ½ tan|θ| δk/k. Added in quadrature.
+    /// enters each slot's error as L_n σ(s_L) for the length and, for the coupling, as the offset (or tilt) change δc whose
+    /// admittance change best matches, in least squares, the change y σ(k_G)/k_G a conductance-scale error makes:
+    /// δc = Re(y* ∂y/∂c)/|∂y/∂c|² σ(k_G)/k_G, with y and ∂y/∂c (central differences) from the slot model itself through
+    /// the slot-admittance port at the slot as cut and the design frequency, so that it holds for whatever model or table
+    /// the design used (offset or edge slot). Added in quadrature.
     /// </summary>
-    private static IReadOnlyList<SlotGeometryError> WithCommonUncertainty(ArrayDesign asCut, IReadOnlyList<SlotGeometryError> slots,
+    private static IReadOnlyList<SlotGeometryError> WithCommonUncertainty(ArrayDesign asCut, IShuntSlotModel slot, IReadOnlyList<SlotGeometryError> slots,
         FittedValue? lengthScale, FittedValue? conductanceScale)
     {
         bool tilt = asCut.CouplingKind == SlotCouplingKind.Tilt;
-        double a = asCut.Guide.BroadWall.Meters;
+        var f0 = asCut.DesignFrequency;
         return slots.Select((s, i) =>
         {
             var d = asCut.Slots[i];
             double sl = lengthScale is null ? 0 : d.Length.Meters * lengthScale.StandardError * 1e3;
             double rel = conductanceScale is null ? 0 : conductanceScale.StandardError / conductanceScale.Value;
-            double c = Math.Abs(d.Coupling);
-            double sc = tilt ? 0.5 * Math.Tan(c) * rel * 180 / Math.PI : a / (2 * Math.PI) * Math.Tan(Math.PI * c / a) * rel * 1e3;
+            double sc = rel == 0 ? 0 : CouplingPerConductance(slot, d.Coupling, d.Length, f0) * rel * (tilt ? 180 / Math.PI : 1e3);
             return s with
             {
                 Length = s.Length with { StandardError = Math.Sqrt(s.Length.StandardError * s.Length.StandardError + sl * sl) },
                 Coupling = s.Coupling with { StandardError = Math.Sqrt(s.Coupling.StandardError * s.Coupling.StandardError + sc * sc) },
             };
         }).ToArray();
+    }
+
+    /// <summary>|δc| per unit relative admittance change, Re(y* ∂y/∂c)/|∂y/∂c|², from the slot model (central differences, step 10⁻³ |c|).</summary>
+    internal static double CouplingPerConductance(IShuntSlotModel slot, double coupling, Length length, Frequency f)
+    {
+        double c = Math.Abs(coupling), h = 1e-3 * Math.Max(c, 1e-6);
+        var y = slot.Admittance(c, length, f);
+        var dy = (slot.Admittance(c + h, length, f) - slot.Admittance(c - h, length, f)) / (2 * h);
+        double m2 = dy.Real * dy.Real + dy.Imaginary * dy.Imaginary;
+        return m2 > 0 ? Math.Abs((System.Numerics.Complex.Conjugate(y) * dy).Real) / m2 : 0;
     }
 
     /// <summary>Runs the diagnosis on a prepared model (the benchmark's and the tests' entry).</summary>
@@ -107,6 +119,9 @@ internal static class PrototypeFit
         ArgumentNullException.ThrowIfNull(data);
         var stages = new List<FitStage>();
         var errors = PrototypeErrors.None(model.AsCut.Count);
+        var asked = (data.Network?.Frequencies ?? []).Concat(data.Cuts.Select(c => c.Frequency.Hertz)).ToArray();
+        if (model.IsCoupled && asked.Distinct().Count() > CouplingAcrossBand.Nodes)
+            model = model.WithCouplingBand(Frequency.FromHertz(asked.Min()), Frequency.FromHertz(asked.Max()));
         var network = data.Network is null ? null : new NetworkFitData(data.Network);
         var cuts = data.Cuts.Select(c => new CutFitData(c)).ToArray();
         IReadOnlyList<FitStage> uniform = [];
@@ -144,7 +159,7 @@ internal static class PrototypeFit
             }
         }
         FittedValue? Pick(int i) => uniform.LastOrDefault(s => s.Adopted && s.Values.Count > i)?.Values[i];
-        if (network is not null && slots.Count > 0) slots = WithCommonUncertainty(model.AsCut, slots, Pick(0), Pick(1));
+        if (network is not null && slots.Count > 0) slots = WithCommonUncertainty(model.AsCut, model.Slot, slots, Pick(0), Pick(1));
         return new PrototypeDiagnosis(model, errors, stages, recon, slots, Pick(0), Pick(1), Pick(2));
     }
 }

@@ -30,12 +30,16 @@ internal sealed class PrototypeModel
 {
     private readonly ConcurrentDictionary<double, CouplingMatrix> frozen = new();
     private readonly LongitudinalSlotPlacement[]? placements;
+    private readonly Lazy<CouplingAcrossBand?> across;
 
     /// <summary>The model of a plate as cut.</summary>
     /// <param name="asCut">The design as cut (lengths as on the cut list, prototype margin included).</param>
     /// <param name="slot">The slot model for fitting (normally a <see cref="FrequencyInterpolatedSlotModel"/> over a <see cref="SlotSurfaceModel"/>).</param>
     /// <param name="couplingGeometry">Errors at which the mutual impedances are evaluated (and then held); null: none.</param>
-    public PrototypeModel(ArrayDesign asCut, IShuntSlotModel slot, PrototypeErrors? couplingGeometry = null)
+    /// <param name="couplingBand">The band over which the mutual impedances are interpolated from a few fills
+    /// (<see cref="CouplingAcrossBand"/>); null, or a band wider than <see cref="CouplingAcrossBand.MaximumRelativeWidth"/>:
+    /// filled at every frequency asked for.</param>
+    public PrototypeModel(ArrayDesign asCut, IShuntSlotModel slot, PrototypeErrors? couplingGeometry = null, (Frequency Low, Frequency High)? couplingBand = null)
     {
         ArgumentNullException.ThrowIfNull(asCut);
         ArgumentNullException.ThrowIfNull(slot);
@@ -46,7 +50,17 @@ internal sealed class PrototypeModel
         if (IsCoupled)
             placements = Apply(CouplingGeometry).Slots
                 .Select(s => new LongitudinalSlotPlacement(s.Position, Length.FromMeters(s.Coupling), 0.5 * s.Length)).ToArray();
+        CouplingBand = couplingBand;
+        across = new Lazy<CouplingAcrossBand?>(() => placements is not null && couplingBand is { } b && CouplingAcrossBand.Interpolates(b.Low, b.High)
+            ? new CouplingAcrossBand(placements, asCut.Slots[0].Width, b.Low, b.High, CoupledSlotImpedances.HalfCosineCentreReferred)
+            : null);
     }
+
+    /// <summary>The band over which the mutual impedances are interpolated, or null.</summary>
+    public (Frequency Low, Frequency High)? CouplingBand { get; }
+
+    /// <summary>The same model with the mutual impedances interpolated over [low, high] (see <see cref="CouplingAcrossBand"/>).</summary>
+    public PrototypeModel WithCouplingBand(Frequency low, Frequency high) => new(AsCut, Slot, CouplingGeometry, (low, high));
 
     /// <summary>The plate as cut.</summary>
     public ArrayDesign AsCut { get; }
@@ -61,7 +75,7 @@ internal sealed class PrototypeModel
     public bool IsCoupled { get; }
 
     /// <summary>The same model with the mutual impedances re-evaluated at <paramref name="errors"/>.</summary>
-    public PrototypeModel RefreezeAt(PrototypeErrors errors) => new(AsCut, Slot, errors);
+    public PrototypeModel RefreezeAt(PrototypeErrors errors) => new(AsCut, Slot, errors, CouplingBand);
 
     /// <summary>The design with the errors applied (lengths, couplings, guide wavelength).</summary>
     public ArrayDesign Apply(PrototypeErrors errors)
@@ -102,7 +116,9 @@ internal sealed class PrototypeModel
         => IsCoupled ? CoupledArrayNetwork.Solve(design, slot, f, Frozen) : ArrayNetwork.Solve(design, slot, f);
 
     private CouplingMatrix Frozen(IReadOnlyList<LongitudinalSlotPlacement> slots, Length width, Frequency f)
-        => frozen.GetOrAdd(f.Hertz, _ => CoupledSlotImpedances.HalfCosineCentreReferred(placements!, width, f));
+        => frozen.GetOrAdd(f.Hertz, _ => across.Value is { } band && band.Covers(f)
+            ? band.At(f)
+            : CoupledSlotImpedances.HalfCosineCentreReferred(placements!, width, f));
 
     /// <summary>
     /// The co-polarised far field in the plane of the guide axis at the given angles (rad, the tool's sign: θ &gt; 0 toward

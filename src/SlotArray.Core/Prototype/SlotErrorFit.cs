@@ -62,7 +62,7 @@ internal static class SlotErrorFit
             int at = 0;
             for (int c = 0; c < cuts.Count; c++)
             {
-                var (e0, s, basis) = lin[c];
+                var (e0, s, basis, _) = lin[c];
                 var e = (Complex[])e0.Clone();
                 for (int j = 0; j < 2 * n; j++)
                     if (v[j] != 0) for (int i = 0; i < n; i++) e[i] += s[j][i] * v[j];
@@ -85,7 +85,7 @@ internal static class SlotErrorFit
         for (int c = 0; c < cuts.Count; c++)
         {
             var field = new Complex[cuts[c].Angles.Length];
-            var (e0, _, basis) = lin[c];
+            var (e0, _, basis, _) = lin[c];
             for (int a = 0; a < field.Length; a++) { var sum = Complex.Zero; for (int i = 0; i < n; i++) sum += basis[a, i] * e0[i]; field[a] = sum; }
             cuts[c].StartNuisance(field).CopyTo(start, nuisanceAt[c]);
         }
@@ -96,17 +96,51 @@ internal static class SlotErrorFit
         var steps = Enumerable.Repeat(1e-3, 2 * n).Concat(cuts.SelectMany(c => c.NuisanceSteps)).ToArray();
         var reg = Enumerable.Repeat(1 / PriorSigmaMm, n).Concat(Enumerable.Repeat(1 / (tilt ? 10 * PriorSigmaMm : PriorSigmaMm), n))
             .Concat(new double[p - 2 * n]).ToArray();
-        var fit = WeightedFit.Fit(names, Model, observed, sigma, start, steps, reg);
+        var fit = WeightedFit.Fit(names, Model, observed, sigma, start, steps, reg, jacobian: v => Jacobian(v, lin, cuts, nuisanceAt, m, zeroMeanLength));
 
         return Results(fit, reg, errors, n, tilt, unitL, unitC);
     }
 
     /// <summary>
-    /// The linearisation at each cut's frequency: the excitations e0 at <paramref name="errors"/>, their forward-difference
-    /// derivatives S (per fit unit) with respect to each slot's length error and then each slot's coupling error, and the
-    /// cut's field basis.
+    /// ∂data/∂v of the linearised model: the field is linear in the slot errors, its column for error j being B S_j
+    /// (O(angles) each once B S is formed); the nuisance columns by central differences; the zero-mean rows 1/N.
     /// </summary>
-    private static (Complex[] E0, Complex[][] S, Complex[,] Basis)[] Linearise(PrototypeModel model, PrototypeErrors errors, IShuntSlotModel slot,
+    private static double[,] Jacobian(double[] v, (Complex[] E0, Complex[][] S, Complex[,] Basis, Complex[][] W)[] lin, IReadOnlyList<CutFitData> cuts,
+        int[] nuisanceAt, int m, bool zeroMeanLength)
+    {
+        int n = lin[0].E0.Length;
+        var jac = new double[m, v.Length];
+        int row = 0;
+        for (int c = 0; c < cuts.Count; c++)
+        {
+            var (e0, s, basis, w) = lin[c];
+            int angles = cuts[c].Angles.Length, rows = cuts[c].Observed.Length;
+            var e = (Complex[])e0.Clone();
+            for (int j = 0; j < 2 * n; j++)
+                if (v[j] != 0) for (int i = 0; i < n; i++) e[i] += s[j][i] * v[j];
+            var field = new Complex[angles];
+            var d = new double[rows];
+            for (int a = 0; a < angles; a++) { var sum = Complex.Zero; for (int i = 0; i < n; i++) sum += basis[a, i] * e[i]; field[a] = sum; }
+            var nuisance = v.AsSpan(nuisanceAt[c], cuts[c].NuisanceCount);
+            for (int j = 0; j < 2 * n; j++)
+            {
+                cuts[c].DataDerivative(field, w[j], nuisance, d);
+                for (int i = 0; i < rows; i++) jac[row + i, j] = d[i];
+            }
+            cuts[c].NuisanceDerivatives(field, nuisance, jac, row, nuisanceAt[c]);
+            row += rows;
+        }
+        if (zeroMeanLength)
+            for (int j = 0; j < n; j++) { jac[row, j] = 1.0 / n; jac[row + 1, n + j] = 1.0 / n; }
+        return jac;
+    }
+
+    /// <summary>
+    /// The linearisation at each cut's frequency: the excitations e0 at <paramref name="errors"/>, their forward-difference
+    /// derivatives S (per fit unit) with respect to each slot's length error and then each slot's coupling error, the
+    /// cut's field basis B and the field derivatives W_j = B S_j.
+    /// </summary>
+    private static (Complex[] E0, Complex[][] S, Complex[,] Basis, Complex[][] W)[] Linearise(PrototypeModel model, PrototypeErrors errors, IShuntSlotModel slot,
         IReadOnlyList<CutFitData> cuts, (double Length, double Coupling) steps, (double Length, double Coupling) units)
     {
         int n = model.AsCut.Count;
@@ -128,7 +162,13 @@ internal static class SlotErrorFit
                 s[j] = col;
             });
             var basis = PrototypeModel.FieldBasis(model.Apply(errors), f, c.Angles);
-            return (E0: e0, S: s, Basis: basis);
+            var w = s.Select(col =>
+            {
+                var field = new Complex[c.Angles.Length];
+                for (int a = 0; a < field.Length; a++) { var sum = Complex.Zero; for (int i = 0; i < n; i++) sum += basis[a, i] * col[i]; field[a] = sum; }
+                return field;
+            }).ToArray();
+            return (E0: e0, S: s, Basis: basis, W: w);
         }).ToArray();
     }
 

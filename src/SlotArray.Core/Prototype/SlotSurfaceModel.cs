@@ -34,7 +34,7 @@ internal sealed class SlotSurfaceModel : IShuntSlotModel
         ArgumentNullException.ThrowIfNull(inner);
         ArgumentNullException.ThrowIfNull(slots);
         this.inner = inner;
-        bases = slots.Select(s => (Math.Abs(s.Coupling), s.Length.Meters)).Distinct().ToArray();
+        bases = slots.Select(s => (Math.Abs(s.Coupling), s.Length.Meters)).Distinct().OrderBy(b => b.Item1).ThenBy(b => b.Item2).ToArray();
         lengthRange = lengthFraction * bases.Max(b => b.L);
         couplingRange = couplingFraction * bases.Max(b => b.C);
     }
@@ -60,7 +60,10 @@ internal sealed class SlotSurfaceModel : IShuntSlotModel
         double c = Math.Abs(coupling), l = length.Meters;
         int best = -1;
         double bestDistance = double.PositiveInfinity;
-        for (int i = 0; i < bases.Length; i++)
+        // Bases are sorted by |c|: only those within the coupling range are candidates.
+        int first = 0, last = bases.Length;
+        while (first < last) { int mid = (first + last) / 2; if (bases[mid].C < c - couplingRange) first = mid + 1; else last = mid; }
+        for (int i = first; i < bases.Length && bases[i].C <= c + couplingRange; i++)
         {
             double dc = (c - bases[i].C) / couplingRange, dl = (l - bases[i].L) / lengthRange;
             double d = dc * dc + dl * dl;

@@ -34,8 +34,9 @@ internal sealed record WeightedFitResult(IReadOnlyList<FittedValue> Values, Matr
 /// s² (JᵀJ + λ²I)⁻¹ JᵀJ (JᵀJ + λ²I)⁻¹ from the Jacobian J of the weighted residuals and s² = χ²/(m − p) the noise
 /// variance the residual implies (W. H. Press et al., <i>Numerical Recipes</i>, 3rd ed., Cambridge 2007, Sec. 15.5
 /// and 15.6, from memory; the sandwich form for Tikhonov regularisation: W. Menke, <i>Geophysical Data Analysis:
-/// Discrete Inverse Theory</i>, 3rd ed., Academic Press 2012, Sec. 3.7 and 4.4, from memory). The Jacobian is by
-/// central differences of the model with the caller's steps.
+/// Discrete Inverse Theory</i>, 3rd ed., Academic Press 2012, Sec. 3.7 and 4.4, from memory). The Jacobian is the
+/// caller's (for a model linear in most of its parameters, whose columns are cheap in closed form) or else by central
+/// differences of the model with the caller's steps.
 /// </summary>
 internal static class WeightedFit
 {
@@ -48,8 +49,9 @@ internal static class WeightedFit
     /// <param name="steps">Central-difference step of each parameter.</param>
     /// <param name="regularisation">Tikhonov weight λ_i pulling parameter i toward 0 (in the weighted-residual unit), or null.</param>
     /// <param name="maximumIterations">Iteration limit of the minimiser.</param>
+    /// <param name="jacobian">∂model/∂p (data × parameters, unweighted) at a parameter vector, or null for central differences.</param>
     public static WeightedFitResult Fit(IReadOnlyList<string> names, Func<double[], double[]> model, double[] observed, double[] sigma,
-        double[] start, double[] steps, double[]? regularisation = null, int maximumIterations = 40)
+        double[] start, double[] steps, double[]? regularisation = null, int maximumIterations = 40, Func<double[], double[,]>? jacobian = null)
     {
         int m = observed.Length, p = start.Length;
         int rows = m + (regularisation is null ? 0 : p);
@@ -77,6 +79,16 @@ internal static class WeightedFit
         Matrix<double> Jac(Vector<double> v, Vector<double> _)
         {
             var j = Matrix<double>.Build.Dense(rows, p);
+            if (jacobian is not null)
+            {
+                var d = jacobian(v.ToArray());
+                for (int c = 0; c < p; c++)
+                {
+                    for (int i = 0; i < m; i++) j[i, c] = d[i, c] / sigma[i];
+                    if (regularisation is not null) j[m + c, c] = regularisation[c];
+                }
+                return j;
+            }
             for (int c = 0; c < p; c++)
             {
                 var plus = v.Clone(); plus[c] += steps[c];

@@ -30,13 +30,17 @@ internal sealed class FrequencyInterpolatedSlotModel : IShuntSlotModel
     public const int DefaultOrder = 6;
 
     private readonly ConcurrentDictionary<(double Coupling, double Length, long Node), Lazy<Complex>> _nodes = new();
+    private readonly bool memoise;
 
     /// <summary>Wraps <paramref name="inner"/>.</summary>
     /// <param name="inner">The model whose admittance is interpolated.</param>
     /// <param name="reference">The reference frequency f_ref of the node grid (normally the design frequency), &gt; 0.</param>
     /// <param name="step">Node spacing h as a fraction of f_ref, 1e-5 ≤ h ≤ 0.05; default <see cref="DefaultStep"/>.</param>
     /// <param name="order">Number of nodes per interpolant, 2 ≤ n ≤ 12; default <see cref="DefaultOrder"/>.</param>
-    public FrequencyInterpolatedSlotModel(IShuntSlotModel inner, Frequency reference, double step = DefaultStep, int order = DefaultOrder)
+    /// <param name="memoise">Whether node values are kept per slot geometry (true: a sweep of fixed slots); false for an
+    /// inner model that is itself cheap and caches what it needs, asked about ever-new geometries (a fit), where keeping
+    /// every node would only grow memory. The values are the same either way.</param>
+    public FrequencyInterpolatedSlotModel(IShuntSlotModel inner, Frequency reference, double step = DefaultStep, int order = DefaultOrder, bool memoise = true)
     {
         ArgumentNullException.ThrowIfNull(inner);
         if (!(reference.Hertz > 0 && double.IsFinite(reference.Hertz)))
@@ -46,6 +50,7 @@ internal sealed class FrequencyInterpolatedSlotModel : IShuntSlotModel
         if (order is < 2 or > 12)
             throw new ArgumentOutOfRangeException(nameof(order), order, "the interpolant needs 2 to 12 nodes");
         Inner = inner;
+        this.memoise = memoise;
         Reference = reference;
         Step = step;
         Order = order;
@@ -136,6 +141,7 @@ internal sealed class FrequencyInterpolatedSlotModel : IShuntSlotModel
     private Complex Node(double coupling, Length length, long k)
     {
         double c = Math.Abs(coupling);   // y is even in the coupling (see remarks)
+        if (!memoise) return Inner.Admittance(c, length, NodeFrequency(k));
         return _nodes.GetOrAdd((c, length.Meters, k), key => new Lazy<Complex>(() => Inner.Admittance(c, length, NodeFrequency(k)))).Value;
     }
 

@@ -54,7 +54,8 @@ internal sealed class BarycentricSurface
     /// <summary>True when (dx, dy) lies in the rectangle.</summary>
     public bool Contains(double dx, double dy) => Math.Abs(dx) <= HalfWidthX && Math.Abs(dy) <= HalfWidthY;
 
-    private static (double[] X, double[] W) Nodes(double half, int n)
+    /// <summary>The n Chebyshev points of the second kind on [−half, half] (0 exactly at the centre of an odd count) and their barycentric weights.</summary>
+    public static (double[] X, double[] W) Nodes(double half, int n)
     {
         if (half == 0) return ([0.0], [1.0]);
         var x = new double[n];
@@ -93,7 +94,7 @@ internal sealed class BarycentricSurface
     }
 
     /// <summary>Normalised barycentric coefficients ℓ_j(x) (Σ ℓ_j = 1); a Kronecker delta at a node.</summary>
-    private static void Coefficients(double[] nodes, double[] weights, double x, Span<double> c)
+    public static void Coefficients(double[] nodes, double[] weights, double x, Span<double> c)
     {
         if (nodes.Length == 1) { c[0] = 1; return; }
         for (int j = 0; j < nodes.Length; j++)
