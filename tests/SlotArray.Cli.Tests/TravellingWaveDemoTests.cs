@@ -50,6 +50,17 @@ public class TravellingWaveDemoTests
         var parts = DesignRuns.Records(File.ReadAllText(Path.Combine(Demo.Value.Folder, "parts.csv"))).Where(r => !r[0].StartsWith('#')).ToList();
         Assert.Equal(3, parts.Count);   // header, flare plates, filter plates
         Assert.Equal("2", parts[1][1]);
+        // The drawing of the plates (issue 18 item 5): the end view with the flare and filter plates, and the rows of parts.csv.
+        var svg = XDocument.Load(Path.Combine(Demo.Value.Folder, "parts.svg"));
+        var ids = svg.Root!.Descendants().Select(e => (string?)e.Attribute("id")).Where(id => id is not null).ToHashSet();
+        Assert.Superset(new HashSet<string?> { "tube", "filter-plates", "frame" }, ids);
+        Assert.Equal(2, svg.Root.Descendants().Count(e => (string?)e.Attribute("class") == "plate"));
+        string text = string.Concat(svg.Root.Descendants().Where(e => e.Name.LocalName == "text").Select(e => e.Value + "\n"));
+        foreach (var row in parts.Skip(1))
+            foreach (string cell in row.Skip(1)) Assert.Contains(cell, text);
+        Check.Absolute(root.GetProperty("flare").GetProperty("aperture_m").GetDouble() * 1e3,
+            double.Parse(System.Text.RegularExpressions.Regex.Match(text, "aperture ([0-9.]+)").Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture),
+            0.0005, "the drawn aperture is design.json's (3 decimals of mm)");
     }
 
     [Fact]

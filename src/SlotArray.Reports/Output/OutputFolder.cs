@@ -61,6 +61,11 @@ internal static class OutputFolder
             Many = r => r.Parts.Count == 0 ? [] : [("parts.csv", Utf8(PartsCsv.ToText(r)))],
             Owns = n => n == "parts.csv",
         },
+        new("parts.svg", (r, s) => s.Write(Utf8(PartsSvg.Build(r) ?? "")))
+        {
+            Many = r => PartsSvg.Build(r) is { } svg ? [("parts.svg", Utf8(svg))] : [],
+            Owns = n => n == "parts.svg",
+        },
         new("input.s1p", Text(TouchstoneWriter.Write)),
         new("summary.md", Text(SummaryMarkdown.Write)),
         new("spec.yaml", (r, s) => s.Write(new UTF8Encoding(false).GetBytes(r.SpecText ?? "# the spec's text was not given to this writer\n"))),
