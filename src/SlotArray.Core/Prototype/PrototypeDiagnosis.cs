@@ -51,9 +51,10 @@ internal static class PrototypeFit
     }
 
     /// <summary>
-    /// Chebyshev nodes per variable of the fit's slot surfaces: 9. With 5, the surfaces' error in the moment-method
-    /// admittance near resonance biased the fitted length error by +0.011 % (noise-free synthetic data of a 16-slot uniform
-    /// WR-90 array, 0.6 % injected: 0.6107 %); with 9 it is −0.0001 %, as with the design's own slot model (0.5999 %).
+    /// Chebyshev nodes in length of the fit's slot surfaces: 9 (5 in coupling, where the admittance is smoother). With 5,
+    /// the surfaces' error in the moment-method admittance near resonance biased the fitted length error by +0.011 %
+    /// (noise-free synthetic data of a 16-slot uniform WR-90 array, 0.6 % injected: 0.6107 %); with 9 it is −0.0001 %, as
+    /// with the design's own slot model (0.5999 %).
     /// </summary>
     public const int SurfaceNodes = 9;
 
