@@ -53,6 +53,11 @@ public class PlanarDesignCommandTests
         Assert.All(slots, s => Assert.InRange(s.GetProperty("branch").GetInt32(), 1, 4));
         Assert.Equal(fig.GetProperty("h_plane_peak_sidelobe_db").GetDouble(), PeakSidelobe(x, y, e, k, 0), 0.05);
         Assert.Equal(fig.GetProperty("e_plane_peak_sidelobe_db").GetDouble(), PeakSidelobe(x, y, e, k, Math.PI / 2), 0.05);
+        // A second run into the same folder replaces it (the folder holds only this tool's files) and writes the same design.json.
+        string first = File.ReadAllText(Path.Combine(dir, "design.json"));
+        var again = DesignRuns.Run("design", spec, "-o", dir);
+        Assert.True(again.Code == ExitCodes.Ok, again.Err);
+        Assert.Equal(first, File.ReadAllText(Path.Combine(dir, "design.json")));
     }
 
     /// <summary>Highest lobe outside the main beam (walked down to its first minima) of the cut at azimuth φ, dB.</summary>

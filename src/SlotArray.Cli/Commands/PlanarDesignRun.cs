@@ -19,7 +19,7 @@ internal static class PlanarDesignRun
     /// <summary>Designs, writes and prints; returns the exit code.</summary>
     public static int Run(ArrayRequest request, string? outDir, SlotCache? cache, TextWriter output, TextWriter error)
     {
-        string folder = OutputFolderCheck.Prepare(outDir ?? DesignCommand.DefaultFolder(request.Name), replacesWhole: true);
+        string folder = OutputFolderCheck.Prepare(outDir ?? DesignCommand.DefaultFolder(request.Name), replacesWhole: true, PlanarOutputs.PossibleNames);
         var clock = Stopwatch.StartNew();
         var p = request.Planar!;
         var source = DesignCommand.SourceFor(request, cache, error, out _);

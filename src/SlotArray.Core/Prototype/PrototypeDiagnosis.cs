@@ -50,12 +50,20 @@ internal static class PrototypeFit
         return Run(model, data);
     }
 
+    /// <summary>
+    /// Chebyshev nodes in length of the fit's slot surfaces: 9 (5 in coupling, where the admittance is smoother). With 5,
+    /// the surfaces' error in the moment-method admittance near resonance biased the fitted length error by +0.011 %
+    /// (noise-free synthetic data of a 16-slot uniform WR-90 array, 0.6 % injected: 0.6107 %); with 9 it is −0.0001 %, as
+    /// with the design's own slot model (0.5999 %).
+    /// </summary>
+    public const int SurfaceNodes = 9;
+
     /// <summary>The slot model a fit uses: surfaces around the slots as cut, interpolated in frequency.</summary>
     public static IShuntSlotModel FitSlotModel(ArrayDesign asCut, IShuntSlotModel slot)
     {
         ArgumentNullException.ThrowIfNull(asCut);
         var inner = slot is FrequencyInterpolatedSlotModel fi ? fi.Inner : slot;
-        var surfaces = new SlotSurfaceModel(inner, [.. asCut.Slots.Select(s => (s.Coupling, s.Length))], 0.025, 0.1);
+        var surfaces = new SlotSurfaceModel(inner, [.. asCut.Slots.Select(s => (s.Coupling, s.Length))], 0.025, 0.1, SurfaceNodes);
         return new FrequencyInterpolatedSlotModel(surfaces, asCut.DesignFrequency, memoise: false);
     }
 

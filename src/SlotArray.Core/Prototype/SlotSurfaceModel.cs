@@ -22,6 +22,8 @@ internal sealed class SlotSurfaceModel : IShuntSlotModel
     private readonly (double C, double L)[] bases;
     private readonly double couplingRange;
     private readonly double lengthRange;
+    private readonly int nodes;
+    private readonly int couplingNodes;
     private readonly ConcurrentDictionary<(int Base, double Hz), Lazy<BarycentricSurface>> surfaces = new();
 
     /// <summary>Surfaces around the given slots.</summary>
@@ -29,11 +31,16 @@ internal sealed class SlotSurfaceModel : IShuntSlotModel
     /// <param name="slots">(coupling, length) of each slot as cut; slots of equal |c| and L share one surface.</param>
     /// <param name="lengthFraction">Half-width of each surface in length, as a fraction of the slot's length (e.g. 0.03).</param>
     /// <param name="couplingFraction">Half-width in |c|, as a fraction of the largest |c| (e.g. 0.1).</param>
-    public SlotSurfaceModel(IShuntSlotModel inner, IReadOnlyList<(double Coupling, Length Length)> slots, double lengthFraction, double couplingFraction)
+    /// <param name="nodes">Chebyshev nodes in length (odd, ≥ 3).</param>
+    /// <param name="couplingNodes">Chebyshev nodes in coupling (odd, ≥ 3).</param>
+    public SlotSurfaceModel(IShuntSlotModel inner, IReadOnlyList<(double Coupling, Length Length)> slots, double lengthFraction, double couplingFraction,
+        int nodes = 5, int couplingNodes = 5)
     {
         ArgumentNullException.ThrowIfNull(inner);
         ArgumentNullException.ThrowIfNull(slots);
         this.inner = inner;
+        this.nodes = nodes;
+        this.couplingNodes = couplingNodes;
         bases = slots.Select(s => (Math.Abs(s.Coupling), s.Length.Meters)).Distinct().OrderBy(b => b.Item1).ThenBy(b => b.Item2).ToArray();
         lengthRange = lengthFraction * bases.Max(b => b.L);
         couplingRange = couplingFraction * bases.Max(b => b.C);
@@ -72,7 +79,7 @@ internal sealed class SlotSurfaceModel : IShuntSlotModel
         if (best < 0) return inner.Admittance(c, length, f);
         var (c0, l0) = bases[best];
         var surface = surfaces.GetOrAdd((best, f.Hertz), key => new Lazy<BarycentricSurface>(() =>
-            new BarycentricSurface(couplingRange, lengthRange, 5, (dc, dl) => inner.Admittance(c0 + dc, Length.FromMeters(l0 + dl), f)))).Value;
+            new BarycentricSurface(couplingRange, lengthRange, couplingNodes, (dc, dl) => inner.Admittance(c0 + dc, Length.FromMeters(l0 + dl), f), nodes))).Value;
         return surface.Evaluate(c - c0, l - l0);
     }
 

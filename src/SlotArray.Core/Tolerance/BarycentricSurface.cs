@@ -24,15 +24,18 @@ internal sealed class BarycentricSurface
     /// <param name="halfWidthY">Ry ≥ 0.</param>
     /// <param name="nodes">Nodes per variable; odd so that the centre is a node; default 5.</param>
     /// <param name="f">The function, called once per node (in row-major order).</param>
-    public BarycentricSurface(double halfWidthX, double halfWidthY, int nodes, Func<double, double, Complex> f)
+    /// <param name="secondNodes">Nodes of the second variable (odd, ≥ 3) when it differs from <paramref name="nodes"/>; 0: the same.</param>
+    public BarycentricSurface(double halfWidthX, double halfWidthY, int nodes, Func<double, double, Complex> f, int secondNodes = 0)
     {
         ArgumentNullException.ThrowIfNull(f);
-        if (nodes < 3 || nodes % 2 == 0) throw new ArgumentOutOfRangeException(nameof(nodes), nodes, "the node count must be odd and at least 3 so that the centre is a node");
+        if (secondNodes == 0) secondNodes = nodes;
+        if (nodes < 3 || nodes % 2 == 0 || secondNodes < 3 || secondNodes % 2 == 0)
+            throw new ArgumentOutOfRangeException(nameof(nodes), nodes, "the node count must be odd and at least 3 so that the centre is a node");
         if (!(halfWidthX >= 0) || !(halfWidthY >= 0)) throw new ArgumentOutOfRangeException(nameof(halfWidthX), "the half-widths must be zero or positive");
         HalfWidthX = halfWidthX;
         HalfWidthY = halfWidthY;
         (nodesX, weightsX) = Nodes(halfWidthX, nodes);
-        (nodesY, weightsY) = Nodes(halfWidthY, nodes);
+        (nodesY, weightsY) = Nodes(halfWidthY, secondNodes);
         values = new Complex[nodesX.Length * nodesY.Length];
         for (int i = 0; i < nodesX.Length; i++)
             for (int j = 0; j < nodesY.Length; j++)

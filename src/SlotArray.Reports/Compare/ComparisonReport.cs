@@ -89,6 +89,9 @@ internal static class ComparisonReportBuilder
             }
             rows.Add(new ComparisonRow("best-match frequency (GHz)", ResponseComparison.BestMatch(f, net.S11) * 1e-9, ResponseComparison.BestMatch(f, predicted) * 1e-9));
             rows.Add(new ComparisonRow($"|S11| at {f0} (dB)", Db(ResponseComparison.At(f, net.S11, f0.Hertz)), Db(design.Sweep.AtDesign.S11)));
+            double fittedBest = ResponseComparison.BestMatch(f, fitted);
+            notes.Add(FormattableString.Invariant(
+                $"fitted model of the plate: best match at {fittedBest * 1e-9:0.0000} GHz ({(fittedBest / f0.Hertz - 1) * 100:+0.000;-0.000} % from f0), the diagnosed frequency offset"));
             if (!coupledDesign && d.CouplingKind == Core.Slots.SlotCouplingKind.Offset)
             {
                 var coupled = PrototypeErrors.None(d.Count);

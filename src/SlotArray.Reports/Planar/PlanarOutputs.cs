@@ -10,6 +10,13 @@ namespace SlotArray.Reports.Planar;
 /// </summary>
 internal static class PlanarOutputs
 {
+    /// <summary>Every name a planar design may write (the branch cut lists for up to 200 branches), for the output-folder check.</summary>
+    public static IReadOnlyList<string> PossibleNames { get; } =
+    [
+        "design.json", "summary.md", "input.s1p", "cutlist-feed.csv", "plate.svg", "plate.dxf", "feed-wall.dxf", "pattern-uv.png",
+        "pattern-cuts.png", "sweep.png", .. Enumerable.Range(1, 200).Select(b => $"cutlist-branch-{b:00}.csv"),
+    ];
+
     /// <summary>The files, in order.</summary>
     public static IReadOnlyList<(string Name, byte[] Bytes)> Render(PlanarResult r, double? designSidelobesDb)
     {
@@ -44,7 +51,7 @@ internal static class PlanarOutputs
     public static IReadOnlyList<string> WriteAll(PlanarResult r, double? designSidelobesDb, string directory)
     {
         var files = Render(r, designSidelobesDb);
-        OutputFolder.WriteRendered(directory, files.Select(f => f.Name), () => files);
+        OutputFolder.WriteRendered(directory, PossibleNames, () => files);
         return [.. files.Select(f => f.Name)];
     }
 

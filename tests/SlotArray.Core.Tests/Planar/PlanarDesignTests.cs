@@ -171,6 +171,27 @@ public class PlanarDesignTests
         Check.Absolute(linear.PeakSidelobeDb!.Value, PatternMetrics.Measure(af.Cut(0, grid)).PeakSidelobeDb!.Value, 0.2, "the 10-slot Taylor line's own sidelobes");
     }
 
+    /// <summary>
+    /// The feed guide's series resistances: end feed Σ r = 1 with r ∝ P (a matched standing-wave line of series elements at
+    /// current maxima, Elliott 1981 Ch. 8 [M]); centre feed through a series tee, each half inverted by its quarter wave:
+    /// the tee is matched, 1/Σr_left + 1/Σr_right = 1, and the halves take P_left : P_right (their power is |I|²/Σr) [D],
+    /// for an asymmetric split too.
+    /// </summary>
+    [Fact]
+    public void Feed_resistances_match_the_feed_and_split_the_power()
+    {
+        double[] p = [1, 3, 2, 5, 4];
+        double[] y = [-2, -1, 1, 2, 3];
+        var end = FeedDesign.Resistances(p, FeedPosition.End, y);
+        Check.Relative(1, end.Sum(), 1e-12, "matched end-fed line: Σ r = 1");
+        Check.Relative(p[3] / p[0], end[3] / end[0], 1e-12, "r ∝ P");
+        var centre = FeedDesign.Resistances(p, FeedPosition.Centre, y);
+        double left = centre[0] + centre[1], right = centre[2] + centre[3] + centre[4];
+        Check.Relative(1, 1 / left + 1 / right, 1e-12, "series tee matched");
+        Check.Relative((p[0] + p[1]) / (p[2] + p[3] + p[4]), (1 / left) / (1 / right), 1e-12, "half powers |I|²/Σr in the asked ratio");
+        Check.Relative(p[4] / p[2], centre[4] / centre[2], 1e-12, "within a half r ∝ P");
+    }
+
     /// <summary>A request a slot cannot meet is refused naming the branch (the "infeasible requests exit 1 naming the branch/slot").</summary>
     [Fact]
     public void Infeasible_request_names_the_branch()
