@@ -8,6 +8,10 @@ namespace SlotArray.Cli.Tests;
 /// no escape sequence anywhere; and SIGINT (what Ctrl-C sends) ends a long run with exit 130 and no output folder
 /// (130 = 128 + SIGINT 2, the shell convention; POSIX.1-2017, Shell Command Language, 2.8.2 "Exit Status for Commands").
 /// </summary>
+/// <remarks>Runs alone (<see cref="SignalTimingCollection"/>): with the other CLI tests in the same host, thread-pool
+/// starvation delayed this test's own continuations past its one-minute limit while the run itself had stopped within
+/// 0.1 s of SIGINT (measured by hand from a separate process at load average 27-30).</remarks>
+[Collection(SignalTimingCollection.Name)]
 public class ProgressTests
 {
     private static Process Start(params string[] args)
@@ -63,4 +67,12 @@ public class ProgressTests
         Assert.Contains("interrupted: nothing written", err);
         Assert.False(Directory.Exists(dir), "an interrupted run wrote its output folder");
     }
+}
+
+/// <summary>Tests that time a process's response to a signal: run after the parallel ones, not beside them.</summary>
+[CollectionDefinition(Name, DisableParallelization = true)]
+public sealed class SignalTimingCollection
+{
+    /// <summary>The collection's name.</summary>
+    public const string Name = "signal timing";
 }
