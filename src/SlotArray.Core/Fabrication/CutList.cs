@@ -82,8 +82,9 @@ internal sealed record CutList(Datums Datums, CutListGuide Guide, IReadOnlyList<
             notes.Add(new DesignWarning("cutlist-square-ends", SlotEnd.SquareEndNote + "."));
         if (rows.Any(r => r.Tilt is not null))
             notes.Add(new DesignWarning("cutlist-edge-slots",
-                "edge slots: length is the path along the cut on the inner surfaces; depth of cut into each broad wall is measured "
-                + "from the outer narrow-wall face (geometric estimate: calibrate against measured resonance)."));
+                "edge slots: length is the path along the cut on the inner surfaces (a geometric path); depth of cut into each broad "
+                + "wall is measured from the outer narrow-wall face and comes from the slot model named in summary.md: check the "
+                + "resonance on a test cut before cutting the series."));
         return new CutList(datums, guide, rows, notes);
     }
 
