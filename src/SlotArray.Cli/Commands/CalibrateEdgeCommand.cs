@@ -73,25 +73,12 @@ internal static class CalibrateEdgeCommand
 
     private static int Run(EdgeSlotCalibrationPlan plan, string outDir, string? enginePath, int jobs, TextWriter output, TextWriter error)
     {
-        OpenEmsEngine engine;
-        try { engine = OpenEmsEngine.Locate(enginePath); }
-        catch (EngineNotFoundException e) { throw new UserInputException(e.Message); }
+        var engine = EngineRuns.Locate(enginePath);
         var runs = plan.Runs();
         var store = new RunStore(Path.Combine(outDir, "runs"));
         error.WriteLine(string.Format(Inv, "calibrate-edge: {0} runs, {1} mesh, {2:0.00} to {3:0.00} Mcells, {4} at a time; cache {5}", runs.Count,
             plan.Density.ToString().ToLowerInvariant(), runs.Min(r => r.Model.Mesh.Cells) / 1e6, runs.Max(r => r.Model.Mesh.Cells) / 1e6, jobs, store.Root));
-        using var stop = new StopSignal();
-        IReadOnlyList<RunOutcome> outcomes;
-        try
-        {
-            outcomes = RunQueue.RunAllAsync(engine, store, runs, jobs, new RunProgressPrinter(error, RunProgressPrinter.StderrIsTerminal(error)), stop.Token)
-                .GetAwaiter().GetResult();
-        }
-        catch (OperationCanceledException)
-        {
-            error.WriteLine($"stopped: the finished runs are kept in {store.Root}; run the same command again to resume");
-            return StopSignal.ExitCode;
-        }
+        if (EngineRuns.RunOrStop(engine, store, runs, jobs, error) is not { } outcomes) return StopSignal.ExitCode;
         var rows = plan.Reduce(outcomes);
         var s = MeshSettings.Of(plan.Density);
         var provenance = new[]

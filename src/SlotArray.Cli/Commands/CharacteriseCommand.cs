@@ -64,9 +64,7 @@ internal static class CharacteriseCommand
         if (request.Slots.Type == SlotType.InclinedSeries)
             throw new UserInputException($"{specPath}: characterise builds longitudinal and edge slots; inclined series slots are not built yet");
         if (couplings < 1 || lengths < 1 || freqs < 1) throw new UserInputException("--offsets, --lengths and --frequencies must be at least 1");
-        OpenEmsEngine engine;
-        try { engine = OpenEmsEngine.Locate(enginePath); }
-        catch (EngineNotFoundException e) { throw new UserInputException(e.Message); }
+        var engine = EngineRuns.Locate(enginePath);
 
         error.WriteLine($"characterise '{request.Name}': designing with the built-in model to find the offsets (tilts) the design needs ...");
         var design = ArrayPipeline.Run(request).Design;
@@ -76,18 +74,7 @@ internal static class CharacteriseCommand
         error.WriteLine(string.Format(Inv, "{0} runs ({1} geometries and their plain-tube calibrations), {2} mesh, {3:0.00} to {4:0.00} Mcells, {5} at a time; cache {6}",
             runs.Count, plan.Samples.Count, density.ToString().ToLowerInvariant(), runs.Min(r => r.Model.Mesh.Cells) / 1e6, runs.Max(r => r.Model.Mesh.Cells) / 1e6,
             jobs, store.Root));
-        using var stop = new StopSignal();
-        IReadOnlyList<RunOutcome> outcomes;
-        try
-        {
-            outcomes = RunQueue.RunAllAsync(engine, store, runs, jobs, new RunProgressPrinter(error, RunProgressPrinter.StderrIsTerminal(error)), stop.Token)
-                .GetAwaiter().GetResult();
-        }
-        catch (OperationCanceledException)
-        {
-            error.WriteLine($"stopped: the finished runs are kept in {store.Root}; run the same command again to resume");
-            return StopSignal.ExitCode;
-        }
+        if (EngineRuns.RunOrStop(engine, store, runs, jobs, error) is not { } outcomes) return StopSignal.ExitCode;
         var results = plan.Reduce(outcomes);
         string table = SlotTableCsv.ToText(results, Provenance(plan, runs, results, store.EngineVersion(runs)), plan.IsEdge);
         Directory.CreateDirectory(outDir);

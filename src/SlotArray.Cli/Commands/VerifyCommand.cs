@@ -44,9 +44,7 @@ internal static class VerifyCommand
         {
             throw new UserInputException(e.Message);
         }
-        OpenEmsEngine engine;
-        try { engine = OpenEmsEngine.Locate(enginePath); }
-        catch (EngineNotFoundException e) { throw new UserInputException(e.Message); }
+        var engine = EngineRuns.Locate(enginePath);
         string outDir = Path.Combine(dir, "verify");
         var store = new RunStore(Path.Combine(outDir, "runs"));
         if (design.Slots.Count > LargeArraySlots)

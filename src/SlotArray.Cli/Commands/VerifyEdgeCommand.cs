@@ -45,9 +45,7 @@ internal static class VerifyEdgeCommand
         var request = DesignCommand.Load(specPath, error, "nothing verified");
         if (request.Slots.Type != SlotType.Edge || request.Feed.Type != FeedType.TravellingWave)
             throw new UserInputException($"{specPath}: verify-edge builds travelling-wave edge-slot arrays");
-        OpenEmsEngine engine;
-        try { engine = OpenEmsEngine.Locate(enginePath); }
-        catch (EngineNotFoundException e) { throw new UserInputException(e.Message); }
+        var engine = EngineRuns.Locate(enginePath);
         var result = ArrayPipeline.Run(request);
         var d = result.Design;
         var g = request.Guide;
@@ -69,10 +67,8 @@ internal static class VerifyEdgeCommand
         var store = new RunStore(Path.Combine(outDir, "runs"));
         error.WriteLine(string.Format(Inv, "verify-edge '{0}': {1} slots, {2} mesh, {3:0.00} Mcells, surroundings {4}; cache {5}", d.Name, d.Count,
             density.ToString().ToLowerInvariant(), run.Model.Mesh.Cells / 1e6, surround.Label, store.Root));
-        using var stop = new StopSignal();
-        RunOutcome outcome1;
-        try { outcome1 = RunQueue.RunAllAsync(engine, store, [run], 1, new RunProgressPrinter(error, RunProgressPrinter.StderrIsTerminal(error)), stop.Token).GetAwaiter().GetResult()[0]; }
-        catch (OperationCanceledException) { return StopSignal.ExitCode; }
+        if (EngineRuns.RunOrStop(engine, store, [run], 1, error) is not { } outcomes) return StopSignal.ExitCode;
+        var outcome1 = outcomes[0];
         var predicted = ArrayNetwork.Solve(d, ArrayPipeline.SlotModelFor(request), d.DesignFrequency);
         var lines = new List<string> { "# verify-edge: full-wave stick (ports: feed beyond the feed end, matched beyond the load end; PEC walls)", "frequency_ghz,s11_power,s21_power" };
         lines.AddRange(outcome1.Response.Points.Select(p => string.Format(Inv, "{0:0.#####},{1:0.######},{2:0.######}", p.FrequencyHz * 1e-9, p.S11.Magnitude * p.S11.Magnitude, p.S21.Magnitude * p.S21.Magnitude)));
