@@ -12,6 +12,20 @@ internal sealed partial class SpecBuilder
     private static IReadOnlyList<string> FilterKeys => SpecKeys.Filter.Names;
 
     /// <summary>Whether a key's scalar is the word <c>auto</c>.</summary>
+    /// <summary>
+    /// An optional length of a filter or flare block: null when absent or <c>auto</c>; otherwise above 0 and up to
+    /// <paramref name="maxMeters"/>, with <paramref name="good"/> cleared on an error (reported at the key).
+    /// </summary>
+    private Length? LengthOrAuto(Section s, string key, string example, double maxMeters, ref bool good)
+    {
+        if (!s.Has(key) || IsAuto(s[key])) return null;
+        var v = Quantity(s, key, QuantityKind.Length, false, example);
+        if (v is null) { good = false; return null; }
+        good &= Require(s, key, v > 0 && v <= maxMeters,
+            $"'{key}' must be a length above 0 and up to {Num(maxMeters)} m, got {Num(v.Value * 1e3)} mm");
+        return Length.FromMeters(v.Value);
+    }
+
     private static bool IsAuto(SpecNode? node) => node is ScalarNode { IsNull: false } sc && sc.Value.Trim().Equals("auto", StringComparison.OrdinalIgnoreCase);
 
     /// <summary>
@@ -31,14 +45,7 @@ internal sealed partial class SpecBuilder
         var s = Sub(root, "filter", FilterKeys, false);
         if (s is null) { ok = false; return null; }
         bool good = true;
-        Length? Dimension(string key, string example)
-        {
-            if (!s.Has(key) || IsAuto(s[key])) return null;
-            var v = Quantity(s, key, QuantityKind.Length, false, example);
-            if (v is null) { good = false; return null; }
-            good &= Require(s, key, v > 0 && v <= 1, $"'{key}' must be a length above 0 and up to 1 m, got {Num(v.Value * 1e3)} mm");
-            return Length.FromMeters(v.Value);
-        }
+        Length? Dimension(string key, string example) => LengthOrAuto(s, key, example, 1, ref good);
         var spacing = Dimension("spacing", "12 mm");
         var depth = Dimension("depth", "15 mm");
         ok = good;
@@ -73,14 +80,7 @@ internal sealed partial class SpecBuilder
         var s = Sub(root, "flare", FlareKeys, false);
         if (s is null) { ok = false; return null; }
         bool good = true;
-        Length? Dimension(string key, string example)
-        {
-            if (!s.Has(key) || IsAuto(s[key])) return null;
-            var v = Quantity(s, key, QuantityKind.Length, false, example);
-            if (v is null) { good = false; return null; }
-            good &= Require(s, key, v > 0 && v <= 10, $"'{key}' must be a length above 0 and up to 10 m, got {Num(v.Value * 1e3)} mm");
-            return Length.FromMeters(v.Value);
-        }
+        Length? Dimension(string key, string example) => LengthOrAuto(s, key, example, 10, ref good);
         var length = Dimension("length", "150 mm");
         var aperture = Dimension("aperture", "100 mm");
         var phase = FlareDesign.DefaultPhaseError;
