@@ -52,7 +52,8 @@ internal static class VerifyEdgeCommand
         var section = new GuideSection(g.BroadWall.Millimeters, g.NarrowWall.Millimeters, g.WallThickness.Millimeters);
         var slots = d.Slots.Select(s =>
         {
-            double depth = g.WallThickness.Millimeters + (s.Length.Millimeters - g.NarrowWall.Millimeters / Math.Cos(s.Coupling)) / 2;
+            double depth = (Core.Fabrication.Datums.EdgeSlotDepthOfCut(s.Length, Core.Quantities.Angle.FromRadians(s.Coupling), g.NarrowWall, g.WallThickness)
+                ?? throw new UserInputException($"slot {s.Index}: its length does not reach across the narrow wall, so it has no cut depth to build")).Millimeters;
             return new PlacedSlot(new EdgeCut(s.Coupling * 180 / Math.PI, depth, s.Width.Millimeters), s.Position.Millimeters);
         }).ToList();
         double clearance = SlotCharacterisation.PortClearanceMm + (g.NarrowWall.Millimeters + 2 * g.WallThickness.Millimeters) / 2;
