@@ -56,6 +56,29 @@ internal static class LobeSearch
     }
 
     /// <summary>
+    /// True when the refined value of the local maximum at <paramref name="i"/> (<see cref="RefineMaximum"/>) is certainly
+    /// below <paramref name="level"/>, so that a search for the highest lobe may skip it. On equally spaced angles the
+    /// vertex of the parabola through (−h, y1 − a), (0, y1), (h, y1 − b) (a, b ≥ 0, in dB) is y1 + (a − b)²/(8(a + b))
+    /// ≤ y1 + max(a, b)/8 (derived here), i.e. a power at most p1 (p1/min(p0, p2))^{1/8}; the test keeps a margin of
+    /// 1e-6 relative for rounding. False (refine it) at a grid end, on unequal spacing or when a sample is not positive.
+    /// </summary>
+    /// <typeparam name="TTheta">The angle list's type.</typeparam>
+    /// <typeparam name="TPower">The power list's type.</typeparam>
+    public static bool RefinedBelow<TTheta, TPower>(TTheta theta, TPower p, int i, double level)
+        where TTheta : IReadOnlyList<double> where TPower : IReadOnlyList<double>
+    {
+        if (AtEnd(p, i)) return p[i] < level;   // a grid end is not refined
+        double p0 = p[i - 1], p1 = p[i], p2 = p[i + 1];
+        if (!(p0 > 0 && p1 > 0 && p2 > 0)) return false;
+        double h0 = theta[i] - theta[i - 1], h1 = theta[i + 1] - theta[i];
+        if (!(Math.Abs(h1 - h0) <= 1e-9 * Math.Abs(h0))) return false;
+        double ratio = p1 / Math.Min(p0, p2);
+        if (!(ratio >= 1)) return false;
+        double bound = p1 * Math.Sqrt(Math.Sqrt(Math.Sqrt(ratio)));
+        return bound * (1 + 1e-6) < level;
+    }
+
+    /// <summary>
     /// A local minimum (a null) at index i refined by a parabola in power, |F|² being quadratic about a zero of F.
     /// Returns the angle.
     /// </summary>

@@ -93,6 +93,7 @@ internal sealed record PatternMetrics(
         double? psl = null, pslDir = null;
         void Consider(int i)
         {
+            if (psl is { } best && LobeSearch.RefinedBelow(th, p, i, best)) return;   // cannot win: same result, no logarithms
             var (t, pw) = LobeSearch.RefineMaximum(th, p, i);
             if (psl is null || pw > psl) { psl = pw; pslDir = t; }
         }

@@ -1,5 +1,6 @@
 using System.Numerics;
 using SlotArray.Core.Design;
+using SlotArray.Core.Fabrication;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
 using SlotArray.Core.Stick;
@@ -41,7 +42,7 @@ internal static class FeedDesign
             var br = design.Branches[b];
             double ratio = r[b] / StandingWaveDesigner.CentreJunctionRatio;
             var tilt = CouplingSlot.TiltForRatio(feed, branchGuide, ratio, f0, br.Number);
-            RequireFit(feed, branchGuide, tilt, length, width, br.Number);
+            RequireFit(feed, branchGuide, tilt, length, width, request.Cutter, br.Number);
             foreach (var w in InclinedSeriesSlot.Warnings(feed, tilt, width, f0))
                 if (!warnings.Contains(w)) warnings.Add(w);
             branches[b] = br with { Coupling = new CouplingSlotDesign(br.Number, br.Y, tilt, length, width, r[b], 1 / ratio) };
@@ -78,16 +79,22 @@ internal static class FeedDesign
     }
 
     /// <summary>
-    /// The coupling slot must lie inside both guides' broad walls where they cross: its ends ±(L/2)(sin θ, cos θ) and
-    /// half width (w/2) within a_feed/2 across the feed and a_branch/2 across the branch (x across the feed, y along it).
+    /// The coupling slot must lie inside both guides' broad walls where they cross, with metal left at the walls (touching
+    /// counts as running into them, as for the radiating slots in <see cref="Fabrication.SlotClearance"/>): its ends
+    /// ±(L_o/2)(sin θ, cos θ) and half width w/2 within a_feed/2 across the feed and a_branch/2 across the branch (x across
+    /// the feed, y along it), L_o the tip-to-tip length (<see cref="RoundEndedSlot.OverallLength"/> when cut with an end
+    /// mill). The coupling slots of two branches then lie in different branch guides, with their common wall between them,
+    /// and cannot meet; nor can a coupling slot meet a radiating slot, which is in the other broad wall of the branch [D].
     /// </summary>
-    private static void RequireFit(Waveguides.RectangularWaveguide feed, Waveguides.RectangularWaveguide branch, Angle tilt, Length length, Length width, int number)
+    private static void RequireFit(Waveguides.RectangularWaveguide feed, Waveguides.RectangularWaveguide branch, Angle tilt, Length length, Length width,
+        Length? cutter, int number)
     {
-        double s = Math.Abs(Math.Sin(tilt.Radians)), c = Math.Abs(Math.Cos(tilt.Radians)), h = 0.5 * length.Meters, w = 0.5 * width.Meters;
+        double overall = length.Meters + (cutter is { } c0 ? RoundEndedSlot.LengthCorrection(width, c0).Meters : 0);
+        double s = Math.Abs(Math.Sin(tilt.Radians)), c = Math.Abs(Math.Cos(tilt.Radians)), h = 0.5 * overall, w = 0.5 * width.Meters;
         double acrossFeed = h * s + w * c, acrossBranch = h * c + w * s;
-        if (acrossFeed > 0.5 * feed.BroadWall.Meters || acrossBranch > 0.5 * branch.BroadWall.Meters)
+        if (acrossFeed >= 0.5 * feed.BroadWall.Meters || acrossBranch >= 0.5 * branch.BroadWall.Meters)
             throw new InfeasibleDesignException(FormattableString.Invariant(
-                $"branch {number}: its coupling slot ({length.Millimeters:0.##} mm at {tilt.Degrees:0.#} deg) reaches {2 * acrossFeed * 1e3:0.##} mm across the feed guide (a = {feed.BroadWall.Millimeters:0.##} mm) and {2 * acrossBranch * 1e3:0.##} mm across the branch guide (a = {branch.BroadWall.Millimeters:0.##} mm): it does not fit in the crossing; widen the narrower guide or change the taper across the branches"));
+                $"branch {number}: its coupling slot ({overall * 1e3:0.##} mm tip to tip, {width.Millimeters:0.##} mm wide, at {tilt.Degrees:0.#} deg) reaches {2 * acrossFeed * 1e3:0.##} mm across the feed guide (a = {feed.BroadWall.Millimeters:0.##} mm) and {2 * acrossBranch * 1e3:0.##} mm across the branch guide (a = {branch.BroadWall.Millimeters:0.##} mm): it runs into {(acrossFeed >= 0.5 * feed.BroadWall.Meters ? "the feed guide's side walls" : "the branch guide's side walls")}; widen the narrower guide, use narrower slots or change the taper across the branches"));
     }
 
     /// <summary>Sets each coupling slot's rotation sign so that every branch is driven in phase with the first (from the network at f0).</summary>

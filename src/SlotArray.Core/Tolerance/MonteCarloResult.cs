@@ -7,7 +7,11 @@ namespace SlotArray.Core.Tolerance;
 /// <param name="Gain">Realised gain, dimensionless.</param>
 public sealed record NominalFigures(double PeakSidelobeDb, double BeamDirectionDeg, double S11Db, double Gain);
 
-/// <summary>Percentile bands of the perturbed patterns at a subsample of the cut's angles (each cut relative to its own peak).</summary>
+/// <summary>
+/// Percentile bands of the perturbed patterns at a subsample of the cut's angles (each cut relative to its own peak): the
+/// exact per-angle percentiles of the first <see cref="ToleranceOptions.EnvelopeTrials"/> trials (20,000 by default; every
+/// trial when there are fewer), a bounded sample that keeps the memory fixed for any number of trials.
+/// </summary>
 /// <param name="AnglesDeg">θ, degrees from broadside.</param>
 /// <param name="NominalDb">The nominal cut, dB.</param>
 /// <param name="P5Db">5th percentile over the trials, dB.</param>

@@ -42,26 +42,35 @@ internal static class ToleranceMonteCarlo
         var nominalEnvelope = new float[m];
         var nominal = evaluator.Evaluate(model.Nominal, evaluator.NewWorkspace(), nominalEnvelope);
         var outcomes = new TrialOutcome[trials];
-        var envelopes = new float[(long)trials * m];   // trial-major: row i is trial i's envelope
+        // The envelope's bounded sample: the first `kept` trials, stored angle-major (column j holds angle j of every kept
+        // trial), so that memory stays at most EnvelopeTrials × angles whatever the number of trials.
+        int kept = m == 0 ? 0 : Math.Min(trials, options.EnvelopeTrials);
+        var envelopes = new float[(long)kept * m];
         int done = 0;
         int chunks = (trials + Chunk - 1) / Chunk;
-        Parallel.For(0, chunks, new ParallelOptions { MaxDegreeOfParallelism = options.Threads, CancellationToken = options.Cancellation }, c =>
+        Parallel.For(0, chunks, new ParallelOptions { MaxDegreeOfParallelism = options.Threads, CancellationToken = options.Cancellation },
+            () => (Workspace: evaluator.NewWorkspace(), Rows: new float[Chunk * m]), (c, _, local) =>
         {
-            var workspace = evaluator.NewWorkspace();
-            int end = Math.Min(trials, (c + 1) * Chunk);
-            for (int i = c * Chunk; i < end; i++)
+            int start = c * Chunk, end = Math.Min(trials, start + Chunk);
+            for (int i = start; i < end; i++)
             {
                 var random = new TrialRandom(seed, i);
-                outcomes[i] = evaluator.Evaluate(model.Trial(ref random), workspace, envelopes.AsSpan((int)((long)i * m), m));
+                var row = i < kept ? local.Rows.AsSpan((i - start) * m, m) : default;
+                outcomes[i] = evaluator.Evaluate(model.Trial(ref random), local.Workspace, row);
             }
-            int now = Interlocked.Add(ref done, end - c * Chunk);
+            // This chunk's kept rows into the angle-major store: one contiguous run of trials per angle.
+            int rows = Math.Min(end, kept) - start;
+            for (int j = 0; j < m && rows > 0; j++)
+                for (int r = 0; r < rows; r++) envelopes[(long)j * kept + start + r] = local.Rows[r * m + j];
+            int now = Interlocked.Add(ref done, end - start);
             progress?.Invoke(now);
-        });
-        return Reduce(model, seed, targetDb, evaluator, nominal, outcomes, m == 0 ? null : (nominalEnvelope, envelopes), options.Threads);
+            return local;
+        }, _ => { });
+        return Reduce(model, seed, targetDb, evaluator, nominal, outcomes, m == 0 ? null : (nominalEnvelope, envelopes, kept), options.Threads);
     }
 
     private static MonteCarloResult Reduce(IToleranceTrialModel model, int seed, double targetDb, TrialEvaluator evaluator,
-        TrialOutcome nominal, TrialOutcome[] outcomes, (float[] Nominal, float[] Trials)? envelopes, int threads)
+        TrialOutcome nominal, TrialOutcome[] outcomes, (float[] Nominal, float[] Trials, int Kept)? envelopes, int threads)
     {
         int trials = outcomes.Length, n = model.Nominal.Excitations.Length;
         var psl = new double[trials];
@@ -91,23 +100,25 @@ internal static class ToleranceMonteCarlo
         var figures = new NominalFigures(nominal.PeakSidelobeDb, nominal.BeamDirection * 180 / Math.PI, nominal.S11Db, nominal.Gain);
         return new MonteCarloResult(trials, seed, targetDb, figures, SampleSummary.Of(psl), (double)meets / trials,
             SampleSummary.Of(loss), SampleSummary.Of(point), SampleSummary.Of(s11), Math.Sqrt(sa2), Math.Sqrt(sp2), Math.Sqrt(sz2), eta,
-            analytic, mcFloor, Array.AsReadOnly(psl), envelopes is { } e ? Envelope(evaluator, e.Nominal, e.Trials, trials, threads) : null);
+            analytic, mcFloor, Array.AsReadOnly(psl), envelopes is { } e ? Envelope(evaluator, e.Nominal, e.Trials, e.Kept, threads) : null);
     }
 
     /// <summary>
-    /// The percentile bands of the trials' envelopes (trial-major rows of <paramref name="trials"/>): per angle, the order
-    /// statistics that <see cref="SampleSummary.Percentile"/> reads, found by selection (the same values as a full sort).
+    /// The percentile bands of the kept trials' envelopes (angle-major: column j holds angle j of <paramref name="kept"/>
+    /// trials): per angle, the order statistics that <see cref="SampleSummary.Percentile"/> reads, found by selection (the
+    /// same values as a full sort of that sample).
     /// </summary>
-    private static PatternEnvelope Envelope(TrialEvaluator evaluator, float[] nominal, float[] envelopes, int trials, int threads)
+    private static PatternEnvelope Envelope(TrialEvaluator evaluator, float[] nominal, float[] envelopes, int kept, int threads)
     {
         int m = nominal.Length;
         var p5 = new double[m];
         var p50 = new double[m];
         var p95 = new double[m];
         var max = new double[m];
-        Parallel.For(0, m, new ParallelOptions { MaxDegreeOfParallelism = threads }, () => new double[trials], (j, _, column) =>
+        Parallel.For(0, m, new ParallelOptions { MaxDegreeOfParallelism = threads }, () => new double[kept], (j, _, column) =>
         {
-            for (int i = 0; i < trials; i++) column[i] = envelopes[(long)i * m + j];
+            var run = envelopes.AsSpan((int)((long)j * kept), kept);
+            for (int i = 0; i < kept; i++) column[i] = run[i];
             var select = new OrderStatistics(column);
             p5[j] = select.Percentile(0.05);
             p50[j] = select.Percentile(0.50);

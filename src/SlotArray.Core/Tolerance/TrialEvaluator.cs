@@ -155,9 +155,9 @@ internal sealed class TrialEvaluator
     }
 
     /// <summary>∫ |E·AF|² du over the half-space by the kernel (displaced equally spaced slots) or the quadrature directly.</summary>
-    private double RadiatedPower(HalfSpacePowerKernel? kernel, double[] weights, double[] pos, Complex[] excitations, double[] offsets)
+    private double RadiatedPower(HalfSpacePowerKernel? kernel, double[] weights, double[] pos, Complex[] excitations, double[] offsets, Workspace w)
     {
-        if (kernel is not null && kernel.TryPower(excitations, offsets, out double integral)) return integral;
+        if (kernel is not null && kernel.TryPower(excitations, offsets, out double integral, w.KernelScratch!)) return integral;
         var afq = ArrayFactor.AtSines(pos, excitations, k, quadSines);
         integral = 0;
         for (int i = 0; i < afq.Length; i++) integral += weights[i] * (afq[i].Real * afq[i].Real + afq[i].Imaginary * afq[i].Imaginary);
@@ -186,8 +186,8 @@ internal sealed class TrialEvaluator
         // Half-space directivity D = 4 |E·AF|²(θb) / ∫ |E·AF|² du (Directivity.HalfSpace, same rule).
         var afBeam = ArrayFactor.AtSines(pos, t.Excitations, k, [Math.Sin(beam)])[0];
         double eb = elementOf(beam);
-        double integral = RadiatedPower(powerKernel, quadWeights, pos, t.Excitations, offsets);
-        if (t.CrossExcitations is { } cross) integral += RadiatedPower(crossKernel, crossQuadWeights!, pos, cross, offsets);
+        double integral = RadiatedPower(powerKernel, quadWeights, pos, t.Excitations, offsets, w);
+        if (t.CrossExcitations is { } cross) integral += RadiatedPower(crossKernel, crossQuadWeights!, pos, cross, offsets, w);
         double directivity = 4 * eb * eb * (afBeam.Real * afBeam.Real + afBeam.Imaginary * afBeam.Imaginary) / integral;
 
         // Excitation errors against the nominal, common factor removed.
@@ -261,6 +261,7 @@ internal sealed class TrialEvaluator
             FloorRe = new double[e.floorSines.Length]; FloorIm = new double[e.floorSines.Length];
             GridScratch = e.gridSum?.NewScratch();
             FloorScratch = e.floorSum?.NewScratch();
+            KernelScratch = e.powerKernel?.NewScratch();
         }
 
         internal double[] Positions { get; }
@@ -274,5 +275,6 @@ internal sealed class TrialEvaluator
         internal double[] FloorIm { get; }
         internal NearUniformArrayFactor.Scratch? GridScratch { get; }
         internal NearUniformArrayFactor.Scratch? FloorScratch { get; }
+        internal HalfSpacePowerKernel.Scratch? KernelScratch { get; }
     }
 }

@@ -144,13 +144,15 @@ public class PlanarDesignTests
 
     /// <summary>
     /// 8 branches × 10 slots, separable Taylor −25/−25 dB, coupled: matched at f0 (the design's own equations, so far below
-    /// the −20 dB the issue asks), the slot voltages follow the taper, and the H-plane peak sidelobe (x-z, along the branches)
-    /// is within 0.2 dB of the sampled 10-element Taylor's own. The E-plane is left to the report: the alternating offsets put
-    /// the slots of each branch at y ± δ with δ differing by branch once coupling is designed in, which raises the far
-    /// E-plane lobes by about 1 dB over the 8-element Taylor's −24.1 dB.
+    /// the −20 dB the issue asks), the slot voltages follow the design's amplitudes, and the peak sidelobe of both principal
+    /// cuts of the network's excitations at the slots' real positions, computed here by direct summation, is the asked
+    /// −25 dB within 0.3 dB: x-z with the half-wave slot's element pattern cos((π/2)u)/√(1 − u²) (the dual of the half-wave
+    /// dipole, C. A. Balanis, <i>Antenna Theory</i>, 3rd ed., Wiley 2005, eq. 4-84, from memory), y-z without (the slot's
+    /// E-plane). Before the principal-plane correction the y-z cut of this aperture reached only −22.7 dB (the alternating
+    /// offsets differ from branch to branch once coupling is designed in) and the 8-element sampled Taylor −24.1 dB.
     /// </summary>
     [Fact]
-    public void Separable_Taylor_8_by_10_is_matched_and_keeps_its_H_plane_sidelobes()
+    public void Separable_Taylor_8_by_10_reaches_the_asked_level_in_both_principal_planes()
     {
         var req = Request(8, 10, Taylor(-25, -25), FeedPosition.Centre, true);
         var d = PlanarDesigner.Design(req);
@@ -159,16 +161,38 @@ public class PlanarDesignTests
         var ratio = Enumerable.Range(0, d.Layout.Count).Select(i => sol.Excitations[i] / d.Amplitudes[i]).ToArray();
         foreach (var r in ratio)
         {
-            Check.Absolute(0, 20 * Math.Log10(r.Magnitude / ratio[0].Magnitude), 0.01, "the taper, dB");
-            Check.Absolute(0, (r / ratio[0]).Phase * 180 / Math.PI, 0.1, "in phase, deg");
+            Check.Absolute(0, 20 * Math.Log10(r.Magnitude / ratio[0].Magnitude), 0.02, "the taper, dB");
+            Check.Absolute(0, (r / ratio[0]).Phase * 180 / Math.PI, 0.2, "in phase, deg");
         }
         var p = PlanarDesigner.Placements(d);
-        var af = new PlanarArrayFactor(p.Select(q => q.Position.Meters).ToArray(), p.Select(q => q.Offset.Meters).ToArray(), sol.Excitations, F0.FreeSpaceWavenumber);
-        var grid = AngleGrid.UniformInTheta(-Math.PI / 2, Math.PI / 2, 3601);
-        var w = TaperSynthesis.Synthesize(new TaperRequest(TaperType.Taylor, -25, 4, -20, 2, null), 10).Weights.ToArray();
-        var xs = Enumerable.Range(0, 10).Select(i => (i - 4.5) * d.Layout.Spacing.Meters).ToArray();
-        var linear = PatternMetrics.Measure(ArrayFactor.ComputeDirect(xs, ArrayFactor.ToComplex(w), F0.FreeSpaceWavenumber, grid, ElementPatterns.HalfWaveSlotHPlane));
-        Check.Absolute(linear.PeakSidelobeDb!.Value, PatternMetrics.Measure(af.Cut(0, grid)).PeakSidelobeDb!.Value, 0.2, "the 10-slot Taylor line's own sidelobes");
+        double k = F0.FreeSpaceWavenumber;
+        double[] x = [.. p.Select(q => q.Position.Meters)], y = [.. p.Select(q => q.Offset.Meters)];
+        Assert.Contains(y, v => Math.Abs(v - Math.Round(v / Pitch.Meters - 0.5) * Pitch.Meters - 0.5 * Pitch.Meters) > 1e-3);
+        double xz = DirectPeakSidelobe(u => Math.Cos(Math.PI / 2 * u) / Math.Sqrt(Math.Max(1 - u * u, 1e-30)) * Sum(sol.Excitations, x, k * u));
+        double yz = DirectPeakSidelobe(v => Sum(sol.Excitations, y, k * v));
+        Check.Absolute(-25, xz, 0.3, "x-z cut: the asked Taylor level");
+        Check.Absolute(-25, yz, 0.3, "y-z cut: the asked Taylor level");
+    }
+
+    private static double Sum(IReadOnlyList<Complex> a, double[] position, double kSine)
+    {
+        Complex f = 0;
+        for (int i = 0; i < a.Count; i++) f += a[i] * Complex.FromPolarCoordinates(1, kSine * position[i]);
+        return f.Magnitude;
+    }
+
+    /// <summary>Peak sidelobe (dB) of |F(s)| over s ∈ [−1, 1]: the highest local maximum outside the lobe that holds the peak, 20,001 samples.</summary>
+    internal static double DirectPeakSidelobe(Func<double, double> field)
+    {
+        const int n = 20001;
+        var f = Enumerable.Range(0, n).Select(i => field(-1 + 2.0 * i / (n - 1))).ToArray();
+        int top = Array.IndexOf(f, f.Max()), l = top, r = top;
+        while (l > 0 && f[l - 1] <= f[l]) l--;
+        while (r < n - 1 && f[r + 1] <= f[r]) r++;
+        double side = 0;
+        for (int i = 0; i < n; i++)
+            if ((i < l || i > r) && (i == 0 || f[i] >= f[i - 1]) && (i == n - 1 || f[i] >= f[i + 1])) side = Math.Max(side, f[i]);
+        return 20 * Math.Log10(side / f[top]);
     }
 
     /// <summary>
@@ -190,6 +214,62 @@ public class PlanarDesignTests
         Check.Relative(1, 1 / left + 1 / right, 1e-12, "series tee matched");
         Check.Relative((p[0] + p[1]) / (p[2] + p[3] + p[4]), (1 / left) / (1 / right), 1e-12, "half powers |I|²/Σr in the asked ratio");
         Check.Relative(p[4] / p[2], centre[4] / centre[2], 1e-12, "within a half r ∝ P");
+    }
+
+    /// <summary>
+    /// The plate can be cut (the issue's "no slot or coupling slot overlaps another or a wall"), checked here by plane
+    /// geometry on the 8 × 10 coupled design cut with an end mill as wide as the slots [D]: every radiating slot's footprint
+    /// (its tip-to-tip length as the cut list gives it, width w) lies inside its branch's broad wall with metal left
+    /// at the walls (|y − y_b| + w/2 &lt; a/2) and inside the branch's end shorts; no two footprints of the whole aperture
+    /// overlap (all pairs); every coupling slot, a rotated rectangle at the crossing, lies inside the feed guide's and the
+    /// branch guide's broad walls.
+    /// </summary>
+    [Fact]
+    public void Designed_plate_leaves_metal_between_every_slot_and_wall()
+    {
+        var cutter = Width;
+        var req = Request(8, 10, Taylor(-25, -25), FeedPosition.Centre, true) with { Cutter = cutter };
+        var d = PlanarDesigner.Design(req);
+        double a = d.BranchGuide.BroadWall.Meters;
+        var boxes = new List<(double X, double Y, double HalfX, double HalfY, string Name)>();
+        foreach (var b in d.Branches)
+        {
+            double near = -b.Stick.FeedPlane.Meters, far = b.Stick.Slots[^1].Position.Meters + b.Stick.FarTermination!.Distance.Meters - b.Stick.FeedPlane.Meters;
+            foreach (var s in b.Stick.Slots)
+            {
+                double tip = Core.Fabrication.RoundEndedSlot.OverallLength(s.Length, s.Width, cutter).Meters;
+                double x = b.ApertureX(s.Position), y = b.Y + s.Coupling, hx = tip / 2, hy = s.Width.Meters / 2;
+                Assert.True(Math.Abs(y - b.Y) + hy < a / 2, $"branch {b.Number} slot {s.Index} runs into a side wall");
+                Assert.True(x - hx > near && x + hx < far, $"branch {b.Number} slot {s.Index} runs past an end short");
+                boxes.Add((x, y, hx, hy, $"branch {b.Number} slot {s.Index}"));
+            }
+            var c = b.Coupling;
+            double tipC = Core.Fabrication.RoundEndedSlot.OverallLength(c.Length, c.Width, cutter).Meters;
+            double sn = Math.Abs(Math.Sin(c.Tilt.Radians)), cs = Math.Abs(Math.Cos(c.Tilt.Radians));
+            Assert.True(tipC / 2 * sn + c.Width.Meters / 2 * cs < d.FeedGuide.BroadWall.Meters / 2, $"branch {b.Number}: coupling slot runs into the feed guide's walls");
+            Assert.True(tipC / 2 * cs + c.Width.Meters / 2 * sn < a / 2, $"branch {b.Number}: coupling slot runs into the branch guide's walls");
+        }
+        Assert.Equal(80, boxes.Count);
+        for (int i = 0; i < boxes.Count; i++)
+            for (int j = i + 1; j < boxes.Count; j++)
+            {
+                var (p, q) = (boxes[i], boxes[j]);
+                bool apart = Math.Abs(p.X - q.X) > p.HalfX + q.HalfX || Math.Abs(p.Y - q.Y) > p.HalfY + q.HalfY;
+                Assert.True(apart, $"{p.Name} and {q.Name} overlap");
+            }
+    }
+
+    /// <summary>Slots too wide for the branch guide at the offsets the taper needs: refused naming the branch, the slot and the wall.</summary>
+    [Fact]
+    public void Slot_running_into_a_side_wall_is_refused_naming_branch_and_slot()
+    {
+        var wide = Length.FromMillimeters(15);
+        var req = Request(2, 2, new ApertureTaper(TaperRequest.Uniform, TaperRequest.Uniform), FeedPosition.Centre, false)
+            with { Slot = new StevensonTestSlot(Wr90Lossless, wide, maximumCoupling: 10e-3) };
+        var e = Assert.Throws<InfeasibleDesignException>(() => PlanarDesigner.Design(req));
+        Assert.Contains("branch 1", e.Message);
+        Assert.Contains("slot 1", e.Message);
+        Assert.Contains("side wall", e.Message);
     }
 
     /// <summary>A request a slot cannot meet is refused naming the branch (the issue's "infeasible requests exit 1 naming the branch/slot").</summary>

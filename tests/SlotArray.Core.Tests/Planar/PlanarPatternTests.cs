@@ -61,13 +61,13 @@ public class PlanarPatternTests
     /// of each agree with <see cref="PatternMetrics"/> on the 1-D pattern.
     /// </summary>
     [Theory]
-    [InlineData(10, 8, -25, -25)]
-    [InlineData(16, 12, -30, -20)]
-    public void Separable_taper_reproduces_the_linear_figures_in_each_principal_plane(int nx, int ny, double along, double across)
+    [InlineData(10, 8, -25, -25, TaperType.Villeneuve, 3)]
+    [InlineData(16, 12, -30, -20, TaperType.Taylor, 4)]
+    public void Separable_taper_reproduces_the_linear_figures_in_each_principal_plane(int nx, int ny, double along, double across, TaperType type, int nbar)
     {
         double dx = 0.70, dy = 0.75;
-        var ta = new TaperRequest(TaperType.Taylor, along, 4, -20, 2, null);
-        var tc = new TaperRequest(TaperType.Taylor, across, 4, -20, 2, null);
+        var ta = new TaperRequest(type, along, nbar, -20, 2, null);
+        var tc = new TaperRequest(type, across, nbar, -20, 2, null);
         var layout = PlanarLayout.Create(ny, nx, Length.FromMeters(dx), Length.FromMeters(dy), PlanarOutline.Rectangle);
         var (w, _, _) = new ApertureTaper(ta, tc).Weights(layout);
         var af = new PlanarArrayFactor(layout.Slots.Select(s => s.X).ToArray(), layout.Slots.Select(s => s.Y).ToArray(),

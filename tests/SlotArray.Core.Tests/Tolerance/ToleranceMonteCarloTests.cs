@@ -73,6 +73,30 @@ public class ToleranceMonteCarloTests(Xunit.Abstractions.ITestOutputHelper outpu
         Assert.Equal(s1, s2);
     }
 
+    [Fact]
+    public void The_envelope_keeps_a_bounded_sample_the_first_trials_and_the_statistics_use_every_trial()
+    {
+        // Memory bound (issue 12): with EnvelopeTrials = 100 a run of 300 trials keeps the envelope of its first 100 trials
+        // only, so its bands are those of a 100-trial run (same seed: the same first trials), while the sidelobe statistics
+        // cover all 300; and both are the same on 1 and 2 threads.
+        var (design, slot) = Designed(Tapered(16));
+        var tol = Typical();
+        var options = Fast with { EnvelopeTrials = 100 };
+        var model = ArrayTrialModel.Build(design, slot, Factory, tol, options);
+        var hundred = ToleranceMonteCarlo.Run(model, 100, 5, -20, options);
+        var long1 = ToleranceMonteCarlo.Run(model, 300, 5, -20, options with { MaxThreads = 1 });
+        var long2 = ToleranceMonteCarlo.Run(model, 300, 5, -20, options with { MaxThreads = 2 });
+        Assert.Equal(hundred.Envelope!.P5Db, long1.Envelope!.P5Db);
+        Assert.Equal(hundred.Envelope.P50Db, long1.Envelope.P50Db);
+        Assert.Equal(hundred.Envelope.P95Db, long1.Envelope.P95Db);
+        Assert.Equal(hundred.Envelope.MaximumDb, long1.Envelope.MaximumDb);
+        AssertSame(long1, long2);
+        Assert.Equal(300, long1.PeakSidelobeSamples.Count);
+        Assert.Equal(hundred.PeakSidelobeSamples, long1.PeakSidelobeSamples.Take(100));
+        Assert.NotEqual(hundred.PeakSidelobeDb, long1.PeakSidelobeDb);
+        Assert.Throws<ArgumentOutOfRangeException>(() => ToleranceMonteCarlo.Run(model, 10, 5, -20, Fast with { EnvelopeTrials = 99 }));
+    }
+
     private static void AssertSame(MonteCarloResult a, MonteCarloResult b)
     {
         Assert.Equal(a.PeakSidelobeSamples, b.PeakSidelobeSamples);
