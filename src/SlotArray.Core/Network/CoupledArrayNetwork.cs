@@ -178,7 +178,7 @@ internal static class CoupledArrayNetwork
                 throw new ArgumentException("the coupled analysis is for longitudinal (offset) slots; edge slots have no equivalent-dipole model here", nameof(design));
             this.design = design;
             this.slot = slot;
-            this.coupling = coupling ?? CoupledSlotImpedances.HalfCosineCentreReferred;
+            this.coupling = coupling ?? CoupledSlotImpedances.Scaled(design.MutualCouplingScale);
             bool centre = design.Feed == FeedPosition.Centre;
             line = new LineNetwork(design.Guide, design.Slots.Select(s => s.Position.Meters).ToArray(), design.NearTermination,
                 centre ? design.FarTermination ?? throw new ArgumentException("a centre-fed design needs a far termination", nameof(design)) : null,
