@@ -105,7 +105,7 @@ internal static class CoupledArrayNetwork
         var lo = f0 < low ? f0 : low;
         var hi = f0 > high ? f0 : high;
         if (!CouplingAcrossBand.Interpolates(lo, hi)) return direct;
-        var across = new CouplingAcrossBand(direct.Placements, design.Slots[0].Width, lo, hi, coupling ?? CoupledSlotImpedances.HalfCosineCentreReferred);
+        var across = new CouplingAcrossBand(direct.Placements, design.Slots[0].Width, lo, hi, direct.Coupling);
         return new CoupledSystem(design, slot, (_, _, f) => across.At(f));
     }
 
@@ -187,6 +187,9 @@ internal static class CoupledArrayNetwork
             placements = design.Slots.Select(s => new LongitudinalSlotPlacement(s.Position, Length.FromMeters(s.Coupling), 0.5 * s.Length)).ToArray();
             leftCount = centre ? design.Slots.Count(s => s.Position < design.FeedPlane) : design.Count;
         }
+
+        /// <summary>The mutual-impedance model in use (the given one, or the default of the design).</summary>
+        public MutualImpedanceModel Coupling => coupling;
 
         /// <summary>The slots as equivalent dipoles (centre, offset, half-length), the coupling model's input.</summary>
         public IReadOnlyList<LongitudinalSlotPlacement> Placements => placements;
