@@ -6,9 +6,8 @@
 #
 #   bash scripts/perf/time-design.sh [SPEC] [RUNS]     (default arrays/harbour-surveillance-16.yaml, 5 runs; needs hyperfine)
 #
-# TOOL=path/to/slotarray times another build of the tool, e.g. a ReadyToRun publish:
-#   dotnet publish src/SlotArray.Cli -c Release -r linux-x64 --self-contained false -p:PublishReadyToRun=true -o /tmp/r2r
-#   TOOL=/tmp/r2r/slotarray bash scripts/perf/time-design.sh
+# The tool is a ReadyToRun publish made here (scripts/perf/tool.sh); TOOL=path/to/slotarray times another build, e.g.
+#   TOOL=src/SlotArray.Cli/bin/Release/net10.0/slotarray bash scripts/perf/time-design.sh      (the plain Release build)
 set -euo pipefail
 here="$(cd "$(dirname "$0")" && pwd)"
 repo="$(cd "$here/../.." && pwd)"
@@ -17,10 +16,7 @@ runs="${2:-5}"
 command -v hyperfine >/dev/null || { echo "hyperfine is not installed (apt-get install hyperfine)" >&2; exit 2; }
 work="$(mktemp -d)"
 trap 'rm -rf "$work"' EXIT
-tool="${TOOL:-$repo/src/SlotArray.Cli/bin/Release/net10.0/slotarray}"
-if [[ -z "${TOOL:-}" && ! -x "$tool" ]]; then
-  dotnet build "$repo/src/SlotArray.Cli" -c Release -v q -nologo >/dev/null
-fi
+source "$here/tool.sh"   # $tool: a ReadyToRun publish, or TOOL=path/to/slotarray
 cache="$work/cache"
 echo "load before: $(uptime)"
 "$tool" design "$spec" -o "$work/out" --cache-dir "$cache" >/dev/null 2>&1   # fills the cache (untimed)

@@ -15,7 +15,7 @@ namespace SlotArray.Benchmarks;
 /// (201-point S11 over ±2.5 %, two cuts with phase at 0.5°) with +0.6 % length error, conductance × 1.1 and two slots
 /// 0.1 mm long. The setup builds the design, the data and the fit's slot surfaces (one warm-up fit, so the benchmark times
 /// the fit itself, not the moment-method solves behind the surfaces, which are cached per model). Per fit: stages a–c
-/// three times on 31 frequencies (coupled network, one N × N LU per frequency), the mutual impedances filled at 7
+/// once and then the adopted parameters jointly twice, on 31 frequencies (coupled network, one N × N LU per frequency), the mutual impedances filled at 7
 /// frequencies per geometry and interpolated between them (CouplingAcrossBand; N(N − 1)/2 pairs a fill), stage d per cut
 /// and stage e twice (2N + 1 network solutions per cut frequency for the sensitivities; Jacobians in closed form).
 /// </summary>

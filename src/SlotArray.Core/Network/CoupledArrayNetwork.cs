@@ -38,7 +38,7 @@ namespace SlotArray.Core.Network;
 /// closed form (each arm's cascade from its termination plus the particular solution of each injected current, the arm
 /// amplitudes from the feed conditions): V = V_s + G i, leaving the N × N system (D + M − P G P) w = P V_s in the slot
 /// voltages, P = diag(pol_n f_n): the same equations as the 3N-unknown transfer-form assembly (which gave the same S11,
-/// mode and slot voltages to 1e-15 on end- and centre-fed arrays, short and load), for a 27th of the LU's work.</para>
+/// mode and slot voltages to 1e-15 on end- and centre-fed arrays, short and load), for a 27th of the LU's work; the LU is <see cref="ComplexLu"/>.</para>
 /// <para>The solution is reported as a <see cref="NetworkSolution"/>: each slot's admittance is its active admittance
 /// y^a_n = i_n/V_n, and the line is re-solved with these (<see cref="ArrayNetwork"/>'s cascade, which then reproduces
 /// the same V and S11) to get wall loss, powers and the peak field; the power into slot n, Re(i_n V_n*), may be
@@ -208,13 +208,13 @@ internal static class CoupledArrayNetwork
             // p_i V_i − Σ_j (D + M)_ij w_j = 0 with V = V_s + G i become (D + M − P G P) w = P V_s.
             var p = new double[n];
             for (int i = 0; i < n; i++) p[i] = (i < leftCount ? 1 : -1) * fn[i];
-            var b = MathNet.Numerics.LinearAlgebra.Vector<Complex>.Build.Dense(n);
+            var b = new Complex[n];
             for (int i = 0; i < n; i++)
             {
                 b[i] = p[i] * source[i];
                 for (int j = 0; j < n; j++) k[j * n + i] -= p[i] * response[i * n + j] * p[j];
             }
-            var w = Matrix<Complex>.Build.Dense(n, n, k).LU().Solve(b);
+            var w = ComplexLu.Factor(k, n).Solve(b);
 
             var ya = new Complex[n];
             var e = new Complex[n];

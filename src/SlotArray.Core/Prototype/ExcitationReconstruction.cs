@@ -95,9 +95,8 @@ internal static class ExcitationReconstruction
         var jtj = fit.Jacobian.TransposeThisAndMultiply(fit.Jacobian);
         var h = jtj.Clone();
         for (int j = 0; j < 2 * n; j++) h[j, j] += reg[j] * reg[j];
-        var resolution = h.PseudoInverse() * jtj;
-        var sv = jd.Svd(false).S;
-        double cond = sv[sv.Count - 1] > 0 ? sv[0] / sv[sv.Count - 1] : double.PositiveInfinity;
+        var resolution = WeightedFit.InverseOfNormalMatrix(h) * jtj;
+        double cond = WeightedFit.ConditionNumber(jd, jtj.SubMatrix(0, 2 * n, 0, 2 * n));
 
         var slots = new SlotExcitationError[n];
         var unseen = new List<int>();

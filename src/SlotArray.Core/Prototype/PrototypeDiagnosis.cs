@@ -26,7 +26,7 @@ internal sealed record PrototypeDiagnosis(PrototypeModel Model, PrototypeErrors 
 /// The diagnosis of a prototype: refuses measurements of another design (<see cref="MeasurementCheck"/>), then fits the
 /// design's own network model (<see cref="PrototypeModel"/>, coupled for offset slots) in the order the data resolve:
 /// stages a–c on the S-parameters (<see cref="UniformErrorFit"/>), with the mutual impedances re-frozen at the result
-/// and the stages refitted; then from the pattern cuts the per-slot excitation errors (stage d,
+/// and the adopted parameters refitted jointly; then from the pattern cuts the per-slot excitation errors (stage d,
 /// <see cref="ExcitationReconstruction"/>) and the per-slot length and offset errors that explain them (stage e,
 /// <see cref="SlotErrorFit"/>). With both kinds of data the S-parameters own the common part of the lengths: stage e
 /// fits zero-mean length changes, the totals are split by their median (<see cref="SplitCommonLength"/>), the uniform
@@ -133,12 +133,14 @@ internal static class PrototypeFit
         var network = data.Network is null ? null : new NetworkFitData(data.Network);
         var cuts = data.Cuts.Select(c => new CutFitData(c)).ToArray();
         IReadOnlyList<FitStage> uniform = [];
+        int adoptedStages = 1;
         if (network is not null)
         {
             (errors, uniform) = UniformErrorFit.Run(model, network, errors);
             stages.AddRange(uniform);
+            adoptedStages = Math.Max(1, uniform.Count(s => s.Adopted));
             model = model.RefreezeAt(errors);
-            (errors, uniform) = UniformErrorFit.Run(model, network, errors, Math.Max(1, uniform.Count(s => s.Adopted)));
+            (errors, uniform) = UniformErrorFit.Run(model, network, errors, adoptedStages, lastOnly: true);
             stages.AddRange(uniform.Select(s => s with { Name = s.Name + " (mutual impedances at the fitted geometry)" }));
         }
         var recon = new List<CutReconstruction>();
@@ -157,10 +159,9 @@ internal static class PrototypeFit
             stages.Add(st);
             if (network is not null)
             {
-                int adopted = Math.Max(1, uniform.Count(s => s.Adopted));
                 errors = SplitCommonLength(model.AsCut, errors);
                 model = model.RefreezeAt(errors);
-                (var refit, uniform) = UniformErrorFit.Run(model, network, errors, adopted);
+                (var refit, uniform) = UniformErrorFit.Run(model, network, errors, adoptedStages, lastOnly: true);
                 stages.AddRange(uniform.Select(s => s with { Name = s.Name + " (per-slot errors held)" }));
                 (errors, slots, st) = SlotErrorFit.Run(model, refit, cuts, zeroMeanLength: true);
                 stages.Add(st with { Name = st.Name + " (second pass)" });

@@ -180,7 +180,7 @@ internal static class SlotErrorFit
         var jtj = fit.Jacobian.TransposeThisAndMultiply(fit.Jacobian);
         var h = jtj.Clone();
         for (int j = 0; j < p; j++) h[j, j] += reg[j] * reg[j];
-        var hInv = h.PseudoInverse();
+        var hInv = WeightedFit.InverseOfNormalMatrix(h);
         var resolution = hInv * jtj;
         var cov = hInv * jtj * hInv;
         var slots = new SlotGeometryError[n];

@@ -21,7 +21,12 @@ internal static class UniformErrorFit
     /// <param name="data">The network data.</param>
     /// <param name="start">Starting errors; the per-slot errors are held fixed.</param>
     /// <param name="stages">How many stages to run (1–3).</param>
-    public static (PrototypeErrors Errors, IReadOnlyList<FitStage> Stages) Run(PrototypeModel model, NetworkFitData data, PrototypeErrors start, int stages = 3)
+    /// <param name="lastOnly">Run only the last of those stages (all its parameters jointly) from <paramref name="start"/>:
+    /// a refit whose earlier stages have already been run, adopted and checked for separability, and whose start is
+    /// close to the solution, so that the stepwise warm starts are not needed (if that joint fit is not adopted, the stages
+    /// are run one by one as without it).</param>
+    public static (PrototypeErrors Errors, IReadOnlyList<FitStage> Stages) Run(PrototypeModel model, NetworkFitData data, PrototypeErrors start, int stages = 3,
+        bool lastOnly = false)
     {
         ArgumentNullException.ThrowIfNull(model);
         ArgumentNullException.ThrowIfNull(data);
@@ -30,7 +35,8 @@ internal static class UniformErrorFit
         var current = start;
         string[] labels = ["a: uniform slot-length scale", "b: + uniform conductance scale", "c: + guide-wavelength error"];
         double[] steps = [1e-4, 1e-3, 1e-4];
-        for (int stage = 1; stage <= Math.Clamp(stages, 1, 3); stage++)
+        int last = Math.Clamp(stages, 1, 3);
+        for (int stage = lastOnly ? last : 1; stage <= last; stage++)
         {
             int p = stage;
             var begin = current;
@@ -60,6 +66,8 @@ internal static class UniformErrorFit
             if (adopted) current = Of(fit.Values.Select(v => v.Value).ToArray());
             else break;
         }
+        // A joint refit that does not converge or separate falls back to the stepwise stages.
+        if (lastOnly && !list[^1].Adopted) return Run(model, data, start, stages);
         return (current, list);
     }
 }

@@ -1,4 +1,5 @@
 using MathNet.Numerics.LinearAlgebra;
+using MathNet.Numerics.LinearAlgebra.Factorization;
 using MathNet.Numerics.Optimization;
 
 namespace SlotArray.Core.Prototype;
@@ -40,6 +41,9 @@ internal sealed record WeightedFitResult(IReadOnlyList<FittedValue> Values, Matr
 /// </summary>
 internal static class WeightedFit
 {
+    /// <summary>Relative step size at which the minimiser stops: 1e-9.</summary>
+    public const double StepTolerance = 1e-9;
+
     /// <summary>Fits <paramref name="model"/> to <paramref name="observed"/>.</summary>
     /// <param name="names">Parameter names.</param>
     /// <param name="model">The model's predicted data for a parameter vector.</param>
@@ -76,7 +80,11 @@ internal static class WeightedFit
             if (regularisation is not null) for (int j = 0; j < p; j++) r[m + j] = regularisation[j] * v[j];
             return r;
         }
-        Matrix<double> Jac(Vector<double> v, Vector<double> _)
+        // While the minimiser iterates, the Jacobian only steers its steps, so forward differences from the value it has
+        // just evaluated (cached) are enough and cost p model evaluations instead of 2p; the Jacobian of the reported
+        // covariance is taken by central differences at the solution.
+        Matrix<double> Jac(Vector<double> v, Vector<double> _) => Differences(v, central: false);
+        Matrix<double> Differences(Vector<double> v, bool central)
         {
             var j = Matrix<double>.Build.Dense(rows, p);
             if (jacobian is not null)
@@ -89,13 +97,19 @@ internal static class WeightedFit
                 }
                 return j;
             }
+            var y0 = central ? null : Eval(v);
             for (int c = 0; c < p; c++)
             {
                 var plus = v.Clone(); plus[c] += steps[c];
-                var minus = v.Clone(); minus[c] -= steps[c];
                 var yp = model(plus.ToArray());
-                var ym = model(minus.ToArray());
-                for (int i = 0; i < m; i++) j[i, c] = (yp[i] - ym[i]) / (2 * steps[c] * sigma[i]);
+                double span = central ? 2 * steps[c] : steps[c];
+                var ym = y0;
+                if (central)
+                {
+                    var minus = v.Clone(); minus[c] -= steps[c];
+                    ym = model(minus.ToArray());
+                }
+                for (int i = 0; i < m; i++) j[i, c] = (yp[i] - ym![i]) / (span * sigma[i]);
                 if (regularisation is not null) j[m + c, c] = regularisation[c];
             }
             return j;
@@ -104,20 +118,22 @@ internal static class WeightedFit
         for (int i = 0; i < m; i++) obs[i] = observed[i] / sigma[i];
         var x = Vector<double>.Build.Dense(rows, i => i);
         var objective = ObjectiveFunction.NonlinearModel(Predict, Jac, x, obs);
-        var lm = new LevenbergMarquardtMinimizer(maximumIterations: maximumIterations);
+        // Stops once a step moves the parameters by less than 1e-9 of their size (far below any interval a fit reports);
+        // MathNet's default of 1e-15 spends the last iterations on rounding.
+        var lm = new LevenbergMarquardtMinimizer(stepTolerance: StepTolerance, maximumIterations: maximumIterations);
         var result = lm.FindMinimum(objective, Vector<double>.Build.DenseOfArray(start));
         var best = result.MinimizingPoint;
 
-        var full = Jac(best, x);
+        var full = jacobian is null ? Differences(best, central: true) : Jac(best, x);
         var jData = full.SubMatrix(0, m, 0, p);
-        var yBest = model(best.ToArray());
+        var yBest = Eval(best);
         double chi2 = 0;
         for (int i = 0; i < m; i++) { double r = (observed[i] - yBest[i]) / sigma[i]; chi2 += r * r; }
         double s2 = chi2 / Math.Max(1, m - p);
         var jtj = jData.TransposeThisAndMultiply(jData);
         var h = jtj.Clone();
         if (regularisation is not null) for (int j = 0; j < p; j++) h[j, j] += regularisation[j] * regularisation[j];
-        var hInv = h.PseudoInverse();
+        var hInv = InverseOfNormalMatrix(h);
         var cov = s2 * (regularisation is null ? hInv : hInv * jtj * hInv);
         var values = new FittedValue[p];
         for (int j = 0; j < p; j++) values[j] = new FittedValue(names[j], best[j], Math.Sqrt(Math.Max(0, cov[j, j])));
@@ -126,9 +142,44 @@ internal static class WeightedFit
             double d = Math.Sqrt(cov[a, a] * cov[b, b]);
             return d > 0 ? cov[a, b] / d : (a == b ? 1 : 0);
         });
-        var sv = jData.Svd(false).S;
-        double cond = sv.Count > 0 && sv[sv.Count - 1] > 0 ? sv[0] / sv[sv.Count - 1] : double.PositiveInfinity;
+        double cond = ConditionNumber(jData, jtj);
         return new WeightedFitResult(values, jData, corr, Math.Sqrt(chi2 / m), Math.Sqrt(s2), cond, result.Iterations,
             result.ReasonForExit != ExitCondition.ExceedIterations);
+    }
+    /// <summary>
+    /// (JᵀJ + Λ)⁻¹ of a normal matrix: by Cholesky when it is positive definite (always, with a regularisation), else
+    /// the pseudo-inverse (a Jacobian without full column rank). The same matrix either way; Cholesky costs a sixth of
+    /// the singular value decomposition behind the pseudo-inverse.
+    /// </summary>
+    internal static Matrix<double> InverseOfNormalMatrix(Matrix<double> h)
+    {
+        ArgumentNullException.ThrowIfNull(h);
+        try
+        {
+            var inverse = h.Cholesky().Solve(Matrix<double>.Build.DenseIdentity(h.RowCount));
+            if (inverse.Enumerate().All(double.IsFinite)) return inverse;
+        }
+        catch (ArgumentException)
+        {
+            // not positive definite: fall through to the pseudo-inverse
+        }
+        return h.PseudoInverse();
+    }
+
+    /// <summary>
+    /// Ratio of the largest to the smallest singular value of J, from the eigenvalues of JᵀJ (σ_i² = λ_i; a symmetric
+    /// eigenproblem of p × p in place of the SVD of the m × p Jacobian). Below λ_min/λ_max = 10⁻¹² the eigenvalues of
+    /// JᵀJ carry too little precision (rounding of order 10⁻¹⁶ λ_max), so the SVD of J itself is taken.
+    /// </summary>
+    internal static double ConditionNumber(Matrix<double> j, Matrix<double> jtj)
+    {
+        ArgumentNullException.ThrowIfNull(j);
+        ArgumentNullException.ThrowIfNull(jtj);
+        if (j.ColumnCount == 0) return double.PositiveInfinity;
+        var eigen = jtj.Evd(Symmetricity.Symmetric).EigenValues.Select(z => z.Real).ToArray();
+        double high = eigen.Max(), low = eigen.Min();
+        if (high > 0 && low > 1e-12 * high) return Math.Sqrt(high / low);
+        var sv = j.Svd(false).S;
+        return sv.Count > 0 && sv[sv.Count - 1] > 0 ? sv[0] / sv[sv.Count - 1] : double.PositiveInfinity;
     }
 }

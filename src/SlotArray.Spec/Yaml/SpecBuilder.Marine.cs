@@ -11,7 +11,6 @@ internal sealed partial class SpecBuilder
 {
     private static IReadOnlyList<string> FilterKeys => SpecKeys.Filter.Names;
 
-    /// <summary>Whether a key's scalar is the word <c>auto</c>.</summary>
     /// <summary>
     /// An optional length of a filter or flare block: null when absent or <c>auto</c>; otherwise above 0 and up to
     /// <paramref name="maxMeters"/>, with <paramref name="good"/> cleared on an error (reported at the key).
@@ -26,6 +25,7 @@ internal sealed partial class SpecBuilder
         return Length.FromMeters(v.Value);
     }
 
+    /// <summary>Whether a key's scalar is the word <c>auto</c>.</summary>
     private static bool IsAuto(SpecNode? node) => node is ScalarNode { IsNull: false } sc && sc.Value.Trim().Equals("auto", StringComparison.OrdinalIgnoreCase);
 
     /// <summary>

@@ -128,4 +128,20 @@ public class ArrayFactorTests
         var oneByOne = Enumerable.Range(0, angles).Select(j => ArrayFactor.DirectSum(z, a, K, u.AsSpan(j, 1), wide: false)[0]).ToArray();
         Assert.Equal(Digest(oneByOne), Digest(wide));
     }
+
+    [Theory]
+    [InlineData(1000, 22_000)]   // a band-sweep directivity grid of a 1,000-slot stick: 512-bit passes, then 256-bit, then scalar
+    [InlineData(16, 37)]
+    public void Equally_spaced_sums_give_the_same_bits_on_every_vector_width_as_one_angle_at_a_time(int elements, int angles)
+    {
+        // Issue 12: the Horner sums of an equally spaced array run 32, 8 or 1 angle(s) at a time with the same products
+        // and sums per angle; a lone angle takes the scalar loop, so each angle alone must give the same bits.
+        var z = Enumerable.Range(0, elements).Select(i => -0.0112 - 0.0223 * i).ToArray();
+        var a = RandomExcitations(elements, 5);
+        var u = AngleGrid.UniformInTheta(-1.4, 1.2, angles).Sines.ToArray();
+        var all = ArrayFactor.AtSines(z, a, K, u);
+        var probe = Enumerable.Range(0, 64).Select(j => (int)((long)j * (angles - 1) / 63)).Distinct().ToArray();
+        var alone = probe.Select(j => ArrayFactor.AtSines(z, a, K, u.AsSpan(j, 1))[0]).ToArray();
+        Assert.Equal(Digest(alone), Digest(probe.Select(j => all[j]).ToArray()));
+    }
 }
