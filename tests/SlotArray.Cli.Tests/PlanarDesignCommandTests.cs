@@ -62,6 +62,17 @@ public class PlanarDesignCommandTests
         Assert.Equal(first, File.ReadAllText(Path.Combine(dir, "design.json")));
     }
 
+    /// <summary>The blocks a planar design does not evaluate yet are named on stderr rather than passed over in silence; the design still exits 0.</summary>
+    [Fact]
+    public void Blocks_not_yet_evaluated_for_planar_arrays_are_named()
+    {
+        string spec = Planar("planar-unused", extra: "taper_across: {type: taylor, sidelobes: -20 dB, nbar: 3}\nrequirements: {sidelobes: -19 dB}\ntolerance: {offset: 0.02 mm}\n");
+        string dir = Path.Combine(DesignRuns.TempFolder("planar-unused"), "out");
+        var (code, _, err) = DesignRuns.Run("design", spec, "-o", dir);
+        Assert.True(code == ExitCodes.Ok, err);
+        Assert.Contains("not evaluated for planar arrays yet: tolerance (Monte Carlo), requirements (pass/fail verdicts)", err, StringComparison.Ordinal);
+    }
+
     /// <summary>Highest lobe outside the main beam (walked down to its first minima) of the cut at azimuth φ, dB; with the slot's element pattern or the array factor alone.</summary>
     private static double PeakSidelobe(double[] x, double[] y, Complex[] e, double k, double phi, bool element = true)
     {
