@@ -27,6 +27,8 @@ internal sealed class FuzzSpec
             "12.9 GHz", "6.6 GHz", "5.8 GHz", "٩.٤١ GHz", "9,41 GHz", "1 MHz"],
         ["band"] = ["{band:0.02}", "{band:0.005}", "{band:0.08}", "{band:0.2}", "{band:0.0001}", "[6.56 GHz, 6.64 GHz]", "[9.30 GHz, 9.52 GHz]", "[1 GHz]"],
         ["coupling"] = ["none", "mutual", "mutual", "strong"],
+        ["coupling_scale"] = ["1", "0.9", "0.25", "4", "0.2", "5", "-1"],
+        ["coupling_phase"] = ["0 deg", "-25 deg", "-90 deg", "90 deg", "120 deg", "0.3 rad", "25"],
         ["guide.size"] = ["WR-90", "WR-75", "WR-62", "WR-112", "WR-137", "WR-42", "WR-187", "WR-9O"],
         ["guide.a"] = ["22.86 mm", "40 mm", "15.8 mm", "0.9 in", "10 mm", "60 mm", "5 mm"],
         ["guide.b"] = ["10.16 mm", "20 mm", "5 mm", "2 mm", "1 mm", "30 mm"],

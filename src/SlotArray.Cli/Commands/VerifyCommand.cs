@@ -19,6 +19,12 @@ internal static class VerifyCommand
     /// <summary>Above this many slots the run is long: a warning says so before it starts.</summary>
     public const int LargeArraySlots = 16;
 
+    /// <summary>
+    /// Engine throughput assumed before any run in the store, cell updates per second per thread: coarse 6-slot array runs
+    /// on a shared 2-core machine measured 40–70 M (one thread, load average 7–13; 2026-12-05); 10 M overstated the time 20-fold.
+    /// </summary>
+    public const double AssumedThroughput = 40e6;
+
     /// <summary>Builds the command.</summary>
     public static Command Build(TextWriter output, TextWriter error)
     {
@@ -49,7 +55,7 @@ internal static class VerifyCommand
         var store = new RunStore(Path.Combine(outDir, "runs"));
         if (design.Slots.Count > LargeArraySlots)
             error.WriteLine($"warning: {design.Slots.Count} slots (more than {LargeArraySlots}): a full-wave run of the whole array takes long and much memory; consider --mesh coarse first");
-        double throughput = store.MeasuredThroughput() ?? 10e6;
+        double throughput = store.MeasuredThroughput() ?? AssumedThroughput;
         double estimate = plan.EstimateSeconds(throughput, jobs);
         var m = plan.Run.Model;
         error.WriteLine(string.Format(Inv, "verify '{0}': {1} slots, {2} mesh, {3:0.00} Mcells; estimated run time about {4} ({5} threads at {6:0} Mcells/s each{7}; a rough guide)",
@@ -76,9 +82,34 @@ internal static class VerifyCommand
         else error.WriteLine($"using the finished run in {store.FolderOf(plan.Run)}");
         var result = plan.Reduce(outcome);
         var predicted = plan.PredictedFigures();
-        var files = VerifyReport.WriteAll(outDir, design, plan, result, predicted, outcome);
+        var calibration = CouplingCalibration(dir, result, error);
+        var files = VerifyReport.WriteAll(outDir, design, plan, result, predicted, outcome, calibration);
         VerifyReport.PrintTable(output, design, result.Figures, predicted);
+        if (calibration is not null) output.WriteLine(VerifyReport.CalibrationText(calibration));
         output.WriteLine($"wrote {outDir}/: {string.Join(", ", files)}");
         return ExitCodes.Ok;
+    }
+
+    /// <summary>
+    /// The exterior coupling calibration fitted to this run (<see cref="Core.Network.ExteriorCouplingCalibration"/>): the
+    /// design rebuilt from the folder's spec.yaml (as <c>compare</c> does), its own slot model for the self admittances;
+    /// null (with a note) when the folder has no spec or the design cannot be rebuilt.
+    /// </summary>
+    private static Core.Network.ExteriorCouplingFit? CouplingCalibration(string dir, FullWaveArrayResult result, TextWriter error)
+    {
+        string spec = Path.Combine(dir, "spec.yaml");
+        if (!File.Exists(spec)) return null;
+        try
+        {
+            var request = DesignCommand.Load(spec, TextWriter.Null, "no coupling calibration");
+            if (request.Slots.Type != Core.Slots.SlotType.Longitudinal) return null;
+            var analysed = DesignCommand.Analyse(request, new SlotCache(SlotCache.DefaultDirectory()), TextWriter.Null, false);
+            return Core.Network.ExteriorCouplingCalibration.Fit(analysed.Design, analysed.SlotModel, result.FrequenciesHz, result.S11);
+        }
+        catch (Exception e) when (e is UserInputException or Core.InfeasibleDesignException or Core.Slots.Tables.SlotTableException or ArgumentException)
+        {
+            error.WriteLine($"note: no exterior coupling calibration: {e.Message}");
+            return null;
+        }
     }
 }

@@ -5,6 +5,7 @@ using OxyPlot;
 using OxyPlot.Axes;
 using OxyPlot.Legends;
 using OxyPlot.Series;
+using ExteriorCouplingFit = SlotArray.Core.Network.ExteriorCouplingFit;
 using SlotArray.FullWave.Arrays;
 using SlotArray.FullWave.Runs;
 using SlotArray.Reports;
@@ -17,11 +18,12 @@ internal static class VerifyReport
 {
     private static readonly CultureInfo Inv = CultureInfo.InvariantCulture;
 
-    public static IReadOnlyList<string> WriteAll(string dir, DesignFolder d, ArrayVerification plan, FullWaveArrayResult r, ArrayFigures predicted, RunOutcome run)
+    public static IReadOnlyList<string> WriteAll(string dir, DesignFolder d, ArrayVerification plan, FullWaveArrayResult r, ArrayFigures predicted, RunOutcome run,
+        ExteriorCouplingFit? calibration = null)
     {
         Directory.CreateDirectory(dir);
-        AtomicFile.WriteText(Path.Combine(dir, "verify.json"), Json(d, plan, r, predicted, run));
-        AtomicFile.WriteText(Path.Combine(dir, "verify.md"), Markdown(d, plan, r, predicted, run));
+        AtomicFile.WriteText(Path.Combine(dir, "verify.json"), Json(d, plan, r, predicted, run, calibration));
+        AtomicFile.WriteText(Path.Combine(dir, "verify.md"), Markdown(d, plan, r, predicted, run, calibration));
         AtomicFile.WriteText(Path.Combine(dir, "fullwave.s1p"), Touchstone(d, r));
         AtomicFile.Write(Path.Combine(dir, "s11.png"), s => PlotExport.Write(S11Plot(d, r), s, "png"));
         AtomicFile.Write(Path.Combine(dir, "pattern.png"), s => PlotExport.Write(PatternPlot(d, r), s, "png"));
@@ -46,9 +48,16 @@ internal static class VerifyReport
         yield return string.Format(Inv, "| HPBW | {0:0.00} deg | {1:0.00} deg |", fw.HpbwDeg, pr.HpbwDeg);
     }
 
+    /// <summary>The calibration as a sentence with the two spec keys to paste.</summary>
+    public static string CalibrationText(ExteriorCouplingFit c) => string.Format(Inv,
+        "exterior coupling calibration fitted to this run (the design's own slot model for the self admittances; the infinite-plane mutual impedances × κ): "
+        + "κ = {0:0.000} at {1:+0.0;-0.0} deg, |S11| misfit RMS {2:0.0000} with κ = 1, {3:0.0000} with κ ({4:0.0000} without coupling); "
+        + "to design these slots again with it: 'coupling: mutual', 'coupling_scale: {0:0.000}', 'coupling_phase: {1:0.0} deg'",
+        c.Scale.Magnitude, c.Scale.Phase * 180 / Math.PI, c.RmsBefore, c.RmsAfter, c.RmsUncoupled);
+
     private static string Opt(double? db) => db is double v ? v.ToString("0.00", Inv) + " dB" : "none";
 
-    private static string Json(DesignFolder d, ArrayVerification plan, FullWaveArrayResult r, ArrayFigures fw, RunOutcome run) =>
+    private static string Json(DesignFolder d, ArrayVerification plan, FullWaveArrayResult r, ArrayFigures fw, RunOutcome run, ExteriorCouplingFit? c) =>
         JsonSerializer.Serialize(new Dictionary<string, object?>
         {
             ["name"] = d.Name,
@@ -63,6 +72,14 @@ internal static class VerifyReport
             ["sweep"] = r.FrequenciesHz.Select((f, i) => new Dictionary<string, double> { ["frequency_hz"] = f, ["s11_re"] = r.S11[i].Real, ["s11_im"] = r.S11[i].Imaginary }).ToList(),
             ["slot_voltages"] = r.SlotVoltages.Select((v, i) => new Dictionary<string, double> { ["slot"] = i + 1, ["re"] = v.Real, ["im"] = v.Imaginary }).ToList(),
             ["pattern"] = new Dictionary<string, object> { ["angle_deg"] = r.PatternDeg, ["level_db"] = r.PatternDb },
+            ["coupling_calibration"] = c is null ? null : new Dictionary<string, double>
+            {
+                ["coupling_scale"] = c.Scale.Magnitude,
+                ["coupling_phase_deg"] = c.Scale.Phase * 180 / Math.PI,
+                ["s11_misfit_rms_model"] = c.RmsBefore,
+                ["s11_misfit_rms_calibrated"] = c.RmsAfter,
+                ["s11_misfit_rms_uncoupled"] = c.RmsUncoupled,
+            },
             ["notes"] = new[]
             {
                 "S11 referred to the feed reference plane (last slot centre) with the lossless TE10 phase constant",
@@ -81,13 +98,14 @@ internal static class VerifyReport
         ["hpbw_deg"] = f.HpbwDeg,
     };
 
-    private static string Markdown(DesignFolder d, ArrayVerification plan, FullWaveArrayResult r, ArrayFigures pr, RunOutcome run)
+    private static string Markdown(DesignFolder d, ArrayVerification plan, FullWaveArrayResult r, ArrayFigures pr, RunOutcome run, ExteriorCouplingFit? c)
     {
         var sb = new StringBuilder();
         sb.Append(Inv, $"# Full-wave check: {d.Name}\n\n");
         sb.Append(Inv, $"{d.Slots.Count} slots built as the cut list gives them, {d.Termination} at datum A, fed from beyond the last slot. openEMS FDTD, {plan.Layout.Density.ToString().ToLowerInvariant()} mesh, {run.Stats.Cells / 1e6:0.00} Mcells, {run.Stats.Timesteps} time steps, {run.Stats.Seconds / 60:0.0} min.\n\n");
         foreach (string line in Table(d, r.Figures, pr)) sb.Append(line).Append('\n');
         sb.Append("\nS11 is referred to the feed reference plane; the pattern is the array factor of the full-wave slot voltages times the half-wave slot element pattern. Walls are perfect conductors; the tube is bare in free space.\n");
+        if (c is not null) sb.Append('\n').Append(CalibrationText(c)).Append('\n');
         return sb.ToString();
     }
 

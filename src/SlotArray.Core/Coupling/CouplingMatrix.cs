@@ -52,6 +52,15 @@ internal sealed class CouplingMatrix
     }
 
     /// <summary>Wraps a row-major array the caller gives up (no copy); used by the fill routines.</summary>
+    /// <summary>This matrix with every entry multiplied by <paramref name="factor"/>.</summary>
+    public CouplingMatrix Times(Complex factor)
+    {
+        var values = new Complex[Count * Count];
+        for (int i = 0; i < Count; i++)
+            for (int j = 0; j < Count; j++) values[i * Count + j] = this[i, j] * factor;
+        return new CouplingMatrix(Count, values);
+    }
+
     internal static CouplingMatrix Adopt(int count, Complex[] rowMajor) => new(count, rowMajor);
 
     /// <summary>Every entry multiplied by a constant (e.g. the Babinet factor 2/η² that turns Ω into S).</summary>

@@ -134,11 +134,24 @@ internal static class ArrayPipeline
     public static StickDesign DesignStick(StickRequest stick, CouplingMode coupling, AnalysisOptions? options = null)
     {
         ArgumentNullException.ThrowIfNull(stick);
-        options ??= AnalysisOptions.Default;
+        var result = DesignStickWith(stick, coupling, options ?? AnalysisOptions.Default);
+        // Every later coupled analysis of the design (sweep, tolerance, compare) uses the request's exterior calibration.
+        return result.Design.MutualCouplingScale == stick.MutualCouplingScale
+            ? result
+            : result with { Design = result.Design with { MutualCouplingScale = stick.MutualCouplingScale } };
+    }
+
+    private static StickDesign DesignStickWith(StickRequest stick, CouplingMode coupling, AnalysisOptions options)
+    {
         bool travelling = stick.Feed.Type == FeedType.TravellingWave;
         if (coupling == CouplingMode.Mutual)
             return travelling
-                ? CoupledTravellingWaveDesigner.Design(stick, CoupledTravellingWaveOptions.Default with { Progress = options.Progress, Cancellation = options.Cancellation })
+                ? CoupledTravellingWaveDesigner.Design(stick, CoupledTravellingWaveOptions.Default with
+                {
+                    Coupling = stick.MutualCouplingScale == System.Numerics.Complex.One ? null : CoupledSlotImpedances.Scaled(stick.MutualCouplingScale),
+                    Progress = options.Progress,
+                    Cancellation = options.Cancellation,
+                })
                 : ElliottDesigner.Design(stick, options.Elliott with { Progress = options.Progress, Cancellation = options.Cancellation });
         return stick.Feed.Type switch
         {

@@ -44,6 +44,13 @@ public sealed record ArrayRequest(
     /// </summary>
     public double PrototypeMargin { get; init; }
 
+    /// <summary>
+    /// <c>coupling_scale</c> and <c>coupling_phase</c>: a complex factor on every exterior mutual impedance of the coupled
+    /// design and analysis (<see cref="Network.CoupledSlotImpedances.Scaled"/>); 1 (default) keeps the infinite-ground-plane
+    /// model as it is. A calibration of that model for the real outside of the tube, measured full-wave (<c>verify</c> fits it).
+    /// </summary>
+    public System.Numerics.Complex MutualCouplingScale { get; init; } = System.Numerics.Complex.One;
+
     /// <summary><c>filter</c>: the polarisation filter in front of edge slots (<see cref="Marine.CrossPolarFilter"/>), or null for none.</summary>
     public Marine.FilterRequest? Filter { get; init; }
 

@@ -109,8 +109,8 @@ internal static class ElliottDesigner
             throw new ArgumentOutOfRangeException(nameof(options), "Elliott's iteration needs at least one outer and one Newton iteration");
         if (slot.CouplingKind != SlotCouplingKind.Offset)
             throw new InfeasibleDesignException("Elliott's design with mutual coupling is implemented for longitudinal (offset) slots only: use coupling: none for edge slots");
-        var uncoupled = StandingWaveDesigner.Design(stick).Design;
-        var coupling = options.Coupling ?? CoupledSlotImpedances.HalfCosineCentreReferred;
+        var uncoupled = StandingWaveDesigner.Design(stick).Design with { MutualCouplingScale = stick.MutualCouplingScale };
+        var coupling = options.Coupling ?? CoupledSlotImpedances.Scaled(stick.MutualCouplingScale);
         var f0 = stick.DesignFrequency;
         var guide = stick.Guide;
         int n = uncoupled.Count;

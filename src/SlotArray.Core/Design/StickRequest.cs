@@ -27,6 +27,9 @@ internal sealed record StickRequest(string Name, RectangularWaveguide Guide, Fre
     /// <summary>The taper family the amplitudes come from, named in the designers' messages; <see cref="TaperType.Given"/> by default.</summary>
     public TaperType Taper { get; init; } = TaperType.Given;
 
+    /// <summary>Complex factor on the exterior mutual impedances (<see cref="ArrayRequest.MutualCouplingScale"/>); 1 by default.</summary>
+    public System.Numerics.Complex MutualCouplingScale { get; init; } = System.Numerics.Complex.One;
+
     /// <summary>The one stick of a linear-array request, with the slot model and amplitudes chosen for it.</summary>
     /// <param name="request">The array request (name, guide, frequency, slot count, cutter, feed, taper family).</param>
     /// <param name="slot">The slot model (chosen at the composition root, <see cref="SlotSource"/>).</param>
@@ -40,6 +43,7 @@ internal sealed record StickRequest(string Name, RectangularWaveguide Guide, Fre
         {
             Cutter = request.Slots.Cutter,
             Taper = request.Taper.Type,
+            MutualCouplingScale = request.MutualCouplingScale,
         };
     }
 }

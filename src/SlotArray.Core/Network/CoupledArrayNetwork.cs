@@ -80,14 +80,33 @@ internal static class CoupledArrayNetwork
     {
         if (points < 2) throw new ArgumentOutOfRangeException(nameof(points), points, "a sweep needs at least 2 points");
         if (!(high > low)) throw new ArgumentOutOfRangeException(nameof(high), high.ToString(), $"the band's upper edge must exceed its lower edge {low}");
-        var sys = new CoupledSystem(design, slot, coupling);
+        var sys = BandSystem(design, slot, low, high, coupling);
         var list = new NetworkSolution[points + 1];
         // The frequencies are independent systems (the slot model's memo is thread-safe): solved in parallel, each into
-        // its own slot, so the order of evaluation cannot change them; the design frequency is the last item.
-        ParallelFailures.Unwrapped(() => Parallel.For(0, points + 1, i => list[i] = sys.Solve(i == points
-            ? design.DesignFrequency
-            : Frequency.FromHertz(low.Hertz + (high.Hertz - low.Hertz) * i / (points - 1)))));
+        // its own slot, so the order of evaluation cannot change them; the design frequency is the last item, solved with
+        // the mutual impedances filled at it (so every figure at the design frequency is that of Solve).
+        ParallelFailures.Unwrapped(() => Parallel.For(0, points + 1, i => list[i] = i == points
+            ? new CoupledSystem(design, slot, coupling).Solve(design.DesignFrequency)
+            : sys.Solve(Frequency.FromHertz(low.Hertz + (high.Hertz - low.Hertz) * i / (points - 1)))));
         return new FrequencySweep(design.DesignFrequency, list[points], Array.AsReadOnly(list[..points]));
+    }
+
+    /// <summary>
+    /// The coupled system for solves across [low, high] (spanning the design frequency too): when that span is narrow enough
+    /// (<see cref="CouplingAcrossBand.Interpolates"/>), the mutual impedances are filled at the
+    /// <see cref="CouplingAcrossBand.Nodes"/> Chebyshev nodes of the span and interpolated between them (relative error
+    /// of order 1e-9, measured in the tests against direct fills) instead of a fill, N(N − 1)/2 reaction integrals, at
+    /// every frequency; otherwise filled at each frequency.
+    /// </summary>
+    private static CoupledSystem BandSystem(ArrayDesign design, IShuntSlotModel slot, Frequency low, Frequency high, MutualImpedanceModel? coupling)
+    {
+        var direct = new CoupledSystem(design, slot, coupling);
+        var f0 = design.DesignFrequency;
+        var lo = f0 < low ? f0 : low;
+        var hi = f0 > high ? f0 : high;
+        if (!CouplingAcrossBand.Interpolates(lo, hi)) return direct;
+        var across = new CouplingAcrossBand(direct.Placements, design.Slots[0].Width, lo, hi, direct.Coupling);
+        return new CoupledSystem(design, slot, (_, _, f) => across.At(f));
     }
 
     /// <summary>
@@ -98,7 +117,7 @@ internal static class CoupledArrayNetwork
         MutualImpedanceModel? coupling = null)
     {
         var sweep = Sweep(design, slot, low, high, points, coupling);
-        var sys = new CoupledSystem(design, slot, coupling);
+        var sys = BandSystem(design, slot, low, high, coupling);
         int best = 0;
         for (int i = 1; i < points; i++) if (sweep.Points[i].S11.Magnitude < sweep.Points[best].S11.Magnitude) best = i;
         double step = (high.Hertz - low.Hertz) / (points - 1);
@@ -159,7 +178,7 @@ internal static class CoupledArrayNetwork
                 throw new ArgumentException("the coupled analysis is for longitudinal (offset) slots; edge slots have no equivalent-dipole model here", nameof(design));
             this.design = design;
             this.slot = slot;
-            this.coupling = coupling ?? CoupledSlotImpedances.HalfCosineCentreReferred;
+            this.coupling = coupling ?? CoupledSlotImpedances.Scaled(design.MutualCouplingScale);
             bool centre = design.Feed == FeedPosition.Centre;
             line = new LineNetwork(design.Guide, design.Slots.Select(s => s.Position.Meters).ToArray(), design.NearTermination,
                 centre ? design.FarTermination ?? throw new ArgumentException("a centre-fed design needs a far termination", nameof(design)) : null,
@@ -168,6 +187,12 @@ internal static class CoupledArrayNetwork
             placements = design.Slots.Select(s => new LongitudinalSlotPlacement(s.Position, Length.FromMeters(s.Coupling), 0.5 * s.Length)).ToArray();
             leftCount = centre ? design.Slots.Count(s => s.Position < design.FeedPlane) : design.Count;
         }
+
+        /// <summary>The mutual-impedance model in use (the given one, or the default of the design).</summary>
+        public MutualImpedanceModel Coupling => coupling;
+
+        /// <summary>The slots as equivalent dipoles (centre, offset, half-length), the coupling model's input.</summary>
+        public IReadOnlyList<LongitudinalSlotPlacement> Placements => placements;
 
         /// <summary>The mutual impedances of the slots at f.</summary>
         public CouplingMatrix Mutual(Frequency f) => coupling(placements, design.Slots[0].Width, f);

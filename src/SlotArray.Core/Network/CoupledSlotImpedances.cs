@@ -46,6 +46,18 @@ internal static class CoupledSlotImpedances
     /// </summary>
     public static MutualImpedanceModel HalfCosineCentreReferredAdaptive { get; } = (slots, width, f) => Fill(slots, f, CosineCurrentMutualImpedance.AdaptiveElectrical);
 
+    /// <summary>
+    /// <see cref="HalfCosineCentreReferred"/> with every mutual impedance multiplied by <paramref name="scale"/> (the same
+    /// model when it is 1): a calibration of the infinite-ground-plane exterior for the real outside of the guide. The
+    /// model's exterior is an infinite flat plane; slots in the 25 mm face of a WR-90 tube radiate into a narrow face
+    /// whose edges and side walls the model leaves out (see <see cref="SlotMutualCoupling"/>), and a full-wave run of the
+    /// uncoupled array of the same slots measures what that changes (measured here: about 0.9∠−25° for 6 slots at λg/2 in
+    /// WR-90, README "Full-wave characterisation").
+    /// </summary>
+    public static MutualImpedanceModel Scaled(Complex scale) => scale == Complex.One
+        ? HalfCosineCentreReferred
+        : (slots, width, f) => Fill(slots, width, f).Times(scale);
+
     /// <summary>No coupling: a zero matrix (the isolated-slot limit; used to check that the coupled procedures reduce to the uncoupled ones).</summary>
     public static MutualImpedanceModel None { get; } = (slots, _, _) => CouplingMatrix.Zero(slots.Count);
 

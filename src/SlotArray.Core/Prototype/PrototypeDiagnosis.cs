@@ -1,4 +1,5 @@
 using SlotArray.Core.Design;
+using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
 using SlotArray.Core.Slots;
 using SlotArray.Core.Stick;

@@ -52,7 +52,7 @@ internal sealed class PrototypeModel
                 .Select(s => new LongitudinalSlotPlacement(s.Position, Length.FromMeters(s.Coupling), 0.5 * s.Length)).ToArray();
         CouplingBand = couplingBand;
         across = new Lazy<CouplingAcrossBand?>(() => placements is not null && couplingBand is { } b && CouplingAcrossBand.Interpolates(b.Low, b.High)
-            ? new CouplingAcrossBand(placements, asCut.Slots[0].Width, b.Low, b.High, CoupledSlotImpedances.HalfCosineCentreReferred)
+            ? new CouplingAcrossBand(placements, asCut.Slots[0].Width, b.Low, b.High, CoupledSlotImpedances.Scaled(asCut.MutualCouplingScale))
             : null);
     }
 
@@ -118,7 +118,7 @@ internal sealed class PrototypeModel
     private CouplingMatrix Frozen(IReadOnlyList<LongitudinalSlotPlacement> slots, Length width, Frequency f)
         => frozen.GetOrAdd(f.Hertz, _ => across.Value is { } band && band.Covers(f)
             ? band.At(f)
-            : CoupledSlotImpedances.HalfCosineCentreReferred(placements!, width, f));
+            : CoupledSlotImpedances.Scaled(AsCut.MutualCouplingScale)(placements!, width, f));
 
     /// <summary>
     /// The co-polarised far field in the plane of the guide axis at the given angles (rad, the tool's sign: θ &gt; 0 toward

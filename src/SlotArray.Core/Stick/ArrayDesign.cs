@@ -65,6 +65,12 @@ internal sealed record ArrayDesign(
     /// <summary>Number of slots.</summary>
     public int Count => Slots.Count;
 
+    /// <summary>
+    /// Complex factor on the exterior mutual impedances wherever this design is analysed with coupling (1: the
+    /// infinite-ground-plane model as it is); the designer copies it from its request.
+    /// </summary>
+    public System.Numerics.Complex MutualCouplingScale { get; init; } = System.Numerics.Complex.One;
+
     /// <summary>Sum of the designed conductances (1 for a matched end-fed design, 2 for a centre-fed one: 1 per half).</summary>
     public double TotalConductance => Slots.Sum(s => s.Conductance);
 }

@@ -1,4 +1,5 @@
 using System.Numerics;
+using SlotArray.Core.Quantities;
 
 namespace SlotArray.Core.Tolerance;
 
@@ -34,8 +35,8 @@ internal sealed class BarycentricSurface
         if (!(halfWidthX >= 0) || !(halfWidthY >= 0)) throw new ArgumentOutOfRangeException(nameof(halfWidthX), "the half-widths must be zero or positive");
         HalfWidthX = halfWidthX;
         HalfWidthY = halfWidthY;
-        (nodesX, weightsX) = Nodes(halfWidthX, nodes);
-        (nodesY, weightsY) = Nodes(halfWidthY, secondNodes);
+        (nodesX, weightsX) = ChebyshevBarycentric.Nodes(halfWidthX, nodes);
+        (nodesY, weightsY) = ChebyshevBarycentric.Nodes(halfWidthY, secondNodes);
         values = new Complex[nodesX.Length * nodesY.Length];
         for (int i = 0; i < nodesX.Length; i++)
             for (int j = 0; j < nodesY.Length; j++)
@@ -57,27 +58,13 @@ internal sealed class BarycentricSurface
     /// <summary>True when (dx, dy) lies in the rectangle.</summary>
     public bool Contains(double dx, double dy) => Math.Abs(dx) <= HalfWidthX && Math.Abs(dy) <= HalfWidthY;
 
-    /// <summary>The n Chebyshev points of the second kind on [−half, half] (0 exactly at the centre of an odd count) and their barycentric weights.</summary>
-    public static (double[] X, double[] W) Nodes(double half, int n)
-    {
-        if (half == 0) return ([0.0], [1.0]);
-        var x = new double[n];
-        var w = new double[n];
-        for (int j = 0; j < n; j++)
-        {
-            x[j] = 2 * j == n - 1 ? 0.0 : half * Math.Cos(j * Math.PI / (n - 1));
-            w[j] = (j % 2 == 0 ? 1.0 : -1.0) * (j == 0 || j == n - 1 ? 0.5 : 1.0);
-        }
-        return (x, w);
-    }
-
     /// <summary>The interpolant at (dx, dy); exact at the nodes. Outside the rectangle it extrapolates (callers check <see cref="Contains"/>).</summary>
     public Complex Evaluate(double dx, double dy)
     {
         Span<double> cx = stackalloc double[nodesX.Length];
         Span<double> cy = stackalloc double[nodesY.Length];
-        Coefficients(nodesX, weightsX, dx, cx);
-        Coefficients(nodesY, weightsY, dy, cy);
+        ChebyshevBarycentric.Coefficients(nodesX, weightsX, dx, cx);
+        ChebyshevBarycentric.Coefficients(nodesY, weightsY, dy, cy);
         double re = 0, im = 0;
         int ny = nodesY.Length;
         for (int i = 0; i < cx.Length; i++)
@@ -96,14 +83,4 @@ internal sealed class BarycentricSurface
         return new Complex(re, im);
     }
 
-    /// <summary>Normalised barycentric coefficients ℓ_j(x) (Σ ℓ_j = 1); a Kronecker delta at a node.</summary>
-    public static void Coefficients(double[] nodes, double[] weights, double x, Span<double> c)
-    {
-        if (nodes.Length == 1) { c[0] = 1; return; }
-        for (int j = 0; j < nodes.Length; j++)
-            if (x == nodes[j]) { c.Clear(); c[j] = 1; return; }
-        double sum = 0;
-        for (int j = 0; j < nodes.Length; j++) { c[j] = weights[j] / (x - nodes[j]); sum += c[j]; }
-        for (int j = 0; j < nodes.Length; j++) c[j] /= sum;
-    }
 }

@@ -134,17 +134,20 @@ internal sealed class ArrayVerification
     private static double Db(double magnitude) => 20 * Math.Log10(Math.Max(magnitude, 1e-15));
 
     /// <summary>
-    /// A rough run-time estimate, seconds: cells × time steps ÷ throughput. Time steps: the pulse plus a ring-down of
-    /// about 40 pulse lengths for a resonant array (from this project's runs: coarse single slots stop after ~2 pulse
-    /// lengths; common practice, no source, for arrays); throughput from earlier runs in the store, else 10 Mcells/s per thread.
+    /// A rough run-time estimate, seconds: cells × time steps ÷ throughput. Time step: the Courant limit of the smallest
+    /// cell of each axis, Δt = 1/(c √(Δx⁻² + Δy⁻² + Δz⁻²)) (A. Taflove and S. C. Hagness, <i>Computational
+    /// Electrodynamics</i>, 3rd ed., Artech House 2005, eq. 4.92, from memory). Duration: the pulse and its ring-down,
+    /// 1 + 0.3 N pulse lengths for N slots (6-slot coarse runs here stopped after 2.6–2.8 pulse lengths, 2026-12-05);
+    /// throughput from earlier runs in the store, else the caller's assumption.
     /// </summary>
     public double EstimateSeconds(double cellsPerSecondPerThread, int threads)
     {
         var m = Run.Model;
-        double minCell = m.Mesh.SmallestCellMm * 1e-3;
-        double dt = minCell / (PhysicalConstants.SpeedOfLight * Math.Sqrt(3));
+        double Smallest(IReadOnlyList<double> l) => l.Zip(l.Skip(1), (a, b) => b - a).Min() * 1e-3;
+        double inv2 = new[] { m.Mesh.X, m.Mesh.Y, m.Mesh.Z }.Sum(l => 1 / Math.Pow(Smallest(l), 2));
+        double dt = 1 / (PhysicalConstants.SpeedOfLight * Math.Sqrt(inv2));
         double pulse = 2 * 9 / (2 * Math.PI * m.HalfBandwidthHz); // the engine's Gaussian: 9/(2π fc) either side of its peak (from memory)
-        double steps = pulse / dt * (1 + 0.5 * Design.Slots.Count);
+        double steps = pulse / dt * (1 + 0.3 * Design.Slots.Count);
         return m.Mesh.Cells * steps / (cellsPerSecondPerThread * Math.Max(1, threads) * 0.7);
     }
 }

@@ -22,6 +22,9 @@ internal static class SpecKeys
     /// <summary>Cosine-pedestal exponent range.</summary>
     public const double MinExponent = 1, MaxExponent = 20;
 
+    /// <summary>Range of <c>coupling_scale</c>: a calibration of the exterior mutual impedances, not a redesign of them.</summary>
+    public const double MinCouplingScale = 0.25, MaxCouplingScale = 4;
+
     private static QuantityValue Q(QuantityKind kind, string range) => new([kind], range);
     private static QuantityValue GuideDistance(string range) => new([QuantityKind.GuideWavelengths, QuantityKind.Length], range);
     private static ChoiceValue Words<T>(IReadOnlyList<KeyValuePair<string, T>> table) where T : struct, Enum
@@ -262,6 +265,8 @@ internal static class SpecKeys
         new("taper_across", new BlockValue(Taper), "planar arrays: the taper across the branches (separable with taper along them)")
             { DefaultText = "planar: the same as taper (warning)" },
         new("coupling", Words(SpecNames.CouplingModes), "mutual: Elliott's design with mutual coupling between slots") { Default = "none" },
+        new("coupling_scale", new NumberValue(MinCouplingScale, MaxCouplingScale), "longitudinal slots: magnitude of a factor on every exterior mutual impedance of the coupled design and analysis, a full-wave calibration of the infinite-ground-plane model for the tube (verify prints it)") { Default = 1L, Example = "0.9" },
+        new("coupling_phase", Q(QuantityKind.Angle, "-90 deg to +90 deg"), "phase of that factor") { Default = "0 deg", Example = "-25 deg" },
         new("tolerance", new BlockValue(ToleranceBlock), "machining tolerances for the Monte Carlo analysis") { DefaultText = "no tolerance analysis" },
         new("requirements", new BlockValue(Requirements), Requirements.Description) { DefaultText = "none" },
         new("transmitter", new BlockValue(Transmitter), Transmitter.Description) { DefaultText = "no exposure estimate" },

@@ -55,6 +55,7 @@ internal sealed partial class SpecBuilder
         if (coupling == CouplingMode.Mutual && slots?.Type == SlotType.Edge && !Require(s, "coupling", false,
                 "'coupling: mutual' is designed for broad-wall (longitudinal) slots only; edge slots have no coupled designer yet: write 'coupling: none'"))
             coupling = null;
+        var couplingScale = CouplingScale(s, out bool couplingScaleOk);
         var tolerance = Tolerance(s, slots?.Type, out bool toleranceOk);
         var requirements = Requirements(s);
         var transmitter = Transmitter(s, out bool transmitterOk);
@@ -70,10 +71,30 @@ internal sealed partial class SpecBuilder
         fabricationOk &= planarOk;
 
         if (D.ErrorCount > 0 || name is null || f is null || band is null || guide is null || slots is null || feed is null
-            || taper is null || coupling is null || !toleranceOk || requirements is null || !transmitterOk || !fabricationOk)
+            || taper is null || coupling is null || !couplingScaleOk || !toleranceOk || requirements is null || !transmitterOk || !fabricationOk)
             return null;
         return new ArrayRequest(name, f.Value, band.Value.Low, band.Value.High, guide, slots, feed, taper, coupling.Value,
-            tolerance, requirements, transmitter) { PrototypeMargin = margin, Filter = filter, Flare = flare, Operating = operating, Planar = planar };
+            tolerance, requirements, transmitter) { PrototypeMargin = margin, Filter = filter, Flare = flare, Operating = operating, Planar = planar, MutualCouplingScale = couplingScale };
+    }
+
+    /// <summary><c>coupling_scale</c> and <c>coupling_phase</c>: the complex factor on the exterior mutual impedances (1 when absent).</summary>
+    private System.Numerics.Complex CouplingScale(Section s, out bool ok)
+    {
+        ok = true;
+        double? scale = s.Has("coupling_scale") ? Number(s, "coupling_scale", false, "0.9") : 1;
+        if (scale is not null && !Require(s, "coupling_scale", scale >= SpecKeys.MinCouplingScale && scale <= SpecKeys.MaxCouplingScale,
+                $"'coupling_scale' must be between {Num(SpecKeys.MinCouplingScale)} and {Num(SpecKeys.MaxCouplingScale)}, got {Num(scale.Value)}: it calibrates the mutual coupling model, it does not replace it"))
+            scale = null;
+        double? phase = s.Has("coupling_phase") ? Quantity(s, "coupling_phase", QuantityKind.Angle, false, "-25 deg") : 0;
+        if (phase is not null && !Require(s, "coupling_phase", Math.Abs(phase.Value) <= Math.PI / 2 + 1e-12,
+                $"'coupling_phase' must be between -90 deg and +90 deg, got {Num(phase.Value * 180 / Math.PI)} deg"))
+            phase = null;
+        if (scale is null || phase is null)
+        {
+            ok = false;
+            return System.Numerics.Complex.One;
+        }
+        return System.Numerics.Complex.FromPolarCoordinates(scale.Value, phase.Value);
     }
 
     private string? Name(Section s)

@@ -1,10 +1,8 @@
 using System.Numerics;
 using SlotArray.Core.Coupling;
-using SlotArray.Core.Network;
 using SlotArray.Core.Quantities;
-using SlotArray.Core.Tolerance;
 
-namespace SlotArray.Core.Prototype;
+namespace SlotArray.Core.Network;
 
 /// <summary>
 /// The mutual impedances of one slot geometry across a measured band, from <see cref="Nodes"/> fills of the model at
@@ -43,7 +41,7 @@ internal sealed class CouplingAcrossBand
         count = slots.Count;
         centre = 0.5 * (low.Hertz + high.Hertz);
         half = 0.5 * (high.Hertz - low.Hertz);
-        (nodes, weights) = BarycentricSurface.Nodes(half, Nodes);
+        (nodes, weights) = ChebyshevBarycentric.Nodes(half, Nodes);
         distance = new double[count * count];
         for (int m = 0; m < count; m++)
             for (int n = 0; n < count; n++)
@@ -75,7 +73,7 @@ internal sealed class CouplingAcrossBand
     public CouplingMatrix At(Frequency f)
     {
         Span<double> c = stackalloc double[Nodes];
-        BarycentricSurface.Coefficients(nodes, weights, f.Hertz - centre, c);
+        ChebyshevBarycentric.Coefficients(nodes, weights, f.Hertz - centre, c);
         double wave = f.FreeSpaceWavenumber;
         var values = new Complex[count * count];
         for (int i = 0; i < values.Length; i++)
