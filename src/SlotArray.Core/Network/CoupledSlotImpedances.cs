@@ -56,7 +56,7 @@ internal static class CoupledSlotImpedances
     /// </summary>
     public static MutualImpedanceModel Scaled(Complex scale) => scale == Complex.One
         ? HalfCosineCentreReferred
-        : (slots, width, f) => Fill(slots, width, f).Times(scale);
+        : (slots, width, f) => Fill(slots, f, CosineCurrentMutualImpedance.MutualElectrical).Times(scale);
 
     /// <summary>No coupling: a zero matrix (the isolated-slot limit; used to check that the coupled procedures reduce to the uncoupled ones).</summary>
     public static MutualImpedanceModel None { get; } = (slots, _, _) => CouplingMatrix.Zero(slots.Count);
