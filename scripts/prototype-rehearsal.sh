@@ -6,12 +6,17 @@
 #   4. `verify` the next plate `compare` designed, full-wave again.
 # Prints the full-wave best-match offset of the first plate, the diagnosed offset, and the next plate's full-wave offset
 # (targets: diagnosis within ±0.1 % of the full-wave's own offset; next plate within ±0.2 % of f0).
-# Usage: scripts/prototype-rehearsal.sh [coarse|normal|fine] [OUTDIR]   (needs openEMS: apt-get install openems)
+# Usage: scripts/prototype-rehearsal.sh [coarse|normal|fine] [OUTDIR] [COUPLING_SCALE COUPLING_PHASE_DEG]
+#   (needs openEMS: apt-get install openems). The optional pair is the exterior coupling calibration that `verify` fitted
+#   to another array of the same slots in the same tube (scripts/fullwave-uniform6.sh prints it for its design (b)); it
+#   goes into the spec, so compare's model and the next plate use it.
 # Engine runs are niced and single-threaded (--jobs 1). Run time on a quiet 2-core machine, coarse mesh: a few minutes
 # (two array runs of about 0.35 Mcells); on a loaded machine much longer.
 set -euo pipefail
 mesh="${1:-coarse}"
 out="${2:-out/prototype-rehearsal-$mesh}"
+kscale="${3:-}"
+kphase="${4:-}"
 cd "$(dirname "$0")/.."
 mkdir -p "$out"
 dotnet build src/SlotArray.Cli -c Release -v q >/dev/null
@@ -27,6 +32,7 @@ slots: {type: longitudinal, count: 6, width: 1.5875 mm}
 feed: {type: standing-wave}
 taper: {type: uniform}
 YAML
+if [ -n "$kscale" ]; then printf 'coupling_scale: %s\ncoupling_phase: %s deg\n' "$kscale" "$kphase" >> "$out/uniform6.yaml"; fi
 sa design "$out/uniform6.yaml" -o "$out/design" -q
 nice -n 10 dotnet src/SlotArray.Cli/bin/Release/net10.0/slotarray.dll verify "$out/design" --mesh "$mesh" --jobs 1 -q
 sa compare "$out/design" "$out/design/verify/fullwave.s1p" -o "$out/compare" -q > "$out/compare.log"

@@ -21,6 +21,12 @@ namespace SlotArray.Benchmarks;
 /// Growth: a fixed ≈ 0.2 ms CPU per trial (pattern metrics, envelope, network set-up, statistics) plus a part linear in N
 /// (the cut's Horner sums, N × 2049 × 3 series terms), with the O(N²) power kernel showing from N ≈ 256 (1.5 ms CPU per trial).
 /// Under heavy contention (load average 13–20) the same run took 5.8 s at N = 64.
+/// Issue 12 (512-bit Goertzel sums without register copies, vectorised half-space power, lobe refinement only where it can
+/// win, bounded envelope sample): --job short --inProcess at load average 13–20: N = 16: 2.0 s, N = 64: 1.78 s, N = 128:
+/// 2.83 s (allocated 41 / 96 / 171 MB per 10,000 trials: the per-trial network still allocates); not comparable with the
+/// quiet figures above. One thread at N = 64, measured apart with a stopwatch: before, about 120 µs a trial (24 µs network,
+/// 96 µs evaluation; wall clock, load 6–8); after, 65 µs of process CPU a trial (load 8–12: Goertzel sums 21 µs, line
+/// network and surrogates 12–15 µs, peak-sidelobe search 6 µs, half-space power 5.5 µs, floor 3 µs).
 /// </summary>
 [MemoryDiagnoser]
 public class ToleranceBenchmarks
