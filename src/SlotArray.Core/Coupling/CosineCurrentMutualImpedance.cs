@@ -25,6 +25,9 @@ internal static class CosineCurrentMutualImpedance
     private const int Order = 16;
     private static readonly GaussLegendreRule Rule = new(0, 1, Order);
 
+    /// <summary>The lower orders <see cref="AdaptiveElectrical"/> uses for pairs a quarter wavelength and one wavelength apart.</summary>
+    private static readonly GaussLegendreRule NearRule = new(0, 1, 6), FarRule = new(0, 1, 4);
+
     /// <summary>
     /// Mutual impedance (Ω) for half-cosine currents on dipoles of half-lengths h1, h2, lateral distance d and
     /// centre stagger s, at frequency f (η0), referred to the centre currents.
@@ -37,6 +40,27 @@ internal static class CosineCurrentMutualImpedance
 
     /// <summary><see cref="Mutual"/> in electrical lengths (radians) kd, ks, kh1, kh2; η in Ω (default η0).</summary>
     public static Complex MutualElectrical(double kd, double ks, double kh1, double kh2, double eta = PhysicalConstants.Eta0)
+        => Electrical(kd, ks, kh1, kh2, eta, Rule);
+
+    /// <summary>
+    /// <see cref="MutualElectrical"/> with fewer points for distant pairs, which make up almost all of a large aperture: a
+    /// 6-point rule on each half when the dipoles' closest approach R is at least a quarter wavelength (kR ≥ π/2), a
+    /// 4-point rule from two wavelengths (kR ≥ 4π), the 16-point rule closer. The integrand is analytic in a strip whose
+    /// half-width grows with R (the kernel's branch points sit at the closest approach off the axis) and its phase varies
+    /// by at most kh ≈ 1.5 rad over a half, so the Gauss–Legendre error falls fast with the order (the Bernstein-ellipse
+    /// bound, e.g. L. N. Trefethen, <i>Approximation Theory and Approximation Practice</i>, SIAM 2013, Ch. 19, from
+    /// memory). Measured against the 16-point value for half-lengths 0.23 and 0.25 λ: 6 points ≤ 5e-9 relative from λ/4
+    /// on, 4 points ≤ 8e-6 from λ on (the tests hold it to 1e-8 and 1e-5): far below the model's own error, on terms
+    /// that are themselves small. About 1/16 of the kernel evaluations on a 32 × 32 aperture.
+    /// </summary>
+    public static Complex AdaptiveElectrical(double kd, double ks, double kh1, double kh2, double eta = PhysicalConstants.Eta0)
+    {
+        double gap = Math.Max(0, Math.Abs(ks) - kh1 - kh2), r2 = kd * kd + gap * gap;
+        var rule = r2 >= 4 * Math.PI * Math.PI ? FarRule : r2 >= Math.PI * Math.PI / 4 ? NearRule : Rule;
+        return Electrical(kd, ks, kh1, kh2, eta, rule);
+    }
+
+    private static Complex Electrical(double kd, double ks, double kh1, double kh2, double eta, GaussLegendreRule rule)
     {
         if (!(kd >= 0) || !double.IsFinite(kd)) throw new ArgumentOutOfRangeException(nameof(kd), kd, "the lateral distance must be zero or positive");
         if (!(kh1 > 0) || !double.IsFinite(kh1)) throw new ArgumentOutOfRangeException(nameof(kh1), kh1, "the half-length must be positive");
@@ -53,32 +77,33 @@ internal static class CosineCurrentMutualImpedance
         var sum = Complex.Zero;
         for (int half1 = -1; half1 <= 1; half1 += 2)
             for (int half2 = -1; half2 <= 1; half2 += 2)
-                sum += Block(kd, ks, kh1, kh2, half1, half2);
+                sum += Block(kd, ks, kh1, kh2, half1, half2, rule);
         return Complex.ImaginaryOne * eta / (4 * Math.PI) * sum;
     }
 
     /// <summary>∫∫ over one half of each dipole (sign gives the side of the centre).</summary>
-    private static Complex Block(double d, double s, double h1, double h2, int side1, int side2)
+    private static Complex Block(double d, double s, double h1, double h2, int side1, int side2, GaussLegendreRule rule)
     {
+        int order = rule.Order;
         double a1 = Math.PI / (2 * h1), a2 = Math.PI / (2 * h2), d2 = d * d;
         // The second dipole's abscissae, weights and current shapes do not depend on the first's point: computed once.
-        Span<double> zeta = stackalloc double[Order], w2 = stackalloc double[Order], cos2 = stackalloc double[Order], dsin2 = stackalloc double[Order];
-        for (int j = 0; j < Order; j++)
+        Span<double> zeta = stackalloc double[order], w2 = stackalloc double[order], cos2 = stackalloc double[order], dsin2 = stackalloc double[order];
+        for (int j = 0; j < order; j++)
         {
-            zeta[j] = side2 * h2 * Rule.GetAbscissa(j);
-            w2[j] = h2 * Rule.GetWeight(j);
+            zeta[j] = side2 * h2 * rule.GetAbscissa(j);
+            w2[j] = h2 * rule.GetWeight(j);
             var (sin2, c2) = Math.SinCos(a2 * zeta[j]);
             cos2[j] = c2;
             dsin2[j] = -a2 * sin2;
         }
         var sum = Complex.Zero;
-        for (int i = 0; i < Order; i++)
+        for (int i = 0; i < order; i++)
         {
-            double z = side1 * h1 * Rule.GetAbscissa(i), w1 = h1 * Rule.GetWeight(i);
+            double z = side1 * h1 * rule.GetAbscissa(i), w1 = h1 * rule.GetWeight(i);
             var (sin1, cos1) = Math.SinCos(a1 * z);
             double i1 = cos1, di1 = -a1 * sin1;
             var inner = Complex.Zero;
-            for (int j = 0; j < Order; j++)
+            for (int j = 0; j < order; j++)
             {
                 double dz = z - (s + zeta[j]), r = Math.Sqrt(d2 + dz * dz);
                 var (sr, cr) = Math.SinCos(r);

@@ -37,7 +37,14 @@ internal static class CoupledSlotImpedances
     /// filled on two threads with results independent of the thread count; zero diagonal. Cost ∝ N(N − 1)/2, about
     /// 35 µs a pair.
     /// </summary>
-    public static MutualImpedanceModel HalfCosineCentreReferred { get; } = Fill;
+    public static MutualImpedanceModel HalfCosineCentreReferred { get; } = (slots, width, f) => Fill(slots, f, CosineCurrentMutualImpedance.MutualElectrical);
+
+    /// <summary>
+    /// <see cref="HalfCosineCentreReferred"/> with the lower-order rule for pairs a quarter wavelength or more apart
+    /// (<see cref="CosineCurrentMutualImpedance.AdaptiveElectrical"/>; the same values to about 1e-9): for large planar
+    /// apertures, where almost every pair is distant.
+    /// </summary>
+    public static MutualImpedanceModel HalfCosineCentreReferredAdaptive { get; } = (slots, width, f) => Fill(slots, f, CosineCurrentMutualImpedance.AdaptiveElectrical);
 
     /// <summary>
     /// <see cref="HalfCosineCentreReferred"/> with every mutual impedance multiplied by <paramref name="scale"/> (the same
@@ -49,12 +56,12 @@ internal static class CoupledSlotImpedances
     /// </summary>
     public static MutualImpedanceModel Scaled(Complex scale) => scale == Complex.One
         ? HalfCosineCentreReferred
-        : (slots, width, f) => Fill(slots, width, f).Times(scale);
+        : (slots, width, f) => Fill(slots, f, CosineCurrentMutualImpedance.MutualElectrical).Times(scale);
 
     /// <summary>No coupling: a zero matrix (the isolated-slot limit; used to check that the coupled procedures reduce to the uncoupled ones).</summary>
     public static MutualImpedanceModel None { get; } = (slots, _, _) => CouplingMatrix.Zero(slots.Count);
 
-    private static CouplingMatrix Fill(IReadOnlyList<LongitudinalSlotPlacement> slots, Length width, Frequency f)
+    private static CouplingMatrix Fill(IReadOnlyList<LongitudinalSlotPlacement> slots, Frequency f, Func<double, double, double, double, double, Complex> pair)
     {
         ArgumentNullException.ThrowIfNull(slots);
         int n = slots.Count;
@@ -75,8 +82,8 @@ internal static class CoupledSlotImpedances
             for (int j = i + 1; j < n; j++)
             {
                 var q = slots[j];
-                var z = CosineCurrentMutualImpedance.MutualElectrical(k * Math.Abs(p.Offset.Meters - q.Offset.Meters),
-                    k * (q.Position.Meters - p.Position.Meters), k * p.HalfLength.Meters, k * q.HalfLength.Meters);
+                var z = pair(k * Math.Abs(p.Offset.Meters - q.Offset.Meters),
+                    k * (q.Position.Meters - p.Position.Meters), k * p.HalfLength.Meters, k * q.HalfLength.Meters, PhysicalConstants.Eta0);
                 values[i * n + j] = z;
                 values[j * n + i] = z;
             }

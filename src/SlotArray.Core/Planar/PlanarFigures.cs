@@ -20,9 +20,11 @@ namespace SlotArray.Core.Planar;
 /// <param name="TaperEfficiency">η_t = |Σ e|²/(N Σ|e|²).</param>
 /// <param name="RadiationEfficiency">Radiated over accepted power (the walls take the rest).</param>
 /// <param name="GainDbi">Directivity × radiation efficiency, dBi (mismatch not included).</param>
+/// <param name="HPlaneArrayFactorPeakSidelobeDb">Peak sidelobe of the x-z cut of the array factor alone (isotropic elements), dB; null when none.</param>
+/// <param name="EPlaneArrayFactorPeakSidelobeDb">The same for the y-z cut (where the slot's element pattern is 1, equal to <see cref="EPlane"/>'s).</param>
 internal sealed record PlanarFigures(PatternMetrics HPlane, PatternMetrics EPlane, PatternMetrics Diagonal, Pattern HPlaneCut, Pattern EPlaneCut,
     Pattern DiagonalCut, UvPoint Beam, UvPoint? PeakSidelobe, double DirectivityDbi, double ApertureDirectivityDbi, double TaperEfficiency,
-    double RadiationEfficiency, double GainDbi)
+    double RadiationEfficiency, double GainDbi, double? HPlaneArrayFactorPeakSidelobeDb, double? EPlaneArrayFactorPeakSidelobeDb)
 {
     /// <summary>Figures of the array field <paramref name="field"/> (aperture area <paramref name="area"/>, m²) with the network's power budget.</summary>
     public static PlanarFigures Of(PlanarArrayFactor field, double area, IReadOnlyList<System.Numerics.Complex> excitations, Frequency f,
@@ -39,6 +41,7 @@ internal sealed record PlanarFigures(PatternMetrics HPlane, PatternMetrics EPlan
         double lam = f.FreeSpaceWavelength.Meters;
         double rad = accepted > 0 ? Math.Clamp(radiated / accepted, 0, 1) : 1;
         return new PlanarFigures(PatternMetrics.Measure(h), PatternMetrics.Measure(e), PatternMetrics.Measure(dg), h, e, dg, beam, psl,
-            10 * Math.Log10(d), 10 * Math.Log10(4 * Math.PI * area * eta / (lam * lam)), eta, rad, 10 * Math.Log10(d * rad));
+            10 * Math.Log10(d), 10 * Math.Log10(4 * Math.PI * area * eta / (lam * lam)), eta, rad, 10 * Math.Log10(d * rad),
+            PatternMetrics.Measure(field.Cut(0, grid, false)).PeakSidelobeDb, PatternMetrics.Measure(field.Cut(Math.PI / 2, grid, false)).PeakSidelobeDb);
     }
 }

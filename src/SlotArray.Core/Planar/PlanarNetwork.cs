@@ -80,7 +80,7 @@ internal static class PlanarNetwork
         var rhs = MathNet.Numerics.LinearAlgebra.Vector<Complex>.Build.Dense(size);
         if (coupled)
         {
-            var z = CoupledSlotImpedances.HalfCosineCentreReferred(placements, design.Branches[0].Stick.Slots[0].Width, f);
+            var z = CoupledSlotImpedances.HalfCosineCentreReferredAdaptive(placements, design.Branches[0].Stick.Slots[0].Width, f);
             double scale = 1 / (gamma0 * PhysicalConstants.HalfWaveDipoleResistance);
             for (int i = 0; i < n; i++)
                 for (int j = 0; j < n; j++)

@@ -25,18 +25,23 @@ namespace SlotArray.Core.Planar;
 /// (p_j = |F(v_j)|²/|F(0)|², T the asked level less <see cref="Margin"/>, μ = <see cref="Regularisation"/>, at least 32
 /// samples a lobe over v ∈ [−1, 1], the main lobe to its first nulls left out) with MathNet's limited-memory BFGS: only
 /// the lobes above the asked level are pulled down, and the factors stay as near the taper as that allows (on the
-/// 272-slot circular demo they move by ±2.3 %). Tapers without a level (uniform) keep x = 1.</para>
+/// 272-slot circular demo they move by ±2.3 %). Tapers without a level (uniform) keep x = 1. A separable taper whose y-z
+/// cut stays more than <see cref="Floor"/> below the asked level (an outline clips its branches) has its across level
+/// L_y raised by the difference, as L_x is moved for the x-z cut.</para>
 /// </remarks>
 internal static class PrincipalPlaneCorrection
 {
     /// <summary>Largest number of level passes.</summary>
-    public const int MaximumPasses = 8;
+    public const int MaximumPasses = 12;
 
     /// <summary>Level agreement at which the passes stop, dB.</summary>
     public const double LevelTolerance = 0.02;
 
     /// <summary>How far below the asked level the y-z lobes are pulled, dB (room for the sampling of the cut).</summary>
     public const double Margin = 0.1;
+
+    /// <summary>How far below the asked level a separable taper's y-z cut may stay before its across level is raised, dB.</summary>
+    public const double Floor = 0.3;
 
     /// <summary>Weight μ of the factors' distance from the taper.</summary>
     public const double Regularisation = 1e-3;
@@ -59,20 +64,25 @@ internal static class PrincipalPlaneCorrection
         ArgumentNullException.ThrowIfNull(y);
         var cut = new Cuts(layout, asked, y, k);
         var (askX, askY) = taper.DesignLevels;
-        double? lx = askX;
+        double? lx = askX, ly = askY;
         var c = Enumerable.Repeat(1.0, cut.BranchCount).ToArray();
         double[] amp = [.. asked];
         double? px = null, py = null;
         int passes = askX is null && askY is null ? 1 : MaximumPasses;
         for (int pass = 0; pass < passes; pass++)
         {
-            var forColumns = taper.AmplitudesAt(layout, lx, null);
+            var forColumns = taper.AmplitudesAt(layout, lx, ly);
             var r = cut.ColumnFactors(forColumns, c);
             c = cut.BranchFactors(taper.IsCircular ? [.. asked] : forColumns, r, askY);
             amp = cut.Apply(c, r);
             (px, py) = (cut.AlongPeakSidelobe(amp), cut.AcrossPeakSidelobe(amp));
             bool done = askY is null || py is null || py <= askY + LevelTolerance;
             if (askX is { } ax && px is { } mx && Math.Abs(mx - ax) > LevelTolerance) { lx = Math.Clamp(lx!.Value + ax - mx, ax - 3, ax + 3); done = false; }
+            if (!taper.IsCircular && askY is { } ay && py is { } my && my < ay - Floor)
+            {
+                ly = Math.Clamp(ly!.Value + ay - 2 * Margin - my, ay - 3, ay + 3);   // well below the level (a clipped separable taper): less taper across
+                done = false;
+            }
             if (done) break;
         }
         return (amp, px, py);

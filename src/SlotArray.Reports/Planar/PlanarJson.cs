@@ -145,6 +145,8 @@ internal static class PlanarJson
         Num(w, "s11_db_at_design", 20 * Math.Log10(Math.Max(r.AtDesign.S11.Magnitude, 1e-15)));
         Num(w, "h_plane_peak_sidelobe_db", f.HPlane.PeakSidelobeDb ?? double.NaN);
         Num(w, "e_plane_peak_sidelobe_db", f.EPlane.PeakSidelobeDb ?? double.NaN);
+        Num(w, "h_plane_array_factor_peak_sidelobe_db", f.HPlaneArrayFactorPeakSidelobeDb ?? double.NaN);
+        Num(w, "e_plane_array_factor_peak_sidelobe_db", f.EPlaneArrayFactorPeakSidelobeDb ?? double.NaN);
         Num(w, "diagonal_peak_sidelobe_db", f.Diagonal.PeakSidelobeDb ?? double.NaN);
         Num(w, "visible_peak_sidelobe_db", f.PeakSidelobe?.LevelDb ?? double.NaN);
         Num(w, "visible_peak_sidelobe_u", f.PeakSidelobe?.U ?? double.NaN);

@@ -32,6 +32,7 @@ internal static class PlanarSummary
         sb.Append("| worst S11 over the band | ").Append(F(r.Sweep.Max(p => 20 * Math.Log10(Math.Max(p.S11.Magnitude, 1e-15))))).Append(" dB |\n");
         sb.Append("| peak sidelobe x-z (along branches) | ").Append(Db(f.HPlane.PeakSidelobeDb)).Append(designDb is { } dd ? $" (design {F(dd, 1)} dB)" : "").Append(" |\n");
         sb.Append("| peak sidelobe y-z (across) | ").Append(Db(f.EPlane.PeakSidelobeDb)).Append(" |\n");
+        sb.Append("| peak sidelobe of the array factor alone (isotropic elements) x-z, y-z | ").Append(Db(f.HPlaneArrayFactorPeakSidelobeDb)).Append(", ").Append(Db(f.EPlaneArrayFactorPeakSidelobeDb)).Append(" |\n");
         sb.Append("| peak sidelobe 45° cut | ").Append(Db(f.Diagonal.PeakSidelobeDb)).Append(" |\n");
         sb.Append("| peak sidelobe, whole visible region | ").Append(Db(f.PeakSidelobe?.LevelDb));
         if (f.PeakSidelobe is { } ps) sb.Append(" at u = ").Append(F(ps.U, 3)).Append(", v = ").Append(F(ps.V, 3));
