@@ -73,6 +73,39 @@ public class PlanarDesignCommandTests
         Assert.Contains("not evaluated for planar arrays yet: tolerance (Monte Carlo), requirements (pass/fail verdicts)", err, StringComparison.Ordinal);
     }
 
+    /// <summary>
+    /// 8 branches × 10 slots, separable Taylor −25/−25 dB n̄ 5: at a 28 mm pitch (λ = 31.98 mm at 9.375 GHz) the across-branch
+    /// grating lobe's skirt reaches visible space (for equal weights the limit would be λ(1 − 1/8) = 27.98 mm, Balanis 2016,
+    /// Sec. 6.3, from memory; the taper widens the lobe, so the limit is lower), so <c>check</c> and <c>design</c> warn, naming
+    /// the plane, the pitch and a smaller one, and <c>design</c> names the y-z sidelobe above the asked level; at the default
+    /// (auto) pitch neither warns. Both designs exit 0 (no requirements, so no verdict).
+    /// </summary>
+    [Fact]
+    public void A_pitch_that_lets_a_grating_lobe_skirt_into_real_space_is_named()
+    {
+        const string taylor = "{type: taylor, sidelobes: -25 dB, nbar: 5}";
+        string wide = Planar("planar-skirt", "10", "{type: planar, branches: 8, pitch: 28 mm, common_wall: 1 mm}", taylor, $"taper_across: {taylor}\n");
+        string fine = Planar("planar-noskirt", "10", "{type: planar, branches: 8, pitch: auto, common_wall: 1 mm}", taylor, $"taper_across: {taylor}\n");
+        static (string Check, string Err) CheckAndDesign(string spec, string tag)
+        {
+            var (checkCode, checkOut, _) = DesignRuns.Run("check", spec);
+            Assert.Equal(ExitCodes.Ok, checkCode);
+            Assert.Contains("grating skirts", checkOut, StringComparison.Ordinal);
+            var (code, _, err) = DesignRuns.Run("design", spec, "-o", Path.Combine(DesignRuns.TempFolder(tag), "out"));
+            Assert.True(code == ExitCodes.Ok, err);
+            return (checkOut, err);
+        }
+        const string named = "y-z plane (across the branches): with the branch pitch 28 mm a grating lobe's main lobe reaches visible space";
+        var (checkOut, err) = CheckAndDesign(wide, "planar-skirt");
+        Assert.Contains(named, checkOut, StringComparison.Ordinal);
+        Assert.Contains(named, err, StringComparison.Ordinal);
+        Assert.Matches(@"y-z plane \(across the branches\): peak sidelobe -1\d\.\d+ dB over visible space is more than 1.5 dB above the asked -25 dB", err);
+        Assert.DoesNotContain("x-z plane (along the branches)", err, StringComparison.Ordinal);
+        var (fineOut, fineErr) = CheckAndDesign(fine, "planar-noskirt");
+        Assert.DoesNotContain("main lobe reaches visible space", fineOut + fineErr, StringComparison.Ordinal);
+        Assert.DoesNotContain("over visible space is more than", fineErr, StringComparison.Ordinal);
+    }
+
     /// <summary>Highest lobe outside the main beam (walked down to its first minima) of the cut at azimuth φ, dB; with the slot's element pattern or the array factor alone.</summary>
     private static double PeakSidelobe(double[] x, double[] y, Complex[] e, double k, double phi, bool element = true)
     {

@@ -42,6 +42,12 @@ internal static class PlanarCheck
             double gy = FeedGuideSizing.GratingLobeFreeSine(pitch, f0);
             lines.Add(string.Format(Inv, "  grating lobes    none in real space for scans up to {0} along the branches (x-z) and {1} across (y-z); the fixed beam is broadside",
                 Scan(gx), Scan(gy)));
+            var (along, across) = PlanarPipeline.TaperSkirts(r, pitch);
+            lines.Add(string.Format(Inv, "  grating skirts   at broadside each grating lobe stays out of real space out to its first null (taper included) up to a slot spacing of {0:F3} mm (now {1:F3}) and a pitch of {2:F3} mm (now {3:F3})",
+                along.LargestSpacing * 1e3, dx, across.LargestSpacing * 1e3, pitch.Millimeters));
+            foreach (var w in PlanarPatternWarnings.Grating(along, across, f0)) lines.Add("  warning          " + w.Message);
+            json["largest_slot_spacing_skirt_free_mm"] = Math.Round(along.LargestSpacing * 1e3, 6);
+            json["largest_pitch_skirt_free_mm"] = Math.Round(across.LargestSpacing * 1e3, 6);
             json["pitch_mm"] = Math.Round(pitch.Millimeters, 6);
             json["pitch_required_by_feed_mm"] = Math.Round(need, 6);
             json["feed_a_mm"] = Math.Round(feed.BroadWall.Millimeters, 6);

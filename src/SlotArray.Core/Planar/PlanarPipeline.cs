@@ -54,6 +54,29 @@ internal static class PlanarPipeline
         return (pitch, request.Guide with { BroadWall = a, Designation = "feed (a solved for the pitch)" }, true);
     }
 
+    /// <summary>The aperture layout at the given pitch and the aperture taper a planar request asks for.</summary>
+    public static (PlanarLayout Layout, ApertureTaper Taper) LayoutAndTaper(ArrayRequest request, Length pitch)
+    {
+        ArgumentNullException.ThrowIfNull(request);
+        var p = request.Planar ?? throw new ArgumentException("not a planar request", nameof(request));
+        var layout = PlanarLayout.Create(p.Branches, request.Slots.Count, 0.5 * request.Guide.GuideWavelength(request.DesignFrequency), pitch, p.Outline);
+        var taper = p.CircularSidelobesDb is { } sll
+            ? ApertureTaper.CircularTaylor(sll, p.CircularNbar)
+            : new ApertureTaper(request.Taper, p.Across ?? request.Taper);
+        return (layout, taper);
+    }
+
+    /// <summary>
+    /// The grating-lobe skirt figures <c>check</c> can give before any design: the taper's weights on the layout, beam at
+    /// broadside (a standing-wave planar array's fixed beam).
+    /// </summary>
+    public static (GratingLobeSkirt Along, GratingLobeSkirt Across) TaperSkirts(ArrayRequest request, Length pitch)
+    {
+        var (layout, taper) = LayoutAndTaper(request, pitch);
+        var w = taper.Weights(layout).Weights;
+        return PlanarPatternWarnings.Skirts(layout, [.. w.Select(x => new System.Numerics.Complex(x, 0))], request.DesignFrequency);
+    }
+
     /// <summary>Designs and analyses a planar request with the slot source chosen at the composition root.</summary>
     public static PlanarResult Run(ArrayRequest request, SlotSource? source = null)
     {
@@ -67,10 +90,7 @@ internal static class PlanarPipeline
         var f0 = request.DesignFrequency;
         var (pitch, feed, solved) = Geometry(request);
         var slot = ArrayPipeline.SlotModelFor(request, source);
-        var layout = PlanarLayout.Create(p.Branches, request.Slots.Count, 0.5 * request.Guide.GuideWavelength(f0), pitch, p.Outline);
-        var taper = p.CircularSidelobesDb is { } sll
-            ? ApertureTaper.CircularTaylor(sll, p.CircularNbar)
-            : new ApertureTaper(request.Taper, p.Across ?? request.Taper);
+        var (layout, taper) = LayoutAndTaper(request, pitch);
         var planar = new PlanarRequest(request.Name, request.Guide, feed, f0, layout, taper, slot, request.Feed.Position,
             request.Coupling == CouplingMode.Mutual) { Cutter = request.Slots.Cutter };
         var design = PlanarDesigner.Design(planar);
@@ -85,6 +105,8 @@ internal static class PlanarPipeline
         var positions = placements.Select(q => (q.Position.Meters, q.Offset.Meters)).ToArray();
         var field = new PlanarArrayFactor(positions.Select(q => q.Item1).ToArray(), positions.Select(q => q.Item2).ToArray(), atDesign.Excitations, f0.FreeSpaceWavenumber);
         var figures = PlanarFigures.Of(field, layout.Area, atDesign.Excitations, f0, atDesign.SlotPowers.Sum(), atDesign.InputPower);
+        var (along, across) = PlanarPatternWarnings.Skirts(layout, atDesign.Excitations, f0, figures.Beam.U, figures.Beam.V);
+        design = design with { Warnings = [.. design.Warnings, .. PlanarPatternWarnings.Grating(along, across, f0), .. PlanarPatternWarnings.Sidelobes(request, figures)] };
         return new PlanarResult(request, design, slot, p.Pitch is null, solved, atDesign, Array.AsReadOnly(sweep), figures,
             Array.AsReadOnly(positions.Select(q => (q.Item1, q.Item2)).ToArray()));
     }
