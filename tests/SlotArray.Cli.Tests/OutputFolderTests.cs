@@ -114,11 +114,12 @@ public class OutputFolderTests
         var design = DesignRuns.Run("design", spec, "-o", outDir, "--no-cache");
         Assert.True(design.Code == ExitCodes.Ok, design.Err);
         var names = Directory.GetFileSystemEntries(outDir).Select(Path.GetFileName).ToHashSet();
-        // vertical.png, parts.csv and parts.svg are written only with a flare or a filter (issue 18); this spec has neither.
-        string[] marineOnly = ["vertical.png", "parts.csv", "parts.svg"];
-        Assert.Superset(new HashSet<string?>(OutputFolder.Files.Select(f => f.Name).Except(marineOnly).Concat(OutputFolderCheck.ToleranceFiles)), names);
-        Assert.DoesNotContain(names, n => marineOnly.Contains(n));
-        Assert.Equal(OutputFolder.Files.Count - marineOnly.Length + OutputFolderCheck.ToleranceFiles.Count, names.Count);
+        // vertical.png, parts.csv and parts.svg are written only with a flare or a filter (issue 18), slot-table.csv only with
+        // a slot table (slots.data); this spec has none of them.
+        string[] conditional = ["vertical.png", "parts.csv", "parts.svg", "slot-table.csv"];
+        Assert.Superset(new HashSet<string?>(OutputFolder.Files.Select(f => f.Name).Except(conditional).Concat(OutputFolderCheck.ToleranceFiles)), names);
+        Assert.DoesNotContain(names, n => conditional.Contains(n));
+        Assert.Equal(OutputFolder.Files.Count - conditional.Length + OutputFolderCheck.ToleranceFiles.Count, names.Count);
         Assert.Equal(json, File.ReadAllBytes(Path.Combine(outDir, "tolerance.json")));
 
         byte[] cut = File.ReadAllBytes(Path.Combine(outDir, "cutlist.csv"));

@@ -51,6 +51,19 @@ public class SlotTableDesignTests
         Assert.Contains(sha, File.ReadAllText(Path.Combine(fromTable, "summary.md")));
         Assert.Contains($"# slot data: mom.csv (SHA-256 {sha})", File.ReadAllText(Path.Combine(fromTable, "cutlist.csv")));
         Assert.Contains("# slot data provenance: produced by: slotarray slot --table", File.ReadAllText(Path.Combine(fromTable, "cutlist.csv")));
+
+        // The design folder rebuilds its design on its own (compare and verify read its spec.yaml): it holds a copy of the
+        // table, byte for byte, and its spec.yaml names that copy (the original path is relative to the spec's folder,
+        // not to the design folder).
+        string copy = Path.Combine(fromTable, "slot-table.csv");
+        Assert.Equal(sha, SlotTableCsv.Sha256(File.ReadAllBytes(copy)));
+        string written = File.ReadAllText(Path.Combine(fromTable, "spec.yaml"));
+        Assert.Contains("  data: slot-table.csv", written);
+        Assert.DoesNotContain("data: mom.csv", written);
+        Assert.Contains($"copy 'slotarray design' made of 'mom.csv' (SHA-256 {sha})", written);
+        var (checkCode, _, checkErr) = DesignRuns.Run("check", Path.Combine(fromTable, "spec.yaml"));
+        Assert.True(checkCode == 0, checkErr);
+        Assert.False(File.Exists(Path.Combine(builtIn, "slot-table.csv")), "a design from the built-in model has no table to copy");
     }
 
     [Fact]

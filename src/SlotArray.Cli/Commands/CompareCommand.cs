@@ -167,7 +167,12 @@ internal static class CompareCommand
             Date = null,
             SpecSha256 = Convert.ToHexStringLower(System.Security.Cryptography.SHA256.HashData(System.Text.Encoding.UTF8.GetBytes(nextSpec))),
         };
-        var nextReport = DesignReportBuilder.Build(next, document, NextPlate.Plan(next, result)) with { SpecText = nextSpec };
+        string tableCopy = Path.Combine(dir, DesignReport.SlotTableFileName);
+        var nextReport = DesignReportBuilder.Build(next, document, NextPlate.Plan(next, result)) with
+        {
+            SpecText = nextSpec,
+            SlotTableBytes = request.Slots.Data is not null && File.Exists(tableCopy) ? File.ReadAllBytes(tableCopy) : null,
+        };
         error.WriteLine($"next plate: revision {document.Revision} of drawing {document.DrawingNumber ?? request.Name} ({nextReport.Fabrication?.Changed.Count ?? 0} features changed)");
         OutputFolder.WriteAll(nextReport, Path.Combine(folder, "next-plate"));
     }

@@ -95,7 +95,8 @@ internal static class DesignCommand
         string folder = OutputFolderCheck.Prepare(outDir ?? DefaultFolder(request.Name), replacesWhole: true);
         var clock = Stopwatch.StartNew();
         var result = Analyse(request, cache, error, progress, out var source);
-        var report = DesignReportBuilder.Build(result, document) with { SpecText = File.ReadAllText(path) };
+        var (specText, table) = SlotTableCopy.For(path, File.ReadAllText(path), request, error);
+        var report = DesignReportBuilder.Build(result, document) with { SpecText = specText, SlotTableBytes = table };
         if (request.Tolerance is { } tol)
         {
             // The short tolerance summary of issue 7 (the full output is the tolerance command's), with the run's slot

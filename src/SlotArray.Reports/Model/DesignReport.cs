@@ -17,6 +17,15 @@ public sealed record DesignReport
     /// <summary>The spec's text as given (written back as spec.yaml so that <c>compare</c> can rebuild the design), or null.</summary>
     public string? SpecText { get; init; }
 
+    /// <summary>
+    /// The bytes of the spec's slot table (<c>slots.data</c>), written beside spec.yaml as <see cref="SlotTableFileName"/>
+    /// so that the folder rebuilds its design on its own (<c>compare</c>, <c>verify</c>); null without a table.
+    /// </summary>
+    public byte[]? SlotTableBytes { get; init; }
+
+    /// <summary>Name of the slot table's copy in a design folder.</summary>
+    public const string SlotTableFileName = "slot-table.csv";
+
     /// <summary>Design frequency, Hz; &gt; 0.</summary>
     public required double FrequencyHz { get; init; }
 

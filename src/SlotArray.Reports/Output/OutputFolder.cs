@@ -69,6 +69,11 @@ internal static class OutputFolder
         new("input.s1p", Text(TouchstoneWriter.Write)),
         new("summary.md", Text(SummaryMarkdown.Write)),
         new("spec.yaml", (r, s) => s.Write(new UTF8Encoding(false).GetBytes(r.SpecText ?? "# the spec's text was not given to this writer\n"))),
+        new(DesignReport.SlotTableFileName, (r, s) => s.Write(r.SlotTableBytes ?? []))
+        {
+            Many = r => r.SlotTableBytes is { } bytes ? [(DesignReport.SlotTableFileName, bytes)] : [],
+            Owns = n => n == DesignReport.SlotTableFileName,
+        },
     ];
 
     /// <summary>Writes every file of <see cref="Files"/> for <paramref name="report"/> into <paramref name="directory"/>.</summary>
