@@ -92,11 +92,8 @@ internal static class ExcitationReconstruction
 
         // Resolution and condition number of the δ block.
         var jd = fit.Jacobian.SubMatrix(0, fit.Jacobian.RowCount, 0, 2 * n);
-        var jtj = fit.Jacobian.TransposeThisAndMultiply(fit.Jacobian);
-        var h = jtj.Clone();
-        for (int j = 0; j < 2 * n; j++) h[j, j] += reg[j] * reg[j];
-        var resolution = WeightedFit.InverseOfNormalMatrix(h) * jtj;
-        double cond = WeightedFit.ConditionNumber(jd, jtj.SubMatrix(0, 2 * n, 0, 2 * n));
+        var resolution = fit.Resolution;
+        double cond = WeightedFit.ConditionNumber(jd, fit.Normal.SubMatrix(0, 2 * n, 0, 2 * n));
 
         var slots = new SlotExcitationError[n];
         var unseen = new List<int>();

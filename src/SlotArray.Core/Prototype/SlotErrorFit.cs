@@ -98,7 +98,7 @@ internal static class SlotErrorFit
             .Concat(new double[p - 2 * n]).ToArray();
         var fit = WeightedFit.Fit(names, Model, observed, sigma, start, steps, reg, jacobian: v => Jacobian(v, lin, cuts, nuisanceAt, m, zeroMeanLength));
 
-        return Results(fit, reg, errors, n, tilt, unitL, unitC);
+        return Results(fit, errors, n, tilt, unitL, unitC);
     }
 
     /// <summary>
@@ -173,16 +173,10 @@ internal static class SlotErrorFit
     }
 
     /// <summary>The fitted per-slot errors (totals over the linearisation point), their resolution and correlation, the notes and the stage.</summary>
-    private static (PrototypeErrors Errors, IReadOnlyList<SlotGeometryError> Slots, FitStage Stage) Results(WeightedFitResult fit, double[] reg,
+    private static (PrototypeErrors Errors, IReadOnlyList<SlotGeometryError> Slots, FitStage Stage) Results(WeightedFitResult fit,
         PrototypeErrors errors, int n, bool tilt, double unitL, double unitC)
     {
-        int p = reg.Length;
-        var jtj = fit.Jacobian.TransposeThisAndMultiply(fit.Jacobian);
-        var h = jtj.Clone();
-        for (int j = 0; j < p; j++) h[j, j] += reg[j] * reg[j];
-        var hInv = WeightedFit.InverseOfNormalMatrix(h);
-        var resolution = hInv * jtj;
-        var cov = hInv * jtj * hInv;
+        var resolution = fit.Resolution;
         var slots = new SlotGeometryError[n];
         var notes = new List<string>();
         var unseen = new List<int>();
@@ -192,7 +186,7 @@ internal static class SlotErrorFit
         {
             var l = fit.Values[i];
             var c = fit.Values[n + i];
-            double r = cov[i, n + i] / Math.Sqrt(Math.Max(1e-300, cov[i, i] * cov[n + i, n + i]));
+            double r = fit.Correlation[i, n + i];
             double res = 0.5 * (resolution[i, i] + resolution[n + i, n + i]);
             var totalL = l with { Value = l.Value + errors.SlotLengthErrors[i] / unitL };
             var totalC = c with { Value = c.Value + errors.SlotCouplingErrors[i] / unitC };

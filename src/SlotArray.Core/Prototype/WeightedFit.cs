@@ -26,8 +26,12 @@ internal sealed record FittedValue(string Name, double Value, double StandardErr
 /// <param name="ConditionNumber">Ratio of the largest to the smallest singular value of the data Jacobian.</param>
 /// <param name="Iterations">Levenberg–Marquardt iterations.</param>
 /// <param name="Converged">Whether the minimiser stopped on a tolerance (not on its iteration limit).</param>
+/// <param name="Normal">JᵀJ of the data Jacobian.</param>
+/// <param name="Resolution">The model resolution matrix (JᵀJ + Λ)⁻¹JᵀJ (W. Menke, <i>Geophysical Data Analysis</i>, 3rd ed.,
+/// 2012, Sec. 4.7, from memory): the identity without regularisation and full rank; a diagonal entry near 0 marks a
+/// parameter the data leave to the regularisation.</param>
 internal sealed record WeightedFitResult(IReadOnlyList<FittedValue> Values, Matrix<double> Jacobian, Matrix<double> Correlation,
-    double ResidualRms, double NoiseScale, double ConditionNumber, int Iterations, bool Converged);
+    double ResidualRms, double NoiseScale, double ConditionNumber, int Iterations, bool Converged, Matrix<double> Normal, Matrix<double> Resolution);
 
 /// <summary>
 /// Weighted, optionally regularised non-linear least squares by MathNet's Levenberg–Marquardt minimiser
@@ -134,7 +138,8 @@ internal static class WeightedFit
         var h = jtj.Clone();
         if (regularisation is not null) for (int j = 0; j < p; j++) h[j, j] += regularisation[j] * regularisation[j];
         var hInv = InverseOfNormalMatrix(h);
-        var cov = s2 * (regularisation is null ? hInv : hInv * jtj * hInv);
+        var resolution = hInv * jtj;
+        var cov = s2 * (regularisation is null ? hInv : resolution * hInv);
         var values = new FittedValue[p];
         for (int j = 0; j < p; j++) values[j] = new FittedValue(names[j], best[j], Math.Sqrt(Math.Max(0, cov[j, j])));
         var corr = Matrix<double>.Build.Dense(p, p, (a, b) =>
@@ -144,7 +149,7 @@ internal static class WeightedFit
         });
         double cond = ConditionNumber(jData, jtj);
         return new WeightedFitResult(values, jData, corr, Math.Sqrt(chi2 / m), Math.Sqrt(s2), cond, result.Iterations,
-            result.ReasonForExit != ExitCondition.ExceedIterations);
+            result.ReasonForExit != ExitCondition.ExceedIterations, jtj, resolution);
     }
     /// <summary>
     /// (JᵀJ + Λ)⁻¹ of a normal matrix: by Cholesky when it is positive definite (always, with a regularisation), else
